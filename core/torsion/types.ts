@@ -1,0 +1,24 @@
+/**
+ * Result contract of core/torsion (finite-element Saint-Venant torsion, METHODS §7).
+ * Lengths in the region's unit; xs, ys are section coordinates (not centroidal).
+ */
+export interface TorsionResult {
+  readonly J: number;
+  readonly Cw: number;
+  readonly xs: number;
+  readonly ys: number;
+  readonly meshElements: number;
+  readonly meshNodes: number;
+  readonly iterations: number;
+  /** Estimated relative error of J (e.g. from a refined solve or Richardson), ≥ 0. */
+  readonly jRelativeError: number;
+  /** Number of disconnected pieces (each twists on its own; J values add). */
+  readonly components: number;
+}
+
+export interface TorsionOptions {
+  /** Element layers through the thinnest wall (default 3). */
+  readonly layers?: number;
+  /** Cancellation/progress hook: called now and then with a fraction 0..1; return false to abort. */
+  readonly onProgress?: (fraction: number) => boolean | void;
+}

@@ -1,0 +1,43 @@
+/**
+ * The one small interface between the renderer and whatever hosts it: the Electron preload
+ * (electron/preload.ts) or the browser build (renderer/host/browser-host.ts). Nothing else in
+ * renderer/ may touch files, dialogs or the window.
+ */
+export interface OpenedFile {
+  /** Display name, e.g. "footbridge-box.section.json". */
+  readonly name: string;
+  /** Opaque handle the host understands (a path in Electron, a file handle id in the browser); null when the host cannot save back. */
+  readonly handle: string | null;
+  readonly text: string;
+}
+
+export interface SaveResult {
+  readonly name: string;
+  readonly handle: string | null;
+}
+
+export interface ExportFile {
+  readonly suggestedName: string;
+  readonly mimeType: string;
+  readonly text: string;
+}
+
+export interface Host {
+  readonly kind: 'electron' | 'browser';
+  /** Ask the user for a file and return its text; null if cancelled. */
+  open(): Promise<OpenedFile | null>;
+  /** Save to the given handle (atomic on desktop); throws an Error whose message says why on failure. */
+  save(handle: string, text: string): Promise<SaveResult>;
+  /** Ask for a place and save there; null if cancelled. */
+  saveAs(suggestedName: string, text: string): Promise<SaveResult | null>;
+  /** Export a derived file (SVG, CSV, HTML report); returns false if cancelled. */
+  exportFile(file: ExportFile): Promise<boolean>;
+  /** Ask before discarding unsaved changes; true = discard. */
+  confirmDiscard(documentName: string): Promise<boolean>;
+  recentFiles(): Promise<readonly { name: string; handle: string }[]>;
+  /** Write the unsaved document for crash recovery (debounced by the caller); null clears it. */
+  writeRecovery(text: string | null): Promise<void>;
+  /** Text left by a previous session that did not end cleanly, if any. */
+  readRecovery(): Promise<string | null>;
+  setTitle(title: string): void;
+}
