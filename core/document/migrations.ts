@@ -1,0 +1,108 @@
+/**
+ * Document migrations: one small `up` per version, run in order, then the result is validated
+ * against the current schema (STYLE.md §6).
+ *
+ * Version history
+ *   0  pre-release layout, used while the format was being designed and never published as a
+ *      release. Kept so the migration path is exercised by a real step with its own test:
+ *      `units` (not `unit`); parts carry `kind`, a flat `x`, `y`, `angle` (degrees), `flip`,
+ *      and `subtract: boolean`; no ids, materials or visibility.
+ *   1  the first released format (core/document/types.ts).
+ *
+ * A file newer than this build is rejected with "document is version 7; this build reads up to 1"
+ * rather than guessed at. Each `up` receives a value already checked against its own version's
+ * schema, so it can be written plainly.
+ */
+import * as v from 'valibot';
+import { DOCUMENT_FORMAT, DOCUMENT_VERSION } from './types.ts';
+import { describeValue, issuesOf, type DocumentIssue } from './schema.ts';
+
+const finite = v.pipe(v.number('a finite number'), v.finite('a finite number'));
+const point = v.tuple([finite, finite], 'a point [x, y] of two finite numbers');
+const ring = v.array(point, 'an array of points [x, y]');
+
+/** The version 0 layout, strict enough that its `up` needs no guessing. */
+const version0Part = v.variant('kind', [
+  v.object({ kind: v.literal('polygon'), name: v.optional(v.string('a string')), x: finite, y: finite, angle: finite, flip: v.optional(v.boolean('true or false')), subtract: v.optional(v.boolean('true or false')), outer: ring, holes: v.optional(v.array(ring, 'an array of rings')) }),
+  v.object({ kind: v.literal('rectangle'), name: v.optional(v.string('a string')), x: finite, y: finite, angle: finite, flip: v.optional(v.boolean('true or false')), subtract: v.optional(v.boolean('true or false')), width: finite, height: finite }),
+  v.object({ kind: v.literal('circle'), name: v.optional(v.string('a string')), x: finite, y: finite, angle: finite, flip: v.optional(v.boolean('true or false')), subtract: v.optional(v.boolean('true or false')), diameter: finite }),
+], 'a version 0 part with "kind" "polygon", "rectangle" or "circle"');
+
+const version0 = v.object({
+  format: v.literal(DOCUMENT_FORMAT, `"${DOCUMENT_FORMAT}"`),
+  version: v.literal(0, '0'),
+  name: v.optional(v.string('a string')),
+  units: v.picklist(['in', 'ft', 'mm', 'cm', 'm'], 'a length unit: "in", "ft", "mm", "cm" or "m"'),
+  parts: v.array(version0Part, 'an array of parts'),
+});
+
+type Version0 = v.InferOutput<typeof version0>;
+
+function upFrom0(doc: Version0): unknown {
+  return {
+    format: DOCUMENT_FORMAT,
+    version: 1,
+    name: doc.name ?? 'Untitled section',
+    unit: doc.units,
+    parts: doc.parts.map((p, i) => {
+      const common = {
+        id: `p${i + 1}`,
+        name: p.name ?? `${p.kind} ${i + 1}`,
+        placement: { x: p.x, y: p.y, rotationDeg: p.angle, mirror: p.flip ?? false },
+        operation: p.subtract ? 'subtract' : 'add',
+        material: null,
+        visible: true,
+      };
+      if (p.kind === 'polygon') return { ...common, type: 'polygon', outer: p.outer, holes: p.holes ?? [] };
+      if (p.kind === 'rectangle') return { ...common, type: 'rectangle', width: p.width, height: p.height };
+      return { ...common, type: 'circle', diameter: p.diameter };
+    }),
+    materials: [],
+    defaultMaterial: null,
+  };
+}
+
+export interface Migration {
+  /** The version this step reads; it produces version `from + 1`. */
+  readonly from: number;
+  readonly schema: v.GenericSchema;
+  readonly up: (doc: never) => unknown;
+}
+
+/** MIGRATIONS[k] upgrades version k to k + 1; its length is DOCUMENT_VERSION. */
+export const MIGRATIONS: readonly Migration[] = [{ from: 0, schema: version0, up: upFrom0 as (doc: never) => unknown }];
+
+export const OLDEST_READABLE_VERSION = DOCUMENT_VERSION - MIGRATIONS.length;
+
+export type MigrationResult =
+  | { readonly ok: true; readonly value: unknown; readonly migratedFrom: number | null }
+  | { readonly ok: false; readonly issues: readonly DocumentIssue[] };
+
+/**
+ * Brings a parsed document of any readable version up to DOCUMENT_VERSION (not yet validated
+ * against the current schema: the caller does that, so every document takes the same path).
+ */
+export function migrateToCurrent(value: unknown): MigrationResult {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) {
+    return { ok: false, issues: [{ path: '', message: `(top level): expected a Sectionsmith document object, got ${describeValue(value)}` }] };
+  }
+  const version = (value as { version?: unknown }).version;
+  if (typeof version !== 'number' || !Number.isInteger(version)) {
+    return { ok: false, issues: [{ path: 'version', message: `version: expected a whole number (this build reads ${OLDEST_READABLE_VERSION} to ${DOCUMENT_VERSION}), got ${describeValue(version)}` }] };
+  }
+  if (version > DOCUMENT_VERSION) {
+    return { ok: false, issues: [{ path: 'version', message: `document is version ${version}; this build reads up to ${DOCUMENT_VERSION}. Open it with a newer Sectionsmith.` }] };
+  }
+  if (version < OLDEST_READABLE_VERSION) {
+    return { ok: false, issues: [{ path: 'version', message: `document is version ${version}; this build reads versions ${OLDEST_READABLE_VERSION} to ${DOCUMENT_VERSION}` }] };
+  }
+  let current: unknown = value;
+  for (let k = version; k < DOCUMENT_VERSION; k++) {
+    const step = MIGRATIONS[k - OLDEST_READABLE_VERSION];
+    if (!step) return { ok: false, issues: [{ path: 'version', message: `no migration from version ${k}` }] };
+    const issues = issuesOf(step.schema, current);
+    if (issues.length > 0) return { ok: false, issues: issues.map((i) => ({ ...i, message: `${i.message} (version ${k} layout)` })) };
+    current = step.up(v.parse(step.schema, current) as never);
+  }
+  return { ok: true, value: current, migratedFrom: version === DOCUMENT_VERSION ? null : version };
+}

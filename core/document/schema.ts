@@ -1,0 +1,183 @@
+/**
+ * Validation of the current document format (version DOCUMENT_VERSION) with valibot, plus the
+ * checks that span several fields (unique ids, bulge counts, material references).
+ *
+ * Every problem becomes a DocumentIssue with a JSON path in the user's file
+ * (`parts[2].placement.rotationDeg`) and an "expected …, got …" sentence. Unknown keys are
+ * rejected (a misspelt key would otherwise silently fall back to nothing), except inside
+ * material entries, whose fields belong to the materials module.
+ *
+ * Not checked here: whether the geometry is valid (core/geometry does that when the section is
+ * composed) or whether a `shape` names a registered part type (core/section reports that).
+ */
+import * as v from 'valibot';
+import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type SectionDocument } from './types.ts';
+
+export interface DocumentIssue {
+  /** JSON path in the file, e.g. 'parts[2].placement.rotationDeg'; '' for the whole file. */
+  readonly path: string;
+  /** One sentence: what was expected and what was found. */
+  readonly message: string;
+  /** 1-based line and column, for JSON syntax errors. */
+  readonly line?: number;
+  readonly column?: number;
+}
+
+const FINITE = 'a finite number';
+const finite = (what = FINITE) => v.pipe(v.number(what), v.finite(what));
+const positive = (what: string) => v.pipe(v.number(what), v.finite(what), v.gtValue(0, what));
+const text = (what = 'a string') => v.string(what);
+const point = v.tuple([finite(), finite()], 'a point [x, y] of two finite numbers');
+const ring = v.array(point, 'an array of points [x, y]');
+const bulges = v.array(finite('a finite bulge (tan of a quarter of the arc sweep)'), 'an array of bulges, one per segment');
+
+const placement = v.strictObject(
+  {
+    x: finite(),
+    y: finite(),
+    rotationDeg: finite('a finite number (degrees)'),
+    mirror: v.boolean('true or false'),
+  },
+  'a placement object { x, y, rotationDeg, mirror }',
+);
+
+const common = {
+  id: v.pipe(text('a non-empty string'), v.minLength(1, 'a non-empty string')),
+  name: text(),
+  placement,
+  operation: v.picklist(['add', 'subtract'], '"add" or "subtract"'),
+  material: v.nullable(text('a material id (string) or null')),
+  visible: v.boolean('true or false'),
+};
+
+const polygonPart = v.strictObject({
+  ...common,
+  type: v.literal('polygon'),
+  outer: ring,
+  outerBulges: v.optional(bulges),
+  holes: v.array(ring, 'an array of rings'),
+  holeBulges: v.optional(v.array(bulges, 'an array of bulge arrays, one per hole')),
+}, 'a part object');
+const rectanglePart = v.strictObject({
+  ...common,
+  type: v.literal('rectangle'),
+  width: positive('a positive finite number'),
+  height: positive('a positive finite number'),
+}, 'a part object');
+const circlePart = v.strictObject({
+  ...common,
+  type: v.literal('circle'),
+  diameter: positive('a positive finite number'),
+}, 'a part object');
+const shapePart = v.strictObject({
+  ...common,
+  type: v.literal('shape'),
+  shape: v.pipe(text('a part type name'), v.minLength(1, 'a part type name')),
+  params: v.record(v.string(), finite(), 'an object of dimensions { symbol: number }'),
+  designation: v.optional(text()),
+}, 'a part object');
+
+export const PART_TYPES = ['polygon', 'rectangle', 'circle', 'shape'] as const;
+
+const part = v.variant('type', [polygonPart, rectanglePart, circlePart, shapePart], `a part object with "type" one of ${PART_TYPES.map((t) => `"${t}"`).join(', ')}`);
+
+const material = v.looseObject({ id: v.pipe(text('a non-empty string'), v.minLength(1, 'a non-empty string')), name: text() }, 'a material object { id, name, … }');
+
+export const documentSchema = v.strictObject({
+  format: v.literal(DOCUMENT_FORMAT, `"${DOCUMENT_FORMAT}"`),
+  version: v.literal(DOCUMENT_VERSION, `${DOCUMENT_VERSION}`),
+  name: text(),
+  unit: v.picklist(['in', 'ft', 'mm', 'cm', 'm'], 'a length unit: "in", "ft", "mm", "cm" or "m"'),
+  parts: v.array(part, 'an array of parts'),
+  materials: v.array(material, 'an array of materials'),
+  defaultMaterial: v.nullable(text('a material id (string) or null')),
+}, 'a Sectionsmith document object');
+
+/** A short description of a JSON value for "got …" (strings quoted, long things abbreviated). */
+export function describeValue(value: unknown): string {
+  if (value === undefined) return 'nothing (the key is missing)';
+  if (value === null) return 'null';
+  if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 37)}...` : value);
+  if (typeof value === 'number' || typeof value === 'boolean') return String(value);
+  if (Array.isArray(value)) return `an array of ${value.length} item${value.length === 1 ? '' : 's'}`;
+  if (typeof value === 'object') return 'an object';
+  return typeof value;
+}
+
+/** Joins path keys the way a reader writes them: parts[2].placement.rotationDeg. */
+export function jsonPath(keys: readonly (string | number)[]): string {
+  let out = '';
+  for (const key of keys) {
+    if (typeof key === 'number') out += `[${key}]`;
+    else out += /^[A-Za-z_$][\w$]*$/.test(key) ? (out ? `.${key}` : key) : `[${JSON.stringify(key)}]`;
+  }
+  return out;
+}
+
+type AnyIssue = v.BaseIssue<unknown>;
+
+function issueToDocumentIssue(issue: AnyIssue): DocumentIssue {
+  const keys = (issue.path ?? []).map((item) => item.key as string | number);
+  const path = jsonPath(keys);
+  const where = path || '(top level)';
+  if (issue.type === 'strict_object' && issue.input !== undefined) {
+    // valibot reports an unknown key with the key as the last path item.
+    const key = keys[keys.length - 1];
+    const parent = jsonPath(keys.slice(0, -1)) || 'the document';
+    return { path, message: `${where}: unexpected key ${JSON.stringify(key)} in ${parent}; check its spelling against the format` };
+  }
+  return { path, message: `${where}: expected ${issue.message}, got ${describeValue(issue.input)}` };
+}
+
+/** Problems across fields that the per-field schema cannot see. */
+function crossFieldIssues(doc: SectionDocument): DocumentIssue[] {
+  const issues: DocumentIssue[] = [];
+  const materialIds = new Set<string>();
+  doc.materials.forEach((m, i) => {
+    if (materialIds.has(m.id)) issues.push({ path: `materials[${i}].id`, message: `materials[${i}].id: expected a unique id, got ${JSON.stringify(m.id)} again` });
+    materialIds.add(m.id);
+  });
+  const knownMaterial = (id: string | null): boolean => id === null || materialIds.has(id);
+  if (!knownMaterial(doc.defaultMaterial)) {
+    issues.push({ path: 'defaultMaterial', message: `defaultMaterial: expected the id of an entry in materials or null, got ${JSON.stringify(doc.defaultMaterial)}` });
+  }
+  const partIds = new Set<string>();
+  doc.parts.forEach((p, i) => {
+    const at = `parts[${i}]`;
+    if (partIds.has(p.id)) issues.push({ path: `${at}.id`, message: `${at}.id: expected a unique id, got ${JSON.stringify(p.id)} again` });
+    partIds.add(p.id);
+    if (!knownMaterial(p.material)) issues.push({ path: `${at}.material`, message: `${at}.material: expected the id of an entry in materials or null, got ${JSON.stringify(p.material)}` });
+    if (p.type !== 'polygon') return;
+    if (p.outerBulges && p.outerBulges.length !== p.outer.length) {
+      issues.push({ path: `${at}.outerBulges`, message: `${at}.outerBulges: expected ${p.outer.length} bulges (one per segment of outer), got ${p.outerBulges.length}` });
+    }
+    if (p.holeBulges) {
+      if (p.holeBulges.length !== p.holes.length) {
+        issues.push({ path: `${at}.holeBulges`, message: `${at}.holeBulges: expected ${p.holes.length} bulge arrays (one per hole), got ${p.holeBulges.length}` });
+      } else {
+        p.holeBulges.forEach((b, h) => {
+          const n = p.holes[h]?.length ?? 0;
+          if (b.length !== n) issues.push({ path: `${at}.holeBulges[${h}]`, message: `${at}.holeBulges[${h}]: expected ${n} bulges (one per segment of holes[${h}]), got ${b.length}` });
+        });
+      }
+    }
+  });
+  return issues;
+}
+
+export type ValidationResult = { readonly ok: true; readonly document: SectionDocument } | { readonly ok: false; readonly issues: readonly DocumentIssue[] };
+
+/** Validates a parsed JSON value against the current format; never throws on user data. */
+export function validateDocument(value: unknown): ValidationResult {
+  const result = v.safeParse(documentSchema, value, { abortEarly: false });
+  if (!result.success) return { ok: false, issues: result.issues.map(issueToDocumentIssue) };
+  const document = result.output as SectionDocument;
+  const issues = crossFieldIssues(document);
+  return issues.length > 0 ? { ok: false, issues } : { ok: true, document };
+}
+
+/** Runs a valibot schema and converts its issues (used by the migrations for older layouts). */
+export function issuesOf(schema: v.GenericSchema, value: unknown): readonly DocumentIssue[] {
+  const result = v.safeParse(schema, value, { abortEarly: false });
+  return result.success ? [] : result.issues.map(issueToDocumentIssue);
+}
