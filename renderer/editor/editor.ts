@@ -1,0 +1,389 @@
+/**
+ * The headless editor (STYLE.md §8): document, selection, history and the active tool state.
+ * React subscribes to it and renders; canvas handlers translate events into these calls.
+ * All coordinates here are section coordinates (y up) in the document unit.
+ */
+import type { Part, SectionDocument } from '../../core/document/types.ts';
+import { documentOutlines, outlineBox, outlineHit, type PartOutline, type ShapeRingResolver, type Vec } from './geometry.ts';
+import { emptyHistory, isDirty, markSaved, pushStep, redoStep, undoStep, type History } from './history.ts';
+import { snapPoint, snapTargets, type SnapResult, type SnapSettings } from './snapping.ts';
+import {
+  alignParts, deleteParts, duplicateParts, mirrorParts, reorderPart, rotateParts, translateParts, uniquePartId, type AlignEdge,
+} from './transforms.ts';
+import type { PointerInput, SnapOptions, ToolContext, ToolId, ToolState } from './tools/tool.ts';
+import { selectIdle } from './tools/select-idle.ts';
+import { polygonPlacing, polygonPartFrom } from './tools/polygon-placing.ts';
+import { shapeIdle } from './tools/shape-idle.ts';
+import { circlePart, rectanglePart } from './tools/shape-dragging.ts';
+import { vertexIdle } from './tools/vertex-idle.ts';
+
+export interface OpenFile {
+  readonly name: string;
+  readonly handle: string | null;
+}
+
+export interface EditorState {
+  readonly doc: SectionDocument;
+  readonly selection: readonly string[];
+  readonly toolId: ToolId;
+  readonly tool: ToolState;
+  /** Bumps on every document change, previews included: derived results memoise on it. */
+  readonly revision: number;
+  readonly canUndo: boolean;
+  readonly canRedo: boolean;
+  readonly undoLabel: string | null;
+  readonly redoLabel: string | null;
+  readonly dirty: boolean;
+  readonly file: OpenFile | null;
+  readonly snap: SnapSettings;
+  /** True while a gesture is under way (drag or an outline being drawn). */
+  readonly gesture: boolean;
+}
+
+export interface EditorOptions {
+  /** Outlines of standard parts (from core/parts); without it, shape parts draw nothing. */
+  readonly resolveShape?: ShapeRingResolver;
+}
+
+function initialTool(id: ToolId): ToolState {
+  switch (id) {
+    case 'select':
+      return selectIdle();
+    case 'polygon':
+      return polygonPlacing([], null, []);
+    case 'rectangle':
+    case 'circle':
+      return shapeIdle(id);
+    case 'vertex':
+      return vertexIdle(null);
+  }
+}
+
+export class Editor {
+  private doc: SectionDocument;
+  private selection: readonly string[] = [];
+  private history: History = emptyHistory();
+  private toolId: ToolId = 'select';
+  private tool: ToolState = selectIdle();
+  private revision = 0;
+  private file: OpenFile | null = null;
+  private snap: SnapSettings = { grid: 10, gridOn: true, objectsOn: true, radius: 1 };
+  private pickRadius = 1;
+  private centroid: Vec | null = null;
+  private readonly listeners = new Set<() => void>();
+  private readonly outlineCache = new WeakMap<SectionDocument, PartOutline[]>();
+  private state: EditorState;
+  private readonly options: EditorOptions;
+
+  constructor(doc: SectionDocument, options: EditorOptions = {}) {
+    this.doc = doc;
+    this.options = options;
+    this.state = this.buildState();
+  }
+
+  // ---- subscription -------------------------------------------------------------------------
+
+  subscribe = (fn: () => void): (() => void) => {
+    this.listeners.add(fn);
+    return () => this.listeners.delete(fn);
+  };
+
+  getState = (): EditorState => this.state;
+
+  private buildState(): EditorState {
+    const done = this.history.done;
+    const undone = this.history.undone;
+    return {
+      doc: this.doc,
+      selection: this.selection,
+      toolId: this.toolId,
+      tool: this.tool,
+      revision: this.revision,
+      canUndo: done.length > 0,
+      canRedo: undone.length > 0,
+      undoLabel: done[done.length - 1]?.label ?? null,
+      redoLabel: undone[undone.length - 1]?.label ?? null,
+      dirty: isDirty(this.history),
+      file: this.file,
+      snap: this.snap,
+      gesture: this.tool.name.endsWith('.dragging') || this.tool.name.endsWith('.moving') || this.tool.name === 'polygon.placing',
+    };
+  }
+
+  private emit(): void {
+    this.state = this.buildState();
+    for (const fn of this.listeners) fn();
+  }
+
+  // ---- derived geometry ---------------------------------------------------------------------
+
+  outlines(doc: SectionDocument = this.doc): readonly PartOutline[] {
+    let o = this.outlineCache.get(doc);
+    if (!o) {
+      o = documentOutlines(doc, this.options.resolveShape);
+      this.outlineCache.set(doc, o);
+    }
+    return o;
+  }
+
+  hitPart(p: Vec): string | null {
+    const outlines = this.outlines();
+    for (let i = this.doc.parts.length - 1; i >= 0; i--) {
+      const part = this.doc.parts[i] as Part;
+      const o = outlines[i];
+      if (part.visible && o && outlineHit(o, p, this.pickRadius)) return part.id;
+    }
+    return null;
+  }
+
+  snapAt(p: Vec, alt: boolean, opts: SnapOptions = {}): SnapResult {
+    const skip = opts.skip ?? [];
+    const targets = snapTargets(this.outlines(opts.from ?? this.doc), opts.exclude ?? new Set(), this.centroid).filter(
+      (t) => !skip.some((s) => s[0] === t.at[0] && s[1] === t.at[1]),
+    );
+    return snapPoint(p, targets, this.snap, alt);
+  }
+
+  /** Bounding-box centre of the selection (the pivot for rotate and mirror), or null. */
+  selectionCentre(): Vec | null {
+    const box = outlineBox(this.outlines().filter((o) => this.selection.includes(o.partId)));
+    return box ? [(box.xMin + box.xMax) / 2, (box.yMin + box.yMax) / 2] : null;
+  }
+
+  // ---- settings -----------------------------------------------------------------------------
+
+  setSnapSettings(s: Partial<SnapSettings>): void {
+    this.snap = { ...this.snap, ...s };
+    this.emit();
+  }
+
+  /** Pick and snap distances in section units (the UI passes a few pixels ÷ zoom). */
+  setPickRadius(r: number): void {
+    this.pickRadius = r;
+    this.snap = { ...this.snap, radius: r };
+  }
+
+  /** The section centroid from the latest results, offered as a snap target. */
+  setCentroid(c: Vec | null): void {
+    this.centroid = c;
+  }
+
+  // ---- tools --------------------------------------------------------------------------------
+
+  private context(): ToolContext {
+    // Getters, so a state that selects and then reads sees the new selection.
+    const current = { doc: () => this.doc, selection: () => this.selection };
+    return {
+      get doc() {
+        return current.doc();
+      },
+      get selection() {
+        return current.selection();
+      },
+      pickRadius: this.pickRadius,
+      outlines: () => this.outlines(),
+      hitPart: (p) => this.hitPart(p),
+      snap: (p, alt, opts) => this.snapAt(p, alt, opts),
+      select: (ids) => {
+        this.selection = [...ids];
+      },
+      preview: (doc) => this.setDoc(doc),
+      commit: (label, before, after, selectionAfter) => this.commitStep(label, before, after, selectionAfter),
+      restore: (doc, selection) => {
+        this.setDoc(doc);
+        this.selection = [...selection];
+      },
+      newPartId: (doc) => uniquePartId(doc),
+    };
+  }
+
+  private drive(fn: (t: ToolState, ctx: ToolContext) => ToolState | undefined): void {
+    const next = fn(this.tool, this.context());
+    if (next) this.tool = next;
+    this.emit();
+  }
+
+  setTool(id: ToolId): void {
+    if (this.state.gesture) this.tool.key?.(this.context(), 'Escape');
+    this.toolId = id;
+    this.tool = initialTool(id);
+    this.emit();
+  }
+
+  pointerDown(e: PointerInput): void {
+    this.drive((t, c) => t.down?.(c, e));
+  }
+
+  pointerMove(e: PointerInput): void {
+    if (!this.tool.move) return;
+    this.drive((t, c) => t.move?.(c, e));
+  }
+
+  pointerUp(e: PointerInput): void {
+    this.drive((t, c) => t.up?.(c, e));
+  }
+
+  /** A key for the active tool (Escape, Enter, Delete, Backspace); returns whether a tool state handled it. */
+  key(key: string): boolean {
+    if (!this.tool.key) return false;
+    this.drive((t, c) => t.key?.(c, key));
+    return true;
+  }
+
+  /** A typed exact vertex for the polygon tool. */
+  typedPoint(p: Vec): void {
+    if (this.toolId !== 'polygon') this.setTool('polygon');
+    this.drive((t, c) => t.typedPoint?.(c, p));
+  }
+
+  // ---- history ------------------------------------------------------------------------------
+
+  private setDoc(doc: SectionDocument): void {
+    if (doc === this.doc) return;
+    this.doc = doc;
+    this.revision++;
+  }
+
+  private commitStep(label: string, before: SectionDocument, after: SectionDocument, selectionAfter?: readonly string[]): void {
+    const selBefore = this.selection;
+    const sel = selectionAfter ? [...selectionAfter] : this.selection.filter((id) => after.parts.some((p) => p.id === id));
+    this.history = pushStep(this.history, { label, before, after, selectionBefore: selBefore, selectionAfter: sel });
+    this.setDoc(after);
+    this.selection = sel;
+  }
+
+  /** One command = one undo step. No step when nothing changed. */
+  run(label: string, fn: (doc: SectionDocument, selection: readonly string[]) => { doc: SectionDocument; selection?: readonly string[] }): void {
+    if (this.state.gesture) this.tool.key?.(this.context(), 'Escape');
+    const out = fn(this.doc, this.selection);
+    if (out.doc !== this.doc) this.commitStep(label, this.doc, out.doc, out.selection);
+    else if (out.selection) this.selection = [...out.selection];
+    this.emit();
+  }
+
+  undo(): void {
+    if (this.state.gesture) {
+      this.key('Escape');
+      return;
+    }
+    const r = undoStep(this.history);
+    if (!r) return;
+    this.history = r.history;
+    this.setDoc(r.step.before);
+    this.selection = r.step.selectionBefore;
+    this.tool = initialTool(this.toolId);
+    this.emit();
+  }
+
+  redo(): void {
+    if (this.state.gesture) return;
+    const r = redoStep(this.history);
+    if (!r) return;
+    this.history = r.history;
+    this.setDoc(r.step.after);
+    this.selection = r.step.selectionAfter;
+    this.tool = initialTool(this.toolId);
+    this.emit();
+  }
+
+  /** Replace everything (new or opened file): history starts afresh and counts as saved. */
+  load(doc: SectionDocument, file: OpenFile | null, dirty = false): void {
+    this.setDoc(doc);
+    this.revision++;
+    this.history = dirty ? { done: [], undone: [], savedAt: null } : emptyHistory();
+    this.selection = [];
+    this.file = file;
+    this.tool = initialTool(this.toolId);
+    this.emit();
+  }
+
+  markSaved(file: OpenFile): void {
+    this.history = markSaved(this.history);
+    this.file = file;
+    this.emit();
+  }
+
+  // ---- commands -----------------------------------------------------------------------------
+
+  select(ids: readonly string[]): void {
+    this.selection = [...ids];
+    this.emit();
+  }
+
+  addPart(label: string, make: (doc: SectionDocument, id: string) => Part): string {
+    let id = '';
+    this.run(label, (doc) => {
+      id = uniquePartId(doc);
+      return { doc: { ...doc, parts: [...doc.parts, make(doc, id)] }, selection: [id] };
+    });
+    return id;
+  }
+
+  addRectangle(r: { x: number; y: number; width: number; height: number; operation?: 'add' | 'subtract'; name?: string }): string {
+    return this.addPart('Add plate', (doc, id) => {
+      const p = rectanglePart(doc, id, r.x, r.y, r.width, r.height);
+      return { ...p, operation: r.operation ?? 'add', name: r.name ?? (r.operation === 'subtract' ? `Cut-out ${doc.parts.length + 1}` : p.name) };
+    });
+  }
+
+  addCircle(c: { x: number; y: number; diameter: number; operation?: 'add' | 'subtract'; name?: string }): string {
+    return this.addPart('Add round', (doc, id) => {
+      const p = circlePart(doc, id, c.x, c.y, c.diameter);
+      return { ...p, operation: c.operation ?? 'add', name: c.name ?? (c.operation === 'subtract' ? `Hole ${doc.parts.length + 1}` : p.name) };
+    });
+  }
+
+  addPolygon(points: readonly Vec[], operation: 'add' | 'subtract' = 'add'): string {
+    return this.addPart('Add outline', (doc, id) => polygonPartFrom(doc, id, points, operation));
+  }
+
+  updatePart(id: string, label: string, fn: (p: Part) => Part): void {
+    this.run(label, (doc) => ({ doc: { ...doc, parts: doc.parts.map((p) => (p.id === id ? fn(p) : p)) } }));
+  }
+
+  moveSelectionBy(dx: number, dy: number): void {
+    this.run('Move by offset', (doc, sel) => ({ doc: sel.length && (dx || dy) ? translateParts(doc, sel, dx, dy) : doc }));
+  }
+
+  /** Move so the selection's bounding-box centre lands on (x, y). */
+  moveSelectionTo(x: number, y: number): void {
+    const c = this.selectionCentre();
+    if (!c) return;
+    this.run('Move to point', (doc, sel) => ({ doc: c[0] === x && c[1] === y ? doc : translateParts(doc, sel, x - c[0], y - c[1]) }));
+  }
+
+  rotateSelection(deg: number, pivot: Vec | null = this.selectionCentre()): void {
+    if (!pivot || deg === 0) return;
+    this.run(`Rotate ${deg}°`, (doc, sel) => ({ doc: rotateParts(doc, sel, deg, pivot) }));
+  }
+
+  mirrorSelection(axis: 'left-right' | 'top-bottom'): void {
+    const c = this.selectionCentre();
+    if (!c) return;
+    this.run('Mirror', (doc, sel) => ({ doc: mirrorParts(doc, sel, axis, axis === 'left-right' ? c[0] : c[1]) }));
+  }
+
+  duplicateSelection(dx = 0, dy = 0): void {
+    this.run('Duplicate', (doc, sel) => {
+      const r = duplicateParts(doc, sel, dx, dy);
+      return { doc: r.doc, selection: r.ids };
+    });
+  }
+
+  deleteSelection(): void {
+    this.run('Delete', (doc, sel) => ({ doc: deleteParts(doc, sel), selection: [] }));
+  }
+
+  alignSelection(edge: AlignEdge): void {
+    this.run('Align', (doc, sel) => ({ doc: alignParts(doc, sel, edge, this.outlines(doc)) }));
+  }
+
+  reorder(id: string, direction: -1 | 1): void {
+    this.run('Reorder', (doc) => ({ doc: reorderPart(doc, id, direction) }));
+  }
+
+  /** A whole-document change as one step (e.g. a unit conversion). */
+  replaceDocument(label: string, fn: (doc: SectionDocument) => SectionDocument): void {
+    this.run(label, (doc) => ({ doc: fn(doc) }));
+  }
+}
