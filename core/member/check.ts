@@ -1,0 +1,159 @@
+/**
+ * Member check: a beam's maximum deflection and moment, span/deflection, the bending stress per
+ * material at the largest sagging and hogging moments, and a deflection limit as common practice.
+ *
+ * The section bends about its x axis (loads act in −y, the usual beam orientation); the stiffness
+ * is EIx about the E-weighted centroid. Stress in material i at fibre y (METHODS.md §6, §9.1):
+ * σ_i = −M·E_i·(y − y_E)/EIx with M sagging positive (compression at the top). When EIxy ≠ 0 the
+ * section is assumed restrained to bend in the load plane (a caution is added).
+ *
+ * Deflection limits: span/360, /240, /180, /120 as listed in IBC Table 1604.3 (common practice,
+ * NOT code compliance: the locally adopted code governs), or a user ratio. For a cantilever the
+ * span in the limit is taken as twice the cantilever length, per that table's footnote (from
+ * memory). Units: any consistent set, as core/member/beam.ts. Source: METHODS.md §10.
+ */
+import { invariant } from '../invariant.ts';
+import {
+  beamCaseIssues, beamDiagram, deflectionExtremes, momentExtremes, solveBeam,
+  type BeamCase, type BeamDiagram, type DeflectionExtreme, type ExtremeValue,
+} from './beam.ts';
+
+export const CAUTION = 'Results are preliminary; verify with a licensed engineer and the local building code, which govern.';
+export const LIMIT_CAUTION = 'Deflection limits are offered as common practice (IBC Table 1604.3 ratios), not as code compliance; the local code and a licensed engineer govern.';
+
+export const COMMON_DEFLECTION_RATIOS = [360, 240, 180, 120] as const;
+
+/** One material's extreme fibres, measured in y (section coordinates). */
+export interface MaterialFibres {
+  readonly id: string;
+  readonly name: string;
+  readonly E: number;
+  readonly yTop: number;
+  readonly yBottom: number;
+  /** Strength used for a stress ratio (yield or reference), same stress unit as E; optional. */
+  readonly strength?: number;
+}
+
+export interface MemberInput {
+  readonly beam: Omit<BeamCase, 'EI'>;
+  readonly EIx: number;
+  readonly EIxy?: number;
+  readonly EIy?: number;
+  /** E-weighted centroid height, section coordinates. */
+  readonly yE: number;
+  readonly materials: readonly MaterialFibres[];
+  /** Self-weight as a uniform load (force per length, downward) added when given. */
+  readonly selfWeight?: number;
+  /** Deflection limit as span/ratio (e.g. 360); omitted = no limit check. */
+  readonly limitRatio?: number;
+  readonly samples?: number;
+}
+
+export interface MaterialStress {
+  readonly id: string;
+  readonly name: string;
+  /** Largest tension (+) and compression (−) over the span, and where (x) and at which fibre (y). */
+  readonly maxTension: number;
+  readonly maxTensionAt: { readonly x: number; readonly y: number };
+  readonly maxCompression: number;
+  readonly maxCompressionAt: { readonly x: number; readonly y: number };
+  /** max(|σ|) / strength, when a strength was given. */
+  readonly strengthRatio?: number;
+}
+
+export interface DeflectionLimit {
+  readonly ratio: number;
+  /** Length used in the limit (2·L for a cantilever). */
+  readonly limitLength: number;
+  readonly allowed: number;
+  readonly passes: boolean;
+  readonly verdict: 'within limit' | 'exceeds limit';
+}
+
+export interface MemberResult {
+  readonly deflectionMax: number;
+  readonly deflectionAt: number;
+  readonly deflectionSolve: Pick<DeflectionExtreme, 'iterations' | 'residual' | 'converged'>;
+  /** Span / |deflectionMax| (Infinity when there is no deflection). */
+  readonly spanOverDeflection: number;
+  /** Largest |M| and where; the signed value (sagging +). */
+  readonly momentMax: number;
+  readonly momentAt: number;
+  readonly momentSagging: ExtremeValue;
+  readonly momentHogging: ExtremeValue;
+  readonly reactions: { readonly left: number; readonly leftMoment: number };
+  readonly uniformTotal: number;
+  readonly stresses: readonly MaterialStress[];
+  readonly limit?: DeflectionLimit;
+  readonly diagram: BeamDiagram;
+  readonly cautions: readonly string[];
+}
+
+function materialStress(m: MaterialFibres, input: MemberInput, sag: ExtremeValue, hog: ExtremeValue): MaterialStress {
+  const cases: { sigma: number; x: number; y: number }[] = [];
+  for (const M of [sag, hog]) for (const y of [m.yTop, m.yBottom]) cases.push({ sigma: (-M.value * m.E * (y - input.yE)) / input.EIx, x: M.at, y });
+  const tension = cases.reduce((a, b) => (b.sigma > a.sigma ? b : a));
+  const compression = cases.reduce((a, b) => (b.sigma < a.sigma ? b : a));
+  const peak = Math.max(Math.abs(tension.sigma), Math.abs(compression.sigma));
+  return {
+    id: m.id,
+    name: m.name,
+    maxTension: Math.max(0, tension.sigma),
+    maxTensionAt: { x: tension.x, y: tension.y },
+    maxCompression: Math.min(0, compression.sigma),
+    maxCompressionAt: { x: compression.x, y: compression.y },
+    ...(m.strength !== undefined ? { strengthRatio: peak / m.strength } : {}),
+  };
+}
+
+export function deflectionLimit(span: number, cantilever: boolean, ratio: number, deflection: number): DeflectionLimit {
+  invariant(Number.isFinite(ratio) && ratio > 0, 'deflectionLimit: ratio must be positive');
+  const limitLength = cantilever ? 2 * span : span;
+  const allowed = limitLength / ratio;
+  const passes = Math.abs(deflection) <= allowed;
+  return { ratio, limitLength, allowed, passes, verdict: passes ? 'within limit' : 'exceeds limit' };
+}
+
+/** Problems with the member input, plainly; empty when it is usable. */
+export function memberInputIssues(input: MemberInput): string[] {
+  const issues = beamCaseIssues({ ...input.beam, EI: input.EIx });
+  if (input.selfWeight !== undefined && !(Number.isFinite(input.selfWeight) && input.selfWeight >= 0)) issues.push(`self-weight must be a non-negative number, got ${input.selfWeight}`);
+  if (input.limitRatio !== undefined && !(Number.isFinite(input.limitRatio) && input.limitRatio > 0)) issues.push(`deflection limit ratio must be positive, got ${input.limitRatio}`);
+  return issues;
+}
+
+export function memberCheck(input: MemberInput): MemberResult {
+  const issues = memberInputIssues(input);
+  invariant(issues.length === 0, `memberCheck: ${issues.join('; ')}`);
+  const uniformTotal = input.beam.uniform + (input.selfWeight ?? 0);
+  const s = solveBeam({ ...input.beam, uniform: uniformTotal, EI: input.EIx });
+  const { down, up } = deflectionExtremes(s);
+  const governing = Math.abs(up.value) > Math.abs(down.value) ? up : down;
+  const { sagging, hogging } = momentExtremes(s);
+  const peakM = Math.abs(hogging.value) > Math.abs(sagging.value) ? hogging : sagging;
+  const span = input.beam.span;
+  const cautions = [CAUTION, 'Shear deformation is ignored (unconservative for short, deep or sandwich beams).'];
+  const eixy = input.EIxy ?? 0;
+  if (input.EIy !== undefined && Math.abs(eixy) > 1e-9 * Math.sqrt(input.EIx * input.EIy)) {
+    cautions.push('EIxy is not zero: the section is assumed restrained to bend in the load plane; free bending also deflects sideways.');
+  }
+  if (!governing.converged) cautions.push(`maximum deflection search stopped after ${governing.iterations} halvings (slope residual ${governing.residual.toExponential(2)}).`);
+  const limit = input.limitRatio !== undefined ? deflectionLimit(span, input.beam.support === 'cantilever', input.limitRatio, governing.value) : undefined;
+  if (limit !== undefined) cautions.push(LIMIT_CAUTION);
+  return {
+    deflectionMax: governing.value,
+    deflectionAt: governing.at,
+    deflectionSolve: { iterations: governing.iterations, residual: governing.residual, converged: governing.converged },
+    spanOverDeflection: governing.value === 0 ? Infinity : span / Math.abs(governing.value),
+    momentMax: peakM.value,
+    momentAt: peakM.at,
+    momentSagging: sagging,
+    momentHogging: hogging,
+    reactions: { left: s.V0, leftMoment: s.M0 },
+    uniformTotal,
+    stresses: input.materials.map((m) => materialStress(m, input, sagging, hogging)),
+    ...(limit !== undefined ? { limit } : {}),
+    diagram: beamDiagram(s, input.samples ?? 200, [governing.at, peakM.at]),
+    cautions,
+  };
+}

@@ -1,0 +1,3 @@
+/** Beam formulas and member checks (METHODS.md §10); see beam.ts and check.ts. */
+export * from './beam.ts';
+export * from './check.ts';
