@@ -22,6 +22,17 @@ export interface ExportFile {
   readonly text: string;
 }
 
+/**
+ * Commands a host sends to the renderer (native menu items in Electron; a file handed over by the
+ * OS arrives as 'open-launch-file', to be fetched with `launchFile()`). The editor runs them as if
+ * the user had used its own buttons or keys.
+ */
+export const HOST_COMMANDS = [
+  'new', 'open', 'save', 'save-as', 'export-svg', 'export-csv',
+  'undo', 'redo', 'delete', 'zoom-in', 'zoom-out', 'zoom-fit', 'open-example', 'open-launch-file',
+] as const;
+export type HostCommand = (typeof HOST_COMMANDS)[number];
+
 export interface Host {
   readonly kind: 'electron' | 'browser';
   /** Ask the user for a file and return its text; null if cancelled. */
@@ -40,4 +51,12 @@ export interface Host {
   /** Text left by a previous session that did not end cleanly, if any. */
   readRecovery(): Promise<string | null>;
   setTitle(title: string): void;
+  /** Tell the host whether there are unsaved changes (Electron asks before closing the window). */
+  setUnsaved?(unsaved: boolean): void;
+  /** Open an entry of recentFiles() without a dialog; null if it is gone. */
+  openRecent?(handle: string): Promise<OpenedFile | null>;
+  /** The document given on the command line or by the OS at start, once; null if none. */
+  launchFile?(): Promise<OpenedFile | null>;
+  /** Subscribe to host commands (menu items); returns the unsubscribe function. */
+  onCommand?(listener: (command: HostCommand) => void): () => void;
 }

@@ -1,0 +1,50 @@
+/**
+ * Maps an app://sectionsmith/… request to a file of the built renderer (dist/web), refusing
+ * anything outside that folder. Plain function so the traversal rules are unit-tested.
+ */
+import path from 'node:path';
+import { APP_HOST, APP_SCHEME } from './window-options.ts';
+
+const CONTENT_TYPES: Readonly<Record<string, string>> = {
+  '.html': 'text/html; charset=utf-8',
+  '.js': 'text/javascript; charset=utf-8',
+  '.mjs': 'text/javascript; charset=utf-8',
+  '.css': 'text/css; charset=utf-8',
+  '.json': 'application/json; charset=utf-8',
+  '.svg': 'image/svg+xml',
+  '.png': 'image/png',
+  '.ico': 'image/x-icon',
+  '.woff2': 'font/woff2',
+  '.wasm': 'application/wasm',
+  '.map': 'application/json; charset=utf-8',
+  '.txt': 'text/plain; charset=utf-8',
+};
+
+export interface AppFile {
+  readonly filePath: string;
+  readonly contentType: string;
+}
+
+/** The file for `requestUrl` under `root`, or null (wrong origin, traversal, unknown type). */
+export function appFileFor(root: string, requestUrl: string): AppFile | null {
+  let url: URL;
+  try {
+    url = new URL(requestUrl);
+  } catch {
+    return null;
+  }
+  if (url.protocol !== `${APP_SCHEME}:` || url.host !== APP_HOST) return null;
+  let relative: string;
+  try {
+    relative = decodeURIComponent(url.pathname);
+  } catch {
+    return null;
+  }
+  if (relative.includes('\0')) return null;
+  if (relative === '/' || relative === '') relative = '/index.html';
+  const resolvedRoot = path.resolve(root);
+  const filePath = path.resolve(resolvedRoot, `.${relative}`);
+  if (filePath !== resolvedRoot && !filePath.startsWith(resolvedRoot + path.sep)) return null;
+  const contentType = CONTENT_TYPES[path.extname(filePath).toLowerCase()];
+  return contentType ? { filePath, contentType } : null;
+}

@@ -1,0 +1,241 @@
+/**
+ * Electron main process: one window running the renderer from app://sectionsmith/, the native
+ * menu, and the handlers behind the preload's named functions. Main owns every dialog and every
+ * path: the renderer only ever holds paths main handed to it (open, save as, recent, command line),
+ * and main refuses to read or write any other. The logic that deserves tests lives in plain
+ * modules beside this one (save, recovery, payloads, ipc-guard, window-options, app-files, menu,
+ * launch-file, recent-files); this file wires them to Electron.
+ *
+ * Bundled by electron/build.mjs to out/electron/main.cjs; the renderer build is read from dist/web.
+ */
+import { app, BrowserWindow, dialog, ipcMain, Menu, net, protocol, session, type IpcMainInvokeEvent, type WebContents } from 'electron';
+import { promises as fs } from 'node:fs';
+import path from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { appFileFor } from './app-files.ts';
+import type { InvokeChannel, HostCommand, SendChannel } from './channels.ts';
+import { guarded } from './ipc-guard.ts';
+import { documentPathFromArgv } from './launch-file.ts';
+import { menuTemplate } from './menu.ts';
+import { checkedDocumentText, MAX_TEXT_BYTES, type PayloadOf } from './payloads.ts';
+import { readRecentFiles, withRecent, writeRecentFiles, type RecentFile } from './recent-files.ts';
+import { createRecoveryStore } from './recovery.ts';
+import { saveAtomically } from './save.ts';
+import {
+  APP_ENTRY_URL, APP_SCHEME, denyPermissionCheck, denyPermissionRequest, denyWindowOpen,
+  isNavigationAllowed, PRIVILEGED_SCHEMES, responseHeaders, windowOptions,
+} from './window-options.ts';
+
+const WEB_ROOT = path.join(__dirname, '..', '..', 'dist', 'web');
+const PRELOAD = path.join(__dirname, 'preload.cjs');
+const DOCUMENT_EXTENSION = '.section.json';
+
+protocol.registerSchemesAsPrivileged([...PRIVILEGED_SCHEMES]);
+
+let window: BrowserWindow | null = null;
+/** Paths the user chose (or gave on the command line): the only ones the renderer may save to. */
+const grantedPaths = new Set<string>();
+let launchPath = documentPathFromArgv(process.argv, process.cwd(), process.defaultApp === true);
+let unsaved = false;
+let closeConfirmed = false;
+
+const recovery = createRecoveryStore(path.join(app.getPath('userData'), 'recovery'));
+const recentListFile = path.join(app.getPath('userData'), 'recent-files.json');
+let recent: RecentFile[] = [];
+
+function sendCommand(command: HostCommand): void {
+  window?.webContents.send('menu:command', command);
+}
+
+function handle<C extends InvokeChannel>(channel: C, handler: (...args: PayloadOf<C>) => unknown): void {
+  const checked = guarded(channel, () => window?.webContents.id ?? null, handler);
+  ipcMain.handle(channel, (event: IpcMainInvokeEvent, ...args: unknown[]) => checked(event, ...args));
+}
+
+function listen<C extends SendChannel>(channel: C, handler: (...args: PayloadOf<C>) => void): void {
+  const checked = guarded(channel, () => window?.webContents.id ?? null, handler);
+  ipcMain.on(channel, (event, ...args: unknown[]) => {
+    try {
+      checked(event, ...args);
+    } catch (error) {
+      console.error(String(error)); // a notification has no reply to carry the refusal
+    }
+  });
+}
+
+async function readDocumentFile(filePath: string): Promise<{ name: string; handle: string; text: string }> {
+  const info = await fs.stat(filePath);
+  if (!info.isFile()) throw new Error(`"${filePath}" is not a file.`);
+  if (info.size > MAX_TEXT_BYTES) throw new Error(`"${filePath}" is ${info.size} bytes; the largest document this build opens is ${MAX_TEXT_BYTES} bytes.`);
+  const text = await fs.readFile(filePath, 'utf8');
+  grantedPaths.add(filePath);
+  await rememberRecent(filePath);
+  return { name: path.basename(filePath), handle: filePath, text };
+}
+
+async function rememberRecent(filePath: string): Promise<void> {
+  recent = withRecent(recent, filePath);
+  app.addRecentDocument(filePath);
+  await writeRecentFiles(recentListFile, recent).catch((error: unknown) => console.error(`recent files not stored: ${String(error)}`));
+}
+
+async function saveDocument(filePath: string, text: string): Promise<{ name: string; handle: string }> {
+  await saveAtomically(filePath, checkedDocumentText(text));
+  grantedPaths.add(filePath);
+  await rememberRecent(filePath);
+  return { name: path.basename(filePath), handle: filePath };
+}
+
+function defaultFolder(): string {
+  const last = recent[0]?.handle;
+  return last ? path.dirname(last) : app.getPath('documents');
+}
+
+const EXPORT_FILTERS: Readonly<Record<string, { name: string; extensions: string[] }>> = {
+  'image/svg+xml': { name: 'SVG drawing', extensions: ['svg'] },
+  'text/csv': { name: 'CSV table', extensions: ['csv'] },
+  'text/html': { name: 'HTML report', extensions: ['html'] },
+  'application/json': { name: 'JSON', extensions: ['json'] },
+  'text/plain': { name: 'Text', extensions: ['txt'] },
+};
+
+function registerHandlers(): void {
+  handle('document:open', async () => {
+    if (!window) return null;
+    const choice = await dialog.showOpenDialog(window, {
+      title: 'Open a section',
+      defaultPath: defaultFolder(),
+      properties: ['openFile'],
+      filters: [{ name: 'Sectionsmith section or GeoJSON', extensions: ['json', 'geojson'] }, { name: 'All files', extensions: ['*'] }],
+    });
+    const chosen = choice.filePaths[0];
+    return choice.canceled || !chosen ? null : readDocumentFile(chosen);
+  });
+  handle('document:open-recent', async (filePath) => {
+    if (!recent.some((r) => r.handle === filePath)) throw new Error(`"${filePath}" is not in the recent files list.`);
+    return readDocumentFile(filePath);
+  });
+  handle('document:launch-file', async () => {
+    const filePath = launchPath;
+    launchPath = null; // handed over once; a reload does not reopen it over the user's work
+    return filePath ? readDocumentFile(filePath) : null;
+  });
+  handle('document:save', async (filePath, text) => {
+    if (!grantedPaths.has(filePath)) throw new Error(`Saving to "${filePath}" was refused: choose the place with Save As first.`);
+    return saveDocument(filePath, text);
+  });
+  handle('document:save-as', async (suggestedName, text) => {
+    if (!window) return null;
+    checkedDocumentText(text);
+    const choice = await dialog.showSaveDialog(window, {
+      title: 'Save the section as',
+      defaultPath: path.join(defaultFolder(), suggestedName),
+      filters: [{ name: 'Sectionsmith section', extensions: ['section.json'] }],
+    });
+    if (choice.canceled || !choice.filePath) return null;
+    const filePath = choice.filePath.endsWith(DOCUMENT_EXTENSION) ? choice.filePath : `${choice.filePath.replace(/\.json$/i, '')}${DOCUMENT_EXTENSION}`;
+    return saveDocument(filePath, text);
+  });
+  handle('export:save', async (file) => {
+    if (!window) return false;
+    const filter = EXPORT_FILTERS[file.mimeType];
+    const choice = await dialog.showSaveDialog(window, {
+      title: 'Export',
+      defaultPath: path.join(defaultFolder(), file.suggestedName),
+      ...(filter ? { filters: [filter] } : {}),
+    });
+    if (choice.canceled || !choice.filePath) return false;
+    await saveAtomically(choice.filePath, file.text, { keepBackup: false });
+    return true;
+  });
+  handle('dialog:confirm-discard', async (documentName) => (window ? confirmDiscard(window, documentName) : false));
+  handle('recent:list', async () => recent);
+  handle('recovery:write', async (text) => (text === null ? recovery.clear() : recovery.write(text)));
+  handle('recovery:read', async () => recovery.read());
+  listen('window:set-title', (title) => window?.setTitle(title));
+  listen('window:set-unsaved', (value) => {
+    unsaved = value;
+    window?.setDocumentEdited(value);
+  });
+}
+
+async function confirmDiscard(owner: BrowserWindow, documentName: string): Promise<boolean> {
+  const answer = await dialog.showMessageBox(owner, {
+    type: 'warning',
+    buttons: ['Discard Changes', 'Cancel'],
+    defaultId: 1,
+    cancelId: 1,
+    message: `"${documentName || 'Untitled section'}" has unsaved changes.`,
+    detail: 'If you continue, the changes since the last save are lost.',
+  });
+  return answer.response === 0;
+}
+
+/** Serves dist/web under app://sectionsmith/ with the CSP on every response. */
+function registerAppProtocol(): void {
+  protocol.handle(APP_SCHEME, async (request) => {
+    const file = appFileFor(WEB_ROOT, request.url);
+    if (!file) return new Response('Not found', { status: 404, headers: responseHeaders('text/plain; charset=utf-8') });
+    const response = await net.fetch(pathToFileURL(file.filePath).toString()).catch(() => null);
+    if (!response?.ok) return new Response('Not found', { status: 404, headers: responseHeaders('text/plain; charset=utf-8') });
+    return new Response(response.body, { status: 200, headers: responseHeaders(file.contentType) });
+  });
+}
+
+function lockDown(contents: WebContents): void {
+  contents.on('will-navigate', (event, url) => {
+    if (!isNavigationAllowed(url)) event.preventDefault();
+  });
+  contents.on('will-redirect', (event, url) => {
+    if (!isNavigationAllowed(url)) event.preventDefault();
+  });
+  contents.on('will-attach-webview', (event) => event.preventDefault());
+  contents.setWindowOpenHandler(denyWindowOpen);
+}
+
+function createWindow(): void {
+  const win = new BrowserWindow(windowOptions(PRELOAD));
+  window = win;
+  lockDown(win.webContents);
+  win.once('ready-to-show', () => win.show());
+  win.on('close', (event) => {
+    if (!unsaved || closeConfirmed) return;
+    event.preventDefault();
+    void confirmDiscard(win, win.getTitle()).then((discard) => {
+      if (!discard) return;
+      closeConfirmed = true;
+      win.close();
+    });
+  });
+  win.on('closed', () => {
+    window = null;
+  });
+  void win.loadURL(APP_ENTRY_URL);
+}
+
+app.on('web-contents-created', (_event, contents) => lockDown(contents));
+
+// macOS passes files opened from Finder this way, before or after ready.
+app.on('open-file', (event, filePath) => {
+  event.preventDefault();
+  launchPath = filePath;
+  if (window) sendCommand('open-launch-file');
+});
+
+app.on('window-all-closed', () => app.quit());
+
+// A clean exit (saved, or changes knowingly discarded) leaves no recovery file behind.
+app.on('will-quit', (event) => {
+  event.preventDefault();
+  void recovery.clear().finally(() => app.exit(0));
+});
+
+void app.whenReady().then(async () => {
+  session.defaultSession.setPermissionRequestHandler(denyPermissionRequest);
+  session.defaultSession.setPermissionCheckHandler(denyPermissionCheck);
+  recent = await readRecentFiles(recentListFile);
+  registerAppProtocol();
+  registerHandlers();
+  Menu.setApplicationMenu(Menu.buildFromTemplate(menuTemplate(sendCommand, process.platform)));
+  createWindow();
+});
