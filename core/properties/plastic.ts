@@ -1,0 +1,450 @@
+/**
+ * Plastic neutral axis (PNA) and plastic modulus for bending with the PNA in any direction
+ * (METHODS §5), for one region or for several weighted regions (materials).
+ *
+ * Geometry: the PNA is parallel to t = (cos θ, sin θ); its normal is n = (−sin θ, cos θ) and each
+ * point has the coordinate s = n·p. θ = 0° gives s = y (bending about x); θ = −90° gives s = x
+ * (bending about y). The PNA is the line s = d, reported in the region's own coordinates.
+ *
+ * Balance: Σ w_i A_i(s > d) − Σ w_i A_i(s < d) = N (tension positive), N = 0 by default.
+ * Result: d, Σ w_i ∫ |s − d| dA (the plastic modulus Z for one region with w = 1; the plastic
+ * moment when the weights are yield strengths), and Σ w_i ∫ sign(s − d)·(t·p) dA, the moment
+ * about the perpendicular direction (Z_⊥, §5.1; independent of the origin only when N = 0 —
+ * it is reported about the coordinate origin).
+ *
+ * Area on one side: each ring is clipped against the half-plane s ≥ d (Sutherland–Hodgman,
+ * §5.2). Arcs are split at their intersections with the line (§2.5) and stay exact arcs; exit and
+ * entry points are joined along the cut line. Zero-width bridges along the cut cancel exactly.
+ *
+ * Finding d (§5.3): g(d) = Σ w(A₊ − A₋) − N is continuous and non-increasing. Breakpoints are
+ * the projections of all vertices and arc extreme points; bisection over them brackets the root.
+ * Polygons only: g is exactly quadratic between breakpoints and the root is solved in closed form.
+ * With arcs: Brent's method inside the bracket to |Δd| ≤ 1e−12·(s_max − s_min), cap 200.
+ * Plateau (no material between two pieces): the middle of the zero interval is reported.
+ *
+ * Assumes normalised regions (outer CCW, holes CW) and positive, finite weights.
+ * Sums are taken about one local origin for all pieces (bounding-box centre, §1.3).
+ */
+import type { Degrees, Region, Ring } from '../geometry/types.ts';
+import { arcFromBulge, arcPointOffset, sweepOffsetOfAngle, type ArcGeometry } from './arc.ts';
+import { ringIntegrals, vertexBoxCentre } from './integrals.ts';
+
+export interface WeightedRegion {
+  readonly region: Region;
+  /** Positive weight, e.g. a yield strength (N/mm²) for a plastic moment. */
+  readonly weight: number;
+}
+
+export type PnaMethod = 'quadratic' | 'brent' | 'breakpoint' | 'plateau';
+
+export interface WeightedPlasticAxis {
+  /** Direction of the PNA, CCW from +x. */
+  readonly angleDeg: number;
+  /** Unit normal n = (−sin θ, cos θ); s = n·p. */
+  readonly normalX: number;
+  readonly normalY: number;
+  /** The PNA is the line n·p = d. */
+  readonly d: number;
+  /** Σ w_i ∫ |s − d| dA. */
+  readonly moment: number;
+  /** Σ w_i ∫ sign(s − d)·(t·p) dA about the coordinate origin. */
+  readonly perpendicularMoment: number;
+  /** Σ w_i A_i on the side s > d and on the side s < d. */
+  readonly weightedAreaPlus: number;
+  readonly weightedAreaMinus: number;
+  readonly axialForce: number;
+  readonly method: PnaMethod;
+  /** Clipping passes used to find d. */
+  readonly evaluations: number;
+  /** g(d) = Σ w(A₊ − A₋) − N at the returned d. */
+  readonly residual: number;
+  readonly converged: boolean;
+  /** Present for method 'plateau': the interval of d over which the balance holds. */
+  readonly plateau?: readonly [number, number];
+}
+
+export interface PlasticAxis extends WeightedPlasticAxis {
+  /** Plastic modulus ∫ |s − d| dA. */
+  readonly Z: number;
+  /** ∫ sign(s − d)·(t·p) dA (METHODS §5.1). */
+  readonly Zperp: number;
+  /** True when |Zperp| > 1e−9·Z: the plastic moment is not parallel to the PNA. */
+  readonly momentNotParallel: boolean;
+  readonly areaPlus: number;
+  readonly areaMinus: number;
+  /** s-centroids of the two halves. */
+  readonly centroidPlus: number;
+  readonly centroidMinus: number;
+}
+
+const BRENT_CAP = 200;
+const RELATIVE_TOLERANCE = 1e-12;
+
+interface LocalRing {
+  readonly xy: Float64Array;
+  readonly bulge: Float64Array | undefined;
+  readonly weight: number;
+  /** Signed integrals of the whole ring about the local origin: A, ∫s, ∫t. */
+  readonly A: number;
+  readonly Qs: number;
+  readonly Qt: number;
+}
+
+interface Frame {
+  readonly nx: number;
+  readonly ny: number;
+  readonly tx: number;
+  readonly ty: number;
+}
+
+/** cos and sin of an angle in degrees, exact at multiples of 90° so symmetric cases stay clean. */
+function cosSinDegrees(angle: number): [number, number] {
+  const a = ((angle % 360) + 360) % 360;
+  if (a === 0) return [1, 0];
+  if (a === 90) return [0, 1];
+  if (a === 180) return [-1, 0];
+  if (a === 270) return [0, -1];
+  const r = (a * Math.PI) / 180;
+  return [Math.cos(r), Math.sin(r)];
+}
+
+function checkPieces(pieces: readonly WeightedRegion[], axialForce: number): void {
+  if (pieces.length === 0) throw new RangeError('plastic neutral axis: no pieces given');
+  pieces.forEach((p, i) => {
+    if (!(Number.isFinite(p.weight) && p.weight > 0)) {
+      throw new RangeError(`plastic neutral axis: piece ${i} has weight ${p.weight}; weights must be positive and finite`);
+    }
+    if (p.region.length === 0) throw new RangeError(`plastic neutral axis: piece ${i} has an empty region`);
+  });
+  if (!Number.isFinite(axialForce)) throw new RangeError(`plastic neutral axis: axial force ${axialForce} is not finite`);
+}
+
+function localRings(pieces: readonly WeightedRegion[], ox: number, oy: number, f: Frame): LocalRing[] {
+  const out: LocalRing[] = [];
+  for (const { region, weight } of pieces) {
+    for (const polygon of region) {
+      for (const ring of [polygon.outer, ...polygon.holes]) {
+        const xy = new Float64Array(ring.xy.length);
+        for (let i = 0; i < xy.length; i += 2) {
+          xy[i] = ring.xy[i]! - ox;
+          xy[i + 1] = ring.xy[i + 1]! - oy;
+        }
+        const raw = ringIntegrals({ xy, bulge: ring.bulge }, 0, 0);
+        out.push({
+          xy,
+          bulge: ring.bulge,
+          weight,
+          A: raw.A,
+          Qs: f.nx * raw.Qy + f.ny * raw.Qx,
+          Qt: f.tx * raw.Qy + f.ty * raw.Qx,
+        });
+      }
+    }
+  }
+  return out;
+}
+
+/** Sorted projections s of all vertices and of arc extreme points in ±n (the breakpoints of g). */
+function breakpoints(rings: readonly LocalRing[], f: Frame): number[] {
+  const s: number[] = [];
+  const phiUp = Math.atan2(f.ny, f.nx);
+  for (const ring of rings) {
+    const n = ring.xy.length >> 1;
+    for (let i = 0; i < n; i++) {
+      const x = ring.xy[2 * i]!;
+      const y = ring.xy[2 * i + 1]!;
+      s.push(f.nx * x + f.ny * y);
+      const b = ring.bulge?.[i] ?? 0;
+      if (b === 0) continue;
+      const j = (i + 1) % n;
+      const arc = arcFromBulge(x, y, ring.xy[2 * j]!, ring.xy[2 * j + 1]!, b);
+      for (const phi of [phiUp, phiUp + Math.PI]) {
+        const tau = sweepOffsetOfAngle(arc, phi);
+        if (Number.isNaN(tau)) continue;
+        const [px, py] = arcPointOffset(arc, tau);
+        s.push(f.nx * (x + px) + f.ny * (y + py));
+      }
+    }
+  }
+  s.sort((a, b) => a - b);
+  return s.filter((v, i) => i === 0 || v !== s[i - 1]);
+}
+
+/** Pieces of one segment after splitting it at the line s = d; pushes start point, bulge, side. */
+interface PieceList {
+  x: number[];
+  y: number[];
+  b: number[];
+  inside: boolean[];
+}
+
+function pushStraight(out: PieceList, x0: number, y0: number, x1: number, y1: number, s0: number, s1: number): void {
+  if ((s0 < 0 && s1 > 0) || (s0 > 0 && s1 < 0)) {
+    const f = s0 / (s0 - s1);
+    out.x.push(x0, x0 + f * (x1 - x0));
+    out.y.push(y0, y0 + f * (y1 - y0));
+    out.b.push(0, 0);
+    out.inside.push(s0 > 0, s1 > 0);
+  } else {
+    out.x.push(x0);
+    out.y.push(y0);
+    out.b.push(0);
+    out.inside.push(s0 + s1 >= 0);
+  }
+}
+
+/** Offsets τ (in sweep order) where the arc crosses the line s = d (METHODS §2.5). */
+function arcCrossings(arc: ArcGeometry, s0: number, f: Frame): number[] {
+  // r cos(t − ψ) = d − n·Pc, written relative to the start point: k = cos(t0 − ψ) − s0/r.
+  const psi = Math.atan2(f.ny, f.nx);
+  const k = Math.cos(arc.t0 - psi) - s0 / arc.radius;
+  if (!(Math.abs(k) < 1)) return [];
+  const a = Math.acos(k);
+  const limit = Math.abs(arc.sweep);
+  const taus = [psi + a, psi - a]
+    .map((phi) => sweepOffsetOfAngle(arc, phi))
+    .filter((tau) => !Number.isNaN(tau) && Math.abs(tau) > 1e-15 * limit && Math.abs(tau) < limit * (1 - 1e-15));
+  return taus.sort((p, q) => Math.abs(p) - Math.abs(q));
+}
+
+function pushArc(out: PieceList, x0: number, y0: number, x1: number, y1: number, b: number, s0: number, f: Frame): void {
+  const arc = arcFromBulge(x0, y0, x1, y1, b);
+  const cuts = [0, ...arcCrossings(arc, s0, f), arc.sweep];
+  for (let k = 0; k + 1 < cuts.length; k++) {
+    const ta = cuts[k]!;
+    const tb = cuts[k + 1]!;
+    const [ax, ay] = ta === 0 ? [0, 0] : arcPointOffset(arc, ta);
+    const [mx, my] = arcPointOffset(arc, (ta + tb) / 2);
+    out.x.push(x0 + ax);
+    out.y.push(y0 + ay);
+    out.b.push(Math.tan((tb - ta) / 4));
+    out.inside.push(s0 + f.nx * mx + f.ny * my >= 0);
+  }
+}
+
+/** The part of a ring on the side s ≥ d, as a ring (possibly with zero-width bridges), or null. */
+function clipRing(ring: LocalRing, f: Frame, d: number): Ring | null {
+  const { xy, bulge } = ring;
+  const n = xy.length >> 1;
+  const pieces: PieceList = { x: [], y: [], b: [], inside: [] };
+  for (let i = 0; i < n; i++) {
+    const j = i + 1 === n ? 0 : i + 1;
+    const x0 = xy[2 * i]!, y0 = xy[2 * i + 1]!, x1 = xy[2 * j]!, y1 = xy[2 * j + 1]!;
+    const s0 = f.nx * x0 + f.ny * y0 - d;
+    const b = bulge === undefined ? 0 : bulge[i]!;
+    if (b === 0) pushStraight(pieces, x0, y0, x1, y1, s0, f.nx * x1 + f.ny * y1 - d);
+    else pushArc(pieces, x0, y0, x1, y1, b, s0, f);
+  }
+  const m = pieces.inside.length;
+  const kept = pieces.inside.filter(Boolean).length;
+  if (kept === 0) return null;
+  if (kept === m && m === n) return { xy, bulge };
+  const ox: number[] = [], oyy: number[] = [], ob: number[] = [];
+  for (let k = 0; k < m; k++) {
+    const prevInside = pieces.inside[(k + m - 1) % m]!;
+    if (pieces.inside[k]) {
+      ox.push(pieces.x[k]!); oyy.push(pieces.y[k]!); ob.push(pieces.b[k]!);
+    } else if (prevInside) {
+      // Exit point: the cut line runs straight from here to the next entry point.
+      ox.push(pieces.x[k]!); oyy.push(pieces.y[k]!); ob.push(0);
+    }
+  }
+  const out = new Float64Array(2 * ox.length);
+  ox.forEach((x, k) => { out[2 * k] = x; out[2 * k + 1] = oyy[k]!; });
+  return { xy: out, bulge: ob.some((v) => v !== 0) ? Float64Array.from(ob) : undefined };
+}
+
+interface Side {
+  /** Σ w A, Σ w ∫s dA, Σ w ∫t dA on the side s ≥ d (local coordinates). */
+  readonly A: number;
+  readonly Qs: number;
+  readonly Qt: number;
+}
+
+function upperSide(rings: readonly LocalRing[], f: Frame, d: number): Side {
+  let A = 0, Qs = 0, Qt = 0;
+  for (const ring of rings) {
+    const clipped = clipRing(ring, f, d);
+    if (clipped === null) continue;
+    const raw = clipped === ring ? null : ringIntegrals(clipped, 0, 0);
+    const a = raw === null ? ring.A : raw.A;
+    const qs = raw === null ? ring.Qs : f.nx * raw.Qy + f.ny * raw.Qx;
+    const qt = raw === null ? ring.Qt : f.tx * raw.Qy + f.ty * raw.Qx;
+    A += ring.weight * a;
+    Qs += ring.weight * qs;
+    Qt += ring.weight * qt;
+  }
+  return { A, Qs, Qt };
+}
+
+interface Root {
+  readonly d: number;
+  readonly method: PnaMethod;
+  readonly evaluations: number;
+  readonly converged: boolean;
+  readonly plateau?: readonly [number, number];
+}
+
+/** Root of the quadratic through (0, g0), (½, gm), (1, g1) in [0, 1], stable formula; NaN if none. */
+function quadraticRootInUnit(g0: number, gm: number, g1: number): number {
+  const b = 4 * (gm - g0) - (g1 - g0);
+  const c = 2 * (g1 - g0) - 4 * (gm - g0);
+  const slack = 1e-9;
+  const ok = (x: number): boolean => Number.isFinite(x) && x >= -slack && x <= 1 + slack;
+  if (Math.abs(c) <= 1e-14 * (Math.abs(b) + Math.abs(g0))) {
+    const x = -g0 / b;
+    return ok(x) ? Math.min(1, Math.max(0, x)) : Number.NaN;
+  }
+  const disc = b * b - 4 * c * g0;
+  if (disc < 0) return Number.NaN;
+  const q = -(b + (b >= 0 ? 1 : -1) * Math.sqrt(disc)) / 2;
+  for (const x of [q / c, g0 / q]) if (ok(x)) return Math.min(1, Math.max(0, x));
+  return Number.NaN;
+}
+
+/** Brent's method (zeroin) on [a, b] with g(a) > 0 > g(b); cap BRENT_CAP, tolerance tol on d. */
+function brentRoot(g: (d: number) => number, a0: number, b0: number, ga: number, gb: number, tol: number) {
+  let a = a0, b = b0, fa = ga, fb = gb, c = a, fc = fa, e = b - a, dd = e;
+  for (let it = 1; it <= BRENT_CAP; it++) {
+    if (Math.sign(fb) === Math.sign(fc)) { c = a; fc = fa; e = b - a; dd = e; }
+    if (Math.abs(fc) < Math.abs(fb)) { a = b; b = c; c = a; fa = fb; fb = fc; fc = fa; }
+    const m = (c - b) / 2;
+    if (Math.abs(m) <= tol || fb === 0) return { d: b, iterations: it, converged: true };
+    if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
+      const s = fb / fa;
+      let p: number, q: number;
+      if (a === c) { p = 2 * m * s; q = 1 - s; } else {
+        const qq = fa / fc, r = fb / fc;
+        p = s * (2 * m * qq * (qq - r) - (b - a) * (r - 1));
+        q = (qq - 1) * (r - 1) * (s - 1);
+      }
+      if (p > 0) q = -q; else p = -p;
+      if (2 * p < Math.min(3 * m * q - Math.abs(tol * q), Math.abs(e * q))) { e = dd; dd = p / q; } else { dd = m; e = m; }
+    } else { dd = m; e = m; }
+    a = b; fa = fb;
+    b += Math.abs(dd) > tol ? dd : m > 0 ? tol : -tol;
+    fb = g(b);
+  }
+  return { d: b, iterations: BRENT_CAP, converged: false };
+}
+
+function solveBalance(g: (d: number) => number, s: readonly number[], gEnds: [number, number], polygonsOnly: boolean, zeroTol: number): Root {
+  let evaluations = 0;
+  const cache = new Map<number, number>([[0, gEnds[0]], [s.length - 1, gEnds[1]]]);
+  const gi = (i: number): number => {
+    let v = cache.get(i);
+    if (v === undefined) { v = g(s[i]!); evaluations++; cache.set(i, v); }
+    return v;
+  };
+  const last = s.length - 1;
+  if (gi(0) <= zeroTol) return { d: s[0]!, method: 'breakpoint', evaluations, converged: true };
+  let lo = 0, hi = last;
+  while (hi - lo > 1) { const mid = (lo + hi) >> 1; if (gi(mid) > zeroTol) lo = mid; else hi = mid; }
+  if (gi(hi) >= -zeroTol) {
+    let lo2 = hi, hi2 = last;
+    if (gi(last) >= -zeroTol) lo2 = last;
+    while (hi2 - lo2 > 1) { const mid = (lo2 + hi2) >> 1; if (gi(mid) >= -zeroTol) lo2 = mid; else hi2 = mid; }
+    if (lo2 === hi) return { d: s[hi]!, method: 'breakpoint', evaluations, converged: true };
+    return { d: (s[hi]! + s[lo2]!) / 2, method: 'plateau', evaluations, converged: true, plateau: [s[hi]!, s[lo2]!] };
+  }
+  const sl = s[lo]!, sh = s[hi]!;
+  if (polygonsOnly) {
+    const gm = g((sl + sh) / 2);
+    evaluations++;
+    const x = quadraticRootInUnit(gi(lo), gm, gi(hi));
+    if (!Number.isNaN(x)) return { d: sl + x * (sh - sl), method: 'quadratic', evaluations, converged: true };
+  }
+  const tol = RELATIVE_TOLERANCE * (s[last]! - s[0]!);
+  const counted = (d: number): number => { evaluations++; return g(d); };
+  const r = brentRoot(counted, sl, sh, gi(lo), gi(hi), tol);
+  return { d: r.d, method: 'brent', evaluations, converged: r.converged };
+}
+
+interface CoreResult {
+  readonly axis: WeightedPlasticAxis;
+  /** s-centroids of the weighted halves, region coordinates. */
+  readonly centroidPlus: number;
+  readonly centroidMinus: number;
+}
+
+function plasticAxisCore(pieces: readonly WeightedRegion[], angleDeg: Degrees, axialForce: number): CoreResult {
+  checkPieces(pieces, axialForce);
+  const [c, sn] = cosSinDegrees(angleDeg);
+  const f: Frame = { nx: -sn, ny: c, tx: c, ty: sn };
+  const [ox, oy] = vertexBoxCentre(pieces.flatMap((p) => p.region));
+  const rings = localRings(pieces, ox, oy, f);
+  const W = rings.reduce((sum, r) => sum + r.weight * r.A, 0);
+  const Qs = rings.reduce((sum, r) => sum + r.weight * r.Qs, 0);
+  const Qt = rings.reduce((sum, r) => sum + r.weight * r.Qt, 0);
+  if (!(W > 0)) throw new RangeError(`plastic neutral axis: the weighted area is ${W}; the pieces must have positive area`);
+  if (Math.abs(axialForce) > W) {
+    throw new RangeError(`plastic neutral axis: axial force ${axialForce} exceeds the full-yield force ${W} of the section`);
+  }
+  const s = breakpoints(rings, f);
+  const g = (d: number): number => 2 * upperSide(rings, f, d).A - W - axialForce;
+  const polygonsOnly = rings.every((r) => r.bulge === undefined || r.bulge.every((b) => b === 0));
+  const root = solveBalance(g, s, [W - axialForce, -W - axialForce], polygonsOnly, 1e-12 * W);
+  const up = upperSide(rings, f, root.d);
+  const lowA = W - up.A;
+  const lowQs = Qs - up.Qs;
+  const shiftN = f.nx * ox + f.ny * oy;
+  const shiftT = f.tx * ox + f.ty * oy;
+  const axis: WeightedPlasticAxis = {
+    angleDeg,
+    normalX: f.nx,
+    normalY: f.ny,
+    d: root.d + shiftN,
+    moment: up.Qs - root.d * up.A + (root.d * lowA - lowQs),
+    // About the coordinate origin: the local value plus the net force times the origin shift.
+    perpendicularMoment: 2 * up.Qt - Qt + shiftT * (up.A - lowA),
+    weightedAreaPlus: up.A,
+    weightedAreaMinus: lowA,
+    axialForce,
+    method: root.method,
+    evaluations: root.evaluations,
+    residual: up.A - lowA - axialForce,
+    converged: root.converged,
+    ...(root.plateau ? { plateau: [root.plateau[0] + shiftN, root.plateau[1] + shiftN] as const } : {}),
+  };
+  return { axis, centroidPlus: up.Qs / up.A + shiftN, centroidMinus: lowQs / lowA + shiftN };
+}
+
+/**
+ * PNA of several weighted regions with the PNA at angleDeg (CCW from +x), balancing
+ * Σ w_i A_i(s > d) − Σ w_i A_i(s < d) = axialForce (METHODS §5.1, §5.3).
+ * Throws RangeError for non-positive weights, empty input or |axialForce| > Σ w_i A_i.
+ */
+export function plasticNeutralAxisWeighted(
+  pieces: readonly WeightedRegion[],
+  angleDeg: Degrees,
+  axialForce = 0,
+): WeightedPlasticAxis {
+  return plasticAxisCore(pieces, angleDeg, axialForce).axis;
+}
+
+/** PNA and plastic modulus of one region with the PNA at angleDeg (CCW from +x), METHODS §5. */
+export function plasticNeutralAxis(region: Region, angleDeg: Degrees): PlasticAxis {
+  const { axis, centroidPlus, centroidMinus } = plasticAxisCore([{ region, weight: 1 }], angleDeg, 0);
+  return {
+    ...axis,
+    Z: axis.moment,
+    Zperp: axis.perpendicularMoment,
+    momentNotParallel: Math.abs(axis.perpendicularMoment) > 1e-9 * axis.moment,
+    areaPlus: axis.weightedAreaPlus,
+    areaMinus: axis.weightedAreaMinus,
+    centroidPlus,
+    centroidMinus,
+  };
+}
+
+/** Bending about x: the PNA is horizontal, at y = pnaY (METHODS §5). */
+export function plasticAboutX(region: Region): { readonly pnaY: number; readonly Zx: number; readonly axis: PlasticAxis } {
+  const axis = plasticNeutralAxis(region, 0 as Degrees);
+  return { pnaY: axis.d, Zx: axis.Z, axis };
+}
+
+/** Bending about y: the PNA is vertical, at x = pnaX (θ = −90°, so s = x). */
+export function plasticAboutY(region: Region): { readonly pnaX: number; readonly Zy: number; readonly axis: PlasticAxis } {
+  const axis = plasticNeutralAxis(region, -90 as Degrees);
+  return { pnaX: axis.d, Zy: axis.Z, axis };
+}
