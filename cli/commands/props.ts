@@ -1,0 +1,169 @@
+/**
+ * `sectionsmith props FILE [--json] [--unit U]`: the section properties of a document or a
+ * GeoJSON file. All numbers come from core (core/section, core/properties); this file only
+ * converts units for output (through core/units) and lays out text.
+ *
+ * Units: a document's numbers are reported in its own unit unless --unit asks for another;
+ * a GeoJSON file has no unit, so --unit is required and says what its coordinates are.
+ * Extra flags (e.g. a torsion option) go in PROPS_FLAGS and add their rows and keys in
+ * `extraResults`; nothing else needs to change.
+ */
+import type { SectionProperties } from '../../core/properties/types.ts';
+import { convertLength, defaultDisplaySet, formatSig, isLengthUnit, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
+import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
+import { loadSection, type LoadedSection } from '../load.ts';
+
+export const PROPS_FLAGS: readonly FlagSpec[] = [
+  { name: 'json', type: 'boolean', description: 'print one JSON object (keys below) instead of the table' },
+  { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m: for GeoJSON the unit of its coordinates (required); for a document the unit to report in (default: its own)' },
+];
+
+/** The length dimension of every property (null: a pure number or an angle). */
+export const PROPERTY_QUANTITY: Readonly<Record<keyof SectionProperties, Quantity | null>> = {
+  area: 'area', cx: 'length', cy: 'length', Ix: 'inertia', Iy: 'inertia', Ixy: 'inertia', Ip: 'inertia', I1: 'inertia', I2: 'inertia',
+  thetaDeg: null, isotropic: null, rx: 'length', ry: 'length', r1: 'length', r2: 'length',
+  xMin: 'length', xMax: 'length', yMin: 'length', yMax: 'length',
+  SxTop: 'modulus', SxBottom: 'modulus', SyLeft: 'modulus', SyRight: 'modulus',
+  S1Plus: 'modulus', S1Minus: 'modulus', S2Plus: 'modulus', S2Minus: 'modulus',
+  Zx: 'modulus', Zy: 'modulus', Z1: 'modulus', Z2: 'modulus', pnaY: 'length', pnaX: 'length',
+  shapeFactorX: null, shapeFactorY: null,
+};
+
+/** Table rows: symbol, what it is. Every property appears once. */
+const TABLE: readonly (readonly [keyof SectionProperties, string])[] = [
+  ['area', 'area'],
+  ['cx', 'centroid x'], ['cy', 'centroid y'],
+  ['Ix', 'second moment about centroidal x'], ['Iy', 'second moment about centroidal y'], ['Ixy', 'product of inertia (+∫XY dA)'],
+  ['Ip', 'polar moment Ix + Iy (not J)'],
+  ['I1', 'major principal moment'], ['I2', 'minor principal moment'], ['thetaDeg', 'angle of axis 1, CCW from +x'],
+  ['rx', 'radius of gyration about x'], ['ry', 'radius of gyration about y'], ['r1', 'radius of gyration, axis 1'], ['r2', 'radius of gyration, axis 2'],
+  ['SxTop', 'elastic modulus, x axis, top fibre'], ['SxBottom', 'elastic modulus, x axis, bottom fibre'],
+  ['SyLeft', 'elastic modulus, y axis, left fibre'], ['SyRight', 'elastic modulus, y axis, right fibre'],
+  ['S1Plus', 'elastic modulus, axis 1, + side'], ['S1Minus', 'elastic modulus, axis 1, − side'],
+  ['S2Plus', 'elastic modulus, axis 2, + side'], ['S2Minus', 'elastic modulus, axis 2, − side'],
+  ['Zx', 'plastic modulus about x'], ['Zy', 'plastic modulus about y'], ['Z1', 'plastic modulus, axis 1'], ['Z2', 'plastic modulus, axis 2'],
+  ['pnaY', 'plastic neutral axis y (bending about x)'], ['pnaX', 'plastic neutral axis x (bending about y)'],
+  ['shapeFactorX', 'shape factor Zx / Sx,min'], ['shapeFactorY', 'shape factor Zy / Sy,min'],
+  ['xMin', 'extent x min'], ['xMax', 'extent x max'], ['yMin', 'extent y min'], ['yMax', 'extent y max'],
+];
+
+const SIGNIFICANT = 6;
+
+/** Every property in `unit` (from the section's own unit), keys as in SectionProperties. */
+export function propertiesInUnit(p: SectionProperties, from: LengthUnit, to: LengthUnit): Record<string, number | boolean> {
+  const out: Record<string, number | boolean> = {};
+  for (const key of Object.keys(PROPERTY_QUANTITY) as (keyof SectionProperties)[]) {
+    const q = PROPERTY_QUANTITY[key];
+    const value = p[key];
+    out[key] = q === null || typeof value !== 'number' ? value : convertLength(value, from, to, QUANTITY_POWER[q]);
+  }
+  return out;
+}
+
+interface ExtraResults {
+  readonly json: Record<string, unknown>;
+  readonly rows: readonly (readonly [string, string, string, string])[];
+}
+
+/** Results of optional flags (none yet), as JSON keys and table rows [symbol, value, unit, what]. */
+function extraResults(_section: LoadedSection, _flags: FlagValues): ExtraResults {
+  return { json: {}, rows: [] };
+}
+
+function describeInput(s: LoadedSection): string {
+  if (s.kind === 'geojson') return `GeoJSON, ${s.region.length} polygon${s.region.length === 1 ? '' : 's'}, coordinates read as ${s.unit}`;
+  const hidden = s.hiddenParts > 0 ? `; ${s.hiddenParts} hidden part${s.hiddenParts === 1 ? '' : 's'} left out` : '';
+  return `Sectionsmith document "${s.name}", ${s.parts} part${s.parts === 1 ? '' : 's'}${hidden}, unit ${s.unit}`;
+}
+
+function table(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResults): string {
+  const display = defaultDisplaySet(unit);
+  const rows: (readonly [string, string, string, string])[] = TABLE.map(([key, what]) => {
+    const value = s.properties[key];
+    const q = PROPERTY_QUANTITY[key];
+    if (typeof value === 'boolean') return [key, value ? 'yes' : 'no', '', what];
+    if (q === null) return [key, formatSig(value, SIGNIFICANT), key === 'thetaDeg' ? 'deg' : '', what];
+    const shown = toDisplay(convertLength(value, s.unit, unit, QUANTITY_POWER[q]), unit, display[q]);
+    return [key, formatSig(shown, SIGNIFICANT, { grouping: ',' }), display[q].label, what];
+  });
+  rows.push(...extra.rows);
+  const w0 = Math.max(...rows.map((r) => r[0].length));
+  const w1 = Math.max(...rows.map((r) => r[1].length));
+  const w2 = Math.max(...rows.map((r) => r[2].length));
+  const lines = rows.map(([sym, val, u, what]) => `  ${sym.padEnd(w0)}  ${val.padStart(w1)}  ${u.padEnd(w2)}  ${what}`);
+  const note = s.properties.isotropic ? '\n  isotropic: every centroidal axis is principal; thetaDeg is reported as 0' : '';
+  return [
+    `${file}: ${describeInput(s)}`,
+    `Signs: Ixy = +∫XY dA about the centroid; angles counter-clockwise from +x. Centroid and extents in section coordinates.`,
+    '',
+    ...lines,
+    note,
+    `CAUTION: ${CAUTION}`,
+    '',
+  ].join('\n');
+}
+
+function json(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResults): string {
+  const body = {
+    file,
+    input: s.kind,
+    unit,
+    caution: CAUTION,
+    convention: 'Ixy = +∫XY dA about the centroid; angles in degrees counter-clockwise from +x; lengths in "unit", areas unit², moduli unit³, second moments unit⁴',
+    ...(s.kind === 'document' ? { parts: s.parts, hiddenParts: s.hiddenParts } : {}),
+    ...propertiesInUnit(s.properties, s.unit, unit),
+    ...extra.json,
+  };
+  // Non-finite numbers have no JSON form; say null rather than writing invalid JSON.
+  return `${JSON.stringify(body, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;
+}
+
+function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
+  if (positionals.length !== 1) {
+    io.err(`sectionsmith props: expected one FILE, got ${positionals.length === 0 ? 'none' : positionals.join(' ')}\nusage: sectionsmith ${propsCommand.usage}\n`);
+    return EXIT_BAD_INPUT;
+  }
+  const file = positionals[0] as string;
+  const unitFlag = flags.unit;
+  if (unitFlag !== undefined && !isLengthUnit(unitFlag)) {
+    io.err(`sectionsmith props: --unit: expected in, ft, mm, cm or m, got ${JSON.stringify(unitFlag)}\n`);
+    return EXIT_BAD_INPUT;
+  }
+  const loaded = loadSection(file, io, unitFlag);
+  if (!loaded.ok) {
+    io.err(`${loaded.messages.join('\n')}\n`);
+    return EXIT_BAD_INPUT;
+  }
+  const section = loaded.section;
+  const unit = unitFlag ?? section.unit;
+  const extra = extraResults(section, flags);
+  io.out(flags.json === true ? json(file, section, unit, extra) : table(file, section, unit, extra));
+  return EXIT_OK;
+}
+
+export const propsCommand: Command = {
+  name: 'props',
+  summary: 'section properties of a Sectionsmith document or a GeoJSON area',
+  usage: 'props FILE [--json] [--unit U]',
+  description: [
+    'FILE is a Sectionsmith document (.json, "format": "sectionsmith-section") or a GeoJSON',
+    'Polygon, MultiPolygon, Feature or FeatureCollection (RFC 7946) whose coordinates are lengths',
+    'in the unit given by --unit (first ring outer, the others holes). Hidden document parts are',
+    'left out, and the output says how many.',
+    '',
+    'The table shows each property with its symbol, value (6 significant figures) and unit;',
+    'inch and foot sections in in, in², in³, in⁴; mm and m sections in mm, mm², 10³ mm³, 10⁶ mm⁴;',
+    'cm sections in cm, cm², cm³, cm⁴.',
+    '',
+    'With --json: one object with "file", "input", "unit", "caution", "convention", and every',
+    'property in plain powers of "unit": area, cx, cy, Ix, Iy, Ixy, Ip, I1, I2, thetaDeg, isotropic,',
+    'rx, ry, r1, r2, xMin, xMax, yMin, yMax, SxTop, SxBottom, SyLeft, SyRight, S1Plus, S1Minus,',
+    'S2Plus, S2Minus, Zx, Zy, Z1, Z2, pnaY, pnaX, shapeFactorX, shapeFactorY (documents add',
+    '"parts" and "hiddenParts").',
+    '',
+    'Bad input (unreadable file, JSON syntax, schema, geometry) exits with code 2 and names the',
+    'file and the place: line and column, JSON path, or part, ring and vertex.',
+  ].join('\n'),
+  flags: PROPS_FLAGS,
+  run: runProps,
+};

@@ -1,0 +1,93 @@
+/**
+ * Reading a section file for the commands: a Sectionsmith document or a GeoJSON area, into
+ * section properties. Every problem becomes a message that names the file and the place
+ * (line/column for JSON syntax, the JSON path for structure, part/ring/vertex for geometry).
+ */
+import { documentFromJson, parseJson } from '../core/document/index.ts';
+import type { Diagnostic, Region } from '../core/geometry/types.ts';
+import { normaliseRegion, validateRegion } from '../core/geometry/index.ts';
+import { geoJsonPathOf, isGeoJson, regionFromGeoJson } from '../core/geojson.ts';
+import { sectionProperties } from '../core/properties/index.ts';
+import type { SectionProperties } from '../core/properties/types.ts';
+import { type ComposedPart, sectionFromDocument } from '../core/section/index.ts';
+import type { LengthUnit } from '../core/units/index.ts';
+import type { CliIo } from './command.ts';
+
+export interface LoadedSection {
+  readonly kind: 'document' | 'geojson';
+  readonly name: string;
+  readonly unit: LengthUnit;
+  readonly region: Region;
+  readonly properties: SectionProperties;
+  /** Parts used / left out (documents only; 0 for GeoJSON). */
+  readonly parts: number;
+  readonly hiddenParts: number;
+}
+
+export type LoadResult = { readonly ok: true; readonly section: LoadedSection } | { readonly ok: false; readonly messages: readonly string[] };
+
+/** The JSON path of a diagnostic inside a document part (vertex paths only for polygon parts). */
+function partPath(composed: ComposedPart, d: Diagnostic): string {
+  const base = `parts[${composed.index}]`;
+  if (composed.part.type !== 'polygon' || d.ring === undefined) return base;
+  const ring = d.ring < 0 ? `${base}.outer` : `${base}.holes[${d.ring}]`;
+  return d.vertex === undefined ? ring : `${ring}[${d.vertex}]`;
+}
+
+function fromDocument(file: string, value: unknown): LoadResult {
+  const parsed = documentFromJson(value);
+  if (!parsed.ok) return { ok: false, messages: parsed.errors.map((e) => `${file}: ${e.message}`) };
+  const doc = parsed.document;
+  const result = sectionFromDocument(doc);
+  if (result.properties === null) {
+    const messages: string[] = [];
+    const perPart = new Set<Diagnostic>();
+    for (const composed of result.parts) {
+      for (const d of composed.diagnostics) {
+        perPart.add(d);
+        messages.push(`${file}: ${partPath(composed, d)}: ${d.message}`);
+      }
+    }
+    for (const d of result.diagnostics) if (!perPart.has(d)) messages.push(`${file}: ${d.message}`);
+    return { ok: false, messages };
+  }
+  return {
+    ok: true,
+    section: { kind: 'document', name: doc.name, unit: doc.unit, region: result.region, properties: result.properties, parts: result.parts.length, hiddenParts: result.hiddenParts },
+  };
+}
+
+function fromGeoJson(file: string, value: unknown, unit: LengthUnit | undefined): LoadResult {
+  if (unit === undefined) {
+    return { ok: false, messages: [`${file}: GeoJSON carries no length unit; say what its coordinates are with --unit in|ft|mm|cm|m`] };
+  }
+  const read = regionFromGeoJson(value);
+  if (!read.ok) return { ok: false, messages: read.errors.map((e) => `${file}: ${e.message}`) };
+  // Validate before normalising, so ring and vertex indices are the file's own positions.
+  const diagnostics = validateRegion(read.region);
+  if (diagnostics.length > 0) {
+    return { ok: false, messages: diagnostics.map((d) => `${file}: ${geoJsonPathOf(read.sources, d.polygon ?? 0, d.ring, d.vertex)}: ${d.message}`) };
+  }
+  const region = normaliseRegion(read.region);
+  return { ok: true, section: { kind: 'geojson', name: file, unit, region, properties: sectionProperties(region), parts: 0, hiddenParts: 0 } };
+}
+
+/** Reads FILE as a document or as GeoJSON (which needs `geoJsonUnit`). */
+export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined): LoadResult {
+  let text: string;
+  try {
+    text = io.readFile(file);
+  } catch (err) {
+    const code = (err as { code?: string }).code;
+    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a directory' : code === 'EACCES' ? 'permission denied' : err instanceof Error ? err.message : String(err);
+    return { ok: false, messages: [`${file}: cannot read the file: ${why}`] };
+  }
+  const json = parseJson(text);
+  if (!json.ok) return { ok: false, messages: json.errors.map((e) => `${file}: ${e.message}`) };
+  if (isGeoJson(json.value)) return fromGeoJson(file, json.value, geoJsonUnit);
+  const format = (json.value as { format?: unknown } | null)?.format;
+  if (typeof json.value === 'object' && json.value !== null && format === undefined && !('version' in json.value)) {
+    return { ok: false, messages: [`${file}: not a Sectionsmith document (no "format": "sectionsmith-section") and not GeoJSON (no "type" Polygon, MultiPolygon, Feature or FeatureCollection)`] };
+  }
+  return fromDocument(file, json.value);
+}
