@@ -1,0 +1,264 @@
+/**
+ * The catalogue of standard designations: AISC Shapes Database v15.0 (all 2,091 shapes, published
+ * dimensions only, data/aisc-v15.ts) and dressed sawn lumber (NDS Supplement 2018 Table 1A,
+ * core/parts/lumber-sizes.ts), plus entries the user adds.
+ *
+ * Units: inches and lb/ft, as published. Each entry carries the part it builds (`shape`, `params`
+ *   in inches) and the modelling conventions used to turn published dimensions into geometry
+ *   (`modelling`), because the database publishes no fillet radii or flange slopes.
+ * Properties are never stored here: they are computed from the part's exact geometry.
+ * Conventions (see `modelling` of each entry):
+ *   W, M, HP, WT, MT — parallel flanges, root fillet r = kdes − tf (modelling convention).
+ *   S, C, ST — inner flange slope 2:12 (from memory of the AISC Manual Part 1; not in the
+ *     database), tf the average thickness at mid-outstand, r = kdes − (flange thickness at the web).
+ *   MC — parallel flanges at the average tf (the MC slope varies and is not published), r = kdes − tf.
+ *   L, 2L — sharp root and toes: the database states no radii (kdes is kept as published).
+ *   HSS and Pipe — design wall tdes (0.93·tnom, as tabulated); rectangular HSS outside corner
+ *     radius 2·tdes; round HSS use the nominal OD of the label (6.625, not the printed 6.63).
+ * Does not guarantee: that an entry reproduces the tabulated properties beyond the rounding of the
+ *   published dimensions (3 significant figures) and the conventions above.
+ */
+import type { Diagnostic } from '../geometry/types.ts';
+import { getPartType } from '../parts/index.ts';
+import { DRESSED_SIZES } from '../parts/lumber-sizes.ts';
+import { DOUBLE_L_ROWS, HSSC_ROWS, HSSR_ROWS, I_ROWS, L_ROWS, PIPE_ROWS, type Row } from './data/aisc-v15.ts';
+
+export type Family = 'W' | 'M' | 'S' | 'HP' | 'C' | 'MC' | 'WT' | 'MT' | 'ST' | 'L' | '2L' | 'HSS' | 'Pipe' | 'lumber' | 'user';
+
+export const AISC_SOURCE = 'AISC Shapes Database v15.0 (AISC, Nov 2017), published dimensions';
+export const LUMBER_SOURCE = 'NDS Supplement 2018 (AWC), Table 1A, dressed sizes';
+
+export interface CatalogueEntry {
+  readonly designation: string;
+  readonly family: Family;
+  readonly source: string;
+  /** Nominal weight, lb/ft (AISC W), when published. */
+  readonly nominalWeight?: number;
+  /** Overall depth, in (d, Ht, OD, or the dressed depth), for search. */
+  readonly depth: number;
+  /** The published dimensions, in, by the source's symbols. */
+  readonly dimensions: Readonly<Record<string, number>>;
+  /** The part this designation builds, dimensions in inches (lumber: nominal sizes). */
+  readonly shape: string;
+  readonly params: Readonly<Record<string, number>>;
+  /** How published dimensions became geometry (conventions, assumptions). */
+  readonly modelling: readonly string[];
+  readonly userDefined: boolean;
+}
+
+export interface Catalogue {
+  readonly entries: readonly CatalogueEntry[];
+  /** Entries by normalised designation (see designationKey). */
+  readonly byKey: ReadonlyMap<string, CatalogueEntry>;
+}
+
+/** The lookup key of a designation: upper case, no spaces, '×' read as 'X' ("w14x90" → "W14X90"). */
+export function designationKey(designation: string): string {
+  return designation.replace(/\s+/g, '').replace(/×/g, 'X').toUpperCase();
+}
+
+const FILLET_NOTE = 'root fillet radius r = kdes − tf (a modelling convention: AISC publishes no radius); flange toes sharp';
+const SLOPE_NOTE = 'inner flange slope 2:12 (from memory of the AISC Manual Part 1; not in the database); tf is the average thickness at mid-outstand; r = kdes − flange thickness at the web face; toes sharp';
+const MC_NOTE = 'parallel flanges at the average thickness tf: the MC flange slope varies and is not published, so Iy, Sy, Zy may differ from the table by several per cent; r = kdes − tf';
+const ANGLE_NOTE = 'sharp root and toes: the database states no radii (kdes kept as published)';
+const HSS_NOTE = 'design wall thickness tdes (0.93·tnom, as tabulated) is used for geometry';
+
+function flangedEntry(row: Row): CatalogueEntry {
+  const [designation, type, W, d, bf, tw, tf, kdes] = row as unknown as [string, Family, number, number, number, number, number, number];
+  const sloped = type === 'S' || type === 'C' || type === 'ST';
+  const slope = sloped ? 2 / 12 : 0;
+  const outstand = type === 'C' ? bf - tw : (bf - tw) / 2;
+  const atWeb = tf + (slope * outstand) / 2;
+  const shape = type === 'C' || type === 'MC' ? 'channel' : type === 'WT' || type === 'MT' || type === 'ST' ? 'tee' : 'i-shape';
+  const params = { d, bf, tw, tf, r: Math.max(kdes - atWeb, 0), ...(sloped ? { slope } : {}) };
+  const modelling = [type === 'MC' ? MC_NOTE : sloped ? SLOPE_NOTE : FILLET_NOTE];
+  if (shape === 'tee') modelling.push(`tee cut from the ${type === 'ST' ? 'S' : type === 'MT' ? 'M' : 'W'} shape: d is the depth of the tee`);
+  return { designation, family: type, source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, bf, tw, tf, kdes }, shape, params, modelling, userDefined: false };
+}
+
+function angleEntry(row: Row): CatalogueEntry {
+  const [designation, , W, d, b, t, kdes] = row as unknown as [string, string, number, number, number, number, number];
+  // Published d is the shorter leg; the tabulated x axis has the longer leg vertical, so it goes along y.
+  return { designation, family: 'L', source: AISC_SOURCE, nominalWeight: W, depth: b, dimensions: { d, b, t, kdes }, shape: 'angle', params: { d: b, b: d, t, r: 0, rt: 0 }, modelling: [ANGLE_NOTE, 'the longer leg b runs along y (the tabulated x axis is horizontal)'], userDefined: false };
+}
+
+/** A fraction such as "3/8", "1-1/2" or "3/4" in inches. */
+function fractionInches(text: string): number {
+  const m = /^(?:(\d+)-)?(\d+)(?:\/(\d+))?$/.exec(text);
+  if (m === null) return Number.NaN;
+  const whole = m[1] === undefined ? 0 : Number(m[1]);
+  return m[3] === undefined ? whole + Number(m[2]) : whole + Number(m[2]) / Number(m[3]);
+}
+
+/** The gap of a double angle from its label: "2L4X3X1/2X3/8LLBB" → 3/8; no fourth term → 0. */
+export function doubleAngleGap(designation: string): number {
+  const parts = designation.replace(/^2L/, '').replace(/(LLBB|SLBB)$/, '').split('X');
+  return parts.length === 4 ? fractionInches(parts[3]!) : 0;
+}
+
+function doubleAngleEntry(row: Row): CatalogueEntry {
+  const [designation, , W, d, b, t] = row as unknown as [string, string, number, number, number, number];
+  const gap = doubleAngleGap(designation);
+  return { designation, family: '2L', source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, b, t, gap }, shape: 'double-angle', params: { d, b, t, r: 0, rt: 0, gap }, modelling: [ANGLE_NOTE, 'legs d back to back, gap from the label'], userDefined: false };
+}
+
+function rectHssEntry(row: Row): CatalogueEntry {
+  const [designation, , W, Ht, B, tnom, tdes] = row as unknown as [string, string, number, number, number, number, number];
+  return { designation, family: 'HSS', source: AISC_SOURCE, nominalWeight: W, depth: Ht, dimensions: { Ht, B, tnom, tdes }, shape: 'rect-tube', params: { H: Ht, B, t: tdes, r: 2 * tdes }, modelling: [HSS_NOTE, 'outside corner radius 2·tdes, inside radius tdes (AISC Shapes Database v15.0 user note)'], userDefined: false };
+}
+
+function roundHssEntry(row: Row): CatalogueEntry {
+  const [designation, , W, OD, tnom, tdes] = row as unknown as [string, string, number, number, number, number];
+  const nominal = Number(/^HSS([\d.]+)X/.exec(designation)?.[1] ?? Number.NaN);
+  return { designation, family: 'HSS', source: AISC_SOURCE, nominalWeight: W, depth: nominal, dimensions: { OD, tnom, tdes }, shape: 'pipe', params: { OD: nominal, t: tdes }, modelling: [HSS_NOTE, `nominal OD ${nominal} from the label (the printed OD ${OD} is rounded)`], userDefined: false };
+}
+
+function pipeEntry(row: Row): CatalogueEntry {
+  const [designation, , W, OD, ID, tnom, tdes] = row as unknown as [string, string, number, number, number, number, number];
+  return { designation, family: 'Pipe', source: AISC_SOURCE, nominalWeight: W, depth: OD, dimensions: { OD, ID, tnom, tdes }, shape: 'pipe', params: { OD, t: tdes }, modelling: [HSS_NOTE, 'the published ID is nominal (OD − 2·tnom); the bore used is OD − 2·tdes'], userDefined: false };
+}
+
+function lumberEntries(): CatalogueEntry[] {
+  return DRESSED_SIZES.map((s) => ({
+    designation: s.nominal,
+    family: 'lumber' as const,
+    source: LUMBER_SOURCE,
+    depth: s.d,
+    dimensions: { b: s.b, d: s.d },
+    shape: 'lumber',
+    params: { b: s.nominalB, d: s.nominalD, plies: 1 },
+    modelling: [`dressed ${s.b} × ${s.d} in, ${s.condition} (${s.category})`],
+    userDefined: false,
+  }));
+}
+
+function catalogueOf(entries: readonly CatalogueEntry[]): Catalogue {
+  return { entries, byKey: new Map(entries.map((e) => [designationKey(e.designation), e])) };
+}
+
+const STANDARD: Catalogue = catalogueOf([
+  ...I_ROWS.map(flangedEntry),
+  ...L_ROWS.map(angleEntry),
+  ...DOUBLE_L_ROWS.map(doubleAngleEntry),
+  ...HSSR_ROWS.map(rectHssEntry),
+  ...HSSC_ROWS.map(roundHssEntry),
+  ...PIPE_ROWS.map(pipeEntry),
+  ...lumberEntries(),
+]);
+
+/** The standard catalogue: AISC v15.0 shapes and NDS dressed lumber. */
+export function standardCatalogue(): Catalogue {
+  return STANDARD;
+}
+
+/** The entry for a designation (case and spaces ignored), or undefined. */
+export function catalogueEntry(designation: string, catalogue: Catalogue = STANDARD): CatalogueEntry | undefined {
+  return catalogue.byKey.get(designationKey(designation));
+}
+
+export interface CatalogueQuery {
+  /** Part of the designation, case and spaces ignored ("w14", "2x1"). */
+  readonly text?: string;
+  readonly family?: Family;
+  /** Overall depth range, in. */
+  readonly depthMin?: number;
+  readonly depthMax?: number;
+  /** Nominal weight range, lb/ft; entries without a published weight are left out when given. */
+  readonly weightMin?: number;
+  readonly weightMax?: number;
+  readonly limit?: number;
+}
+
+/** Entries matching every given criterion, in catalogue order. */
+export function searchCatalogue(query: CatalogueQuery, catalogue: Catalogue = STANDARD): CatalogueEntry[] {
+  const text = query.text === undefined ? '' : designationKey(query.text);
+  const byWeight = query.weightMin !== undefined || query.weightMax !== undefined;
+  const found = catalogue.entries.filter(
+    (e) =>
+      (text === '' || designationKey(e.designation).includes(text)) &&
+      (query.family === undefined || e.family === query.family) &&
+      (query.depthMin === undefined || e.depth >= query.depthMin) &&
+      (query.depthMax === undefined || e.depth <= query.depthMax) &&
+      (!byWeight || (e.nominalWeight !== undefined && e.nominalWeight >= (query.weightMin ?? -Infinity) && e.nominalWeight <= (query.weightMax ?? Infinity))),
+  );
+  return query.limit === undefined ? found : found.slice(0, query.limit);
+}
+
+/** What the user supplies for a catalogue entry of their own. */
+export interface UserEntry {
+  readonly designation: string;
+  readonly shape: string;
+  /** Dimensions in inches by the part type's symbols. */
+  readonly params: Readonly<Record<string, number>>;
+  readonly nominalWeight?: number;
+  readonly note?: string;
+}
+
+function userEntryProblems(entry: UserEntry, base: Catalogue, seen: Set<string>): Diagnostic[] {
+  const name = entry.designation.trim();
+  const bad = (message: string): Diagnostic => ({ code: 'bad-parameter', part: name || '(unnamed)', message: `catalogue entry "${name}": ${message}` });
+  if (name === '') return [bad('the designation is empty')];
+  const key = designationKey(name);
+  if (base.byKey.has(key)) return [bad('a standard entry already has this designation; choose another name')];
+  if (seen.has(key)) return [bad('this designation is given twice')];
+  const type = getPartType(entry.shape);
+  if (type === undefined) return [bad(`unknown part type "${entry.shape}"`)];
+  if (entry.nominalWeight !== undefined && !(entry.nominalWeight > 0)) return [bad(`nominal weight ${entry.nominalWeight} must be greater than 0`)];
+  return type.region(entry.params).diagnostics.map((d) => bad(d.message));
+}
+
+/**
+ * A catalogue that also holds the user's entries (pure: the document or the app stores them).
+ * Invalid entries are left out and reported, one diagnostic each.
+ */
+export function withUserEntries(entries: readonly UserEntry[], base: Catalogue = STANDARD): { catalogue: Catalogue; diagnostics: Diagnostic[] } {
+  const diagnostics: Diagnostic[] = [];
+  const seen = new Set<string>();
+  const added: CatalogueEntry[] = [];
+  for (const entry of entries) {
+    const problems = userEntryProblems(entry, base, seen);
+    diagnostics.push(...problems);
+    if (problems.length > 0) continue;
+    seen.add(designationKey(entry.designation));
+    const p = entry.params;
+    added.push({
+      designation: entry.designation.trim(),
+      family: 'user',
+      source: 'user entry',
+      ...(entry.nominalWeight === undefined ? {} : { nominalWeight: entry.nominalWeight }),
+      depth: p['d'] ?? p['H'] ?? p['OD'] ?? p['t'] ?? 0,
+      dimensions: { ...p },
+      shape: entry.shape,
+      params: { ...p },
+      modelling: entry.note === undefined ? [] : [entry.note],
+      userDefined: true,
+    });
+  }
+  return { catalogue: catalogueOf([...base.entries, ...added]), diagnostics };
+}
+
+export type PartFromDesignation =
+  | { readonly ok: true; readonly shape: string; readonly params: Readonly<Record<string, number>>; readonly designation: string; readonly entry: CatalogueEntry }
+  | { readonly ok: false; readonly message: string };
+
+/** Designations that share the longest start with `designation` (for "did you mean"). */
+export function similarDesignations(designation: string, catalogue: Catalogue = STANDARD, count = 5): string[] {
+  const key = designationKey(designation);
+  let best: { prefix: number; names: string[] } = { prefix: 0, names: [] };
+  for (const [k, e] of catalogue.byKey) {
+    let n = 0;
+    while (n < k.length && n < key.length && k[n] === key[n]) n++;
+    if (n > best.prefix) best = { prefix: n, names: [e.designation] };
+    else if (n === best.prefix && n > 0 && best.names.length < count) best.names.push(e.designation);
+  }
+  return best.names;
+}
+
+/** The part (shape and dimensions in inches) a designation builds, or a message naming close ones. */
+export function partFromDesignation(designation: string, catalogue: Catalogue = STANDARD): PartFromDesignation {
+  const entry = catalogueEntry(designation, catalogue);
+  if (entry !== undefined) return { ok: true, shape: entry.shape, params: entry.params, designation: entry.designation, entry };
+  const close = similarDesignations(designation, catalogue);
+  const hint = close.length > 0 ? `; close: ${close.join(', ')}` : '';
+  return { ok: false, message: `no catalogue entry "${designation}"${hint}` };
+}

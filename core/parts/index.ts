@@ -1,0 +1,71 @@
+/**
+ * The parametric parts library: every part type by its id in trade words, and the built-up
+ * helpers that place several parts at once.
+ *
+ * Units: part dimensions are in the document unit, except lumber, whose nominal sizes are trade
+ *   names in inches (see lumber.ts). shapeRegion() returns any part's region in a given unit.
+ * Each part type documents its local origin in `origin`; regions are exact (arcs as bulges).
+ */
+import type { Diagnostic, Region, Ring } from '../geometry/types.ts';
+import type { LengthUnit } from '../units/types.ts';
+import type { PartType } from './registry-types.ts';
+import { inchInUnit } from './inch.ts';
+import { lumber } from './lumber.ts';
+import { angle, channel, doubleAngle, iShape, tee, zShape } from './rolled.ts';
+import { pipe, plate, rectTube, roundBar } from './simple.ts';
+
+export type { ParamSpec, PartType } from './registry-types.ts';
+export {
+  boltHolePattern,
+  boxFromChannels,
+  coverPlatedI,
+  doubleAnglesBackToBack,
+  flitchBeam,
+  plateGirder,
+  type BoltHoleOptions,
+  type BuiltUpPiece,
+} from './built-up.ts';
+export { DRESSED_SIZES, dressedSize, type DressedSize } from './lumber-sizes.ts';
+export { dressedPly } from './lumber.ts';
+
+const PART_TYPES: readonly PartType[] = [plate, roundBar, pipe, rectTube, iShape, channel, angle, doubleAngle, tee, zShape, lumber];
+
+/** Every part type, in palette order. */
+export function partTypes(): readonly PartType[] {
+  return PART_TYPES;
+}
+
+/** The part type with this id ('i-shape', 'channel', …), or undefined. */
+export function getPartType(id: string): PartType | undefined {
+  return PART_TYPES.find((t) => t.id === id);
+}
+
+/** The default dimensions of a part type, by symbol, in inches (optional ones included unless their default is a rule). */
+export function defaultParams(type: PartType): Record<string, number> {
+  const params: Record<string, number> = {};
+  for (const spec of type.params) if (spec.defaultRule === undefined) params[spec.key] = spec.defaultIn;
+  return params;
+}
+
+
+function scaledRing(ring: Ring, factor: number): Ring {
+  const xy = ring.xy.map((v) => v * factor);
+  return ring.bulge === undefined ? { xy } : { xy, bulge: ring.bulge.slice() };
+}
+
+/**
+ * The region of a part in the document unit `unit`: the part type's own region when its
+ * dimensions are lengths in that unit, scaled from inches when the type works in inches (lumber).
+ */
+export function shapeRegion(shape: string, params: Readonly<Record<string, number>>, unit: LengthUnit): { region: Region; diagnostics: readonly Diagnostic[] } {
+  const type = getPartType(shape);
+  if (type === undefined) {
+    const known = PART_TYPES.map((t) => t.id).join(', ');
+    return { region: [], diagnostics: [{ code: 'bad-parameter', part: shape, message: `unknown part type "${shape}"; known: ${known}` }] };
+  }
+  const built = type.region(params);
+  if (type.regionUnit !== 'in' || unit === 'in') return built;
+  const factor = inchInUnit(unit);
+  const region = built.region.map((p) => ({ outer: scaledRing(p.outer, factor), holes: p.holes.map((h) => scaledRing(h, factor)) }));
+  return { region, diagnostics: built.diagnostics };
+}
