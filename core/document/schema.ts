@@ -120,6 +120,12 @@ function issueToDocumentIssue(issue: AnyIssue): DocumentIssue {
   const keys = (issue.path ?? []).map((item) => item.key as string | number);
   const path = jsonPath(keys);
   const where = path || '(top level)';
+  const objectType = issue.type === 'strict_object' || issue.type === 'loose_object' || issue.type === 'object';
+  if (objectType && issue.input === undefined && keys.length > 0) {
+    const key = keys[keys.length - 1];
+    const parent = jsonPath(keys.slice(0, -1)) || 'the document';
+    return { path, message: `${where}: expected the key ${JSON.stringify(key)} in ${parent}, got nothing (the key is missing)` };
+  }
   if (issue.type === 'strict_object' && issue.input !== undefined) {
     // valibot reports an unknown key with the key as the last path item.
     const key = keys[keys.length - 1];
