@@ -81,11 +81,14 @@ export function ringProjectionRange(
     if (b === 0) continue;
     const j = (i + 1) % n;
     const arc = arcFromBulge(xs, ys, xy[2 * j]! - ox, xy[2 * j + 1]! - oy, b);
-    for (const phi of [phiMax, phiMin]) {
+    // Projection of the centre plus ±r for ordinary arcs; half-angle form for nearly straight ones.
+    const centre = ux * (xs + arc.centreDx) + uy * (ys + arc.centreDy);
+    const nearlyStraight = Math.abs(arc.sweep) < 0.01;
+    for (const [phi, sign] of [[phiMax, 1], [phiMin, -1]] as const) {
       const tau = sweepOffsetOfAngle(arc, phi);
       if (Number.isNaN(tau)) continue;
-      const [px, py] = arcPointOffset(arc, tau);
-      const sp = ux * (xs + px) + uy * (ys + py);
+      const [px, py] = nearlyStraight ? arcPointOffset(arc, tau) : [0, 0];
+      const sp = nearlyStraight ? ux * (xs + px) + uy * (ys + py) : centre + sign * arc.radius;
       if (sp < out[0]) out[0] = sp;
       if (sp > out[1]) out[1] = sp;
     }
