@@ -139,11 +139,12 @@ export function reorderPart(doc: SectionDocument, id: string, direction: -1 | 1)
   return { ...doc, parts };
 }
 
-/** Parameters of standard parts that are counts or ratios, not lengths (not converted with the unit). */
-const DIMENSIONLESS_PARAMS = new Set(['plies', 'count', 'rows', 'columns', 'n', 'slope', 'slopeDeg']);
-
-/** Re-express every length in another unit through `scale` (from core/units), so the physical section is unchanged. */
-export function scaleDocumentLengths(doc: SectionDocument, scale: (v: number) => number): SectionDocument {
+/**
+ * Re-express every length in another unit through `scale` (from core/units), so the physical
+ * section is unchanged. `isLengthParam(shape, key)` says which standard-part parameters are
+ * lengths (core/parts ParamSpec.quantity); ratios, counts and nominal sizes stay as they are.
+ */
+export function scaleDocumentLengths(doc: SectionDocument, scale: (v: number) => number, isLengthParam: (shape: string, key: string) => boolean = () => true): SectionDocument {
   const pt = (p: readonly [number, number]): [number, number] => [scale(p[0]), scale(p[1])];
   const parts = doc.parts.map((p): Part => {
     const placement = { ...p.placement, x: scale(p.placement.x), y: scale(p.placement.y) };
@@ -158,7 +159,7 @@ export function scaleDocumentLengths(doc: SectionDocument, scale: (v: number) =>
         return {
           ...p,
           placement,
-          params: Object.fromEntries(Object.entries(p.params).map(([k, v]) => [k, DIMENSIONLESS_PARAMS.has(k) ? v : scale(v)])),
+          params: Object.fromEntries(Object.entries(p.params).map(([k, v]) => [k, isLengthParam(p.shape, k) ? scale(v) : v])),
         };
     }
   });

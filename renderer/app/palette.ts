@@ -1,0 +1,23 @@
+/** The app's own palette: slate-blue ink on warm paper, a copper accent for selection and results. */
+export const COLOURS = {
+  paper: '#f6f3ec',
+  gridMinor: '#e6e1d5',
+  gridMajor: '#d3ccbc',
+  axis: '#b9ae97',
+  partFill: '#8fa3b8',
+  partFillSelected: '#6f8aa6',
+  partStroke: '#2f4257',
+  holeFill: '#f6f3ec',
+  holeStroke: '#2f4257',
+  selection: '#c0612b',
+  handle: '#ffffff',
+  guide: '#2c8a7a',
+  draft: '#c0612b',
+  centroid: '#7a2e55',
+  principal: '#3d6f3a',
+  pna: '#a8741a',
+  dimension: '#51606e',
+  diagnostic: '#c42b2b',
+  rulerBack: '#ebe6da',
+  rulerText: '#51606e',
+} as const;
