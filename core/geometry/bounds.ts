@@ -42,13 +42,19 @@ export function ringExtremeAlong(ring: Ring, dx: number, dy: number): Extremes {
   const { xy } = ring;
   const n = ringVertexCount(ring);
   let max = -Infinity, min = Infinity;
-  let maxAt: Point = [NaN, NaN], minAt: Point = [NaN, NaN];
+  let iMax = 0, iMin = 0;
+  for (let i = 0; i < n; i++) {
+    const s = (xy[2 * i] ?? 0) * dx + (xy[2 * i + 1] ?? 0) * dy;
+    if (s > max) { max = s; iMax = i; }
+    if (s < min) { min = s; iMin = i; }
+  }
+  let maxAt: Point = [xy[2 * iMax] ?? NaN, xy[2 * iMax + 1] ?? NaN];
+  let minAt: Point = [xy[2 * iMin] ?? NaN, xy[2 * iMin + 1] ?? NaN];
   const consider = (x: number, y: number): void => {
     const s = x * dx + y * dy;
     if (s > max) { max = s; maxAt = [x, y]; }
     if (s < min) { min = s; minAt = [x, y]; }
   };
-  for (let i = 0; i < n; i++) consider(xy[2 * i] ?? 0, xy[2 * i + 1] ?? 0);
   if (ring.bulge !== undefined) {
     const len = Math.hypot(dx, dy);
     const phi = Math.atan2(dy, dx);

@@ -2,51 +2,52 @@
  * Sort-and-sweep over segments: visits every pair of segments whose bounding boxes overlap.
  *
  * Segment k runs from point k to point ends[k]. The sweep runs along the longer side of the
- * points' box: segments are sorted by their lower end on that axis (an in-place quicksort on
- * typed arrays, O(n log n)); an active list holds the segments the sweep line still cuts, pruned
- * as it passes their upper end; each new segment is paired with the active ones whose extent on
- * the other axis overlaps its own. Cost O(n log n + n·k), k = the number of segments one sweep
- * line cuts (small for section outlines; a dense stack of long parallel edges is the bad case).
+ * points' box: segments are ordered by their lower end on that axis, bucketed into n equal-width
+ * buckets by a counting sort (O(n), where a comparison sort would cost O(n log n)); an active list
+ * holds the segments the sweep has not yet passed, pruned once a whole bucket starts beyond their
+ * upper end; each new segment is paired with the active ones whose box overlaps its own.
+ * Cost O(n + n·k), k = the number of active segments (the segments one sweep band cuts: a few
+ * for section outlines; a dense stack of long parallel edges, or many segments in one bucket,
+ * is the bad case, at worst O(n²)).
  * Boxes that merely touch count as overlapping (closed boxes), so touching segments are visited.
  * `visit` returns false to stop early. Units: any. Source: Shamos & Hoey (1976); the
  * "sweep and prune" broad phase (common practice).
  */
 
-/** Sorts ids[lo..hi] by keys[ids[·]] ascending (Hoare partition, insertion sort below 16). */
-function sortByKey(keys: Float64Array, ids: Uint32Array, lo: number, hi: number): void {
-  while (hi - lo > 16) {
-    const pivot = keys[ids[(lo + hi) >> 1] ?? 0] ?? 0;
-    let i = lo, j = hi;
-    while (i <= j) {
-      while ((keys[ids[i] ?? 0] ?? 0) < pivot) i++;
-      while ((keys[ids[j] ?? 0] ?? 0) > pivot) j--;
-      if (i <= j) {
-        const t = ids[i] ?? 0;
-        ids[i] = ids[j] ?? 0;
-        ids[j] = t;
-        i++;
-        j--;
-      }
-    }
-    // Recurse into the smaller side, loop on the larger: stack depth stays O(log n).
-    if (j - lo < hi - i) {
-      sortByKey(keys, ids, lo, j);
-      lo = i;
-    } else {
-      sortByKey(keys, ids, i, hi);
-      hi = j;
-    }
+/**
+ * Orders segment ids by bucket of their lower end (a counting sort into n equal-width buckets,
+ * O(n)); returns the order and, per position, the smallest key in that position's bucket.
+ * Rounding is monotone, so every key in a later bucket is ≥ every key in an earlier one.
+ */
+function bucketOrder(keys: Float64Array): { order: Uint32Array; floor: Float64Array } {
+  const n = keys.length;
+  let lo = Infinity, hi = -Infinity;
+  for (const k of keys) {
+    if (k < lo) lo = k;
+    if (k > hi) hi = k;
   }
-  for (let i = lo + 1; i <= hi; i++) {
-    const id = ids[i] ?? 0;
-    const key = keys[id] ?? 0;
-    let j = i - 1;
-    while (j >= lo && (keys[ids[j] ?? 0] ?? 0) > key) {
-      ids[j + 1] = ids[j] ?? 0;
-      j--;
-    }
-    ids[j + 1] = id;
+  const scale = hi > lo ? n / (hi - lo) : 0;
+  const bucket = new Uint32Array(n);
+  const count = new Uint32Array(n + 1);
+  const bucketMin = new Float64Array(n).fill(Infinity);
+  for (let i = 0; i < n; i++) {
+    const k = keys[i] ?? 0;
+    const b = Math.min(n - 1, Math.floor((k - lo) * scale));
+    bucket[i] = b;
+    count[b + 1] = (count[b + 1] ?? 0) + 1;
+    if (k < (bucketMin[b] ?? Infinity)) bucketMin[b] = k;
   }
+  for (let b = 0; b < n; b++) count[b + 1] = (count[b + 1] ?? 0) + (count[b] ?? 0);
+  const order = new Uint32Array(n);
+  const floor = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const b = bucket[i] ?? 0;
+    const at = count[b] ?? 0;
+    order[at] = i;
+    floor[at] = bucketMin[b] ?? 0;
+    count[b] = at + 1;
+  }
+  return { order, floor };
 }
 
 function spread(v: Float64Array): number {
@@ -70,23 +71,23 @@ export function sweepPairs(x: Float64Array, y: Float64Array, ends: Uint32Array, 
     wLo[k] = Math.min(w0, w1);
     wHi[k] = Math.max(w0, w1);
   }
-  const order = new Uint32Array(n);
-  for (let k = 0; k < n; k++) order[k] = k;
-  sortByKey(uLo, order, 0, n - 1);
+  const { order, floor } = bucketOrder(uLo);
   const active: number[] = [];
   for (let o = 0; o < n; o++) {
     const s = order[o] ?? 0;
-    const start = uLo[s] ?? 0, lo = wLo[s] ?? 0, hi = wHi[s] ?? 0;
+    const passed = floor[o] ?? 0;
+    const sLo = uLo[s] ?? 0, sHi = uHi[s] ?? 0, lo = wLo[s] ?? 0, hi = wHi[s] ?? 0;
     let i = 0;
     while (i < active.length) {
       const a = active[i] ?? 0;
-      if ((uHi[a] ?? 0) < start) {
-        // Swap-remove: the sweep has passed segment a for good.
+      if ((uHi[a] ?? 0) < passed) {
+        // Swap-remove: every segment still to come starts beyond segment a's upper end.
         active[i] = active[active.length - 1] ?? 0;
         active.pop();
         continue;
       }
-      if ((wLo[a] ?? 0) <= hi && lo <= (wHi[a] ?? 0) && !visit(a, s)) return;
+      const overlaps = (uLo[a] ?? 0) <= sHi && sLo <= (uHi[a] ?? 0) && (wLo[a] ?? 0) <= hi && lo <= (wHi[a] ?? 0);
+      if (overlaps && !visit(a, s)) return;
       i++;
     }
     active.push(s);

@@ -117,34 +117,39 @@ function numericProblem(ring: Ring, ctx: ValidationContext, place: Place): Diagn
 
 /** Drops exactly repeated consecutive vertices and a repeated closing vertex, keeping indices. */
 function cleanRing(ring: Ring, place: Place): CleanRing {
-  const n = ring.xy.length >> 1;
-  const keep: number[] = [];
+  const src = ring.xy;
+  const n = src.length >> 1;
+  const keep = new Uint32Array(n);
   // groupEnd[k]: the last of the copies of kept vertex k; its segment is the one leaving the group.
-  const groupEnd: number[] = [];
+  const groupEnd = new Uint32Array(n);
+  let m = 0;
   for (let i = 0; i < n; i++) {
-    const last = keep[keep.length - 1];
-    if (last !== undefined && ring.xy[2 * last] === ring.xy[2 * i] && ring.xy[2 * last + 1] === ring.xy[2 * i + 1]) {
-      groupEnd[groupEnd.length - 1] = i;
+    const last = m > 0 ? (keep[m - 1] ?? 0) : -1;
+    if (last >= 0 && src[2 * last] === src[2 * i] && src[2 * last + 1] === src[2 * i + 1]) {
+      groupEnd[m - 1] = i;
       continue;
     }
-    keep.push(i);
-    groupEnd.push(i);
+    keep[m] = i;
+    groupEnd[m] = i;
+    m++;
   }
-  while (keep.length > 1) {
-    const last = keep[keep.length - 1] ?? 0, first = keep[0] ?? 0;
-    if (ring.xy[2 * last] !== ring.xy[2 * first] || ring.xy[2 * last + 1] !== ring.xy[2 * first + 1]) break;
-    keep.pop();
-    groupEnd.pop();
+  const first = keep[0] ?? 0;
+  while (m > 1) {
+    const last = keep[m - 1] ?? 0;
+    if (src[2 * last] !== src[2 * first] || src[2 * last + 1] !== src[2 * first + 1]) break;
+    m--;
   }
-  const xy = new Float64Array(2 * keep.length);
-  const bulge = new Float64Array(keep.length);
-  keep.forEach((src, k) => {
-    xy[2 * k] = ring.xy[2 * src] ?? 0;
-    xy[2 * k + 1] = ring.xy[2 * src + 1] ?? 0;
-    bulge[k] = ring.bulge?.[groupEnd[k] ?? src] ?? 0;
-  });
-  const hasArcs = bulge.some((b) => b !== 0);
-  return { place, ring: hasArcs ? { xy, bulge } : { xy }, original: Uint32Array.from(keep) };
+  const xy = new Float64Array(2 * m);
+  for (let k = 0; k < m; k++) {
+    const v = keep[k] ?? 0;
+    xy[2 * k] = src[2 * v] ?? 0;
+    xy[2 * k + 1] = src[2 * v + 1] ?? 0;
+  }
+  const original = keep.slice(0, m);
+  if (ring.bulge === undefined) return { place, ring: { xy }, original };
+  const bulge = new Float64Array(m);
+  for (let k = 0; k < m; k++) bulge[k] = ring.bulge[groupEnd[k] ?? 0] ?? 0;
+  return { place, ring: bulge.some((b) => b !== 0) ? { xy, bulge } : { xy }, original };
 }
 
 function shapeProblem(c: CleanRing, ctx: ValidationContext): Diagnostic | null {
