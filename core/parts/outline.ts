@@ -130,16 +130,25 @@ export function ringOf(points: readonly Point[], bulges: readonly number[]): Rin
   return { xy, bulge: Float64Array.from(bulges) };
 }
 
-/** A full circle as two semicircular arcs: CCW (outer ring) or CW (hole). */
-export function circleRing(cx: number, cy: number, radius: number, direction: 'ccw' | 'cw'): Ring {
+/**
+ * A full circle as two semicircular arcs: CCW (outer ring) or CW (hole). `start` 'side' puts the
+ * two vertices at (cx ± r, cy), 'top' at (cx, cy ∓ r); a bore starts at 'top' so that its
+ * vertices do not lie on the outer circle's chord (a diameter), which point-in-ring tests treat
+ * as boundary.
+ */
+export function circleRing(cx: number, cy: number, radius: number, direction: 'ccw' | 'cw', start: 'side' | 'top' = 'side'): Ring {
   const b = direction === 'ccw' ? 1 : -1;
-  return ringOf(
-    [
-      [cx + radius, cy],
-      [cx - radius, cy],
-    ],
-    [b, b],
-  );
+  const points: Point[] =
+    start === 'side'
+      ? [
+          [cx + radius, cy],
+          [cx - radius, cy],
+        ]
+      : [
+          [cx, cy - radius],
+          [cx, cy + radius],
+        ];
+  return ringOf(points, [b, b]);
 }
 
 /** The same corners in reverse order (the outline traced the other way round). */

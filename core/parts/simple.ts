@@ -77,7 +77,7 @@ export const pipe: PartType = {
     const { OD, t } = values as { OD: number; t: number };
     complain(diagnostics, 'pipe', 2 * t >= OD, `wall t = ${formatNumber(t)} is at least half of OD = ${formatNumber(OD)} (no bore left; use round-bar)`);
     if (diagnostics.length > 0) return failed(diagnostics);
-    return { region: [{ outer: circleRing(0, 0, OD / 2, 'ccw'), holes: [circleRing(0, 0, OD / 2 - t, 'cw')] }], diagnostics };
+    return { region: [{ outer: circleRing(0, 0, OD / 2, 'ccw'), holes: [circleRing(0, 0, OD / 2 - t, 'cw', 'top')] }], diagnostics };
   },
 };
 
