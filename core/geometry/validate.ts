@@ -266,6 +266,7 @@ interface ContactResult {
 function contactDiagnostics(rings: readonly CleanRing[], ctx: ValidationContext): ContactResult {
   const diagnostics: Diagnostic[] = [];
   const crossed = new Set<string>();
+  const seen = new Set<string>();
   if (rings.length === 0) return { diagnostics, crossed };
   const s = collectSegments(rings);
   const ends = new Uint32Array(s.x.length);
@@ -278,7 +279,12 @@ function contactDiagnostics(rings: readonly CleanRing[], ctx: ValidationContext)
     const key = ra < rb ? `${ra},${rb}` : `${rb},${ra}`;
     if (ra !== rb && crossed.has(key)) return true;
     if (ra !== rb) crossed.add(key);
-    diagnostics.push(contactDiagnostic(s, rings, a, b, ctx));
+    const d = contactDiagnostic(s, rings, a, b, ctx);
+    // A ring touching itself at a vertex meets the far segment with both of the vertex's segments.
+    const spot = `${ra},${d.at?.[0]},${d.at?.[1]}`;
+    if (seen.has(spot)) return true;
+    seen.add(spot);
+    diagnostics.push(d);
     return diagnostics.length < MAX_CONTACT_DIAGNOSTICS;
   });
   return { diagnostics, crossed };
