@@ -1,0 +1,299 @@
+/**
+ * `sectionsmith member FILE --span L --support S [--point P [--at A]] [--uniform W] [--E VALUE] …`:
+ * a beam check of the section in FILE (core/member), with its stiffness from core/materials.
+ *
+ * Units (stated in --help): lengths (--span, --at) in the document unit (GeoJSON: --unit);
+ * forces, line loads, moduli and densities take a unit suffix (10kN, 2kN/m, 29000ksi,
+ * 490lb/ft3) or, without one, the default of the document's unit system: N, N per document
+ * unit, MPa and kg/m3 for mm, cm and m; lbf, lbf per document unit, psi and lb/ft3 for in and ft.
+ * Output: lengths in the document unit, forces in N or lbf, moments in force × document unit,
+ * stresses in MPa or psi (the same system), EI in force × unit². Computation runs in SI.
+ */
+import { documentFromJson, parseJson } from '../../core/document/index.ts';
+import { compositeProperties, type MaterialPiece } from '../../core/materials/composite.ts';
+import { materialPiecesFromDocument } from '../../core/materials/document.ts';
+import {
+  densityToKgPerM3, FORCE_UNITS, forceToNewtons, newtonsTo, parseQuantity, pascalsTo, QuantityError,
+  STRESS_UNITS, stressToPascals, type DensityUnit, type ForceUnit, type StressUnit,
+} from '../../core/materials/quantities.ts';
+import type { MaterialSI } from '../../core/materials/schema.ts';
+import { SUPPORTS, type Support } from '../../core/member/beam.ts';
+import { CAUTION as MEMBER_CAUTION, memberCheck, memberInputIssues, type MemberInput, type MemberResult } from '../../core/member/check.ts';
+import { convertLength, formatSig, isLengthUnit, LENGTH_UNITS, type LengthUnit } from '../../core/units/index.ts';
+import { EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
+import { loadSection, type LoadedSection } from '../load.ts';
+
+export const MEMBER_FLAGS: readonly FlagSpec[] = [
+  { name: 'span', type: 'string', value: 'L', description: 'span, in the document unit (required); a cantilever\'s length' },
+  { name: 'support', type: 'string', value: 'S', description: 'simple | cantilever | fixed | propped (required)' },
+  { name: 'point', type: 'string', value: 'P', description: 'point load, downward; N, kN, lbf or kip (default N metric, lbf in/ft)' },
+  { name: 'at', type: 'string', value: 'A', description: 'position of the point load from the left (fixed) end, document unit; default midspan (cantilever: the free end)' },
+  { name: 'uniform', type: 'string', value: 'W', description: 'uniform load over the span, downward; e.g. 2kN/m, 300lbf/ft (default: N or lbf per document unit)' },
+  { name: 'E', type: 'string', value: 'VALUE', description: 'modulus for a single-material shape; Pa, kPa, MPa, GPa, psi, ksi (default MPa metric, psi in/ft)' },
+  { name: 'density', type: 'string', value: 'RHO', description: 'with --E and --self-weight: density, kg/m3 or lb/ft3 (default kg/m3 metric, lb/ft3 in/ft)' },
+  { name: 'self-weight', type: 'boolean', description: 'add the section\'s own weight (from the material densities) to the uniform load' },
+  { name: 'limit', type: 'string', value: 'N', description: 'deflection limit span/N, e.g. 360, 240, 180, 120 (common practice); a cantilever uses 2 × its length' },
+  { name: 'unit', type: 'string', value: 'U', description: 'GeoJSON only: the length unit of its coordinates, in|ft|mm|cm|m' },
+  { name: 'json', type: 'boolean', description: 'print one JSON object instead of the text report' },
+];
+
+class UsageError extends Error {}
+
+interface OutputUnits {
+  readonly length: LengthUnit;
+  readonly force: ForceUnit;
+  readonly stress: StressUnit;
+  readonly density: DensityUnit;
+}
+
+const imperial = (u: LengthUnit): boolean => u === 'in' || u === 'ft';
+const outputUnits = (u: LengthUnit): OutputUnits => (imperial(u) ? { length: u, force: 'lbf', stress: 'psi', density: 'lb/ft3' } : { length: u, force: 'N', stress: 'MPa', density: 'kg/m3' });
+
+function lengthFlag(flags: FlagValues, name: string): number | undefined {
+  const text = flags[name];
+  if (text === undefined || typeof text === 'boolean') return undefined;
+  const value = Number(text);
+  if (text.trim() === '' || !Number.isFinite(value)) throw new UsageError(`--${name}: expected a number in the document unit, got ${JSON.stringify(text)}`);
+  return value;
+}
+
+function stringFlag(flags: FlagValues, name: string): string | undefined {
+  const v = flags[name];
+  return typeof v === 'string' ? v : undefined;
+}
+
+/** A line load "2kN/m" → N per metre; a bare number is the default force per document unit. */
+function lineLoadNPerM(text: string, units: OutputUnits): number {
+  const [forcePart = '', lengthPart] = text.split('/');
+  const force = parseQuantity(forcePart, FORCE_UNITS, units.force, '--uniform');
+  const per: LengthUnit = lengthPart === undefined ? units.length : (lengthPart.trim() as LengthUnit);
+  if (!isLengthUnit(per)) throw new UsageError(`--uniform: unknown length unit "${lengthPart}" in "${text}"; use one of ${LENGTH_UNITS.join(', ')}`);
+  // Force per `per` → per metre: divide by the length of one `per` in metres.
+  return forceToNewtons(force.value, force.unit) / convertLength(1, per, 'm');
+}
+
+function densityKgPerM3(text: string, units: OutputUnits): number {
+  const q = parseQuantity(text, ['kg/m3', 'lb/ft3'] as const, units.density, '--density');
+  if (q.value < 0) throw new UsageError(`--density: must not be negative, got ${text}`);
+  return densityToKgPerM3(q.value, q.unit);
+}
+
+interface Pieces {
+  readonly pieces: readonly MaterialPiece[];
+  readonly from: 'document materials' | '--E';
+}
+
+function piecesFor(section: LoadedSection, text: string | undefined, flags: FlagValues, units: OutputUnits): Pieces | string[] {
+  const eText = stringFlag(flags, 'E');
+  if (eText !== undefined) {
+    const e = parseQuantity(eText, STRESS_UNITS, units.stress, '--E');
+    const E = stressToPascals(e.value, e.unit);
+    if (!(E > 0)) throw new UsageError(`--E: the modulus must be positive, got ${eText}`);
+    const rho = stringFlag(flags, 'density');
+    // No strength is known for a bare modulus: first yield and strength ratios are not reported.
+    const material: MaterialSI = { id: '--E', name: `E = ${eText}`, kind: 'other', E, G: E / 2.6, density: rho === undefined ? NaN : densityKgPerM3(rho, units), fy: NaN, strengthBasis: 'yield' };
+    return { pieces: [{ region: section.region, material, label: 'section' }], from: '--E' };
+  }
+  if (section.kind !== 'document' || text === undefined) return ['the shape has no materials: give the modulus with --E (e.g. --E 200GPa or --E 29000ksi)'];
+  const json = parseJson(text);
+  const parsed = json.ok ? documentFromJson(json.value) : null;
+  if (parsed === null || !parsed.ok) return ['the document could not be read again for its materials'];
+  const doc = parsed.document;
+  if (doc.materials.length === 0 && doc.defaultMaterial === null && doc.parts.every((p) => p.material === null)) {
+    return ['the document has no materials: assign materials to its parts, or give the modulus with --E'];
+  }
+  const found = materialPiecesFromDocument(doc);
+  const problems = [...found.issues, ...found.diagnostics.map((d) => d.message)];
+  return problems.length > 0 ? problems : { pieces: found.pieces, from: 'document materials' };
+}
+
+interface MemberReport {
+  readonly result: MemberResult;
+  readonly units: OutputUnits;
+  readonly span: number;
+  readonly support: Support;
+  readonly EI: number;
+  readonly selfWeight?: number;
+  readonly stiffnessFrom: string;
+  readonly pieces: readonly MaterialPiece[];
+}
+
+function runCheck(section: LoadedSection, pieces: Pieces, flags: FlagValues, units: OutputUnits): MemberReport {
+  const u = section.unit;
+  const span = lengthFlag(flags, 'span');
+  if (span === undefined) throw new UsageError('--span is required (a length in the document unit)');
+  const support = stringFlag(flags, 'support');
+  if (support === undefined || !(SUPPORTS as readonly string[]).includes(support)) throw new UsageError(`--support: expected ${SUPPORTS.join(', ')}, got ${JSON.stringify(support ?? '')}`);
+  const pointText = stringFlag(flags, 'point');
+  const at = lengthFlag(flags, 'at');
+  if (at !== undefined && pointText === undefined) throw new UsageError('--at needs --point');
+  if (!(span > 0)) throw new UsageError(`--span: expected a positive length, got ${span}`);
+  if (at !== undefined && (at < 0 || at > span)) throw new UsageError(`--at: ${at} is outside the span 0…${span} (document unit)`);
+  const points = [];
+  if (pointText !== undefined) {
+    const p = parseQuantity(pointText, FORCE_UNITS, units.force, '--point');
+    const a = at ?? (support === 'cantilever' ? span : span / 2);
+    points.push({ P: forceToNewtons(p.value, p.unit), a: convertLength(a, u, 'm') });
+  }
+  const uniformText = stringFlag(flags, 'uniform');
+  const uniform = uniformText === undefined ? 0 : lineLoadNPerM(uniformText, units);
+  const c = compositeProperties(pieces.pieces, u);
+  let selfWeight: number | undefined;
+  if (flags['self-weight'] === true) {
+    if (!Number.isFinite(c.weightPerLength)) throw new UsageError('--self-weight with --E needs --density');
+    selfWeight = c.weightPerLength;
+  }
+  const limitText = stringFlag(flags, 'limit');
+  const limitRatio = limitText === undefined ? undefined : Number(limitText);
+  if (limitRatio !== undefined && !(Number.isFinite(limitRatio) && limitRatio > 0)) throw new UsageError(`--limit: expected a positive ratio such as 360, got ${JSON.stringify(limitText)}`);
+  const m = (v: number): number => convertLength(v, u, 'm');
+  const input: MemberInput = {
+    beam: { span: m(span), support: support as Support, points, uniform },
+    EIx: c.EIx, EIy: c.EIy, EIxy: c.EIxy, yE: m(c.cy),
+    materials: c.pieces.map((p, i) => {
+      const mat = pieces.pieces[i]!.material;
+      return { id: p.materialId, name: `${p.label} (${mat.name})`, E: mat.E, yTop: m(p.yTop), yBottom: m(p.yBottom), ...(Number.isFinite(mat.fy) ? { strength: mat.fy } : {}) };
+    }),
+    ...(selfWeight !== undefined ? { selfWeight } : {}),
+    ...(limitRatio !== undefined ? { limitRatio } : {}),
+    samples: 100,
+  };
+  const problems = memberInputIssues(input);
+  if (problems.length > 0) throw new UsageError(problems.join('; '));
+  const result = memberCheck(input);
+  return { result, units, span, support: support as Support, EI: c.EIx, ...(selfWeight !== undefined ? { selfWeight } : {}), stiffnessFrom: pieces.from, pieces: pieces.pieces };
+}
+
+/** SI result values → the output system. */
+function converters(units: OutputUnits) {
+  const len = (metres: number): number => convertLength(metres, 'm', units.length);
+  const force = (n: number): number => newtonsTo(n, units.force);
+  return {
+    len,
+    force,
+    moment: (nm: number): number => force(nm) * convertLength(1, 'm', units.length),
+    lineLoad: (nPerM: number): number => force(nPerM) / convertLength(1, 'm', units.length),
+    stress: (pa: number): number => pascalsTo(pa, units.stress),
+    EI: (nm2: number): number => force(nm2) * convertLength(1, 'm', units.length, 2),
+  };
+}
+
+function reportJson(file: string, r: MemberReport): Record<string, unknown> {
+  const k = converters(r.units);
+  const res = r.result;
+  const f = r.units.force, l = r.units.length;
+  return {
+    file,
+    caution: MEMBER_CAUTION,
+    units: { length: l, force: f, moment: `${f}·${l}`, lineLoad: `${f}/${l}`, stress: r.units.stress, EI: `${f}·${l}²` },
+    convention: 'x from the left end (the fixed end for cantilever and propped); loads and deflections downward positive; sagging moment positive; stresses tension positive',
+    support: r.support,
+    span: r.span,
+    stiffnessFrom: r.stiffnessFrom,
+    EI: k.EI(r.EI),
+    deflectionMax: k.len(res.deflectionMax),
+    deflectionAt: k.len(res.deflectionAt),
+    spanOverDeflection: res.spanOverDeflection,
+    momentMax: k.moment(res.momentMax),
+    momentAt: k.len(res.momentAt),
+    momentSagging: { value: k.moment(res.momentSagging.value), at: k.len(res.momentSagging.at) },
+    momentHogging: { value: k.moment(res.momentHogging.value), at: k.len(res.momentHogging.at) },
+    reactionLeft: k.force(res.reactions.left),
+    momentLeft: k.moment(res.reactions.leftMoment),
+    uniformTotal: k.lineLoad(res.uniformTotal),
+    ...(r.selfWeight !== undefined ? { selfWeight: k.lineLoad(r.selfWeight) } : {}),
+    stresses: res.stresses.map((s) => ({
+      material: s.name,
+      maxTension: k.stress(s.maxTension), maxTensionAt: { x: k.len(s.maxTensionAt.x), y: k.len(s.maxTensionAt.y) },
+      maxCompression: k.stress(s.maxCompression), maxCompressionAt: { x: k.len(s.maxCompressionAt.x), y: k.len(s.maxCompressionAt.y) },
+      ...(s.strengthRatio !== undefined ? { strengthRatio: s.strengthRatio } : {}),
+    })),
+    ...(res.limit !== undefined ? { limit: { ratio: res.limit.ratio, limitLength: k.len(res.limit.limitLength), allowed: k.len(res.limit.allowed), passes: res.limit.passes, verdict: res.limit.verdict } } : {}),
+    deflectionSearch: res.deflectionSolve,
+    cautions: res.cautions,
+  };
+}
+
+function reportText(file: string, r: MemberReport): string {
+  const k = converters(r.units);
+  const res = r.result;
+  const f = r.units.force, l = r.units.length, s = r.units.stress;
+  const g = (v: number): string => formatSig(v, 5);
+  const lines = [
+    `${file}: ${r.support} span ${g(r.span)} ${l}, EI = ${g(k.EI(r.EI))} ${f}·${l}² (from ${r.stiffnessFrom})`,
+    `  maximum deflection   ${g(k.len(res.deflectionMax))} ${l} at x = ${g(k.len(res.deflectionAt))} ${l}  (span/${g(res.spanOverDeflection)})`,
+    `  maximum moment       ${g(k.moment(res.momentMax))} ${f}·${l} at x = ${g(k.len(res.momentAt))} ${l}`,
+    `  uniform load total   ${g(k.lineLoad(res.uniformTotal))} ${f}/${l}${r.selfWeight !== undefined ? ` (self-weight ${g(k.lineLoad(r.selfWeight))} included)` : ''}`,
+    ...res.stresses.map((st) => `  ${st.name}: tension ${g(k.stress(st.maxTension))} ${s}, compression ${g(k.stress(st.maxCompression))} ${s}${st.strengthRatio !== undefined ? `, ratio to its strength ${g(st.strengthRatio)}` : ''}`),
+  ];
+  if (res.limit !== undefined) lines.push(`  deflection limit     span/${res.limit.ratio} = ${g(k.len(res.limit.allowed))} ${l}: ${res.limit.verdict.toUpperCase()}`);
+  lines.push('', ...res.cautions.map((c) => `CAUTION: ${c}`), '');
+  return lines.join('\n');
+}
+
+function runMember(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
+  if (positionals.length !== 1) {
+    io.err(`sectionsmith member: expected one FILE, got ${positionals.length === 0 ? 'none' : positionals.join(' ')}\nusage: sectionsmith ${memberCommand.usage}\n`);
+    return EXIT_BAD_INPUT;
+  }
+  const file = positionals[0] as string;
+  const unitFlag = stringFlag(flags, 'unit');
+  if (unitFlag !== undefined && !isLengthUnit(unitFlag)) {
+    io.err(`sectionsmith member: --unit: expected in, ft, mm, cm or m, got ${JSON.stringify(unitFlag)}\n`);
+    return EXIT_BAD_INPUT;
+  }
+  const loaded = loadSection(file, io, unitFlag);
+  if (!loaded.ok) {
+    io.err(`${loaded.messages.join('\n')}\n`);
+    return EXIT_BAD_INPUT;
+  }
+  const section = loaded.section;
+  const units = outputUnits(section.unit);
+  try {
+    const pieces = piecesFor(section, section.kind === 'document' ? io.readFile(file) : undefined, flags, units);
+    if (Array.isArray(pieces)) {
+      io.err(pieces.map((p) => `${file}: ${p}`).join('\n') + '\n');
+      return EXIT_BAD_INPUT;
+    }
+    const report = runCheck(section, pieces, flags, units);
+    io.out(flags.json === true ? `${JSON.stringify(reportJson(file, report), (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n` : reportText(file, report));
+    return EXIT_OK;
+  } catch (err) {
+    if (err instanceof UsageError || err instanceof QuantityError) {
+      io.err(`sectionsmith member: ${err.message}\n`);
+      return EXIT_BAD_INPUT;
+    }
+    throw err;
+  }
+}
+
+export const memberCommand: Command = {
+  name: 'member',
+  summary: 'beam check: maximum deflection and moment, bending stress per material, a deflection limit',
+  usage: 'member FILE --span L --support simple|cantilever|fixed|propped [--point P [--at A]] [--uniform W] [--E VALUE] [--self-weight] [--limit N] [--json]',
+  description: [
+    'The section in FILE (a Sectionsmith document, or GeoJSON with --unit) as a prismatic beam bent',
+    'about its x axis by downward loads. Supports: simple (pin and roller), cantilever (fixed at the',
+    'left end, x = 0), fixed (both ends), propped (fixed at the left, pinned at the right).',
+    'The stiffness EIx is the E-weighted one of the document\'s materials; --E gives one modulus to',
+    'the whole shape instead (required for GeoJSON or a document without materials).',
+    '',
+    'Units: --span and --at in the document unit. Forces, line loads, moduli and densities take a',
+    'unit suffix (10kN, 2.5kN/m, 300lbf/ft, 200GPa, 29000ksi, 7850kg/m3, 490lb/ft3); without one they',
+    'are in N, N per document unit, MPa, kg/m3 for mm/cm/m documents, and in lbf, lbf per document',
+    'unit, psi, lb/ft3 for in/ft documents. Results use the same system: lengths in the document',
+    'unit, forces N or lbf, moments force·unit, stresses MPa or psi.',
+    '',
+    'With --json: file, caution, units, convention, support, span, stiffnessFrom, EI, deflectionMax,',
+    'deflectionAt, spanOverDeflection, momentMax, momentAt, momentSagging, momentHogging,',
+    'reactionLeft, momentLeft, uniformTotal, selfWeight (with --self-weight), stresses (per',
+    'material), limit (with --limit: ratio, limitLength, allowed, passes, verdict), deflectionSearch',
+    'and cautions.',
+    '',
+    'Deflection limits such as span/360, /240, /180, /120 are offered as common practice (IBC Table',
+    '1604.3 ratios), not as code compliance; for a cantilever the limit uses twice its length.',
+    'Shear deformation is ignored. The local building code and a licensed engineer govern.',
+  ].join('\n'),
+  flags: MEMBER_FLAGS,
+  run: runMember,
+};
