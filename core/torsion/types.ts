@@ -21,4 +21,14 @@ export interface TorsionOptions {
   readonly layers?: number;
   /** Cancellation/progress hook: called now and then with a fraction 0..1; return false to abort. */
   readonly onProgress?: (fraction: number) => boolean | void;
+  /** Largest arc sweep per chord of the mesh, degrees (default 2.5). Optional extension. */
+  readonly maxChordAngleDeg?: number;
+  /** Minimum-angle target of the mesh, degrees (default 22). Optional extension. */
+  readonly minAngleDeg?: number;
+  /** Cap on mesh points (default 400 000). Optional extension. */
+  readonly maxPoints?: number;
+  /** Conjugate-gradient relative-residual tolerance (default 1e-10). Optional extension. */
+  readonly tolerance?: number;
+  /** Conjugate-gradient iteration cap per solve (default 20 000). Optional extension. */
+  readonly maxIterations?: number;
 }

@@ -1,0 +1,128 @@
+/**
+ * meshRegion: a conforming quality triangle mesh of one Region (METHODS §7.8).
+ *
+ * Steps: flatten arcs (chords of sweep ≤ maxChordAngleDeg), merge coincident vertices of
+ * touching pieces, estimate the local wall thickness, build a graded size field, split the
+ * boundary to that size, then refine a constrained Delaunay triangulation (refine.ts) until
+ * every triangle is small enough and its smallest angle meets minAngleDeg, except triangles
+ * wedged into input corners sharper than the target, which are left as they are and counted
+ * in badTriangles. Triangles outside the material (outside every outer ring, or in a hole)
+ * are removed by winding number.
+ * Not guaranteed: the mesh covers the chord polygon, not the exact arcs; input that crosses
+ * itself is rejected (MeshInputError), not repaired.
+ * refineUniform splits every triangle into four similar ones (nested refinement).
+ */
+import type { Region } from '../geometry/types.ts';
+import { planarGraphOfRegion } from './planar-input.ts';
+import { presplitSegments, refineTriangulation } from './refine.ts';
+import { reentrantCorners, sizeFieldOf } from './size-field.ts';
+import { MeshCancelledError, MeshInputError, type MeshOptions, type TriangleMesh } from './types.ts';
+
+export { MeshCancelledError, MeshInputError, MeshRefinementError } from './types.ts';
+export type { MeshOptions, TriangleMesh } from './types.ts';
+
+const DEFAULTS = {
+  layers: 3,
+  compactDivisions: 8,
+  maxChordAngleDeg: 2.5,
+  minAngleDeg: 22,
+  cornerRefinement: 4,
+  grading: 0.3,
+  maxPoints: 400_000,
+} as const;
+
+function checkedOption(name: keyof typeof DEFAULTS, value: number | undefined, lo: number, hi: number): number {
+  const v = value ?? DEFAULTS[name];
+  if (!(v >= lo && v <= hi)) {
+    throw new MeshInputError({ code: 'bad-parameter', message: `mesh option ${name} = ${v} is outside ${lo}..${hi}` });
+  }
+  return v;
+}
+
+export function meshRegion(region: Region, options: MeshOptions = {}): TriangleMesh {
+  const layers = checkedOption('layers', options.layers, 0.5, 64);
+  const compactDivisions = checkedOption('compactDivisions', options.compactDivisions, 1, 512);
+  const chordDeg = checkedOption('maxChordAngleDeg', options.maxChordAngleDeg, 0.05, 30);
+  const minAngleDeg = checkedOption('minAngleDeg', options.minAngleDeg, 0, 30);
+  const cornerRefinement = checkedOption('cornerRefinement', options.cornerRefinement, 1, 64);
+  const grading = checkedOption('grading', options.grading, 0.05, 2);
+  const maxPoints = checkedOption('maxPoints', options.maxPoints, 16, 4_000_000);
+  const graph = planarGraphOfRegion(region, (chordDeg * Math.PI) / 180);
+  const corners = reentrantCorners(graph);
+  const size = sizeFieldOf(graph, corners, { layers, compactDivisions, cornerRefinement, grading });
+  if (options.onProgress && options.onProgress(0) === false) throw new MeshCancelledError();
+  const work = { xy: [...graph.xy], segA: [...graph.segA], segB: [...graph.segB], segNet: [...graph.segNet] };
+  presplitSegments(work, size, maxPoints);
+  const refined = refineTriangulation(work, { size, minAngleRad: (minAngleDeg * Math.PI) / 180, maxPoints, onProgress: options.onProgress });
+  const compact = compactNodes(refined.xy, refined.triangles);
+  return {
+    ...compact,
+    minAngleDeg: smallestAngleDeg(compact.xy, compact.triangles),
+    rounds: refined.rounds,
+    insertedPoints: refined.insertedPoints,
+    badTriangles: refined.badTriangles,
+    reentrantCorners: corners.length,
+    maxChordSweep: graph.maxChordSweep,
+  };
+}
+
+/** Drops points no triangle uses and renumbers the rest in first-use order. */
+function compactNodes(xy: Float64Array, triangles: Int32Array): { xy: Float64Array; triangles: Int32Array } {
+  const map = new Int32Array(xy.length / 2).fill(-1);
+  const out: number[] = [];
+  const tri = new Int32Array(triangles.length);
+  triangles.forEach((v, i) => {
+    if ((map[v] ?? -1) < 0) {
+      map[v] = out.length / 2;
+      out.push(xy[2 * v] ?? 0, xy[2 * v + 1] ?? 0);
+    }
+    tri[i] = map[v] ?? 0;
+  });
+  return { xy: Float64Array.from(out), triangles: tri };
+}
+
+export function smallestAngleDeg(xy: Float64Array, triangles: Int32Array): number {
+  let best = 180;
+  for (let t = 0; t < triangles.length; t += 3) {
+    for (let k = 0; k < 3; k++) {
+      const a = triangles[t + k] ?? 0;
+      const b = triangles[t + ((k + 1) % 3)] ?? 0;
+      const c = triangles[t + ((k + 2) % 3)] ?? 0;
+      const ux = (xy[2 * b] ?? 0) - (xy[2 * a] ?? 0);
+      const uy = (xy[2 * b + 1] ?? 0) - (xy[2 * a + 1] ?? 0);
+      const vx = (xy[2 * c] ?? 0) - (xy[2 * a] ?? 0);
+      const vy = (xy[2 * c + 1] ?? 0) - (xy[2 * a + 1] ?? 0);
+      best = Math.min(best, (Math.atan2(Math.abs(ux * vy - uy * vx), ux * vx + uy * vy) * 180) / Math.PI);
+    }
+  }
+  return best;
+}
+
+/** Each triangle split into four by its edge midpoints (shared midpoints are one node). */
+export function refineUniform(mesh: Pick<TriangleMesh, 'xy' | 'triangles'>): { xy: Float64Array; triangles: Int32Array } {
+  const xy = Array.from(mesh.xy);
+  const n = mesh.xy.length / 2;
+  const mid = new Map<number, number>();
+  const midpoint = (a: number, b: number): number => {
+    const key = Math.min(a, b) * n + Math.max(a, b);
+    let m = mid.get(key);
+    if (m === undefined) {
+      m = xy.length / 2;
+      xy.push(((xy[2 * a] ?? 0) + (xy[2 * b] ?? 0)) / 2, ((xy[2 * a + 1] ?? 0) + (xy[2 * b + 1] ?? 0)) / 2);
+      mid.set(key, m);
+    }
+    return m;
+  };
+  const tri: number[] = [];
+  const t3 = mesh.triangles;
+  for (let t = 0; t < t3.length; t += 3) {
+    const a = t3[t] ?? 0;
+    const b = t3[t + 1] ?? 0;
+    const c = t3[t + 2] ?? 0;
+    const ab = midpoint(a, b);
+    const bc = midpoint(b, c);
+    const ca = midpoint(c, a);
+    tri.push(a, ab, ca, ab, b, bc, ca, bc, c, ab, bc, ca);
+  }
+  return { xy: Float64Array.from(xy), triangles: Int32Array.from(tri) };
+}

@@ -1,0 +1,380 @@
+/**
+ * Delaunay refinement (Ruppert 1995; Chew's second algorithm; Shewchuk's exposition) of a
+ * constrained Delaunay triangulation, done in batches: each round re-triangulates all points
+ * (cdt.ts), classifies triangles by winding number, then
+ *   1. splits every boundary segment whose diametral circle holds the apex of an adjacent
+ *      material triangle (encroachment), and
+ *   2. inserts the circumcentres of triangles that are too large for the size field or whose
+ *      smallest angle is below the target, choosing an independent set of them (no two in
+ *      the same or adjacent triangles) so one round never inserts near-duplicate points.
+ *      A circumcentre that encroaches a segment, or is hidden behind one, splits that segment
+ *      instead (Ruppert's rule).
+ * Triangles whose smallest angle sits between two boundary segments (a sharp input corner) are
+ * not refined for angle, only for size; this keeps small input angles from looping.
+ * Guards: at most MAX_ROUNDS rounds and options.maxPoints points, else MeshRefinementError.
+ */
+import { constrainedTriangulation, type ConstrainedTriangulation } from './cdt.ts';
+import type { SizeField } from './size-field.ts';
+import { MeshCancelledError, MeshRefinementError } from './types.ts';
+
+export interface RefineInput {
+  readonly xy: number[];
+  readonly segA: number[];
+  readonly segB: number[];
+  readonly segNet: number[];
+}
+
+export interface RefineSettings {
+  readonly size: SizeField;
+  readonly minAngleRad: number;
+  readonly maxPoints: number;
+  readonly onProgress?: ((fraction: number) => boolean | void) | undefined;
+}
+
+export interface RefinedTriangles {
+  readonly xy: Float64Array;
+  /** CCW corner triples of the material triangles (indices into xy). */
+  readonly triangles: Int32Array;
+  readonly rounds: number;
+  readonly insertedPoints: number;
+  readonly badTriangles: number;
+}
+
+const MAX_ROUNDS = 400;
+/** Circumradius of an equilateral triangle of edge h is h/√3; allow 15 % over that. */
+const SIZE_RADIUS_RATIO = 1.15 / Math.sqrt(3);
+const KEY = 4_194_304; // 2^22: segment keys a·KEY + b stay exact in doubles for < 2^31 points
+
+const next = (e: number): number => (e % 3 === 2 ? e - 2 : e + 1);
+const prev = (e: number): number => (e % 3 === 0 ? e + 2 : e - 1);
+
+interface Round {
+  readonly cdt: ConstrainedTriangulation;
+  readonly sign: Int8Array;
+  readonly inside: Uint8Array;
+  readonly segOf: Map<number, number>;
+}
+
+function segmentKeyMap(w: RefineInput): Map<number, number> {
+  const m = new Map<number, number>();
+  for (let s = 0; s < w.segA.length; s++) m.set((w.segA[s] ?? 0) * KEY + (w.segB[s] ?? 0), s);
+  return m;
+}
+
+function segmentOfEdge(r: Round, a: number, b: number): number {
+  return r.segOf.get(Math.min(a, b) * KEY + Math.max(a, b)) ?? -1;
+}
+
+/** Net winding gained crossing from the right of a→b to its left (0 for unconstrained edges). */
+function netAcross(w: RefineInput, r: Round, e: number): number {
+  if (!r.cdt.isConstrained(e)) return 0;
+  const a = r.cdt.triangles[e] ?? 0;
+  const b = r.cdt.triangles[next(e)] ?? 0;
+  const s = segmentOfEdge(r, a, b);
+  if (s < 0) return 0;
+  const net = w.segNet[s] ?? 0;
+  return a < b ? net : -net;
+}
+
+function orient(xy: ArrayLike<number>, a: number, b: number, px: number, py: number): number {
+  const ax = xy[2 * a] ?? 0;
+  const ay = xy[2 * a + 1] ?? 0;
+  return ((xy[2 * b] ?? 0) - ax) * (py - ay) - ((xy[2 * b + 1] ?? 0) - ay) * (px - ax);
+}
+
+/** Winding number of each triangle by a breadth-first walk from the convex hull (outside = 0). */
+function classify(w: RefineInput, cdt: ConstrainedTriangulation, coords: Float64Array): Round {
+  const tri = cdt.triangles;
+  const count = tri.length / 3;
+  const sign = new Int8Array(count);
+  for (let t = 0; t < count; t++) {
+    const c = tri[3 * t + 2] ?? 0;
+    sign[t] = orient(coords, tri[3 * t] ?? 0, tri[3 * t + 1] ?? 0, coords[2 * c] ?? 0, coords[2 * c + 1] ?? 0) > 0 ? 1 : -1;
+  }
+  const round: Round = { cdt, sign, inside: new Uint8Array(count), segOf: segmentKeyMap(w) };
+  const winding = new Int32Array(count);
+  const seen = new Uint8Array(count);
+  const queue: number[] = [];
+  for (let e = 0; e < tri.length; e++) {
+    const t = Math.floor(e / 3);
+    if ((cdt.halfedges[e] ?? 0) >= 0 || seen[t]) continue;
+    seen[t] = 1;
+    winding[t] = (sign[t] ?? 1) * netAcross(w, round, e);
+    queue.push(t);
+  }
+  for (let q = 0; q < queue.length; q++) {
+    const t = queue[q] ?? 0;
+    for (let k = 0; k < 3; k++) {
+      const e = 3 * t + k;
+      const f = cdt.halfedges[e] ?? -1;
+      const u = Math.floor(f / 3);
+      if (f < 0 || seen[u]) continue;
+      seen[u] = 1;
+      winding[u] = (winding[t] ?? 0) - (sign[t] ?? 1) * netAcross(w, round, e);
+      queue.push(u);
+    }
+  }
+  for (let t = 0; t < count; t++) round.inside[t] = winding[t] !== 0 ? 1 : 0;
+  return round;
+}
+
+/** Segments whose diametral circle holds the apex of an adjacent material triangle. */
+function encroachedSegments(r: Round, coords: Float64Array, into: Set<number>): void {
+  const tri = r.cdt.triangles;
+  for (let e = 0; e < tri.length; e++) {
+    if (!r.inside[Math.floor(e / 3)] || !r.cdt.isConstrained(e)) continue;
+    const a = tri[e] ?? 0;
+    const b = tri[next(e)] ?? 0;
+    const c = tri[prev(e)] ?? 0;
+    const ux = (coords[2 * a] ?? 0) - (coords[2 * c] ?? 0);
+    const uy = (coords[2 * a + 1] ?? 0) - (coords[2 * c + 1] ?? 0);
+    const vx = (coords[2 * b] ?? 0) - (coords[2 * c] ?? 0);
+    const vy = (coords[2 * b + 1] ?? 0) - (coords[2 * c + 1] ?? 0);
+    if (ux * vx + uy * vy < -1e-12 * Math.hypot(ux, uy) * Math.hypot(vx, vy)) {
+      const s = segmentOfEdge(r, a, b);
+      if (s >= 0) into.add(s);
+    }
+  }
+}
+
+interface Circle {
+  readonly x: number;
+  readonly y: number;
+  readonly r: number;
+  readonly sinMin: number;
+  /** Index 0..2 of the shortest edge (from corner k to corner k + 1). */
+  readonly shortest: number;
+}
+
+function circumcircle(coords: Float64Array, tri: Uint32Array, t: number): Circle {
+  const i0 = tri[3 * t] ?? 0;
+  const i1 = tri[3 * t + 1] ?? 0;
+  const i2 = tri[3 * t + 2] ?? 0;
+  const ax = coords[2 * i0] ?? 0;
+  const ay = coords[2 * i0 + 1] ?? 0;
+  const bx = (coords[2 * i1] ?? 0) - ax;
+  const by = (coords[2 * i1 + 1] ?? 0) - ay;
+  const cx = (coords[2 * i2] ?? 0) - ax;
+  const cy = (coords[2 * i2 + 1] ?? 0) - ay;
+  const d = 2 * (bx * cy - by * cx);
+  const b2 = bx * bx + by * by;
+  const c2 = cx * cx + cy * cy;
+  const ox = (cy * b2 - by * c2) / d;
+  const oy = (bx * c2 - cx * b2) / d;
+  const r = Math.hypot(ox, oy);
+  const l = [Math.sqrt(b2), Math.hypot(cx - bx, cy - by), Math.sqrt(c2)];
+  let shortest = 0;
+  for (let k = 1; k < 3; k++) if ((l[k] ?? 0) < (l[shortest] ?? 0)) shortest = k;
+  return { x: ax + ox, y: ay + oy, r, sinMin: (l[shortest] ?? 0) / (2 * r), shortest };
+}
+
+/**
+ * Walks the straight line from triangle t's centroid to (px, py). Returns the triangle holding
+ * the point, or −(1 + half-edge) of the constrained edge that hides it, or null at the step cap.
+ */
+function walkTo(r: Round, coords: Float64Array, t: number, px: number, py: number): number | null {
+  const tri = r.cdt.triangles;
+  const c = (k: number): number => tri[3 * t + k] ?? 0;
+  const gx = ((coords[2 * c(0)] ?? 0) + (coords[2 * c(1)] ?? 0) + (coords[2 * c(2)] ?? 0)) / 3;
+  const gy = ((coords[2 * c(0) + 1] ?? 0) + (coords[2 * c(1) + 1] ?? 0) + (coords[2 * c(2) + 1] ?? 0)) / 3;
+  let cur = t;
+  let entry = -1;
+  for (let step = 0; step < 10_000; step++) {
+    let exit = -1;
+    for (let k = 0; k < 3 && exit < 0; k++) {
+      const e = 3 * cur + k;
+      if (e === entry) continue;
+      const a = tri[e] ?? 0;
+      const b = tri[next(e)] ?? 0;
+      if ((r.sign[cur] ?? 1) * orient(coords, a, b, px, py) >= 0) continue;
+      const oa = (px - gx) * ((coords[2 * a + 1] ?? 0) - gy) - (py - gy) * ((coords[2 * a] ?? 0) - gx);
+      const ob = (px - gx) * ((coords[2 * b + 1] ?? 0) - gy) - (py - gy) * ((coords[2 * b] ?? 0) - gx);
+      if (oa * ob <= 0) exit = e;
+    }
+    if (exit < 0) return cur;
+    if (r.cdt.isConstrained(exit)) return -(1 + exit);
+    const f = r.cdt.halfedges[exit] ?? -1;
+    if (f < 0) return -(1 + exit);
+    entry = f;
+    cur = Math.floor(f / 3);
+  }
+  return null;
+}
+
+/** Sparse grid of segment diametral discs, for the encroachment test of new points. */
+function discGrid(w: RefineInput, cell: number): (x: number, y: number) => number[] {
+  const cells = new Map<number, number[]>();
+  const key = (i: number, j: number): number => i * 1_048_576 + j;
+  for (let s = 0; s < w.segA.length; s++) {
+    const a = w.segA[s] ?? 0;
+    const b = w.segB[s] ?? 0;
+    const mx = ((w.xy[2 * a] ?? 0) + (w.xy[2 * b] ?? 0)) / 2;
+    const my = ((w.xy[2 * a + 1] ?? 0) + (w.xy[2 * b + 1] ?? 0)) / 2;
+    const rad = Math.hypot((w.xy[2 * b] ?? 0) - (w.xy[2 * a] ?? 0), (w.xy[2 * b + 1] ?? 0) - (w.xy[2 * a + 1] ?? 0)) / 2;
+    for (let i = Math.floor((mx - rad) / cell); i <= Math.floor((mx + rad) / cell); i++) {
+      for (let j = Math.floor((my - rad) / cell); j <= Math.floor((my + rad) / cell); j++) {
+        const k = key(i, j);
+        const list = cells.get(k);
+        if (list) list.push(s);
+        else cells.set(k, [s]);
+      }
+    }
+  }
+  return (x, y) => cells.get(key(Math.floor(x / cell), Math.floor(y / cell))) ?? [];
+}
+
+function meanSegmentLength(w: RefineInput): number {
+  let sum = 0;
+  for (let s = 0; s < w.segA.length; s++) {
+    const a = w.segA[s] ?? 0;
+    const b = w.segB[s] ?? 0;
+    sum += Math.hypot((w.xy[2 * b] ?? 0) - (w.xy[2 * a] ?? 0), (w.xy[2 * b + 1] ?? 0) - (w.xy[2 * a + 1] ?? 0));
+  }
+  return sum / Math.max(1, w.segA.length);
+}
+
+function encroaches(w: RefineInput, s: number, x: number, y: number): boolean {
+  const a = w.segA[s] ?? 0;
+  const b = w.segB[s] ?? 0;
+  const ax = w.xy[2 * a] ?? 0;
+  const ay = w.xy[2 * a + 1] ?? 0;
+  const bx = w.xy[2 * b] ?? 0;
+  const by = w.xy[2 * b + 1] ?? 0;
+  return (ax - x) * (bx - x) + (ay - y) * (by - y) < 0;
+}
+
+function splitSegment(w: RefineInput, s: number): void {
+  const a = w.segA[s] ?? 0;
+  const b = w.segB[s] ?? 0;
+  const m = w.xy.length / 2;
+  w.xy.push(((w.xy[2 * a] ?? 0) + (w.xy[2 * b] ?? 0)) / 2, ((w.xy[2 * a + 1] ?? 0) + (w.xy[2 * b + 1] ?? 0)) / 2);
+  const net = w.segNet[s] ?? 0;
+  // a < b < m: (a, m) keeps the direction of a → b, (b, m) reverses it.
+  w.segB[s] = m;
+  w.segA.push(b);
+  w.segB.push(m);
+  w.segNet.push(-net);
+}
+
+/** Splits boundary segments until each is no longer than the size field at its midpoint. */
+export function presplitSegments(w: RefineInput, size: SizeField, maxPoints: number): void {
+  for (let s = 0; s < w.segA.length; s++) {
+    for (;;) {
+      const a = w.segA[s] ?? 0;
+      const b = w.segB[s] ?? 0;
+      const ax = w.xy[2 * a] ?? 0;
+      const ay = w.xy[2 * a + 1] ?? 0;
+      const bx = w.xy[2 * b] ?? 0;
+      const by = w.xy[2 * b + 1] ?? 0;
+      if (Math.hypot(bx - ax, by - ay) <= size.at((ax + bx) / 2, (ay + by) / 2)) break;
+      if (w.xy.length / 2 >= maxPoints) throw new MeshRefinementError(`boundary splitting reached the cap of ${maxPoints} points`, w.xy.length / 2, 0);
+      splitSegment(w, s);
+    }
+  }
+}
+
+interface Candidate {
+  readonly t: number;
+  readonly c: Circle;
+}
+
+function badTriangles(r: Round, coords: Float64Array, s: RefineSettings): { list: Candidate[]; angleOnly: number } {
+  const tri = r.cdt.triangles;
+  const sinTarget = Math.sin(s.minAngleRad);
+  const list: Candidate[] = [];
+  let angleOnly = 0;
+  for (let t = 0; t < tri.length / 3; t++) {
+    if (!r.inside[t]) continue;
+    const c = circumcircle(coords, tri, t);
+    const i0 = tri[3 * t] ?? 0;
+    const i1 = tri[3 * t + 1] ?? 0;
+    const i2 = tri[3 * t + 2] ?? 0;
+    const gx = ((coords[2 * i0] ?? 0) + (coords[2 * i1] ?? 0) + (coords[2 * i2] ?? 0)) / 3;
+    const gy = ((coords[2 * i0 + 1] ?? 0) + (coords[2 * i1 + 1] ?? 0) + (coords[2 * i2 + 1] ?? 0)) / 3;
+    const tooLarge = c.r > SIZE_RADIUS_RATIO * s.size.at(gx, gy);
+    let tooSharp = c.sinMin < sinTarget;
+    if (tooSharp && !tooLarge) {
+      // Smallest angle is opposite the shortest edge; its two edges both constrained = input corner.
+      const k = c.shortest;
+      const inputCorner = r.cdt.isConstrained(3 * t + ((k + 1) % 3)) && r.cdt.isConstrained(3 * t + ((k + 2) % 3));
+      if (inputCorner) {
+        tooSharp = false;
+        angleOnly++;
+      }
+    }
+    if (tooLarge || tooSharp) list.push({ t, c });
+  }
+  list.sort((p, q) => q.c.r - p.c.r);
+  return { list, angleOnly };
+}
+
+/** One round's insertions: Ruppert's rule with an independent set of circumcentres. */
+function chooseInsertions(w: RefineInput, r: Round, coords: Float64Array, bad: readonly Candidate[], split: Set<number>): number[] {
+  const blocked = new Uint8Array(r.inside.length);
+  const discs = discGrid(w, meanSegmentLength(w));
+  const points: number[] = [];
+  for (const { t, c } of bad) {
+    if (blocked[t]) continue;
+    const hit = walkTo(r, coords, t, c.x, c.y);
+    if (hit === null) continue;
+    if (hit < 0) {
+      const e = -hit - 1;
+      const seg = segmentOfEdge(r, r.cdt.triangles[e] ?? 0, r.cdt.triangles[next(e)] ?? 0);
+      if (seg >= 0) split.add(seg);
+      continue;
+    }
+    if (blocked[hit]) continue;
+    let encroaching = false;
+    for (const s of discs(c.x, c.y)) {
+      if (encroaches(w, s, c.x, c.y)) {
+        split.add(s);
+        encroaching = true;
+      }
+    }
+    if (encroaching) continue;
+    points.push(c.x, c.y);
+    blocked[hit] = 1;
+    blocked[t] = 1;
+    for (let k = 0; k < 3; k++) {
+      const f = r.cdt.halfedges[3 * hit + k] ?? -1;
+      if (f >= 0) blocked[Math.floor(f / 3)] = 1;
+    }
+  }
+  return points;
+}
+
+export function refineTriangulation(w: RefineInput, s: RefineSettings): RefinedTriangles {
+  const initialPoints = w.xy.length / 2;
+  for (let round = 1; round <= MAX_ROUNDS; round++) {
+    const coords = Float64Array.from(w.xy);
+    const r = classify(w, constrainedTriangulation(coords, w.segA, w.segB), coords);
+    const split = new Set<number>();
+    encroachedSegments(r, coords, split);
+    const bad = badTriangles(r, coords, s);
+    const points = chooseInsertions(w, r, coords, bad.list, split);
+    if (split.size === 0 && points.length === 0) {
+      return finish(coords, r, round, coords.length / 2 - initialPoints, bad.angleOnly);
+    }
+    for (const seg of split) splitSegment(w, seg);
+    for (const p of points) w.xy.push(p);
+    if (w.xy.length / 2 > s.maxPoints) {
+      throw new MeshRefinementError(`mesh refinement reached the cap of ${s.maxPoints} points after ${round} rounds`, w.xy.length / 2, round);
+    }
+    if (s.onProgress && s.onProgress(Math.min(0.95, round / (round + 8))) === false) throw new MeshCancelledError();
+  }
+  throw new MeshRefinementError(`mesh refinement did not settle within ${MAX_ROUNDS} rounds`, w.xy.length / 2, MAX_ROUNDS);
+}
+
+function finish(coords: Float64Array, r: Round, rounds: number, insertedPoints: number, badTriangles: number): RefinedTriangles {
+  const tri = r.cdt.triangles;
+  const out: number[] = [];
+  for (let t = 0; t < r.inside.length; t++) {
+    if (!r.inside[t]) continue;
+    const a = tri[3 * t] ?? 0;
+    const b = tri[3 * t + 1] ?? 0;
+    const c = tri[3 * t + 2] ?? 0;
+    if ((r.sign[t] ?? 1) > 0) out.push(a, b, c);
+    else out.push(a, c, b);
+  }
+  return { xy: coords, triangles: Int32Array.from(out), rounds, insertedPoints, badTriangles };
+}

@@ -1,0 +1,332 @@
+/**
+ * Saint-Venant warping function on a straight-sided T6 mesh, and the section constants from it
+ * (METHODS §7.1–7.5; Pilkey 2002, torsion and warping chapters).
+ *
+ * Coordinates X, Y are relative to the mesh centroid. Ip, Ix, Iy, Ixy and the centroid are
+ * integrated over the same mesh (METHODS §7.2: mixing exact-arc Ip with a chord mesh would
+ * exceed the FE error). J = Ip − Fᵀω; the Trefftz shear centre from ∫Xω, ∫Yω; Cw = ∫ω_S² about
+ * the shear centre. One material: G cancels. Disconnected components twist independently: J
+ * adds; each component's ω is given zero mean, so xs, ys and Cw then treat the pieces as
+ * warping freely, with no shear connection between them.
+ */
+import { elementStiffnessAndLoad, MASS_T6, shapeDerivatives, elementGeometry } from './element.ts';
+import { csrIndex, csrMultiply, csrPattern, pcgSolve } from './sparse.ts';
+
+export interface QuadraticMesh {
+  /** All node coordinates: corners first (same indices as the T3 mesh), then mid-side nodes. */
+  readonly xy: Float64Array;
+  /** Six node indices per element: corners CCW, then mid-sides 0–1, 1–2, 2–0. */
+  readonly elements: Int32Array;
+}
+
+/** Adds one mid-side node per edge (shared by the two triangles on it). */
+export function quadraticMesh(xy: Float64Array, triangles: Int32Array): QuadraticMesh {
+  const n = xy.length / 2;
+  const out = Array.from(xy);
+  const mid = new Map<number, number>();
+  const midpoint = (a: number, b: number): number => {
+    const key = Math.min(a, b) * n + Math.max(a, b);
+    let m = mid.get(key);
+    if (m === undefined) {
+      m = out.length / 2;
+      out.push(((xy[2 * a] ?? 0) + (xy[2 * b] ?? 0)) / 2, ((xy[2 * a + 1] ?? 0) + (xy[2 * b + 1] ?? 0)) / 2);
+      mid.set(key, m);
+    }
+    return m;
+  };
+  const el = new Int32Array((triangles.length / 3) * 6);
+  for (let t = 0; t < triangles.length / 3; t++) {
+    const a = triangles[3 * t] ?? 0;
+    const b = triangles[3 * t + 1] ?? 0;
+    const c = triangles[3 * t + 2] ?? 0;
+    el.set([a, b, c, midpoint(a, b), midpoint(b, c), midpoint(c, a)], 6 * t);
+  }
+  return { xy: Float64Array.from(out), elements: el };
+}
+
+/** Corner triangles of the nested refinement: each T6 split into its four children. */
+export function childTriangles(q: QuadraticMesh): Int32Array {
+  const e = q.elements;
+  const out = new Int32Array((e.length / 6) * 12);
+  for (let t = 0; t < e.length / 6; t++) {
+    const [n0, n1, n2, n3, n4, n5] = [0, 1, 2, 3, 4, 5].map((k) => e[6 * t + k] ?? 0) as [number, number, number, number, number, number];
+    out.set([n0, n3, n5, n3, n1, n4, n5, n4, n2, n3, n4, n5], 12 * t);
+  }
+  return out;
+}
+
+/** Parent area coordinates of the six nodes of each of the four children (childTriangles order). */
+const CHILD_NODES: readonly (readonly (readonly [number, number, number])[])[] = (() => {
+  const P: (readonly [number, number, number])[] = [[1, 0, 0], [0, 1, 0], [0, 0, 1], [0.5, 0.5, 0], [0, 0.5, 0.5], [0.5, 0, 0.5]];
+  const kids = [[0, 3, 5], [3, 1, 4], [5, 4, 2], [3, 4, 5]];
+  const avg = (p: readonly number[], q: readonly number[]): [number, number, number] => [((p[0] ?? 0) + (q[0] ?? 0)) / 2, ((p[1] ?? 0) + (q[1] ?? 0)) / 2, ((p[2] ?? 0) + (q[2] ?? 0)) / 2];
+  return kids.map(([a, b, c]) => {
+    const A = P[a ?? 0] ?? [0, 0, 0];
+    const B = P[b ?? 0] ?? [0, 0, 0];
+    const C = P[c ?? 0] ?? [0, 0, 0];
+    return [A, B, C, avg(A, B), avg(B, C), avg(C, A)];
+  });
+})();
+
+/** The coarse quadratic field, exactly represented on the nested fine mesh (fine = childTriangles + quadraticMesh). */
+export function prolongate(coarse: QuadraticMesh, fine: QuadraticMesh, values: Float64Array): Float64Array {
+  const out = new Float64Array(fine.xy.length / 2);
+  for (let t = 0; t < coarse.elements.length / 6; t++) {
+    for (let k = 0; k < 4; k++) {
+      const nodes = CHILD_NODES[k] ?? [];
+      nodes.forEach(([l1, l2, l3], j) => {
+        const N = [l1 * (2 * l1 - 1), l2 * (2 * l2 - 1), l3 * (2 * l3 - 1), 4 * l1 * l2, 4 * l2 * l3, 4 * l3 * l1];
+        let v = 0;
+        for (let i = 0; i < 6; i++) v += (N[i] ?? 0) * (values[coarse.elements[6 * t + i] ?? 0] ?? 0);
+        out[fine.elements[6 * (4 * t + k) + j] ?? 0] = v;
+      });
+    }
+  }
+  return out;
+}
+
+export interface SolveSettings {
+  readonly tolerance: number;
+  readonly maxIterations: number;
+  readonly initial?: Float64Array | undefined;
+  readonly onProgress?: ((fraction: number) => boolean | void) | undefined;
+}
+
+export interface WarpingSolution {
+  readonly J: number;
+  readonly Cw: number;
+  /** Shear centre, section coordinates. */
+  readonly xs: number;
+  readonly ys: number;
+  readonly xc: number;
+  readonly yc: number;
+  readonly area: number;
+  /** Centroidal ∫Y², ∫X², ∫XY and Ip over the mesh. */
+  readonly Ix: number;
+  readonly Iy: number;
+  readonly Ixy: number;
+  readonly Ip: number;
+  /** Warping function about the centroid, zero mean per component (nodal values). */
+  readonly omega: Float64Array;
+  /** Nodal load vector F (for the identity checks ΣF = 0, ωᵀKω = Fᵀω). */
+  readonly load: Float64Array;
+  /** ωᵀKω at the solution. */
+  readonly energy: number;
+  readonly iterations: number;
+  readonly relativeResidual: number;
+  readonly components: number;
+  readonly componentOfNode: Int32Array;
+}
+
+function componentsOf(nodes: number, elements: Int32Array): { count: number; of: Int32Array } {
+  const parent = Int32Array.from({ length: nodes }, (_, i) => i);
+  const find = (i: number): number => {
+    let r = i;
+    while ((parent[r] ?? r) !== r) r = parent[r] ?? r;
+    while ((parent[i] ?? i) !== r) {
+      const nx = parent[i] ?? i;
+      parent[i] = r;
+      i = nx;
+    }
+    return r;
+  };
+  for (let t = 0; t < elements.length; t += 6) {
+    const a = find(elements[t] ?? 0);
+    for (let k = 1; k < 6; k++) {
+      const b = find(elements[t + k] ?? 0);
+      if (a !== b) parent[b] = a;
+    }
+  }
+  const label = new Int32Array(nodes).fill(-1);
+  const of = new Int32Array(nodes);
+  let count = 0;
+  for (let i = 0; i < nodes; i++) {
+    const r = find(i);
+    if ((label[r] ?? -1) < 0) label[r] = count++;
+    of[i] = label[r] ?? 0;
+  }
+  return { count, of };
+}
+
+interface Moments {
+  area: number;
+  xc: number;
+  yc: number;
+}
+
+function meshCentroid(q: QuadraticMesh): Moments {
+  let area = 0;
+  let sx = 0;
+  let sy = 0;
+  const e = q.elements;
+  // Local origin at the first node keeps the sums well conditioned (METHODS §1.3).
+  const ox = q.xy[0] ?? 0;
+  const oy = q.xy[1] ?? 0;
+  for (let t = 0; t < e.length; t += 6) {
+    const xs = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? 0)] ?? 0) - ox);
+    const ys = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? 0) + 1] ?? 0) - oy);
+    const a = elementGeometry(xs, ys).twiceArea / 2;
+    area += a;
+    sx += (a * ((xs[0] ?? 0) + (xs[1] ?? 0) + (xs[2] ?? 0))) / 3;
+    sy += (a * ((ys[0] ?? 0) + (ys[1] ?? 0) + (ys[2] ?? 0))) / 3;
+  }
+  return { area, xc: ox + sx / area, yc: oy + sy / area };
+}
+
+/** M·v over the mesh (closed-form element mass matrices), returned as a nodal vector. */
+function massTimes(q: QuadraticMesh, X: Float64Array, Y: Float64Array, v: Float64Array): Float64Array {
+  const out = new Float64Array(v.length);
+  const e = q.elements;
+  for (let t = 0; t < e.length; t += 6) {
+    const xs = [X[e[t] ?? 0] ?? 0, X[e[t + 1] ?? 0] ?? 0, X[e[t + 2] ?? 0] ?? 0];
+    const ys = [Y[e[t] ?? 0] ?? 0, Y[e[t + 1] ?? 0] ?? 0, Y[e[t + 2] ?? 0] ?? 0];
+    const s = elementGeometry(xs, ys).twiceArea / 2 / 180;
+    for (let i = 0; i < 6; i++) {
+      let acc = 0;
+      for (let j = 0; j < 6; j++) acc += (MASS_T6[6 * i + j] ?? 0) * (v[e[t + j] ?? 0] ?? 0);
+      const ni = e[t + i] ?? 0;
+      out[ni] = (out[ni] ?? 0) + s * acc;
+    }
+  }
+  return out;
+}
+
+const dotv = (a: Float64Array, b: Float64Array): number => {
+  let s = 0;
+  for (let i = 0; i < a.length; i++) s += (a[i] ?? 0) * (b[i] ?? 0);
+  return s;
+};
+
+/** Exact ∫X², ∫Y², ∫XY over a straight-sided triangle (corner formulas). */
+function triangleSecondMoments(x: readonly number[], y: readonly number[], area: number): [number, number, number] {
+  const [x1 = 0, x2 = 0, x3 = 0] = x;
+  const [y1 = 0, y2 = 0, y3 = 0] = y;
+  const xx = (area / 6) * (x1 * x1 + x2 * x2 + x3 * x3 + x1 * x2 + x2 * x3 + x3 * x1);
+  const yy = (area / 6) * (y1 * y1 + y2 * y2 + y3 * y3 + y1 * y2 + y2 * y3 + y3 * y1);
+  const xy = (area / 12) * (2 * x1 * y1 + 2 * x2 * y2 + 2 * x3 * y3 + x1 * y2 + x2 * y1 + x1 * y3 + x3 * y1 + x2 * y3 + x3 * y2);
+  return [xx, yy, xy];
+}
+
+export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolution {
+  const n = q.xy.length / 2;
+  const { area, xc, yc } = meshCentroid(q);
+  const X = new Float64Array(n);
+  const Y = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    X[i] = (q.xy[2 * i] ?? 0) - xc;
+    Y[i] = (q.xy[2 * i + 1] ?? 0) - yc;
+  }
+  const K = csrPattern(n, q.elements, 6);
+  const F = new Float64Array(n);
+  const ke = new Float64Array(36);
+  const fe = new Float64Array(6);
+  const ex = new Float64Array(6);
+  const ey = new Float64Array(6);
+  let Iyy = 0;
+  let Ixx = 0;
+  let Ixy = 0;
+  const e = q.elements;
+  for (let t = 0; t < e.length; t += 6) {
+    for (let k = 0; k < 6; k++) {
+      ex[k] = X[e[t + k] ?? 0] ?? 0;
+      ey[k] = Y[e[t + k] ?? 0] ?? 0;
+    }
+    const a = elementStiffnessAndLoad(ex, ey, ke, fe);
+    const [xx, yy, xy] = triangleSecondMoments([ex[0] ?? 0, ex[1] ?? 0, ex[2] ?? 0], [ey[0] ?? 0, ey[1] ?? 0, ey[2] ?? 0], a);
+    Iyy += xx;
+    Ixx += yy;
+    Ixy += xy;
+    for (let i = 0; i < 6; i++) {
+      const ni = e[t + i] ?? 0;
+      F[ni] = (F[ni] ?? 0) + (fe[i] ?? 0);
+      for (let j = 0; j < 6; j++) {
+        const p = csrIndex(K, ni, e[t + j] ?? 0);
+        K.value[p] = (K.value[p] ?? 0) + (ke[6 * i + j] ?? 0);
+      }
+    }
+  }
+  const comps = componentsOf(n, e);
+  const sol = pcgSolve(K, F, s.initial ?? new Float64Array(n), {
+    tolerance: s.tolerance,
+    maxIterations: s.maxIterations,
+    component: comps.of,
+    components: comps.count,
+    onProgress: s.onProgress,
+  });
+  const omega = sol.x;
+  const Kw = new Float64Array(n);
+  csrMultiply(K, omega, Kw);
+  const energy = dotv(omega, Kw);
+  const Ip = Ixx + Iyy;
+  const J = Ip - dotv(F, omega);
+  zeroMeanPerComponent(q, X, Y, omega, comps);
+  const Mw = massTimes(q, X, Y, omega);
+  const IwX = dotv(X, Mw);
+  const IwY = dotv(Y, Mw);
+  const Iww = dotv(omega, Mw);
+  const D = Ixx * Iyy - Ixy * Ixy;
+  const Xs = (Ixy * IwX - Iyy * IwY) / D;
+  const Ys = (Ixx * IwX - Ixy * IwY) / D;
+  const Cw = Iww - Ys * IwX + Xs * IwY;
+  return {
+    J, Cw, xs: xc + Xs, ys: yc + Ys, xc, yc, area, Ix: Ixx, Iy: Iyy, Ixy, Ip,
+    omega, load: F, energy, iterations: sol.iterations, relativeResidual: sol.relativeResidual,
+    components: comps.count, componentOfNode: comps.of,
+  };
+}
+
+/** Shifts ω on each component so that ∫ω dA = 0 there (1ᵀMω per component). */
+function zeroMeanPerComponent(q: QuadraticMesh, X: Float64Array, Y: Float64Array, omega: Float64Array, comps: { count: number; of: Int32Array }): void {
+  const ones = new Float64Array(omega.length).fill(1);
+  const M1 = massTimes(q, X, Y, ones);
+  const Mw = massTimes(q, X, Y, omega);
+  const areaOf = new Float64Array(comps.count);
+  const meanOf = new Float64Array(comps.count);
+  for (let i = 0; i < omega.length; i++) {
+    const c = comps.of[i] ?? 0;
+    areaOf[c] = (areaOf[c] ?? 0) + (M1[i] ?? 0);
+    meanOf[c] = (meanOf[c] ?? 0) + (Mw[i] ?? 0);
+  }
+  for (let i = 0; i < omega.length; i++) {
+    const c = comps.of[i] ?? 0;
+    omega[i] = (omega[i] ?? 0) - (meanOf[c] ?? 0) / (areaOf[c] ?? 1);
+  }
+}
+
+/** Nodal gradient of a T6 field, area-weighted average of the element values at each node. */
+export function nodalGradient(q: QuadraticMesh, values: Float64Array): { gx: Float64Array; gy: Float64Array } {
+  const n = q.xy.length / 2;
+  const gx = new Float64Array(n);
+  const gy = new Float64Array(n);
+  const wsum = new Float64Array(n);
+  const dx = new Float64Array(6);
+  const dy = new Float64Array(6);
+  const at: readonly (readonly [number, number, number])[] = [[1, 0, 0], [0, 1, 0], [0, 0, 1], [0.5, 0.5, 0], [0, 0.5, 0.5], [0.5, 0, 0.5]];
+  const e = q.elements;
+  for (let t = 0; t < e.length; t += 6) {
+    const xs = [0, 1, 2].map((k) => q.xy[2 * (e[t + k] ?? 0)] ?? 0);
+    const ys = [0, 1, 2].map((k) => q.xy[2 * (e[t + k] ?? 0) + 1] ?? 0);
+    const g = elementGeometry(xs, ys);
+    const w = g.twiceArea / 2;
+    at.forEach(([l1, l2, l3], k) => {
+      shapeDerivatives(l1, l2, l3, g.b, dx);
+      shapeDerivatives(l1, l2, l3, g.c, dy);
+      let sx = 0;
+      let sy = 0;
+      for (let j = 0; j < 6; j++) {
+        const v = values[e[t + j] ?? 0] ?? 0;
+        sx += (dx[j] ?? 0) * v;
+        sy += (dy[j] ?? 0) * v;
+      }
+      const node = e[t + k] ?? 0;
+      gx[node] = (gx[node] ?? 0) + w * sx;
+      gy[node] = (gy[node] ?? 0) + w * sy;
+      wsum[node] = (wsum[node] ?? 0) + w;
+    });
+  }
+  for (let i = 0; i < n; i++) {
+    gx[i] = (gx[i] ?? 0) / (wsum[i] || 1);
+    gy[i] = (gy[i] ?? 0) / (wsum[i] || 1);
+  }
+  return { gx, gy };
+}
