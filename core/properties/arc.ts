@@ -23,6 +23,15 @@ export interface ArcGeometry {
 
 const TWO_PI = 2 * Math.PI;
 
+/**
+ * Bulges smaller than this are straight edges: the sagitta c·|b|/2 is then below half an ulp of
+ * the chord, i.e. below the precision of the input itself, and the radius c(1 + b²)/(4|b|) would
+ * overflow for denormal bulges.
+ */
+export const STRAIGHT_BULGE = 1e-16;
+
+export const isStraight = (b: number): boolean => Math.abs(b) < STRAIGHT_BULGE;
+
 /** Centre, radius and angles of the arc from (xs, ys) to (xe, ye) with bulge b ≠ 0 (METHODS §2.4). */
 export function arcFromBulge(xs: number, ys: number, xe: number, ye: number, b: number): ArcGeometry {
   const dx = xe - xs;
@@ -78,7 +87,7 @@ export function ringProjectionRange(
     if (s < out[0]) out[0] = s;
     if (s > out[1]) out[1] = s;
     const b = bulge === undefined ? 0 : bulge[i]!;
-    if (b === 0) continue;
+    if (isStraight(b)) continue;
     const j = (i + 1) % n;
     const arc = arcFromBulge(xs, ys, xy[2 * j]! - ox, xy[2 * j + 1]! - oy, b);
     // Projection of the centre plus ±r for ordinary arcs; half-angle form for nearly straight ones.

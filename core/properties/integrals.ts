@@ -26,7 +26,7 @@
 import { invariant } from '../invariant.ts';
 import type { Region, Ring } from '../geometry/types.ts';
 import type { RawIntegrals } from './types.ts';
-import { arcFromBulge } from './arc.ts';
+import { arcFromBulge, isStraight } from './arc.ts';
 
 /**
  * Below this |sweep| the arc is integrated by 8-point Gauss–Legendre instead of the closed form.
@@ -161,7 +161,7 @@ function mixedRingSums(xy: Float64Array, bulge: Float64Array, ox: number, oy: nu
     const x1 = xy[2 * j]! - ox;
     const y1 = xy[2 * j + 1]! - oy;
     const b = bulge[i]!;
-    if (b === 0) addEdge(x0, y0, x1, y1, acc);
+    if (isStraight(b)) addEdge(x0, y0, x1, y1, acc);
     else if (Math.abs(4 * Math.atan(b)) < SMALL_SWEEP) addArcQuadrature(x0, y0, x1, y1, b, acc);
     else addArcClosedForm(x0, y0, x1, y1, b, acc);
   }

@@ -26,7 +26,7 @@
  * Sums are taken about one local origin for all pieces (bounding-box centre, §1.3).
  */
 import type { Degrees, Region, Ring } from '../geometry/types.ts';
-import { arcFromBulge, arcPointOffset, sweepOffsetOfAngle, type ArcGeometry } from './arc.ts';
+import { arcFromBulge, arcPointOffset, isStraight, sweepOffsetOfAngle, type ArcGeometry } from './arc.ts';
 import { ringIntegrals, vertexBoxCentre } from './integrals.ts';
 
 export interface WeightedRegion {
@@ -155,7 +155,7 @@ function breakpoints(rings: readonly LocalRing[], f: Frame): number[] {
       const y = ring.xy[2 * i + 1]!;
       s.push(f.nx * x + f.ny * y);
       const b = ring.bulge?.[i] ?? 0;
-      if (b === 0) continue;
+      if (isStraight(b)) continue;
       const j = (i + 1) % n;
       const arc = arcFromBulge(x, y, ring.xy[2 * j]!, ring.xy[2 * j + 1]!, b);
       for (const phi of [phiUp, phiUp + Math.PI]) {
@@ -193,18 +193,38 @@ function pushStraight(out: PieceList, x0: number, y0: number, x1: number, y1: nu
   }
 }
 
-/** Offsets τ (in sweep order) where the arc crosses the line s = d (METHODS §2.5). */
+/**
+ * Offsets τ (in sweep order) where the arc crosses the line s = d (METHODS §2.5). The closed form
+ * t = ψ ± acos(·) locates a crossing only to ~ε·r along the arc, which is useless for nearly
+ * straight arcs (r ≫ chord); instead the sweep is split where the arc runs parallel to the line
+ * (t = ψ, ψ + π: s(τ) is monotone between), and each sign change is solved in τ with Brent's
+ * method on s(τ) evaluated from the start point in half-angle form (well conditioned for any r).
+ */
 function arcCrossings(arc: ArcGeometry, s0: number, f: Frame): number[] {
-  // r cos(t − ψ) = d − n·Pc, written relative to the start point: k = cos(t0 − ψ) − s0/r.
   const psi = Math.atan2(f.ny, f.nx);
-  const k = Math.cos(arc.t0 - psi) - s0 / arc.radius;
-  if (!(Math.abs(k) < 1)) return [];
-  const a = Math.acos(k);
-  const limit = Math.abs(arc.sweep);
-  const taus = [psi + a, psi - a]
-    .map((phi) => sweepOffsetOfAngle(arc, phi))
-    .filter((tau) => !Number.isNaN(tau) && Math.abs(tau) > 1e-15 * limit && Math.abs(tau) < limit * (1 - 1e-15));
-  return taus.sort((p, q) => Math.abs(p) - Math.abs(q));
+  const sAt = (tau: number): number => {
+    const [px, py] = arcPointOffset(arc, tau);
+    return s0 + f.nx * px + f.ny * py;
+  };
+  const bounds = [0, arc.sweep];
+  for (const phi of [psi, psi + Math.PI]) {
+    const tau = sweepOffsetOfAngle(arc, phi);
+    if (!Number.isNaN(tau) && tau !== 0 && tau !== arc.sweep) bounds.push(tau);
+  }
+  bounds.sort((p, q) => Math.abs(p) - Math.abs(q));
+  const roots: number[] = [];
+  const tol = 1e-15 * Math.abs(arc.sweep);
+  for (let k = 0; k + 1 < bounds.length; k++) {
+    const a = bounds[k]!;
+    const b = bounds[k + 1]!;
+    const sa = k === 0 ? s0 : sAt(a);
+    const sb = sAt(b);
+    if (!((sa < 0 && sb > 0) || (sa > 0 && sb < 0))) continue;
+    const r = brentRoot(sAt, a, b, sa, sb, tol);
+    // A crossing that is not found to tolerance is still bracketed in [a, b]; r.d lies inside it.
+    roots.push(r.d);
+  }
+  return roots;
 }
 
 function pushArc(out: PieceList, x0: number, y0: number, x1: number, y1: number, b: number, s0: number, f: Frame): void {
@@ -232,7 +252,7 @@ function clipRing(ring: LocalRing, f: Frame, d: number): Ring | null {
     const x0 = xy[2 * i]!, y0 = xy[2 * i + 1]!, x1 = xy[2 * j]!, y1 = xy[2 * j + 1]!;
     const s0 = f.nx * x0 + f.ny * y0 - d;
     const b = bulge === undefined ? 0 : bulge[i]!;
-    if (b === 0) pushStraight(pieces, x0, y0, x1, y1, s0, f.nx * x1 + f.ny * y1 - d);
+    if (isStraight(b)) pushStraight(pieces, x0, y0, x1, y1, s0, f.nx * x1 + f.ny * y1 - d);
     else pushArc(pieces, x0, y0, x1, y1, b, s0, f);
   }
   const m = pieces.inside.length;
@@ -382,7 +402,7 @@ function plasticAxisCore(pieces: readonly WeightedRegion[], angleDeg: Degrees, a
   }
   const s = breakpoints(rings, f);
   const g = (d: number): number => 2 * upperSide(rings, f, d).A - W - axialForce;
-  const polygonsOnly = rings.every((r) => r.bulge === undefined || r.bulge.every((b) => b === 0));
+  const polygonsOnly = rings.every((r) => r.bulge === undefined || r.bulge.every(isStraight));
   const root = solveBalance(g, s, [W - axialForce, -W - axialForce], polygonsOnly, 1e-12 * W);
   const up = upperSide(rings, f, root.d);
   const lowA = W - up.A;
