@@ -62,6 +62,7 @@ interface CleanRing {
   readonly place: Place;
   readonly ring: Ring;
   readonly original: Uint32Array;
+  readonly bounds: Bounds;
   /** Zero area: kept for the contact sweep, left out of containment tests. */
   readonly degenerate?: boolean;
 }
@@ -92,25 +93,37 @@ function vertexAt(ring: Ring, i: number): Point {
 
 /** Number problems (non-finite, bulge, too large); returns the first one found, or null. */
 function numericProblem(ring: Ring, ctx: ValidationContext, place: Place): Diagnostic | null {
-  const n = ring.xy.length >> 1;
-  for (let i = 0; i < n; i++) {
-    const [x, y] = vertexAt(ring, i);
-    if (!Number.isFinite(x) || !Number.isFinite(y)) return makeDiagnostic('non-finite', `vertex ${i} has a coordinate that is not a finite number (${x}, ${y})`, ctx, place, i);
-  }
-  const { bulge } = ring;
-  if (bulge !== undefined && bulge.length !== n) return makeDiagnostic('bad-bulge', `the ring has ${n} vertices but ${bulge.length} bulges`, ctx, place);
-  for (let i = 0; bulge !== undefined && i < n; i++) {
-    const b = bulge[i] ?? 0;
-    if (!Number.isFinite(b)) return makeDiagnostic('bad-bulge', `the bulge of the segment from vertex ${i} is not a finite number (${b})`, ctx, place, i, vertexAt(ring, i));
-    const j = (i + 1) % n;
-    const [x0, y0] = vertexAt(ring, i), [x1, y1] = vertexAt(ring, j);
-    if (b !== 0 && x0 === x1 && y0 === y1) return makeDiagnostic('bad-bulge', `the segment from vertex ${i} has zero length but a bulge of ${b}`, ctx, place, i, [x0, y0]);
-  }
-  for (let i = 0; i < n; i++) {
-    const [x, y] = vertexAt(ring, i);
-    if (Math.abs(x) > MAX_COORDINATE || Math.abs(y) > MAX_COORDINATE) {
-      return makeDiagnostic('too-large', `vertex ${i} lies beyond ±${MAX_COORDINATE} from the origin, too far for reliable section properties`, ctx, place, i, [x, y]);
+  const { xy, bulge } = ring;
+  const n = xy.length >> 1;
+  let firstLarge = -1;
+  for (let i = 0; i < 2 * n; i++) {
+    const v = xy[i] ?? NaN;
+    if (!Number.isFinite(v)) {
+      const k = i >> 1;
+      const [x, y] = vertexAt(ring, k);
+      return makeDiagnostic('non-finite', `vertex ${k} has a coordinate that is not a finite number (${x}, ${y})`, ctx, place, k);
     }
+    if (firstLarge < 0 && Math.abs(v) > MAX_COORDINATE) firstLarge = i >> 1;
+  }
+  if (bulge !== undefined) {
+    const problem = bulgeProblem(ring, bulge, ctx, place);
+    if (problem !== null) return problem;
+  }
+  if (firstLarge >= 0) {
+    return makeDiagnostic('too-large', `vertex ${firstLarge} lies beyond ±${MAX_COORDINATE} from the origin, too far for reliable section properties`, ctx, place, firstLarge, vertexAt(ring, firstLarge));
+  }
+  return null;
+}
+
+function bulgeProblem(ring: Ring, bulge: Float64Array, ctx: ValidationContext, place: Place): Diagnostic | null {
+  const n = ring.xy.length >> 1;
+  if (bulge.length !== n) return makeDiagnostic('bad-bulge', `the ring has ${n} vertices but ${bulge.length} bulges`, ctx, place);
+  for (let i = 0; i < n; i++) {
+    const b = bulge[i] ?? 0;
+    if (b === 0) continue;
+    if (!Number.isFinite(b)) return makeDiagnostic('bad-bulge', `the bulge of the segment from vertex ${i} is not a finite number (${b})`, ctx, place, i, vertexAt(ring, i));
+    const [x0, y0] = vertexAt(ring, i), [x1, y1] = vertexAt(ring, (i + 1) % n);
+    if (x0 === x1 && y0 === y1) return makeDiagnostic('bad-bulge', `the segment from vertex ${i} has zero length but a bulge of ${b}`, ctx, place, i, [x0, y0]);
   }
   return null;
 }
@@ -146,10 +159,13 @@ function cleanRing(ring: Ring, place: Place): CleanRing {
     xy[2 * k + 1] = src[2 * v + 1] ?? 0;
   }
   const original = keep.slice(0, m);
-  if (ring.bulge === undefined) return { place, ring: { xy }, original };
-  const bulge = new Float64Array(m);
-  for (let k = 0; k < m; k++) bulge[k] = ring.bulge[groupEnd[k] ?? 0] ?? 0;
-  return { place, ring: bulge.some((b) => b !== 0) ? { xy, bulge } : { xy }, original };
+  let clean: Ring = { xy };
+  if (ring.bulge !== undefined) {
+    const bulge = new Float64Array(m);
+    for (let k = 0; k < m; k++) bulge[k] = ring.bulge[groupEnd[k] ?? 0] ?? 0;
+    if (bulge.some((b) => b !== 0)) clean = { xy, bulge };
+  }
+  return { place, ring: clean, original, bounds: ringBounds(clean) };
 }
 
 function shapeProblem(c: CleanRing, ctx: ValidationContext): Diagnostic | null {
@@ -158,7 +174,7 @@ function shapeProblem(c: CleanRing, ctx: ValidationContext): Diagnostic | null {
   if (n < 2 || (n === 2 && !hasArcs)) {
     return makeDiagnostic('too-few-points', `it has ${n} distinct point${n === 1 ? '' : 's'}; a ring needs at least 3 (or 2 joined by an arc)`, ctx, c.place, 0, n > 0 ? vertexAt(c.ring, 0) : undefined);
   }
-  const b = ringBounds(c.ring);
+  const b = c.bounds;
   const size = Math.max(b.maxX - b.minX, b.maxY - b.minY);
   if (Math.abs(ringSignedArea(c.ring)) <= ZERO_AREA_RATIO * size * size) {
     return makeDiagnostic('zero-area', 'it encloses no area (all its points lie on one line or it folds back on itself)', ctx, c.place, 0, vertexAt(c.ring, 0));
@@ -208,7 +224,7 @@ interface Segments {
 
 function regionSize(rings: readonly CleanRing[]): number {
   let size = 0;
-  const all = rings.map((r) => ringBounds(r.ring));
+  const all = rings.map((r) => r.bounds);
   const minX = Math.min(...all.map((b: Bounds) => b.minX)), maxX = Math.max(...all.map((b) => b.maxX));
   const minY = Math.min(...all.map((b) => b.minY)), maxY = Math.max(...all.map((b) => b.maxY));
   size = Math.max(maxX - minX, maxY - minY);
@@ -341,7 +357,7 @@ function boxesOverlap(a: Bounds, b: Bounds): boolean {
 
 function containmentDiagnostics(rings: readonly CleanRing[], crossed: Set<string>, ctx: ValidationContext): Diagnostic[] {
   const out: Diagnostic[] = [];
-  const boxes = rings.map((r) => ringBounds(r.ring));
+  const boxes = rings.map((r) => r.bounds);
   const index = new Map(rings.map((r, i) => [`${r.place.polygon},${r.place.ring}`, i]));
   const uncrossed = (i: number, j: number): boolean => !crossed.has(i < j ? `${i},${j}` : `${j},${i}`);
   rings.forEach((r, i) => {

@@ -143,7 +143,7 @@ describe('validateRegion: each diagnostic names the part, polygon, ring and vert
 });
 
 describe('validateRegion: cost on a large ring', () => {
-  it('validates a 1,000,000-vertex circle-like ring with no diagnostics in well under a second', () => {
+  it('validates a 1,000,000-vertex circle-like ring with no diagnostics in near-linear time, and finds a vertex moved onto a far segment', () => {
     const n = 1_000_000;
     const xy = new Float64Array(2 * n);
     for (let i = 0; i < n; i++) {
@@ -153,15 +153,15 @@ describe('validateRegion: cost on a large ring', () => {
       xy[2 * i + 1] = r * Math.sin(t) - 3000;
     }
     const region: Region = [piece({ xy })];
-    validateRegion(region); // warm-up (JIT)
     const start = performance.now();
     const d = validateRegion(region);
     const ms = performance.now() - start;
-    console.log(`validateRegion, 1,000,000-vertex ring: ${ms.toFixed(0)} ms`);
+    console.log(`validateRegion, 1,000,000-vertex ring: ${ms.toFixed(0)} ms (cold; npm run bench -- geometry measures it warm)`);
     expect(d).toEqual([]);
-    // Target: well under a second (about 0.4–0.6 s measured on one idle core). The assertion leaves
-    // room for a shared, loaded test machine; a quadratic sweep would take minutes and fail it.
-    expect(ms).toBeLessThan(2000);
+    // Target: well under a second (measured 0.4–0.6 s warm on a shared 2-core machine, see the bench).
+    // The assertion leaves room for a loaded test machine running files in parallel; a quadratic
+    // sweep (about 10¹² pair tests) would take hours and fail it.
+    expect(ms).toBeLessThan(8000);
     // One vertex moved onto a far segment: found, and named.
     xy[2 * 500_000] = xy[20] ?? 0;
     xy[2 * 500_000 + 1] = xy[21] ?? 0;
