@@ -297,3 +297,79 @@ export const memberCommand: Command = {
   flags: MEMBER_FLAGS,
   run: runMember,
 };
+
+// ---------------------------------------------------------------------------------------------
+// Material results for `sectionsmith props` (EA, EI, weight per length, --eref).
+
+export interface MaterialPropsResults {
+  readonly json: Record<string, unknown>;
+  readonly rows: readonly (readonly [string, string, string, string])[];
+  readonly errors: readonly string[];
+}
+
+/**
+ * E-weighted results of a document with materials, in the report's length unit and the force
+ * system of that unit (N or lbf): EA (force), EIx, EIy, EIxy, EI1, EI2 (force·unit²), the
+ * E-weighted centroid, transformed area and second moments (to E_ref), mass (kg/m) and weight
+ * per length (lb/ft for in/ft, N/m otherwise), and each part's modular ratio. `--eref VALUE`
+ * (stress with unit suffix) overrides the reference modulus. Nothing is added for a shape
+ * without materials; --eref then is an error.
+ */
+export function materialPropsResults(file: string, section: LoadedSection, flags: FlagValues, io: CliIo, reportUnit: LengthUnit): MaterialPropsResults {
+  const none: MaterialPropsResults = { json: {}, rows: [], errors: [] };
+  const erefText = stringFlag(flags, 'eref');
+  const units = outputUnits(reportUnit);
+  const noMaterials = (why: string): MaterialPropsResults => (erefText === undefined ? none : { json: {}, rows: [], errors: [`${file}: --eref: ${why}`] });
+  if (section.kind !== 'document') return noMaterials('GeoJSON has no materials');
+  const json = parseJson(io.readFile(file));
+  const parsed = json.ok ? documentFromJson(json.value) : null;
+  if (parsed === null || !parsed.ok) return none;
+  const doc = parsed.document;
+  if (doc.parts.every((p) => p.material === null) && doc.defaultMaterial === null) return noMaterials('the document has no materials assigned');
+  const found = materialPiecesFromDocument(doc);
+  const problems = [...found.issues, ...found.diagnostics.map((d) => d.message)];
+  if (problems.length > 0) return { json: {}, rows: [], errors: problems.map((p) => `${file}: ${p}`) };
+  let eRef: number | undefined;
+  try {
+    if (erefText !== undefined) {
+      const q = parseQuantity(erefText, STRESS_UNITS, units.stress, '--eref');
+      eRef = stressToPascals(q.value, q.unit);
+      if (!(eRef > 0)) return { json: {}, rows: [], errors: [`--eref: the reference modulus must be positive, got ${erefText}`] };
+    }
+  } catch (err) {
+    if (err instanceof QuantityError) return { json: {}, rows: [], errors: [err.message] };
+    throw err;
+  }
+  const c = compositeProperties(found.pieces, section.unit, eRef);
+  const k = converters(units);
+  const L = (v: number, p = 1): number => convertLength(v, section.unit, reportUnit, p);
+  const weight = imperial(reportUnit) ? c.weightPerLengthLbPerFt : c.weightPerLength;
+  const weightUnit = imperial(reportUnit) ? 'lbf/ft' : 'N/m';
+  const f = units.force, u = reportUnit;
+  const values = {
+    EA: k.force(c.EA), EIx: k.EI(c.EIx), EIy: k.EI(c.EIy), EIxy: k.EI(c.EIxy), EI1: k.EI(c.EI1), EI2: k.EI(c.EI2), thetaEIDeg: c.thetaDeg,
+    cxE: L(c.cx), cyE: L(c.cy), eRef: pascalsTo(c.eRef, units.stress),
+    transformedArea: L(c.transformedArea, 2), transformedIx: L(c.transformedIx, 4), transformedIy: L(c.transformedIy, 4),
+    massPerLength: c.massPerLength, weightPerLength: weight,
+  };
+  const g = (v: number): string => formatSig(v, 6, { grouping: ',' });
+  const rows: (readonly [string, string, string, string])[] = [
+    ['EA', g(values.EA), f, 'axial stiffness Σ E_i A_i'],
+    ['EIx', g(values.EIx), `${f}·${u}²`, 'bending stiffness about the E-weighted centroid, x'],
+    ['EIy', g(values.EIy), `${f}·${u}²`, 'bending stiffness, y'],
+    ['EIxy', g(values.EIxy), `${f}·${u}²`, 'E-weighted product (+∫E·XY dA)'],
+    ['EI1', g(values.EI1), `${f}·${u}²`, 'major principal bending stiffness'],
+    ['EI2', g(values.EI2), `${f}·${u}²`, 'minor principal bending stiffness'],
+    ['thetaEIDeg', g(values.thetaEIDeg), 'deg', 'angle of the EI1 axis, CCW from +x'],
+    ['cxE', g(values.cxE), u, 'E-weighted centroid x'], ['cyE', g(values.cyE), u, 'E-weighted centroid y'],
+    ['eRef', g(values.eRef), units.stress, `reference modulus (${c.eRefFrom === 'given' ? '--eref' : 'first part'})`],
+    ['transformedArea', g(values.transformedArea), `${u}²`, 'transformed area EA / E_ref'],
+    ['transformedIx', g(values.transformedIx), `${u}⁴`, 'transformed Ix = EIx / E_ref'],
+    ['transformedIy', g(values.transformedIy), `${u}⁴`, 'transformed Iy = EIy / E_ref'],
+    ['massPerLength', g(values.massPerLength), 'kg/m', 'mass per length Σ ρ_i A_i'],
+    ['weightPerLength', g(values.weightPerLength), weightUnit, 'weight per length'],
+  ];
+  const materials = c.pieces.map((p, i) => ({ part: p.label, material: found.pieces[i]!.material.name, n: p.n }));
+  for (const m of materials) rows.push([`n ${m.part}`, g(m.n), '', `modular ratio E_i / E_ref (${m.material})`]);
+  return { json: { ...values, materialUnits: { EA: f, EI: `${f}·${u}²`, eRef: units.stress, massPerLength: 'kg/m', weightPerLength: weightUnit }, materials }, rows, errors: [] };
+}

@@ -12,10 +12,12 @@ import type { SectionProperties } from '../../core/properties/types.ts';
 import { convertLength, defaultDisplaySet, formatSig, isLengthUnit, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
 import { loadSection, type LoadedSection } from '../load.ts';
+import { materialPropsResults } from './member.ts';
 
 export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'json', type: 'boolean', description: 'print one JSON object (keys below) instead of the table' },
   { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m: for GeoJSON the unit of its coordinates (required); for a document the unit to report in (default: its own)' },
+  { name: 'eref', type: 'string', value: 'VALUE', description: 'documents with materials: reference modulus for the transformed section, e.g. 200GPa or 29000ksi (default: the first part\'s E)' },
 ];
 
 /** The length dimension of every property (null: a pure number or an angle). */
@@ -63,11 +65,13 @@ export function propertiesInUnit(p: SectionProperties, from: LengthUnit, to: Len
 interface ExtraResults {
   readonly json: Record<string, unknown>;
   readonly rows: readonly (readonly [string, string, string, string])[];
+  /** Bad input found while computing them (exit code 2). */
+  readonly errors: readonly string[];
 }
 
-/** Results of optional flags (none yet), as JSON keys and table rows [symbol, value, unit, what]. */
-function extraResults(_section: LoadedSection, _flags: FlagValues): ExtraResults {
-  return { json: {}, rows: [] };
+/** Results beyond the geometry, as JSON keys and table rows [symbol, value, unit, what]: the E-weighted values of a document with materials. */
+function extraResults(file: string, section: LoadedSection, flags: FlagValues, io: CliIo, unit: LengthUnit): ExtraResults {
+  return materialPropsResults(file, section, flags, io, unit);
 }
 
 function describeInput(s: LoadedSection): string {
@@ -136,7 +140,11 @@ function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo):
   }
   const section = loaded.section;
   const unit = unitFlag ?? section.unit;
-  const extra = extraResults(section, flags);
+  const extra = extraResults(file, section, flags, io, unit);
+  if (extra.errors.length > 0) {
+    io.err(`${extra.errors.join('\n')}\n`);
+    return EXIT_BAD_INPUT;
+  }
   io.out(flags.json === true ? json(file, section, unit, extra) : table(file, section, unit, extra));
   return EXIT_OK;
 }
@@ -144,7 +152,7 @@ function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo):
 export const propsCommand: Command = {
   name: 'props',
   summary: 'section properties of a Sectionsmith document or a GeoJSON area',
-  usage: 'props FILE [--json] [--unit U]',
+  usage: 'props FILE [--json] [--unit U] [--eref VALUE]',
   description: [
     'FILE is a Sectionsmith document (.json, "format": "sectionsmith-section") or a GeoJSON',
     'Polygon, MultiPolygon, Feature or FeatureCollection (RFC 7946) whose coordinates are lengths',
@@ -160,6 +168,12 @@ export const propsCommand: Command = {
     'rx, ry, r1, r2, xMin, xMax, yMin, yMax, SxTop, SxBottom, SyLeft, SyRight, S1Plus, S1Minus,',
     'S2Plus, S2Minus, Zx, Zy, Z1, Z2, pnaY, pnaX, shapeFactorX, shapeFactorY (documents add',
     '"parts" and "hiddenParts").',
+    '',
+    'A document whose parts have materials adds the E-weighted (transformed) section: EA (N, or',
+    'lbf for in/ft), EIx, EIy, EIxy, EI1, EI2 (force·unit²), thetaEIDeg, cxE, cyE, eRef (MPa or psi),',
+    'transformedArea, transformedIx, transformedIy, massPerLength (kg/m), weightPerLength (N/m, or',
+    'lbf/ft for in/ft), materialUnits and per-part modular ratios "materials". --eref VALUE sets the',
+    'reference modulus (unit suffix Pa, kPa, MPa, GPa, psi or ksi; default MPa or psi).',
     '',
     'Bad input (unreadable file, JSON syntax, schema, geometry) exits with code 2 and names the',
     'file and the place: line and column, JSON path, or part, ring and vertex.',
