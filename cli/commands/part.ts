@@ -1,0 +1,166 @@
+/**
+ * `sectionsmith part TYPE key=value … [--json] [--unit U]` and
+ * `sectionsmith part --designation NAME [--json] [--unit U]`: the section properties of one
+ * standard part. All numbers come from core (core/parts, core/catalogue, core/properties); this
+ * file parses arguments, converts units for output (core/units) and lays out text.
+ *
+ * Units: TYPE dimensions are read in --unit (default in) and the results are reported in it;
+ * lumber's b and d are nominal inch sizes whatever the unit. A designation's dimensions are the
+ * catalogue's (inches); --unit only changes the reporting unit.
+ * The JSON keys of the properties are those of `props` (propertiesInUnit, PROPERTY_QUANTITY).
+ * The readable table is a small formatter of its own: props' table is private to its file.
+ */
+import { partFromDesignation, type CatalogueEntry } from '../../core/catalogue/index.ts';
+import { validateRegion } from '../../core/geometry/index.ts';
+import { getPartType, partTypes, shapeRegion } from '../../core/parts/index.ts';
+import { sectionProperties } from '../../core/properties/index.ts';
+import type { SectionProperties } from '../../core/properties/types.ts';
+import { convertLength, defaultDisplaySet, formatSig, isLengthUnit, QUANTITY_POWER, toDisplay, type LengthUnit } from '../../core/units/index.ts';
+import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
+import { PROPERTY_QUANTITY, propertiesInUnit } from './props.ts';
+
+export const PART_FLAGS: readonly FlagSpec[] = [
+  { name: 'designation', type: 'string', value: 'NAME', description: 'a catalogue designation (AISC v15.0 shape such as W14X90, or lumber such as 2x10) instead of TYPE' },
+  { name: 'json', type: 'boolean', description: 'print one JSON object (the keys of props) instead of the table' },
+  { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m of the dimensions and the results (default in)' },
+];
+
+/** A decimal ("0.75"), a fraction ("3/4") or a mixed number ("1-1/2"); NaN otherwise. */
+export function parseDimension(text: string): number {
+  const mixed = /^(\d+)-(\d+)\/(\d+)$/.exec(text);
+  if (mixed !== null) return Number(mixed[1]) + Number(mixed[2]) / Number(mixed[3]);
+  const fraction = /^(\d+)\/(\d+)$/.exec(text);
+  if (fraction !== null) return Number(fraction[1]) / Number(fraction[2]);
+  return /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(text) ? Number(text) : Number.NaN;
+}
+
+interface Request {
+  readonly shape: string;
+  readonly params: Readonly<Record<string, number>>;
+  /** Unit of the params (lumber nominal sizes aside). */
+  readonly unit: LengthUnit;
+  readonly entry?: CatalogueEntry;
+}
+
+type Parsed = { ok: true; request: Request } | { ok: false; message: string };
+
+function parseTypeRequest(positionals: readonly string[], unit: LengthUnit): Parsed {
+  const [shape, ...pairs] = positionals;
+  if (shape === undefined) return { ok: false, message: `expected a part TYPE (${partTypes().map((t) => t.id).join(', ')}) or --designation NAME` };
+  const type = getPartType(shape);
+  if (type === undefined) return { ok: false, message: `no part type "${shape}"; types: ${partTypes().map((t) => t.id).join(', ')}` };
+  const params: Record<string, number> = {};
+  for (const pair of pairs) {
+    const m = /^([A-Za-z][A-Za-z0-9]*)=(.+)$/.exec(pair);
+    if (m === null) return { ok: false, message: `"${pair}" is not key=value (e.g. d=14 or t=3/4)` };
+    const value = parseDimension(m[2]!);
+    if (!Number.isFinite(value)) return { ok: false, message: `${m[1]}=${m[2]}: not a number (write 0.75, 3/4 or 1-1/2)` };
+    if (m[1]! in params) return { ok: false, message: `${m[1]} is given twice` };
+    params[m[1]!] = value;
+  }
+  return { ok: true, request: { shape, params, unit } };
+}
+
+function parseRequest(positionals: readonly string[], flags: FlagValues, unit: LengthUnit): Parsed {
+  const designation = flags.designation;
+  if (typeof designation !== 'string') return parseTypeRequest(positionals, unit);
+  if (positionals.length > 0) return { ok: false, message: `--designation takes no TYPE or key=value arguments (got ${positionals.join(' ')})` };
+  const found = partFromDesignation(designation);
+  if (!found.ok) return { ok: false, message: found.message };
+  return { ok: true, request: { shape: found.shape, params: found.params, unit: 'in', entry: found.entry } };
+}
+
+function describe(request: Request): string {
+  const dims = Object.entries(request.params).map(([k, v]) => `${k}=${Number(v.toPrecision(6))}`).join(' ');
+  const head = request.entry === undefined ? request.shape : `${request.entry.designation} (${request.entry.source}) as ${request.shape}`;
+  return `${head}: ${dims} [${request.unit}${request.shape === 'lumber' ? '; lumber b, d nominal inches' : ''}]`;
+}
+
+function table(request: Request, p: SectionProperties, unit: LengthUnit): string {
+  const display = defaultDisplaySet(unit);
+  const rows = (Object.keys(PROPERTY_QUANTITY) as (keyof SectionProperties)[]).map((key): [string, string, string] => {
+    const value = p[key];
+    const q = PROPERTY_QUANTITY[key];
+    if (typeof value === 'boolean') return [key, value ? 'yes' : 'no', ''];
+    if (q === null) return [key, formatSig(value, 6), key === 'thetaDeg' ? 'deg' : ''];
+    const shown = toDisplay(convertLength(value, request.unit, unit, QUANTITY_POWER[q]), unit, display[q]);
+    return [key, formatSig(shown, 6, { grouping: ',' }), display[q].label];
+  });
+  const w0 = Math.max(...rows.map((r) => r[0].length));
+  const w1 = Math.max(...rows.map((r) => r[1].length));
+  const notes = request.entry?.modelling.map((m) => `  modelling: ${m}`) ?? [];
+  return [
+    describe(request),
+    'Signs: Ixy = +∫XY dA about the centroid; angles counter-clockwise from +x; coordinates about the part\'s local origin.',
+    ...notes,
+    '',
+    ...rows.map(([k, v, u]) => `  ${k.padEnd(w0)}  ${v.padStart(w1)}  ${u}`),
+    '',
+    `CAUTION: ${CAUTION}`,
+    '',
+  ].join('\n');
+}
+
+function json(request: Request, p: SectionProperties, unit: LengthUnit): string {
+  const body = {
+    input: 'part',
+    part: request.shape,
+    ...(request.entry === undefined ? {} : { designation: request.entry.designation, source: request.entry.source, modelling: request.entry.modelling }),
+    params: request.params,
+    paramsUnit: request.unit,
+    unit,
+    caution: CAUTION,
+    convention: 'Ixy = +∫XY dA about the centroid; angles in degrees counter-clockwise from +x; lengths in "unit", areas unit², moduli unit³, second moments unit⁴',
+    ...propertiesInUnit(p, request.unit, unit),
+  };
+  return `${JSON.stringify(body, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;
+}
+
+function runPart(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
+  const fail = (message: string): number => {
+    io.err(`sectionsmith part: ${message}\nusage: sectionsmith ${partCommand.usage}\n`);
+    return EXIT_BAD_INPUT;
+  };
+  const unitFlag = flags.unit;
+  if (unitFlag !== undefined && !isLengthUnit(unitFlag)) return fail(`--unit: expected in, ft, mm, cm or m, got ${JSON.stringify(unitFlag)}`);
+  const unit: LengthUnit = unitFlag ?? 'in';
+  const parsed = parseRequest(positionals, flags, unit);
+  if (!parsed.ok) return fail(parsed.message);
+  const request = parsed.request;
+  const built = shapeRegion(request.shape, request.params, request.unit);
+  const problems = built.diagnostics.length > 0 ? built.diagnostics : validateRegion(built.region);
+  if (problems.length > 0) return fail(problems.map((d) => d.message).join('\n'));
+  const properties = sectionProperties(built.region);
+  io.out(flags.json === true ? json(request, properties, unit) : table(request, properties, unit));
+  return EXIT_OK;
+}
+
+function typeLines(): string[] {
+  return partTypes().map((t) => `  ${t.id.padEnd(13)} ${t.params.map((p) => `${p.key}${p.optional === true ? '?' : ''}`).join(' ')}  (origin: ${t.origin ?? 'see core/parts'})`);
+}
+
+export const partCommand: Command = {
+  name: 'part',
+  summary: 'section properties of one standard part, by dimensions or by catalogue designation',
+  usage: 'part TYPE key=value … [--json] [--unit U]  |  part --designation NAME [--json] [--unit U]',
+  description: [
+    'TYPE is a part type and each key=value one of its dimensions by trade symbol; values may be',
+    'decimals or fractions (t=3/4, d=1-1/2). Optional dimensions are marked "?" (rect-tube r',
+    'defaults to 2t; root and toe radii to 0; slope is rise over run, 2:12 = 0.1667):',
+    ...typeLines(),
+    '',
+    'With --designation NAME the dimensions come from the catalogue (AISC Shapes Database v15.0',
+    'published dimensions, or NDS dressed lumber such as 2x10) and the modelling conventions used',
+    'are printed (e.g. root fillet r = kdes − tf). Properties are always computed from the exact',
+    'geometry, never copied from a table.',
+    '',
+    'With --json: one object with "input" ("part"), "part", "params", "paramsUnit", "unit",',
+    '"caution", "convention", "designation"/"source"/"modelling" for catalogue parts, and every',
+    'property under the same keys as `props`.',
+    '',
+    'Bad input (unknown type, dimension or designation; impossible dimensions) exits with code 2',
+    'and names the dimension and why.',
+  ].join('\n'),
+  flags: PART_FLAGS,
+  run: runPart,
+};
