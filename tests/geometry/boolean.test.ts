@@ -95,6 +95,35 @@ describe('exact arcs survive clipping', () => {
   });
 });
 
+describe('Boolean operations on arcs', () => {
+  it('two overlapping discs: union area 2πr² − lens, with the lens r²(2·acos(d/2r)) − (d/2)√(4r² − d²) (closed form), within the cut-arc bound', () => {
+    const r = 5, d = 6, s = 1e-5;
+    const a = [piece(circle(0, 0, r))], b = [piece(circle(d, 0, r))];
+    const lens = 2 * r * r * Math.acos(d / (2 * r)) - (d / 2) * Math.sqrt(4 * r * r - d * d);
+    // Four cut arc pieces (two per circle at each of the two crossing points), each ≤ s × chord.
+    const chord = 2 * r * Math.sin(Math.acos(1 - s / r));
+    const bound = 4 * s * chord;
+    const u = unionRegions(a, b, names, { maxSagitta: s });
+    const i = intersectRegions(a, b, names, { maxSagitta: s });
+    expect(Math.abs(regionArea(u) - (2 * Math.PI * r * r - lens))).toBeLessThanOrEqual(bound);
+    expect(Math.abs(regionArea(i) - lens)).toBeLessThanOrEqual(bound);
+    // The lens: per crossing point, one straight cut piece on each circle (4), plus the restored arcs —
+    // one on the first disc, two on the second (its input vertex (1, 0) lies inside the lens): 8 segments.
+    expect(pointsOf(i[0]?.outer ?? { xy: new Float64Array() })).toHaveLength(8);
+  });
+
+  it('a disc crossing a rectangle: inclusion–exclusion holds to 1e-7 × size² for random placements (default chord tolerance)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -20, max: 20, noNaN: true }), fc.double({ min: -20, max: 20, noNaN: true }), fc.double({ min: 1, max: 15, noNaN: true }), rect, (cx, cy, r, box) => {
+        const disc = [piece(circle(cx, cy, r))];
+        const lhs = regionArea(unionRegions(disc, box, names)) + regionArea(intersectRegions(disc, box, names));
+        expect(Math.abs(lhs - regionArea(disc) - regionArea(box))).toBeLessThan(1e-7 * 100 * 100);
+      }),
+      { seed: 42, numRuns: 25 },
+    );
+  });
+});
+
 describe('flattenRing', () => {
   it('keeps every chord within the sagitta: each flattened point lies on the circle, each chord midpoint within s of it', () => {
     const r = 7, s = 1e-3;
