@@ -1,0 +1,126 @@
+// Browser test harness: builds the web app once, serves dist/web on 127.0.0.1 with the desktop
+// app's own CSP (electron/window-options.ts, so a CSP break shows up here too), and drives Debian
+// Chromium through playwright-core. Each test gets a fresh browser context (empty storage,
+// downloads accepted) and fails on an uncaught page error or a CSP violation.
+import { existsSync, mkdirSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { chromium } from 'playwright-core';
+import { tsImport } from 'tsx/esm/api';
+import { buildRenderer, ROOT, WEB_ROOT } from '../../electron/build.mjs';
+import { serveStatic } from '../../electron/static-server.mjs';
+
+export const CHROMIUM = '/usr/bin/chromium';
+export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'];
+export const ARTIFACTS = path.join(ROOT, 'tests', 'browser', 'artifacts');
+export const TEST_TIMEOUT_MS = 60_000;
+
+/** Builds, serves and launches; returns what the tests need and a stop function. */
+export async function startHarness() {
+  if (!existsSync(CHROMIUM)) {
+    throw new Error(`Chromium not found at ${CHROMIUM}: install Debian's chromium package (CI does: apt-get install chromium).`);
+  }
+  await buildRenderer();
+  const { responseHeaders } = await tsImport('../../electron/window-options.ts', import.meta.url);
+  const headers = responseHeaders('text/html');
+  delete headers['Content-Type'];
+  const server = await serveStatic(WEB_ROOT, { port: 4317, headers });
+  const browser = await chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS, headless: true });
+  mkdirSync(ARTIFACTS, { recursive: true });
+  return {
+    browser,
+    baseUrl: `http://127.0.0.1:${server.port}/`,
+    async stop() {
+      await browser.close();
+      await server.close();
+    },
+  };
+}
+
+/** Runs one test function in a fresh context; resolves { ok, ms, error }. */
+export async function runOne(harness, name, test) {
+  const context = await harness.browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 900 } });
+  const page = await context.newPage();
+  const problems = [];
+  page.on('pageerror', (error) => problems.push(`uncaught page error: ${error.message}`));
+  page.on('console', (message) => {
+    if (message.type() === 'error' && /Content.Security.Policy|Refused to/i.test(message.text())) problems.push(`CSP violation: ${message.text()}`);
+  });
+  const artifactsDir = path.join(ARTIFACTS, name.replace(/[^\w.-]+/g, '_'));
+  mkdirSync(artifactsDir, { recursive: true });
+  const started = performance.now();
+  let error = null;
+  let timer;
+  try {
+    await Promise.race([
+      test({ page, baseUrl: harness.baseUrl, artifactsDir, context }),
+      new Promise((_, reject) => {
+        timer = setTimeout(() => reject(new Error(`timed out after ${TEST_TIMEOUT_MS} ms`)), TEST_TIMEOUT_MS);
+      }),
+    ]);
+    if (problems.length > 0) throw new Error(problems.join('\n'));
+  } catch (caught) {
+    error = caught instanceof Error ? caught : new Error(String(caught));
+    await page.screenshot({ path: path.join(artifactsDir, 'failure.png') }).catch(() => undefined);
+  } finally {
+    clearTimeout(timer);
+    await context.close().catch(() => undefined);
+  }
+  return { ok: error === null, ms: Math.round(performance.now() - started), error };
+}
+
+/** Every tests/browser/*.test.mjs file, in name order, optionally only those containing `filter`. */
+export async function testFiles(filter) {
+  const { readdirSync } = await import('node:fs');
+  const folder = path.dirname(fileURLToPath(import.meta.url));
+  return readdirSync(folder)
+    .filter((f) => f.endsWith('.test.mjs') && (!filter || f.includes(filter)))
+    .sort()
+    .map((f) => path.join(folder, f));
+}
+
+/** Tiny assertion helper for browser tests: throws "what: expected …, got …". */
+export function check(condition, message) {
+  if (!condition) throw new Error(message);
+}
+
+// ---- helpers shared by the host tests ----
+
+/** Opens the app and waits until the results panel shows an area. */
+export async function openApp(page, baseUrl) {
+  await page.goto(baseUrl);
+  await page.locator('[data-testid="result-area"]').first().waitFor({ timeout: 20_000 });
+}
+
+/** The full-precision value of a result (data-value of data-testid="result-KEY"). */
+export async function resultValue(page, key) {
+  const text = await page.locator(`[data-testid="result-${key}"]`).first().getAttribute('data-value');
+  return Number(text);
+}
+
+export async function partCount(page) {
+  return page.locator('[data-testid="part-list"] [data-testid^="part-row-"]').count();
+}
+
+/** Runs an item of the page's own menu bar, e.g. menuItem(page, 'File', 'save-as'). */
+export async function menuItem(page, menu, action) {
+  await page.getByTestId(`menu-${menu.toLowerCase()}`).click();
+  await page.getByTestId(`menu-${action}`).click();
+}
+
+/** Removes the File System Access pickers before the app loads: the host falls back to downloads. */
+export async function withoutFilePickers(page) {
+  await page.addInitScript(() => {
+    delete window.showOpenFilePicker;
+    delete window.showSaveFilePicker;
+  });
+}
+
+/** Runs `action` and returns the text of the download it starts, saved under artifactsDir. */
+export async function downloadText(page, artifactsDir, action) {
+  const { readFile } = await import('node:fs/promises');
+  const [download] = await Promise.all([page.waitForEvent('download', { timeout: 15_000 }), action()]);
+  const file = path.join(artifactsDir, download.suggestedFilename());
+  await download.saveAs(file);
+  return { name: download.suggestedFilename(), file, text: await readFile(file, 'utf8') };
+}
