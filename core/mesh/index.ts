@@ -24,7 +24,7 @@ export type { MeshOptions, TriangleMesh } from './types.ts';
 const DEFAULTS = {
   layers: 3,
   compactDivisions: 8,
-  maxChordAngleDeg: 2.5,
+  maxChordAngleDeg: 3.6,
   minAngleDeg: 22,
   cornerRefinement: 4,
   grading: 0.3,

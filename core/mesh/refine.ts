@@ -343,7 +343,27 @@ function chooseInsertions(w: RefineInput, r: Round, coords: Float64Array, bad: r
   return points;
 }
 
+/**
+ * Four far points around the input so that no boundary edge lies on the convex hull: nearly
+ * collinear split points on hull edges make slivers that the constraint step cannot flip.
+ */
+function addFrame(w: RefineInput): void {
+  let xmin = Infinity;
+  let ymin = Infinity;
+  let xmax = -Infinity;
+  let ymax = -Infinity;
+  for (let i = 0; i < w.xy.length; i += 2) {
+    xmin = Math.min(xmin, w.xy[i] ?? 0);
+    xmax = Math.max(xmax, w.xy[i] ?? 0);
+    ymin = Math.min(ymin, w.xy[i + 1] ?? 0);
+    ymax = Math.max(ymax, w.xy[i + 1] ?? 0);
+  }
+  const pad = Math.hypot(xmax - xmin, ymax - ymin);
+  w.xy.push(xmin - pad, ymin - pad, xmax + pad, ymin - pad, xmax + pad, ymax + pad, xmin - pad, ymax + pad);
+}
+
 export function refineTriangulation(w: RefineInput, s: RefineSettings): RefinedTriangles {
+  addFrame(w);
   const initialPoints = w.xy.length / 2;
   for (let round = 1; round <= MAX_ROUNDS; round++) {
     const coords = Float64Array.from(w.xy);

@@ -115,6 +115,27 @@ const dot = (a: Float64Array, b: Float64Array): number => {
   return s;
 };
 
+/**
+ * z = M⁻¹ r for the symmetric Gauss–Seidel preconditioner M = (D + L) D⁻¹ (D + U): a forward
+ * then a backward sweep (SPD whenever D > 0, so it suits the semi-definite K).
+ */
+function symmetricGaussSeidel(a: Csr, diagAt: Int32Array, invDiag: Float64Array, r: Float64Array, z: Float64Array): void {
+  const { rowStart, col, value } = a;
+  const n = a.n;
+  for (let i = 0; i < n; i++) {
+    let s = r[i]!;
+    const d = diagAt[i]!;
+    for (let p = rowStart[i]!; p < d; p++) s -= value[p]! * z[col[p]!]!;
+    z[i] = s * invDiag[i]!;
+  }
+  for (let i = n - 1; i >= 0; i--) {
+    let s = 0;
+    const end = rowStart[i + 1]!;
+    for (let p = diagAt[i]! + 1; p < end; p++) s += value[p]! * z[col[p]!]!;
+    z[i]! -= s * invDiag[i]!;
+  }
+}
+
 /** Solves A x = f (A symmetric positive semi-definite) from the initial guess x0. */
 export function pcgSolve(a: Csr, f: Float64Array, x0: Float64Array, s: PcgSettings): PcgResult {
   const n = a.n;
@@ -133,7 +154,10 @@ export function pcgSolve(a: Csr, f: Float64Array, x0: Float64Array, s: PcgSettin
   csrMultiply(a, x, q);
   for (let i = 0; i < n; i++) r[i] = (b[i] ?? 0) - (q[i] ?? 0);
   const z = new Float64Array(n);
-  for (let i = 0; i < n; i++) z[i] = (r[i] ?? 0) * (invDiag[i] ?? 0);
+  const diagAt = new Int32Array(n);
+  for (let i = 0; i < n; i++) diagAt[i] = csrIndex(a, i, i);
+  const precondition = (): void => symmetricGaussSeidel(a, diagAt, invDiag, r, z);
+  precondition();
   const p = Float64Array.from(z);
   let rz = dot(r, z);
   let rel = Math.sqrt(dot(r, r)) / bnorm;
@@ -146,8 +170,8 @@ export function pcgSolve(a: Csr, f: Float64Array, x0: Float64Array, s: PcgSettin
     for (let i = 0; i < n; i++) {
       x[i]! += alpha * p[i]!;
       r[i]! -= alpha * q[i]!;
-      z[i] = r[i]! * invDiag[i]!;
     }
+    precondition();
     const rzNext = dot(r, z);
     const beta = rzNext / rz;
     rz = rzNext;

@@ -44,6 +44,47 @@ export function quadraticMesh(xy: Float64Array, triangles: Int32Array): Quadrati
   return { xy: Float64Array.from(out), elements: el };
 }
 
+/**
+ * The same mesh with nodes renumbered by reverse Cuthill–McKee (METHODS §7.9): neighbours get
+ * nearby numbers, which keeps the Gauss–Seidel sweeps effective and the memory access local.
+ */
+export function bandOrdered(q: QuadraticMesh): QuadraticMesh {
+  const n = q.xy.length / 2;
+  const pattern = csrPattern(n, q.elements, 6);
+  const degree = (i: number): number => (pattern.rowStart[i + 1] ?? 0) - (pattern.rowStart[i] ?? 0);
+  const order: number[] = [];
+  const placed = new Uint8Array(n);
+  // Start each component from its lowest-degree node (a cheap stand-in for a peripheral one).
+  const starts = Array.from({ length: n }, (_, i) => i).sort((a, b) => degree(a) - degree(b));
+  for (const start of starts) {
+    if (placed[start]) continue;
+    placed[start] = 1;
+    order.push(start);
+    for (let h = order.length - 1; h < order.length; h++) {
+      const v = order[h] ?? 0;
+      const nbrs: number[] = [];
+      for (let p = pattern.rowStart[v] ?? 0; p < (pattern.rowStart[v + 1] ?? 0); p++) {
+        const u = pattern.col[p] ?? 0;
+        if (!placed[u]) {
+          placed[u] = 1;
+          nbrs.push(u);
+        }
+      }
+      nbrs.sort((a, b) => degree(a) - degree(b));
+      for (const u of nbrs) order.push(u);
+    }
+  }
+  order.reverse();
+  const newId = new Int32Array(n);
+  order.forEach((old, k) => (newId[old] = k));
+  const xy = new Float64Array(2 * n);
+  order.forEach((old, k) => {
+    xy[2 * k] = q.xy[2 * old] ?? 0;
+    xy[2 * k + 1] = q.xy[2 * old + 1] ?? 0;
+  });
+  return { xy, elements: q.elements.map((v) => newId[v] ?? 0) };
+}
+
 /** Corner triangles of the nested refinement: each T6 split into its four children. */
 export function childTriangles(q: QuadraticMesh): Int32Array {
   const e = q.elements;
