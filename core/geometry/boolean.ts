@@ -10,7 +10,8 @@
  *   (finer than 1e-4 × size). Every flattened vertex is recorded with its arc and its piece
  *   number. polygon-clipping keeps the input vertices that survive bit for bit, so after clipping
  *   each run of consecutive output vertices that are flattened points of the same arc (matched by
- *   exact coordinates, consecutive pieces in one direction) becomes ONE arc segment again, with
+ *   exact coordinates, each step between neighbouring pieces, all in one direction) becomes ONE
+ *   arc segment again, with
  *   bulge tan(sweep/4) from the sweep between the run's first and last point (the original bulge
  *   itself when the run is the whole arc). An untouched arc therefore comes back exact.
  * Error bound where another part cuts an arc: the cut point lies on a chord, and the chord piece
@@ -194,9 +195,14 @@ function arcPointsAt(index: ArcIndex, x: number, y: number): readonly ArcPoint[]
   return index.get(x)?.get(y) ?? [];
 }
 
+/**
+ * The arc an output edge runs along, if any. Only NEIGHBOURING flattened points count: an edge
+ * between non-neighbours of one arc is some other straight edge (e.g. the diameter of a half disc,
+ * which joins the two end points of a semicircle) and must stay straight.
+ */
 function edgeOnArc(here: readonly ArcPoint[], there: readonly ArcPoint[]): ArcEdge | null {
   for (const p of here) {
-    for (const q of there) if (p.arc === q.arc && p.piece !== q.piece) return { arc: p.arc, from: p.piece, to: q.piece };
+    for (const q of there) if (p.arc === q.arc && Math.abs(p.piece - q.piece) === 1) return { arc: p.arc, from: p.piece, to: q.piece };
   }
   return null;
 }

@@ -112,6 +112,16 @@ describe('Boolean operations on arcs', () => {
     expect(pointsOf(i[0]?.outer ?? { xy: new Float64Array() })).toHaveLength(8);
   });
 
+  it('a disc minus its upper half keeps the diameter straight: half-disc area π r²/2 (closed form) to 1e-12', () => {
+    // The cut runs exactly through both input vertices (±r, 0), so the output edge joining them is a
+    // straight edge between the two end points of one semicircle, not that semicircle.
+    const r = 3;
+    const out = differenceRegions([piece(circle(0, 0, r))], [piece(square(-5, 0, 5, 5))], names);
+    expect(out).toHaveLength(1);
+    expect(pointsOf(out[0]?.outer ?? { xy: new Float64Array() })).toHaveLength(2);
+    expect(Math.abs(regionArea(out) / (Math.PI * r * r / 2) - 1)).toBeLessThan(1e-12);
+  });
+
   it('a disc crossing a rectangle: inclusion–exclusion holds to 1e-7 × size² for random placements (default chord tolerance)', () => {
     fc.assert(
       fc.property(fc.double({ min: -20, max: 20, noNaN: true }), fc.double({ min: -20, max: 20, noNaN: true }), fc.double({ min: 1, max: 15, noNaN: true }), rect, (cx, cy, r, box) => {
