@@ -18,7 +18,8 @@ import {
 } from '../../core/materials/quantities.ts';
 import type { MaterialSI } from '../../core/materials/schema.ts';
 import { SUPPORTS, type Support } from '../../core/member/beam.ts';
-import { CAUTION as MEMBER_CAUTION, memberCheck, memberInputIssues, type MemberInput, type MemberResult } from '../../core/member/check.ts';
+import { CAUTION as MEMBER_CAUTION, type MemberResult } from '../../core/member/check.ts';
+import { sectionMemberCheck } from '../../core/member/section-member.ts';
 import { convertLength, formatSig, isLengthUnit, LENGTH_UNITS, type LengthUnit } from '../../core/units/index.ts';
 import { EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
 import { loadSection, type LoadedSection } from '../load.ts';
@@ -133,35 +134,23 @@ function runCheck(section: LoadedSection, pieces: Pieces, flags: FlagValues, uni
   if (pointText !== undefined) {
     const p = parseQuantity(pointText, FORCE_UNITS, units.force, '--point');
     const a = at ?? (support === 'cantilever' ? span : span / 2);
-    points.push({ P: forceToNewtons(p.value, p.unit), a: convertLength(a, u, 'm') });
+    points.push({ P: forceToNewtons(p.value, p.unit), a });
   }
   const uniformText = stringFlag(flags, 'uniform');
   const uniform = uniformText === undefined ? 0 : lineLoadNPerM(uniformText, units);
-  const c = compositeProperties(pieces.pieces, u);
-  let selfWeight: number | undefined;
-  if (flags['self-weight'] === true) {
-    if (!Number.isFinite(c.weightPerLength)) throw new UsageError('--self-weight with --E needs --density');
-    selfWeight = c.weightPerLength;
-  }
   const limitText = stringFlag(flags, 'limit');
   const limitRatio = limitText === undefined ? undefined : Number(limitText);
   if (limitRatio !== undefined && !(Number.isFinite(limitRatio) && limitRatio > 0)) throw new UsageError(`--limit: expected a positive ratio such as 360, got ${JSON.stringify(limitText)}`);
-  const m = (v: number): number => convertLength(v, u, 'm');
-  const input: MemberInput = {
-    beam: { span: m(span), support: support as Support, points, uniform },
-    EIx: c.EIx, EIy: c.EIy, EIxy: c.EIxy, yE: m(c.cy),
-    materials: c.pieces.map((p, i) => {
-      const mat = pieces.pieces[i]!.material;
-      return { id: p.materialId, name: `${p.label} (${mat.name})`, E: mat.E, yTop: m(p.yTop), yBottom: m(p.yBottom), ...(Number.isFinite(mat.fy) ? { strength: mat.fy } : {}) };
-    }),
-    ...(selfWeight !== undefined ? { selfWeight } : {}),
-    ...(limitRatio !== undefined ? { limitRatio } : {}),
-    samples: 100,
+  const selfWeight = flags['self-weight'] === true;
+  if (selfWeight && pieces.pieces.some((p) => !Number.isFinite(p.material.density))) throw new UsageError('--self-weight with --E needs --density');
+  const checked = sectionMemberCheck(pieces.pieces, u, {
+    span, support: support as Support, points, uniform, selfWeight, samples: 100, ...(limitRatio !== undefined ? { limitRatio } : {}),
+  });
+  if (!checked.ok) throw new UsageError(checked.issues.join('; '));
+  return {
+    result: checked.result, units, span, support: support as Support, EI: checked.composite.EIx,
+    ...(checked.selfWeight !== undefined ? { selfWeight: checked.selfWeight } : {}), stiffnessFrom: pieces.from, pieces: pieces.pieces,
   };
-  const problems = memberInputIssues(input);
-  if (problems.length > 0) throw new UsageError(problems.join('; '));
-  const result = memberCheck(input);
-  return { result, units, span, support: support as Support, EI: c.EIx, ...(selfWeight !== undefined ? { selfWeight } : {}), stiffnessFrom: pieces.from, pieces: pieces.pieces };
 }
 
 /** SI result values → the output system. */
