@@ -281,9 +281,51 @@ interface Side {
   readonly Qt: number;
 }
 
+/**
+ * Straight-edged ring: Sutherland–Hodgman against s ≥ d streamed straight into the first-moment
+ * vertex sums of METHODS §1.1 (A, ∫x, ∫y), with no allocation. Output vertices: each edge P→Q emits
+ * the crossing point when it crosses the line, then Q when Q is inside.
+ */
+function upperSideStraight(xy: Float64Array, f: Frame, d: number): [number, number, number] {
+  const n = xy.length >> 1;
+  let a = 0, qx = 0, qy = 0;
+  let first = true, fx = 0, fy = 0, lx = 0, ly = 0;
+  const emit = (x: number, y: number): void => {
+    if (first) { fx = x; fy = y; first = false; } else {
+      const c = lx * y - x * ly;
+      a += c; qx += (ly + y) * c; qy += (lx + x) * c;
+    }
+    lx = x; ly = y;
+  };
+  let px = xy[2 * n - 2]!, py = xy[2 * n - 1]!;
+  let sp = f.nx * px + f.ny * py - d;
+  for (let i = 0; i < n; i++) {
+    const x = xy[2 * i]!, y = xy[2 * i + 1]!;
+    const sq = f.nx * x + f.ny * y - d;
+    if ((sp < 0 && sq > 0) || (sp > 0 && sq < 0)) {
+      const t = sp / (sp - sq);
+      emit(px + t * (x - px), py + t * (y - py));
+    }
+    if (sq >= 0) emit(x, y);
+    px = x; py = y; sp = sq;
+  }
+  if (first) return [0, 0, 0];
+  const c = lx * fy - fx * ly;
+  a += c; qx += (ly + fy) * c; qy += (lx + fx) * c;
+  const Qy = qy / 6, Qx = qx / 6;
+  return [a / 2, f.nx * Qy + f.ny * Qx, f.tx * Qy + f.ty * Qx];
+}
+
 function upperSide(rings: readonly LocalRing[], f: Frame, d: number): Side {
   let A = 0, Qs = 0, Qt = 0;
   for (const ring of rings) {
+    if (ring.bulge === undefined) {
+      const [a, qs, qt] = upperSideStraight(ring.xy, f, d);
+      A += ring.weight * a;
+      Qs += ring.weight * qs;
+      Qt += ring.weight * qt;
+      continue;
+    }
     const clipped = clipRing(ring, f, d);
     if (clipped === null) continue;
     const raw = clipped === ring ? null : ringIntegrals(clipped, 0, 0);
