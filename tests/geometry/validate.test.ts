@@ -40,6 +40,21 @@ describe('validateRegion: rings that are fine', () => {
     expect(validateRegion(holeAtEdge)).toEqual([]);
   });
 
+  it('accepts a plate with four rounded corners (convex arcs) and a round-cornered opening (arcs on a clockwise hole)', () => {
+    const t = Math.tan(Math.PI / 8); // quarter-circle bulge
+    const rounded = ringFromPoints([[1, 0], [9, 0], [10, 1], [10, 5], [9, 6], [1, 6], [0, 5], [0, 1]], [0, t, 0, t, 0, t, 0, t]);
+    const opening = ringFromPoints([[3, 2], [3, 4], [4, 4], [4, 2]], [0, 0, 0, -1]);
+    expect(validateRegion([piece(rounded, [opening])])).toEqual([]);
+  });
+
+  it('judges containment against the exact arc: a hole inside the bulge of a half disc is inside, one just beyond it is outside', () => {
+    // Half disc of radius 5 above the diameter from (5,0) to (−5,0); the hole sits above the chord polygon.
+    const half = ringFromPoints([[5, 0], [-5, 0]], [1, 0]);
+    const tri = (y: number) => ringFromPoints([[0, y], [0.2, y + 0.2], [-0.2, y + 0.2]]);
+    expect(validateRegion([piece(half, [tri(4.5)])])).toEqual([]);
+    expect(codes(validateRegion([piece(half, [tri(5.1)])]))).toEqual(['hole-outside']);
+  });
+
   it('tolerates a repeated closing vertex and repeated consecutive vertices (harmless input, METHODS.md §1.1)', () => {
     const ring = ringFromPoints([[0, 0], [3, 0], [3, 0], [3, 2], [0, 2], [0, 0]]);
     expect(validateRegion([piece(ring)])).toEqual([]);
