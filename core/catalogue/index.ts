@@ -64,7 +64,7 @@ const ANGLE_NOTE = 'sharp root and toes: the database states no radii (kdes kept
 const HSS_NOTE = 'design wall thickness tdes (0.93·tnom, as tabulated) is used for geometry';
 
 function flangedEntry(row: Row): CatalogueEntry {
-  const [designation, type, W, d, bf, tw, tf, kdes] = row as unknown as [string, Family, number, number, number, number, number, number];
+  const [designation, type, W, d, bf, tw, tf, kdes, WGi] = row as unknown as [string, Family, number, number, number, number, number, number, number | null];
   const sloped = type === 'S' || type === 'C' || type === 'ST';
   const slope = sloped ? 2 / 12 : 0;
   const outstand = type === 'C' ? bf - tw : (bf - tw) / 2;
@@ -73,7 +73,7 @@ function flangedEntry(row: Row): CatalogueEntry {
   const params = { d, bf, tw, tf, r: Math.max(kdes - atWeb, 0), ...(sloped ? { slope } : {}) };
   const modelling = [type === 'MC' ? MC_NOTE : sloped ? SLOPE_NOTE : FILLET_NOTE];
   if (shape === 'tee') modelling.push(`tee cut from the ${type === 'ST' ? 'S' : type === 'MT' ? 'M' : 'W'} shape: d is the depth of the tee`);
-  return { designation, family: type, source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, bf, tw, tf, kdes }, shape, params, modelling, userDefined: false };
+  return { designation, family: type, source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, bf, tw, tf, kdes, ...(WGi === null ? {} : { WGi }) }, shape, params, modelling, userDefined: false };
 }
 
 function angleEntry(row: Row): CatalogueEntry {

@@ -9,6 +9,7 @@
 import type { Diagnostic, Region, Ring } from '../geometry/types.ts';
 import type { LengthUnit } from '../units/types.ts';
 import type { PartType } from './registry-types.ts';
+import { convertLength } from '../units/index.ts';
 import { inchInUnit } from './inch.ts';
 import { lumber } from './lumber.ts';
 import { angle, channel, doubleAngle, iShape, tee, zShape } from './rolled.ts';
@@ -51,6 +52,22 @@ export function defaultParams(type: PartType): Record<string, number> {
 function scaledRing(ring: Ring, factor: number): Ring {
   const xy = ring.xy.map((v) => v * factor);
   return ring.bulge === undefined ? { xy } : { xy, bulge: ring.bulge.slice() };
+}
+
+/**
+ * Dimensions of a part converted between length units: only 'length' symbols change; ratios
+ * (slope), counts (plies) and nominal trade sizes (lumber b, d) are kept. Use it to place a
+ * catalogue part (inches) in a millimetre document. Unknown symbols are kept as they are (the
+ * part type reports them when the region is built).
+ */
+export function paramsInUnit(shape: string, params: Readonly<Record<string, number>>, from: LengthUnit, to: LengthUnit): Record<string, number> {
+  const specs = getPartType(shape)?.params ?? [];
+  const out: Record<string, number> = {};
+  for (const [key, value] of Object.entries(params)) {
+    const quantity = specs.find((s) => s.key === key)?.quantity ?? 'length';
+    out[key] = quantity === 'length' ? convertLength(value, from, to) : value;
+  }
+  return out;
 }
 
 /**

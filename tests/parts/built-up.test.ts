@@ -47,6 +47,10 @@ describe('cover-plated I with flange holes', () => {
   // gauge 5 1/2 in (AISC v15.0 WGi), through flange and plate.
   const built = coverPlatedI({ i: w.params, designation: 'W14X90', top: { b: 16, t: 0.75 }, holes: { diameter: 15 / 16, columns: 2, gauge: 5.5 } });
 
+  it('the catalogue carries the published workable gauge of W14X90, WGi = 5 1/2 in (AISC v15.0)', () => {
+    expect(w.entry.dimensions['WGi']).toBe(5.5);
+  });
+
   it('creates the I, the plate and four subtract strips', () => {
     expect(built.diagnostics).toEqual([]);
     expect(built.pieces.map((p) => `${p.type}:${p.operation}`)).toEqual(['shape:add', 'shape:add', 'rectangle:subtract', 'rectangle:subtract', 'rectangle:subtract', 'rectangle:subtract']);

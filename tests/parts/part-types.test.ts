@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { validateRegion } from '../../core/geometry/index.ts';
-import { defaultParams, getPartType, partTypes, shapeRegion } from '../../core/parts/index.ts';
+import { defaultParams, getPartType, paramsInUnit, partTypes, shapeRegion } from '../../core/parts/index.ts';
 import { sectionProperties } from '../../core/properties/index.ts';
 import type { Region } from '../../core/geometry/types.ts';
 import { arcCentre, exactArea, relativeError, ringPoint, vertexCount } from './oracle.ts';
@@ -231,5 +231,12 @@ describe('lumber (NDS Supplement 2018, Table 1A dressed sizes)', () => {
   it('reports an unknown nominal size and a fractional ply count', () => {
     expect(messages('lumber', { b: 2, d: 7 })).toContain('nominal 2x7 is not in NDS Supplement Table 1A');
     expect(messages('lumber', { b: 2, d: 10, plies: 1.5 })).toContain('plies = 1.5 must be a whole number');
+  });
+});
+
+describe('paramsInUnit', () => {
+  it('converts only lengths: an S shape in mm keeps its 2:12 slope, lumber keeps its nominal size and plies (25.4 mm per inch)', () => {
+    expect(paramsInUnit('i-shape', { d: 8, bf: 4, tw: 0.25, tf: 0.5, slope: 2 / 12 }, 'in', 'mm')).toEqual({ d: 203.2, bf: 101.6, tw: 6.35, tf: 12.7, slope: 2 / 12 });
+    expect(paramsInUnit('lumber', { b: 2, d: 10, plies: 3 }, 'in', 'mm')).toEqual({ b: 2, d: 10, plies: 3 });
   });
 });
