@@ -26,7 +26,8 @@ function bucketOrder(keys: Float64Array): { order: Uint32Array; floor: Float64Ar
     if (k < lo) lo = k;
     if (k > hi) hi = k;
   }
-  const scale = hi > lo ? n / (hi - lo) : 0;
+  // A zero (or denormal-tiny) range puts every segment in bucket 0 rather than dividing by ~0.
+  const scale = hi > lo && Number.isFinite(n / (hi - lo)) ? n / (hi - lo) : 0;
   const bucket = new Uint32Array(n);
   const count = new Uint32Array(n + 1);
   const bucketMin = new Float64Array(n).fill(Infinity);

@@ -20,11 +20,13 @@
  * touch, and a hole may touch its outer ring.
  *
  * Method: every ring is flattened (arcs to chords of sagitta ≤ 1e-7 × region size, flatten.ts);
- * all segments of the region go through one sort-and-sweep along the longer side of the box
- * (sorted by their lower end, an active list pruned as the sweep passes), and each pair whose
- * boxes overlap gets the exact orient2d contact test (predicates.ts). Cost: O(n log n) for the
- * sort plus O(n·k), k = segments cut by one sweep line (a few for ordinary section outlines).
- * Measured: a 1,000,000-vertex circle-like ring validates in ~0.5 s on one core (tests/geometry).
+ * all segments of the region go through one sweep along the longer side of the box (sweep.ts:
+ * bucketed by their lower end, an active list pruned as the sweep passes), and each pair whose
+ * boxes overlap gets the exact orient2d contact test (predicates.ts). Cost: O(n) for the
+ * bucketing plus O(n·k), k = active segments (a few for ordinary section outlines).
+ * Measured (npm run bench -- geometry): a 1,000,000-vertex circle-like ring validates in
+ *   0.43–0.6 s on a shared 2-core machine at load ~3, 1.2 s at load ~16 (2.4–2.8× a native sort of
+ *   the 1,000,000 x coordinates measured in the same run).
  * Containment (hole in outer, holes in each other, pieces in each other) samples up to 64
  * vertices of the inner ring with an exact point-in-ring test once no crossing was found.
  *
