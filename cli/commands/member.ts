@@ -195,7 +195,7 @@ function reportJson(file: string, r: MemberReport): Record<string, unknown> {
       material: s.name,
       maxTension: k.stress(s.maxTension), maxTensionAt: { x: k.len(s.maxTensionAt.x), y: k.len(s.maxTensionAt.y) },
       maxCompression: k.stress(s.maxCompression), maxCompressionAt: { x: k.len(s.maxCompressionAt.x), y: k.len(s.maxCompressionAt.y) },
-      ...(s.strengthRatio !== undefined ? { strengthRatio: s.strengthRatio } : {}),
+      ...(s.strengthRatio !== undefined ? { strengthRatio: s.strengthRatio, strengthRatioOf: s.strengthLabel } : {}),
     })),
     ...(res.limit !== undefined ? { limit: { ratio: res.limit.ratio, limitLength: k.len(res.limit.limitLength), allowed: k.len(res.limit.allowed), passes: res.limit.passes, verdict: res.limit.verdict } } : {}),
     deflectionSearch: res.deflectionSolve,
@@ -213,7 +213,7 @@ function reportText(file: string, r: MemberReport): string {
     `  maximum deflection   ${g(k.len(res.deflectionMax))} ${l} at x = ${g(k.len(res.deflectionAt))} ${l}  (span/${g(res.spanOverDeflection)})`,
     `  maximum moment       ${g(k.moment(res.momentMax))} ${f}·${l} at x = ${g(k.len(res.momentAt))} ${l}`,
     `  uniform load total   ${g(k.lineLoad(res.uniformTotal))} ${f}/${l}${r.selfWeight !== undefined ? ` (self-weight ${g(k.lineLoad(r.selfWeight))} included)` : ''}`,
-    ...res.stresses.map((st) => `  ${st.name}: tension ${g(k.stress(st.maxTension))} ${s}, compression ${g(k.stress(st.maxCompression))} ${s}${st.strengthRatio !== undefined ? `, ratio to its strength ${g(st.strengthRatio)}` : ''}`),
+    ...res.stresses.map((st) => `  ${st.name}: tension ${g(k.stress(st.maxTension))} ${s}, compression ${g(k.stress(st.maxCompression))} ${s}${st.strengthRatio !== undefined ? `, ${g(st.strengthRatio)} × its ${st.strengthLabel ?? 'strength'}` : ''}`),
   ];
   if (res.limit !== undefined) lines.push(`  deflection limit     span/${res.limit.ratio} = ${g(k.len(res.limit.allowed))} ${l}: ${res.limit.verdict.toUpperCase()}`);
   lines.push('', ...res.cautions.map((c) => `CAUTION: ${c}`), '');

@@ -32,6 +32,8 @@ export interface MaterialFibres {
   readonly yBottom: number;
   /** Strength used for a stress ratio (yield or reference), same stress unit as E; optional. */
   readonly strength?: number;
+  /** What `strength` is, for the reader (e.g. "yield strength fy"). */
+  readonly strengthLabel?: string;
 }
 
 export interface MemberInput {
@@ -57,8 +59,9 @@ export interface MaterialStress {
   readonly maxTensionAt: { readonly x: number; readonly y: number };
   readonly maxCompression: number;
   readonly maxCompressionAt: { readonly x: number; readonly y: number };
-  /** max(|σ|) / strength, when a strength was given. */
+  /** max(|σ|) / strength, when a strength was given, and what that strength is. */
   readonly strengthRatio?: number;
+  readonly strengthLabel?: string;
 }
 
 export interface DeflectionLimit {
@@ -102,7 +105,7 @@ function materialStress(m: MaterialFibres, input: MemberInput, sag: ExtremeValue
     maxTensionAt: { x: tension.x, y: tension.y },
     maxCompression: Math.min(0, compression.sigma),
     maxCompressionAt: { x: compression.x, y: compression.y },
-    ...(m.strength !== undefined ? { strengthRatio: peak / m.strength } : {}),
+    ...(m.strength !== undefined ? { strengthRatio: peak / m.strength, strengthLabel: m.strengthLabel ?? 'strength' } : {}),
   };
 }
 

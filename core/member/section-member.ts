@@ -9,9 +9,16 @@
  * Self-weight, when asked for, is g·Σρ_i A_i from the material densities (METHODS.md §6).
  */
 import { compositeProperties, type CompositeProperties, type MaterialPiece } from '../materials/composite.ts';
+import type { StrengthBasis } from '../materials/schema.ts';
 import { convertLength, type LengthUnit } from '../units/index.ts';
 import type { Support } from './beam.ts';
 import { memberCheck, memberInputIssues, type MemberInput, type MemberResult } from './check.ts';
+
+const STRENGTH_LABEL: Readonly<Record<StrengthBasis, string>> = {
+  yield: 'yield strength fy',
+  'reference-bending': 'reference Fb before the NDS adjustment factors (not an allowable stress)',
+  tensile: 'tensile strength',
+};
 
 export interface SectionMemberInput {
   /** Span in the document unit. */
@@ -51,7 +58,7 @@ export function sectionMemberCheck(pieces: readonly MaterialPiece[], unit: Lengt
     EIx: composite.EIx, EIy: composite.EIy, EIxy: composite.EIxy, yE: m(composite.cy),
     materials: composite.pieces.map((p, i) => {
       const mat = pieces[i]!.material;
-      return { id: p.materialId, name: `${p.label} (${mat.name})`, E: mat.E, yTop: m(p.yTop), yBottom: m(p.yBottom), ...(Number.isFinite(mat.fy) ? { strength: mat.fy } : {}) };
+      return { id: p.materialId, name: `${p.label} (${mat.name})`, E: mat.E, yTop: m(p.yTop), yBottom: m(p.yBottom), ...(Number.isFinite(mat.fy) ? { strength: mat.fy, strengthLabel: STRENGTH_LABEL[mat.strengthBasis] } : {}) };
     }),
     ...(selfWeight !== undefined ? { selfWeight } : {}),
     ...(input.limitRatio !== undefined ? { limitRatio: input.limitRatio } : {}),
