@@ -2,8 +2,8 @@
  * Exact circular arcs (METHODS §2) against closed forms and independent quadrature.
  */
 import { describe, expect, it } from 'vitest';
-import { regionIntegrals, ringIntegrals, sectionProperties } from '../../core/properties/index.ts';
-import type { Region } from '../../core/geometry/types.ts';
+import { plasticNeutralAxisWeighted, regionIntegrals, ringIntegrals, sectionProperties } from '../../core/properties/index.ts';
+import { degrees, type Region } from '../../core/geometry/types.ts';
 import { circleRing, expectRel, poly, rectRing, reverseRing, ring } from './helpers.ts';
 
 const EXACT = 1e-12;
@@ -175,5 +175,47 @@ describe('arc ring reversal and fan-form consistency', () => {
     expectRel(b.Qy, a.Qy - 40 * a.A, EXACT, Math.abs(a.Qy));
     expectRel(b.Ixx, a.Ixx - 2 * 25 * a.Qx + 625 * a.A, EXACT, a.Ixx);
     expectRel(b.Ixy, a.Ixy - 40 * a.Qx - 25 * a.Qy + 1000 * a.A, EXACT, a.Ixx);
+  });
+});
+
+describe('arc extreme points in bounds and moduli (METHODS §2.4, §4)', () => {
+  it('semicircle rotated by 30°: the box holds the arc top (0, r) and left (−r, 0) and the end points elsewhere', () => {
+    const r = 50;
+    const c = Math.cos(Math.PI / 6), s = Math.sin(Math.PI / 6);
+    const p = sectionProperties([poly(ring([r * c, r * s, -r * c, -r * s], [1, 0]))]);
+    expectRel(p.yMax, r, EXACT);
+    expectRel(p.xMin, -r, EXACT);
+    expectRel(p.xMax, r * c, EXACT);
+    expectRel(p.yMin, -r * s, EXACT);
+  });
+  it('semicircle: I1 = Iy along θ1 = 90°, S1± = Iy/r from the arc points (±r, 0), S2± = Sx top and bottom (Gere & Timoshenko)', () => {
+    const r = 50;
+    const p = sectionProperties([poly(ring([r, 0, -r, 0], [1, 0]))]);
+    expect(p.thetaDeg).toBe(90);
+    expectRel(p.I1, p.Iy, EXACT);
+    expectRel(p.S1Plus, p.Iy / r, EXACT);
+    expectRel(p.S1Minus, p.Iy / r, EXACT);
+    const yc = (4 * r) / (3 * Math.PI);
+    expectRel(p.S2Plus, p.Ix / (r - yc), EXACT);
+    expectRel(p.S2Minus, p.Ix / yc, EXACT);
+  });
+  it('holes never govern: a tube has the same extreme distances as the solid disc', () => {
+    const p = sectionProperties([poly(circleRing(0, 0, 50), circleRing(0, 0, 40, true))]);
+    expectRel(p.SxTop, p.Ix / 50, EXACT);
+    expectRel(p.S2Minus, p.I2 / 50, EXACT);
+  });
+});
+
+describe('weighted plastic axis with arcs (several materials)', () => {
+  it('disc r = 40 (weight 3) inside a tube 40..50 (weight 1): PNA through the centre, moment = 3·80³/6 + (100³ − 80³)/6 (Gere & Timoshenko Z = d³/6)', () => {
+    const r = plasticNeutralAxisWeighted(
+      [
+        { region: [poly(circleRing(10, 20, 40))], weight: 3 },
+        { region: [poly(circleRing(10, 20, 50), circleRing(10, 20, 40, true))], weight: 1 },
+      ],
+      degrees(0),
+    );
+    expectRel(r.d, 20, 1e-10, 50);
+    expectRel(r.moment, (3 * 80 ** 3) / 6 + (100 ** 3 - 80 ** 3) / 6, 1e-10);
   });
 });
