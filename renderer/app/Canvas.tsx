@@ -281,6 +281,9 @@ export function Canvas(props: Props): ReactElement {
   const host = useRef<HTMLDivElement>(null);
   const [size, setSize] = useState({ width: 800, height: 600 });
   const pan = useRef<{ start: Vec; view: View } | null>(null);
+  const dragging = useRef(false);
+  const viewRef = useRef(view);
+  viewRef.current = view;
   const { onSize } = props;
 
   useEffect(() => {
@@ -307,7 +310,7 @@ export function Canvas(props: Props): ReactElement {
     return { screen: [pos.x, pos.y], p: toSection(view, [pos.x, pos.y]) };
   };
 
-  const input = (e: Konva.KonvaEventObject<MouseEvent>, p: Vec) => ({ p, alt: e.evt.altKey, shift: e.evt.shiftKey });
+  const input = (e: MouseEvent, p: Vec) => ({ p, alt: e.altKey, shift: e.shiftKey });
 
   const selected = new Set(state.selection);
   const order = state.doc.parts.map((part, i) => ({ part, o: outlines[i] })).filter((x) => x.part.visible && x.o);
@@ -315,7 +318,14 @@ export function Canvas(props: Props): ReactElement {
   const subs = order.filter((x) => x.part.operation === 'subtract');
 
   return (
-    <div ref={host} className="canvas-host" data-testid="canvas" tabIndex={0}>
+    <div
+      ref={host}
+      className="canvas-host"
+      data-testid="canvas"
+      tabIndex={0}
+      data-view={JSON.stringify(view)}
+      data-tool-state={state.tool.name}
+    >
       <Stage
         width={size.width}
         height={size.height}
@@ -324,30 +334,45 @@ export function Canvas(props: Props): ReactElement {
           if (!q) return;
           if (e.evt.button === 1 || e.evt.button === 2 || (e.evt.button === 0 && e.evt.ctrlKey)) {
             pan.current = { start: q.screen, view };
+          } else if (e.evt.button === 0) {
+            host.current?.focus();
+            editor.pointerDown(input(e.evt, q.p));
+          } else {
             return;
           }
-          if (e.evt.button !== 0) return;
-          (host.current as HTMLDivElement | null)?.focus();
-          editor.pointerDown(input(e, q.p));
+          // Follow the gesture on the window, so a drag that leaves the canvas still moves and ends.
+          const rect = host.current?.getBoundingClientRect();
+          const at = (ev: MouseEvent): { screen: Vec; p: Vec } => {
+            const screen: Vec = [ev.clientX - (rect?.left ?? 0), ev.clientY - (rect?.top ?? 0)];
+            return { screen, p: toSection(viewRef.current, screen) };
+          };
+          const move = (ev: MouseEvent): void => {
+            const m = at(ev);
+            props.onCursor(m.p);
+            if (pan.current) {
+              const s0 = pan.current;
+              onView({ ...s0.view, ox: s0.view.ox + m.screen[0] - s0.start[0], oy: s0.view.oy + m.screen[1] - s0.start[1] });
+            } else {
+              editor.pointerMove(input(ev, m.p));
+            }
+          };
+          const up = (ev: MouseEvent): void => {
+            window.removeEventListener('mousemove', move);
+            window.removeEventListener('mouseup', up);
+            dragging.current = false;
+            if (pan.current) pan.current = null;
+            else editor.pointerUp(input(ev, at(ev).p));
+          };
+          dragging.current = true;
+          window.addEventListener('mousemove', move);
+          window.addEventListener('mouseup', up);
         }}
         onMouseMove={(e) => {
+          if (dragging.current) return;
           const q = pointer(e);
           if (!q) return;
           props.onCursor(q.p);
-          if (pan.current) {
-            const s = pan.current;
-            onView({ ...s.view, ox: s.view.ox + q.screen[0] - s.start[0], oy: s.view.oy + q.screen[1] - s.start[1] });
-            return;
-          }
-          editor.pointerMove(input(e, q.p));
-        }}
-        onMouseUp={(e) => {
-          if (pan.current) {
-            pan.current = null;
-            return;
-          }
-          const q = pointer(e);
-          if (q) editor.pointerUp(input(e, q.p));
+          editor.pointerMove(input(e.evt, q.p));
         }}
         onMouseLeave={() => props.onCursor(null)}
         onContextMenu={(e) => e.evt.preventDefault()}
