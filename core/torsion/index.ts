@@ -35,7 +35,7 @@ export interface TorsionAnalysis {
   readonly result: TorsionResult;
   /** The fine T6 mesh the constants were computed on. */
   readonly mesh: QuadraticMesh;
-  /** Its corner triangles (four per T6 element's area), for drawing the mesh, CCW. */
+  /** Corner triangles of that mesh (indices into mesh.xy), CCW, for drawing the mesh view. */
   readonly triangles: Int32Array;
   readonly solution: WarpingSolution;
   /** J of the coarse level (for the error estimate). */
@@ -79,8 +79,8 @@ export function torsionAnalysis(region: Region, options: TorsionOptions = {}): T
     });
     const coarse = bandOrdered(quadraticMesh(base.xy, base.triangles));
     const solveC = solveWarping(coarse, { tolerance, maxIterations, onProgress: stage(options.onProgress, 0.15, 0.3) });
-    const triangles = childTriangles(coarse);
-    const fine = bandOrdered(quadraticMesh(coarse.xy, triangles));
+    const fine = bandOrdered(quadraticMesh(coarse.xy, childTriangles(coarse)));
+    const triangles = cornerTriangles(fine);
     const solveF = solveWarping(fine, {
       tolerance,
       maxIterations,
@@ -107,6 +107,12 @@ export function torsionAnalysis(region: Region, options: TorsionOptions = {}): T
     if (err instanceof MeshCancelledError) throw new TorsionCancelledError();
     throw err;
   }
+}
+
+function cornerTriangles(q: QuadraticMesh): Int32Array {
+  const out = new Int32Array((q.elements.length / 6) * 3);
+  for (let t = 0; t < q.elements.length / 6; t++) out.set(q.elements.subarray(6 * t, 6 * t + 3), 3 * t);
+  return out;
 }
 
 export function torsionConstants(region: Region, options: TorsionOptions = {}): TorsionResult {
