@@ -16,17 +16,19 @@
  * box is clear of every piece so far is appended as a new piece; a subtract part that is one
  * polygon without holes, whose box is clear of every boundary segment of exactly one piece and
  * whose first vertex lies inside that piece's material, becomes a new hole of that piece; a
- * subtract part clear of everything is a no-op. Anything else goes to the Boolean adapter.
- * The box test is conservative (an arc's box is its chord's box grown by its sagitta, or the
- * whole circle's box when it sweeps more than 180°), so a fast path is only taken when it is
- * exact.
+ * subtract part clear of everything is a no-op. The other parts of a run of equal operations
+ * are gathered (listed side by side when their boxes are clear, else united) and applied in ONE
+ * adapter call per run, which is exact set algebra: A ∪ B ∪ C = A ∪ (B ∪ C) and
+ * A − B − C = A − (B ∪ C), so the order within a run does not matter.
+ * The box test is conservative (an arc's box is exact from its axis extremes, grown by 1e-9 of
+ * its radius against rounding), so a fast path is only taken when it is exact.
  *
  * Does not: fix bad geometry (a part with diagnostics stops the composition; the diagnostics
  * carry the part's name); use materials (single-material geometry; core/materials weighs parts).
  */
 import type { Part, SectionDocument } from '../document/types.ts';
 import type { Diagnostic, Polygon, Region, Ring } from '../geometry/types.ts';
-import { BooleanError, differenceRegions, normaliseRegion, transformRegion, unionRegions, validateRegion } from '../geometry/index.ts';
+import { BooleanError, arcContainsAngle, arcOfSegment, differenceRegions, normaliseRegion, transformRegion, unionRegions, validateRegion } from '../geometry/index.ts';
 import { shapeRegion } from '../parts/index.ts';
 import { sectionProperties } from '../properties/index.ts';
 import type { SectionProperties } from '../properties/types.ts';
@@ -140,7 +142,7 @@ function boxesOverlap(a: Box, b: Box): boolean {
   return a.minX <= b.maxX && b.minX <= a.maxX && a.minY <= b.maxY && b.minY <= a.maxY;
 }
 
-/** Box of segment i of a ring, grown to contain its arc (conservatively). */
+/** Box of segment i of a ring, exact for arcs (axis extremes inside the sweep, METHODS §2.4), grown by a hair for rounding. */
 function segmentBox(ring: Ring, i: number, out: Box): Box {
   const { xy } = ring;
   const n = xy.length >> 1;
@@ -150,16 +152,18 @@ function segmentBox(ring: Ring, i: number, out: Box): Box {
   out.maxX = Math.max(x0, x1);
   out.minY = Math.min(y0, y1);
   out.maxY = Math.max(y0, y1);
-  const b = Math.abs(ring.bulge?.[i] ?? 0);
-  if (b !== 0) {
-    const chord = Math.hypot(x1 - x0, y1 - y0);
-    // |b| ≤ 1: the arc lies within its sagitta |b|·c/2 of the chord. |b| > 1: within the circle,
-    // radius c(1 + b²)/(4|b|), whose box is at most the chord box grown by the diameter.
-    const grow = b <= 1 ? (b * chord) / 2 : (chord * (1 + b * b)) / (2 * b);
-    out.minX -= grow;
-    out.minY -= grow;
-    out.maxX += grow;
-    out.maxY += grow;
+  const arc = (ring.bulge?.[i] ?? 0) !== 0 ? arcOfSegment(ring, i) : null;
+  if (arc !== null) {
+    if (arcContainsAngle(arc, 0)) out.maxX = Math.max(out.maxX, arc.cx + arc.r);
+    if (arcContainsAngle(arc, Math.PI)) out.minX = Math.min(out.minX, arc.cx - arc.r);
+    if (arcContainsAngle(arc, Math.PI / 2)) out.maxY = Math.max(out.maxY, arc.cy + arc.r);
+    if (arcContainsAngle(arc, -Math.PI / 2)) out.minY = Math.min(out.minY, arc.cy - arc.r);
+    // The centre and radius carry a few ulps of rounding: grow the box so the test stays conservative.
+    const hair = 1e-9 * arc.r;
+    out.minX -= hair;
+    out.minY -= hair;
+    out.maxX += hair;
+    out.maxY += hair;
   }
   return out;
 }
@@ -243,19 +247,83 @@ function fastCombine(acc: Region, part: Region, operation: Part['operation']): F
   return { region: acc.map((p, i) => (i === k ? grown : p)) };
 }
 
-function combineStep(acc: Region, placed: ComposedPart, doneLabels: readonly string[], docName: string): { region: Region; boolean: boolean; diagnostic?: Diagnostic } {
-  const fast = fastCombine(acc, placed.region, placed.part.operation);
-  if (fast) return { region: fast.region, boolean: false };
-  const label = partLabel(placed.part, placed.index);
-  const before = doneLabels.length === 1 ? (doneLabels[0] as string) : `the parts before it (${doneLabels.join(', ')})`;
-  const names = { context: `composing section "${docName}"`, parts: [before, label] };
+/** Running state of the combination, in document order. */
+interface Combining {
+  region: Region;
+  booleanCalls: number;
+  readonly diagnostics: Diagnostic[];
+  /** Labels of the parts combined so far. */
+  readonly done: string[];
+  /** Parts of the current run (same operation) that need the Boolean adapter, gathered into one region. */
+  pending: { region: Region; labels: string[] } | null;
+  pendingOperation: Part['operation'];
+}
+
+const quoted = (labels: readonly string[]): string => labels.join(', ');
+
+/** Gathers a part into the pending run: pieces with clear boxes are just listed, others are united. */
+function gather(state: Combining, placed: ComposedPart, label: string, docName: string): void {
+  if (state.pending === null) {
+    state.pending = { region: placed.region, labels: [label] };
+    return;
+  }
+  const pending = state.pending;
+  const joined = fastCombine(pending.region, placed.region, 'add');
+  if (joined) {
+    pending.region = joined.region;
+  } else {
+    state.booleanCalls++;
+    try {
+      pending.region = unionRegions(pending.region, placed.region, { context: `composing section "${docName}"`, parts: [quoted(pending.labels), label] });
+    } catch (err) {
+      if (!(err instanceof BooleanError)) throw err;
+      state.diagnostics.push({ ...err.toDiagnostic(), part: label });
+    }
+  }
+  pending.labels.push(label);
+}
+
+/**
+ * Applies the pending run to the section in one Boolean call. Within a run of adds (or of
+ * subtracts) the order does not matter — A ∪ B ∪ C = A ∪ (B ∪ C), A − B − C = A − (B ∪ C) — so
+ * the fast-path parts of the run may already be in the section.
+ */
+function flush(state: Combining, docName: string): void {
+  const pending = state.pending;
+  state.pending = null;
+  if (pending === null) return;
+  const names = { context: `composing section "${docName}"`, parts: [quoted(state.done.filter((l) => !pending.labels.includes(l))), quoted(pending.labels)] };
+  state.booleanCalls++;
   try {
-    const region = placed.part.operation === 'add' ? unionRegions(acc, placed.region, names) : differenceRegions(acc, placed.region, names);
-    return { region, boolean: true };
+    state.region = state.pendingOperation === 'add' ? unionRegions(state.region, pending.region, names) : differenceRegions(state.region, pending.region, names);
   } catch (err) {
     if (!(err instanceof BooleanError)) throw err;
-    return { region: acc, boolean: true, diagnostic: { ...err.toDiagnostic(), part: label } };
+    state.diagnostics.push({ ...err.toDiagnostic(), part: pending.labels[0] ?? '' });
   }
+}
+
+function combineParts(parts: readonly ComposedPart[], docName: string): Combining {
+  const state: Combining = { region: [], booleanCalls: 0, diagnostics: [], done: [], pending: null, pendingOperation: 'add' };
+  for (const placed of parts) {
+    const label = partLabel(placed.part, placed.index);
+    const operation = placed.part.operation;
+    if (state.done.length === 0) {
+      if (operation === 'subtract') {
+        state.diagnostics.push({ code: 'empty-section', part: label, message: `part "${label}" subtracts, but no add part comes before it in the list, so there is nothing to cut` });
+        continue;
+      }
+      state.region = placed.region;
+    } else {
+      if (operation !== state.pendingOperation) flush(state, docName);
+      state.pendingOperation = operation;
+      const fast = fastCombine(state.region, placed.region, operation);
+      if (fast) state.region = fast.region;
+      else gather(state, placed, label, docName);
+    }
+    state.done.push(label);
+  }
+  flush(state, docName);
+  return state;
 }
 
 /** The document's visible parts combined into one region, with every problem found. */
@@ -274,21 +342,9 @@ export function regionFromDocument(doc: SectionDocument): Composition {
   });
   if (diagnostics.length > 0) return { region: [], parts, diagnostics, hiddenParts, booleanCalls: 0 };
 
-  let region: Region = [];
-  let booleanCalls = 0;
-  const done: string[] = [];
-  for (const placed of parts) {
-    const label = partLabel(placed.part, placed.index);
-    if (placed.part.operation === 'subtract' && done.length === 0) {
-      diagnostics.push({ code: 'empty-section', part: label, message: `part "${label}" subtracts, but no add part comes before it in the list, so there is nothing to cut` });
-      continue;
-    }
-    const step = done.length === 0 ? { region: placed.region, boolean: false } : combineStep(region, placed, done, doc.name);
-    if ('diagnostic' in step && step.diagnostic) diagnostics.push(step.diagnostic);
-    if (step.boolean) booleanCalls++;
-    region = step.region;
-    done.push(label);
-  }
+  const combined = combineParts(parts, doc.name);
+  diagnostics.push(...combined.diagnostics);
+  const { region, booleanCalls } = combined;
   if (diagnostics.length === 0 && region.length === 0) {
     const why = doc.parts.length === 0 ? 'the document has no parts' : hiddenParts === doc.parts.length ? 'every part is hidden' : 'the subtract parts remove all of it';
     diagnostics.push({ code: 'empty-section', message: `the section has no area: ${why}` });
