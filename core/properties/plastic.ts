@@ -258,7 +258,7 @@ function clipRing(ring: LocalRing, f: Frame, d: number): Ring | null {
   const m = pieces.inside.length;
   const kept = pieces.inside.filter(Boolean).length;
   if (kept === 0) return null;
-  if (kept === m && m === n) return { xy, bulge };
+  if (kept === m && m === n) return ring; // wholly on the + side: the caller reuses its stored integrals
   const ox: number[] = [], oyy: number[] = [], ob: number[] = [];
   for (let k = 0; k < m; k++) {
     const prevInside = pieces.inside[(k + m - 1) % m]!;
