@@ -40,7 +40,7 @@ import type { Diagnostic, DiagnosticCode, Point, Region, Ring } from './types.ts
 import { ringBounds, type Bounds } from './bounds.ts';
 import { flattenRing } from './flatten.ts';
 import { ringSignedArea } from './ring.ts';
-import { contactPoint, pointInRing, segmentContact, CONTACT_CROSS, CONTACT_NONE, CONTACT_OVERLAP, type Contact } from './predicates.ts';
+import { contactPoint, leftTurn, pointInRing, segmentContact, CONTACT_CROSS, CONTACT_NONE, CONTACT_OVERLAP, type Contact } from './predicates.ts';
 import { sweepPairs } from './sweep.ts';
 
 export const MAX_COORDINATE = 1e9;
@@ -268,11 +268,16 @@ function segmentEnd(s: Segments, k: number): number {
 
 function contactOf(s: Segments, a: number, b: number): Contact {
   const a1 = segmentEnd(s, a), b1 = segmentEnd(s, b);
-  const c = segmentContact(s.x[a] ?? 0, s.y[a] ?? 0, s.x[a1] ?? 0, s.y[a1] ?? 0, s.x[b] ?? 0, s.y[b] ?? 0, s.x[b1] ?? 0, s.y[b1] ?? 0);
-  if (c === CONTACT_NONE || s.ringOf[a] !== s.ringOf[b]) return c;
   // Adjacent segments of one ring always share a vertex; only doubling back is a problem.
-  if (a1 === b || b1 === a) return c === CONTACT_OVERLAP ? c : CONTACT_NONE;
-  return c;
+  if (a1 === b) return doublesBack(s, a, a1, b1) ? CONTACT_OVERLAP : CONTACT_NONE;
+  if (b1 === a) return doublesBack(s, b, b1, a1) ? CONTACT_OVERLAP : CONTACT_NONE;
+  return segmentContact(s.x[a] ?? 0, s.y[a] ?? 0, s.x[a1] ?? 0, s.y[a1] ?? 0, s.x[b] ?? 0, s.y[b] ?? 0, s.x[b1] ?? 0, s.y[b1] ?? 0);
+}
+
+/** Segments p→q and q→r overlap: r on the line pq and the path turns back (exact). */
+function doublesBack(s: Segments, p: number, q: number, r: number): boolean {
+  const px = s.x[p] ?? 0, py = s.y[p] ?? 0, qx = s.x[q] ?? 0, qy = s.y[q] ?? 0, rx = s.x[r] ?? 0, ry = s.y[r] ?? 0;
+  return leftTurn(px, py, qx, qy, rx, ry) === 0 && (qx - px) * (rx - qx) + (qy - py) * (ry - qy) < 0;
 }
 
 interface ContactResult {

@@ -120,6 +120,13 @@ describe('validateRegion: each diagnostic names the part, polygon, ring and vert
     expect(validateRegion([piece(clear)])).toEqual([]);
   });
 
+  it('self-intersection where the boundary doubles back on itself (a zero-width spike from vertex 1 to vertex 2 and back)', () => {
+    const spike = ringFromPoints([[0, 0], [4, 0], [6, 0], [4, 0], [4, 2], [0, 2]]);
+    const d = validateRegion([piece(spike)]);
+    expect(codes(d)).toContain('self-intersection');
+    expect(d.every((x) => x.ring === -1 && x.polygon === 0)).toBe(true);
+  });
+
   it('self-intersection when an arc of the ring crosses one of its straight edges', () => {
     // Bottom segment bulges downward far enough (semicircle, radius 2) to cross the lower edge of a notch.
     const ring = ringFromPoints([[4, 0], [0, 0], [0, 4], [4, 4]], [1, 0, 0, 0]);
