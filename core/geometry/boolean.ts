@@ -11,9 +11,9 @@
  *   number. polygon-clipping keeps the input vertices that survive bit for bit, so after clipping
  *   each run of consecutive output vertices that are flattened points of the same arc (matched by
  *   exact coordinates, each step between neighbouring pieces, all in one direction) becomes ONE
- *   arc segment again, with
- *   bulge tan(sweep/4) from the sweep between the run's first and last point (the original bulge
- *   itself when the run is the whole arc). An untouched arc therefore comes back exact.
+ *   arc segment again, with bulge tan(sweep/4) from the sweep between the run's first and last
+ *   point (the original bulge itself when the run is the whole arc). An untouched arc therefore
+ *   comes back exact; a partly kept arc comes back as an exact arc of the same circle.
  * Error bound where another part cuts an arc: the cut point lies on a chord, and the chord piece
  *   between the cut and the next flattened point stays straight. Per cut arc piece the area error
  *   is at most the area between that chord and its arc, ≤ (2/3)·s·c ≤ s·c, s = maxSagitta,
