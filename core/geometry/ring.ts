@@ -36,9 +36,9 @@ export function ringFromPoints(points: readonly Point[], bulges?: readonly numbe
     xy[2 * i] = x;
     xy[2 * i + 1] = y;
   });
-  if (bulges === undefined || bulges.every((b) => b === 0)) return { xy };
+  if (bulges === undefined) return { xy };
   invariant(bulges.length === points.length, `ringFromPoints: ${points.length} points need ${points.length} bulges, got ${bulges.length}`);
-  return { xy, bulge: Float64Array.from(bulges) };
+  return bulges.every((b) => b === 0) ? { xy } : { xy, bulge: Float64Array.from(bulges) };
 }
 
 export function ringVertexCount(ring: Ring): number {
@@ -111,7 +111,7 @@ export function reverseRing(ring: Ring): Ring {
   const outBulge = new Float64Array(n);
   for (let s = 0; s < n; s++) {
     const k = (((n - 2 - s) % n) + n) % n;
-    outBulge[k] = -(bulge[s] ?? 0);
+    outBulge[k] = 0 - (bulge[s] ?? 0); // 0 − b, not −b: a straight segment stays +0, not −0
   }
   return { xy: out, bulge: outBulge };
 }

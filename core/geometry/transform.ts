@@ -45,7 +45,7 @@ function mapRing(ring: Ring, m: readonly [number, number, number, number, number
     xy[i + 1] = c * x + d * y + ty;
   }
   if (ring.bulge === undefined) return { xy };
-  return { xy, bulge: bulgeSign === 1 ? Float64Array.from(ring.bulge) : ring.bulge.map((v) => -v) };
+  return { xy, bulge: bulgeSign === 1 ? Float64Array.from(ring.bulge) : ring.bulge.map((v) => 0 - v) };
 }
 
 function mapRegion(region: Region, m: readonly [number, number, number, number, number, number], bulgeSign: 1 | -1): Region {

@@ -41,7 +41,7 @@ describe('reverseRing', () => {
     const back = reverseRing(ring);
     expect(pointsOf(back)).toEqual([[0, 3], [4, 3], [4, 0], [0, 0]]);
     // Old segment 1 ((4,0)→(4,3), b 0.3) is new segment 1 ((4,3)→(4,0)) with b −0.3; old 3 ((0,3)→(0,0)) is new 3.
-    expect(Array.from(back.bulge ?? [])).toEqual([-0, -0.3, -0, 0.2]);
+    expect(Array.from(back.bulge ?? [])).toEqual([0, -0.3, 0, 0.2]);
     expect(ringSignedArea(back)).toBeCloseTo(-ringSignedArea(ring), 13);
     expect(reverseRing(back)).toEqual(ring);
   });
