@@ -7,7 +7,7 @@
  *   when a slope is given), r root fillet radius between web and flange, slope the rise over run
  *   of a tapered inner flange face (2:12 = 0.1667 for S shapes and C channels, from memory of the
  *   AISC Manual Part 1; it is not in the AISC database). Angles: legs d (along y) and b (along x),
- *   thickness t, root radius r, toe radius rt.
+ *   thickness t, root radius r (or k, heel to the fillet toe, r = k − t), toe radius rt.
  * Taper: the average thickness tf is taken at the middle of the flange outstand, so the face runs
  *   from tf + slope·o/2 at the web to tf − slope·o/2 at the toe, o being the outstand (AISC Manual
  *   Part 1 convention for sloped flanges, from memory).
@@ -197,7 +197,20 @@ const angleParams = [
   { key: 't', label: 'thickness', defaultIn: 0.5 },
   { key: 'r', label: 'root fillet radius (0 = sharp)', defaultIn: 0, optional: true },
   { key: 'rt', label: 'toe radius (0 = sharp)', defaultIn: 0, optional: true },
+  { key: 'k', label: 'heel to the toe of the root fillet, as tabulated (instead of r: r = k − t)', defaultIn: 0, optional: true, defaultRule: 'r + t' },
 ] as const;
+
+/** Angle values with the root radius taken from k when k is given (r = k − t), or a diagnostic. */
+function angleValues(partType: string, params: Values, values: Record<string, number>, diagnostics: Diagnostic[]): AngleValues {
+  const k = values['k'];
+  const t = values['t']!;
+  if (k !== undefined) {
+    if (params['r'] !== undefined) diagnostics.push(badParameter(partType, `give either r or k, not both (r = ${formatNumber(params['r'])}, k = ${formatNumber(k)})`));
+    else if (k < t) diagnostics.push(badParameter(partType, `k = ${formatNumber(k)} is less than the thickness t = ${formatNumber(t)} (k is measured from the heel)`));
+    else values['r'] = k - t;
+  }
+  return values as unknown as AngleValues;
+}
 
 function angleCorners(v: AngleValues, x0: number, mirror: boolean): Corner[] {
   const s = mirror ? -1 : 1;
@@ -227,7 +240,7 @@ export const angle: PartType = {
   region(params: Values): Built {
     const { values, diagnostics } = readParams('angle', angle.params, params);
     if (diagnostics.length > 0) return failed(diagnostics);
-    const v = values as unknown as AngleValues;
+    const v = angleValues('angle', params, values, diagnostics);
     angleChecks('angle', v, diagnostics);
     if (diagnostics.length > 0) return failed(diagnostics);
     const polygon = ringOrClash('angle', angleCorners(v, 0, false), `root radius r = ${formatNumber(v.r)} with toe radius rt = ${formatNumber(v.rt)}`, diagnostics);
@@ -243,7 +256,7 @@ export const doubleAngle: PartType = {
   region(params: Values): Built {
     const { values, diagnostics } = readParams('double-angle', doubleAngle.params, params);
     if (diagnostics.length > 0) return failed(diagnostics);
-    const v = values as unknown as AngleValues & { gap: number };
+    const v = angleValues('double-angle', params, values, diagnostics) as AngleValues & { gap: number };
     angleChecks('double-angle', v, diagnostics);
     if (diagnostics.length > 0) return failed(diagnostics);
     const radius = `root radius r = ${formatNumber(v.r)} with toe radius rt = ${formatNumber(v.rt)}`;

@@ -64,6 +64,20 @@ describe('plate, round bar, pipe, tube (exact arcs)', () => {
     expect(relativeError(sectionProperties(region).area, 12 - (4 - Math.PI) * 0.25)).toBeLessThan(1e-13);
   });
 
+  it('a 2 × 2 plate with r = 1 drops its zero-length edges: 4 quarter arcs, A = π and Ix = π/4 (a unit circle)', () => {
+    const region = build('plate', { b: 2, t: 2, r: 1 });
+    expect(vertexCount(region)).toBe(4);
+    expect(validateRegion(region)).toEqual([]);
+    const p = sectionProperties(region);
+    expect(relativeError(p.area, Math.PI)).toBeLessThan(1e-13);
+    expect(relativeError(p.Ix, Math.PI / 4)).toBeLessThan(1e-13);
+  });
+
+  it('touching pieces stay a valid region: three lumber plies, double angle with no gap', () => {
+    expect(validateRegion(build('lumber', { b: 2, d: 10, plies: 3 }))).toEqual([]);
+    expect(validateRegion(build('double-angle', { d: 4, b: 4, t: 0.5, gap: 0 }))).toEqual([]);
+  });
+
   it('round bar: 2 arc segments, A = πd²/4 and Ix = Iy = πd⁴/64 to 1e-12 (Gere & Timoshenko, App. D)', () => {
     const d = 2.75;
     const region = build('round-bar', { d });
@@ -182,6 +196,12 @@ describe('rolled shapes', () => {
     expect(arcs.filter((b) => b < 0)).toHaveLength(1);
     expect(arcs.filter((b) => b > 0)).toHaveLength(2);
     expect(ringPoint(ring, 0)).toEqual([0, 0]);
+  });
+
+  it('angle root radius from k (heel to fillet toe): k = 0.875, t = 0.5 gives the same part as r = 0.375', () => {
+    expect(build('angle', { d: 4, b: 4, t: 0.5, k: 0.875 })).toEqual(build('angle', { d: 4, b: 4, t: 0.5, r: 0.375 }));
+    expect(messages('angle', { d: 4, b: 4, t: 0.5, k: 0.875, r: 0.3 })).toContain('give either r or k, not both');
+    expect(messages('angle', { d: 4, b: 4, t: 0.5, k: 0.4 })).toContain('k = 0.4 is less than the thickness t = 0.5');
   });
 
   it('double angle: two mirrored angles whose Ixy cancels, area twice one angle', () => {
