@@ -19,7 +19,7 @@
  * Touching between different rings (at a point, or along a shared edge) is allowed: pieces may
  * touch, and a hole may touch its outer ring.
  *
- * Method: every ring is flattened (arcs to chords of sagitta ≤ 1e-7 × region size, flatten.ts);
+ * Method: every ring is flattened (arcs to chords of sagitta ≤ 1e-6 × region size, flatten.ts);
  * all segments of the region go through one sweep along the longer side of the box (sweep.ts:
  * bucketed by their lower end, an active list pruned as the sweep passes), and each pair whose
  * boxes overlap gets the exact orient2d contact test (predicates.ts). Cost: O(n) for the
@@ -45,7 +45,7 @@ import { sweepPairs } from './sweep.ts';
 
 export const MAX_COORDINATE = 1e9;
 export const ZERO_AREA_RATIO = 1e-12;
-export const FLATTEN_RATIO = 1e-7;
+export const FLATTEN_RATIO = 1e-6;
 export const MAX_CONTACT_DIAGNOSTICS = 50;
 const CONTAINMENT_SAMPLES = 64;
 

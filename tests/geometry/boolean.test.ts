@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import polygonClipping from 'polygon-clipping';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import {
-  BooleanError, differenceRegions, flattenRing, intersectRegions, isRegionValid, ringFromPoints, ringSignedArea, unionRegions,
+  BooleanError, differenceRegions, flattenRing, intersectRegions, isRegionValid, ringFromPoints, ringSignedArea, unionRegions, validateRegion,
 } from '../../core/geometry/index.ts';
 import type { Region } from '../../core/geometry/index.ts';
 import { circle, piece, pointsOf, regionArea, square, starRing } from './helpers.ts';
@@ -122,12 +122,14 @@ describe('Boolean operations on arcs', () => {
     expect(Math.abs(regionArea(out) / (Math.PI * r * r / 2) - 1)).toBeLessThan(1e-12);
   });
 
-  it('a disc crossing a rectangle: inclusion–exclusion holds to 1e-7 × size² for random placements (default chord tolerance)', () => {
+  it('a disc crossing a rectangle: inclusion–exclusion holds to 1e-7 × size² for random placements (default chord tolerance), and the union validates clean', () => {
     fc.assert(
       fc.property(fc.double({ min: -20, max: 20, noNaN: true }), fc.double({ min: -20, max: 20, noNaN: true }), fc.double({ min: 1, max: 15, noNaN: true }), rect, (cx, cy, r, box) => {
         const disc = [piece(circle(cx, cy, r))];
-        const lhs = regionArea(unionRegions(disc, box, names)) + regionArea(intersectRegions(disc, box, names));
+        const u = unionRegions(disc, box, names);
+        const lhs = regionArea(u) + regionArea(intersectRegions(disc, box, names));
         expect(Math.abs(lhs - regionArea(disc) - regionArea(box))).toBeLessThan(1e-7 * 100 * 100);
+        expect(validateRegion(u)).toEqual([]);
       }),
       { seed: 42, numRuns: 25 },
     );
