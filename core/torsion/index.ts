@@ -78,7 +78,10 @@ export function torsionAnalysis(region: Region, options: TorsionOptions = {}): T
       onProgress: stage(options.onProgress, 0, 0.15),
     });
     const coarse = bandOrdered(quadraticMesh(base.xy, base.triangles));
-    const solveC = solveWarping(coarse, { tolerance, maxIterations, onProgress: stage(options.onProgress, 0.15, 0.3) });
+    // The coarse level only feeds the error estimate and the start of the fine solve; with the
+    // energy form of J its solver error enters squared, so 1e-7 is ample there.
+    const coarseTolerance = Math.max(tolerance, 1e-7);
+    const solveC = solveWarping(coarse, { tolerance: coarseTolerance, maxIterations, onProgress: stage(options.onProgress, 0.15, 0.3) });
     const fine = bandOrdered(quadraticMesh(coarse.xy, childTriangles(coarse)));
     const triangles = cornerTriangles(fine);
     const solveF = solveWarping(fine, {

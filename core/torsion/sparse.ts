@@ -19,38 +19,42 @@ export interface Csr {
 export function csrPattern(n: number, elements: Int32Array, per: number): Csr {
   const count = elements.length / per;
   const elemStart = new Int32Array(n + 1);
-  for (const v of elements) elemStart[v + 1] = (elemStart[v + 1] ?? 0) + 1;
-  for (let i = 0; i < n; i++) elemStart[i + 1] = (elemStart[i + 1] ?? 0) + (elemStart[i] ?? 0);
+  for (let k = 0; k < elements.length; k++) elemStart[elements[k]! + 1]!++;
+  for (let i = 0; i < n; i++) elemStart[i + 1]! += elemStart[i]!;
   const fill = elemStart.slice(0, n);
   const elemOf = new Int32Array(elements.length);
   for (let e = 0; e < count; e++) {
     for (let k = 0; k < per; k++) {
-      const v = elements[e * per + k] ?? 0;
-      elemOf[fill[v] ?? 0] = e;
-      fill[v] = (fill[v] ?? 0) + 1;
+      const v = elements[e * per + k]!;
+      elemOf[fill[v]!++] = e;
     }
   }
   const mark = new Int32Array(n).fill(-1);
   const rowStart = new Int32Array(n + 1);
-  const cols: number[] = [];
-  const row: number[] = [];
+  // Upper bound: each incidence of node i in an element adds at most `per` columns to row i.
+  const cols = new Int32Array(elements.length * per);
+  let used = 0;
   for (let i = 0; i < n; i++) {
-    row.length = 0;
-    for (let p = elemStart[i] ?? 0; p < (elemStart[i + 1] ?? 0); p++) {
-      const e = elemOf[p] ?? 0;
+    const first = used;
+    for (let p = elemStart[i]!; p < elemStart[i + 1]!; p++) {
+      const e = elemOf[p]!;
       for (let k = 0; k < per; k++) {
-        const j = elements[e * per + k] ?? 0;
+        const j = elements[e * per + k]!;
         if (mark[j] !== i) {
           mark[j] = i;
-          row.push(j);
+          // Insertion keeps the (short) row sorted.
+          let q = used++;
+          while (q > first && cols[q - 1]! > j) {
+            cols[q] = cols[q - 1]!;
+            q--;
+          }
+          cols[q] = j;
         }
       }
     }
-    row.sort((a, b) => a - b);
-    for (const j of row) cols.push(j);
-    rowStart[i + 1] = cols.length;
+    rowStart[i + 1] = used;
   }
-  return { n, rowStart, col: Int32Array.from(cols), value: new Float64Array(cols.length) };
+  return { n, rowStart, col: cols.slice(0, used), value: new Float64Array(used) };
 }
 
 /** Position of column j in row i (binary search; the pattern must contain it). */
@@ -167,16 +171,18 @@ export function pcgSolve(a: Csr, f: Float64Array, x0: Float64Array, s: PcgSettin
     if (it >= s.maxIterations) throw new TorsionSolveError(it, rel, s.tolerance);
     csrMultiply(a, p, q);
     const alpha = rz / dot(p, q);
+    let rr = 0;
     for (let i = 0; i < n; i++) {
       x[i]! += alpha * p[i]!;
-      r[i]! -= alpha * q[i]!;
+      const ri = (r[i]! -= alpha * q[i]!);
+      rr += ri * ri;
     }
     precondition();
     const rzNext = dot(r, z);
     const beta = rzNext / rz;
     rz = rzNext;
     for (let i = 0; i < n; i++) p[i] = z[i]! + beta * p[i]!;
-    rel = Math.sqrt(dot(r, r)) / bnorm;
+    rel = Math.sqrt(rr) / bnorm;
     it++;
     if (s.onProgress && it % 32 === 0) {
       const fraction = Math.log(rel0 / rel) / Math.log(rel0 / s.tolerance);

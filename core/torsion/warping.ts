@@ -4,7 +4,7 @@
  *
  * Coordinates X, Y are relative to the mesh centroid. Ip, Ix, Iy, Ixy and the centroid are
  * integrated over the same mesh (METHODS §7.2: mixing exact-arc Ip with a chord mesh would
- * exceed the FE error). J = Ip − Fᵀω; the Trefftz shear centre from ∫Xω, ∫Yω; Cw = ∫ω_S² about
+ * exceed the FE error). J = Ip − Fᵀω (evaluated as the energy functional, see below); the Trefftz shear centre from ∫Xω, ∫Yω; Cw = ∫ω_S² about
  * the shear centre. One material: G cancels. Disconnected components twist independently: J
  * adds; each component's ω is given zero mean, so xs, ys and Cw then treat the pieces as
  * warping freely, with no shear connection between them.
@@ -299,7 +299,10 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
   csrMultiply(K, omega, Kw);
   const energy = dotv(omega, Kw);
   const Ip = Ixx + Iyy;
-  const J = Ip - dotv(F, omega);
+  // The functional J(ω) = ∫|∇ω + (−Y, X)|² = Ip − 2Fᵀω + ωᵀKω: equal to Ip − Fᵀω at the exact
+  // discrete solution, but its error in an inexact solve e is eᵀKe ≥ 0 (second order, and J
+  // stays an upper bound), where Ip − Fᵀω would be first order.
+  const J = Ip - 2 * dotv(F, omega) + energy;
   zeroMeanPerComponent(q, X, Y, omega, comps);
   const Mw = massTimes(q, X, Y, omega);
   const IwX = dotv(X, Mw);
