@@ -5,6 +5,8 @@
 import { useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore, type ReactElement } from 'react';
 import { newDocument, serialiseDocument, type SectionDocument } from '../../core/document/index.ts';
 import { getPartType } from '../../core/parts/index.ts';
+import { propertiesCsv, sectionSvg } from '../../core/export/index.ts';
+import { sectionFromDocument } from '../../core/section/index.ts';
 import { convertLength, defaultDisplaySet, plainDisplaySet, LENGTH_UNITS, type DisplaySet, type LengthUnit } from '../../core/units/index.ts';
 import { Editor } from '../editor/editor.ts';
 import { outlineBox, type Vec } from '../editor/geometry.ts';
@@ -108,9 +110,14 @@ export function App(): ReactElement {
     host.setUnsaved?.(state.dirty);
   }, [host, docName, state.dirty]);
 
-  // Recovery text shortly after each change; cleared once the work is saved.
+  // Recovery text shortly after each change; cleared when the work becomes clean again (saved,
+  // or undone back to the saved state). A fresh start never clears it: that text may be the
+  // previous session's, still on offer.
+  const wasDirty = useRef(false);
   useEffect(() => {
+    if (!state.dirty && !wasDirty.current) return undefined;
     const t = window.setTimeout(() => {
+      wasDirty.current = state.dirty;
       void host.writeRecovery(state.dirty ? serialiseDocument(state.doc) : null);
     }, RECOVERY_DELAY_MS);
     return () => window.clearTimeout(t);
@@ -180,6 +187,28 @@ export function App(): ReactElement {
     [editor, host],
   );
 
+  const exportAs = useCallback(
+    async (kind: 'svg' | 'csv') => {
+      const st = editor.getState();
+      const section = sectionFromDocument(st.doc);
+      if (!section.properties) {
+        setBanner({ kind: 'error', title: 'Nothing was exported: the section has no valid properties.', lines: section.diagnostics.map((d) => d.message) });
+        return;
+      }
+      const base = (st.file?.name ?? st.doc.name).replace(/\.(section\.json|geojson|json)$/i, '').replace(/[^\w.-]+/g, '-') || 'section';
+      const file =
+        kind === 'svg'
+          ? { suggestedName: `${base}.svg`, mimeType: 'image/svg+xml', text: sectionSvg({ name: st.doc.name, unit: st.doc.unit, section, display }) }
+          : { suggestedName: `${base}.csv`, mimeType: 'text/csv', text: propertiesCsv({ name: st.doc.name, unit: st.doc.unit, properties: section.properties }) };
+      try {
+        if (await host.exportFile(file)) setBanner({ kind: 'info', title: `Exported ${file.suggestedName}`, lines: [] });
+      } catch (err) {
+        setBanner({ kind: 'error', title: `Export of ${file.suggestedName} failed.`, lines: [err instanceof Error ? err.message : String(err)] });
+      }
+    },
+    [display, editor, host],
+  );
+
   const run = useCallback(
     async (action: MenuAction | HostCommand) => {
       switch (action) {
@@ -202,8 +231,7 @@ export function App(): ReactElement {
           return save(true);
         case 'export-svg':
         case 'export-csv':
-          setBanner({ kind: 'info', title: 'Export', lines: ['Export of SVG and CSV comes from core/export, which this build does not include yet.'] });
-          return;
+          return exportAs(action === 'export-svg' ? 'svg' : 'csv');
         case 'undo':
           return editor.undo();
         case 'redo':
@@ -230,7 +258,7 @@ export function App(): ReactElement {
           return;
       }
     },
-    [confirmDiscard, editor, fit, host, loadDoc, openText, save, size],
+    [confirmDiscard, editor, exportAs, fit, host, loadDoc, openText, save, size],
   );
 
   useEffect(() => host.onCommand?.((c) => void run(c)), [host, run]);
