@@ -1,6 +1,7 @@
 /**
- * Maps an app://sectionsmith/… request to a file of the built renderer (dist/web), refusing
- * anything outside that folder. Plain function so the traversal rules are unit-tested.
+ * Maps an app://sectionsmith/… request (Electron) or an http path (the loopback server of
+ * static-server.mjs) to a file of the built renderer (dist/web), refusing anything outside that
+ * folder and types it does not know. Plain functions so the traversal rules are unit-tested.
  */
 import path from 'node:path';
 import { APP_HOST, APP_SCHEME } from './window-options.ts';
@@ -34,9 +35,14 @@ export function appFileFor(root: string, requestUrl: string): AppFile | null {
     return null;
   }
   if (url.protocol !== `${APP_SCHEME}:` || url.host !== APP_HOST) return null;
+  return webFileFor(root, url.pathname);
+}
+
+/** The file for a URL path (still percent-encoded) under `root`, or null (traversal, unknown type). */
+export function webFileFor(root: string, encodedPath: string): AppFile | null {
   let relative: string;
   try {
-    relative = decodeURIComponent(url.pathname);
+    relative = decodeURIComponent(encodedPath);
   } catch {
     return null;
   }

@@ -5,9 +5,8 @@
 import { spawn } from 'node:child_process';
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
-import { tsImport } from 'tsx/esm/api';
-import { buildDesktop, OUT_ELECTRON, ROOT, WEB_ROOT } from './build.mjs';
-import { serveStatic } from './static-server.mjs';
+import { buildDesktop, OUT_ELECTRON, ROOT } from './build.mjs';
+import { serveWebBuild } from './serve-web.mjs';
 
 /** The Electron binary, or null when the runtime was never downloaded. */
 function electronBinary() {
@@ -24,10 +23,7 @@ if (binary) {
   const child = spawn(binary, [path.join(OUT_ELECTRON, 'main.cjs'), ...process.argv.slice(2)], { stdio: 'inherit' });
   child.on('exit', (code, signal) => process.exit(code ?? (signal ? 1 : 0)));
 } else {
-  const { responseHeaders } = await tsImport('./window-options.ts', import.meta.url);
-  const headers = responseHeaders('text/html');
-  delete headers['Content-Type'];
-  const server = await serveStatic(WEB_ROOT, { port: 5173, headers });
+  const server = await serveWebBuild({ port: 5173 });
   console.log(`Electron runtime not available on this machine (offline install); serving the same app for a browser at http://localhost:${server.port}/`);
   const stop = () => void server.close().then(() => process.exit(0));
   process.on('SIGINT', stop);

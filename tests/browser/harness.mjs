@@ -6,9 +6,8 @@ import { existsSync, mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium } from 'playwright-core';
-import { tsImport } from 'tsx/esm/api';
-import { buildRenderer, ROOT, WEB_ROOT } from '../../electron/build.mjs';
-import { serveStatic } from '../../electron/static-server.mjs';
+import { buildRenderer, ROOT } from '../../electron/build.mjs';
+import { serveWebBuild } from '../../electron/serve-web.mjs';
 
 export const CHROMIUM = '/usr/bin/chromium';
 export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'];
@@ -21,10 +20,7 @@ export async function startHarness() {
     throw new Error(`Chromium not found at ${CHROMIUM}: install Debian's chromium package (CI does: apt-get install chromium).`);
   }
   await buildRenderer();
-  const { responseHeaders } = await tsImport('../../electron/window-options.ts', import.meta.url);
-  const headers = responseHeaders('text/html');
-  delete headers['Content-Type'];
-  const server = await serveStatic(WEB_ROOT, { port: 4317, headers });
+  const server = await serveWebBuild({ port: 4317 });
   const browser = await chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS, headless: true });
   mkdirSync(ARTIFACTS, { recursive: true });
   return {

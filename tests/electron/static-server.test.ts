@@ -3,6 +3,7 @@ import { request } from 'node:http';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { webFileFor } from '../../electron/app-files.ts';
 import { serveStatic, type StaticServer } from '../../electron/static-server.mjs';
 
 let folder = '';
@@ -26,7 +27,7 @@ beforeAll(async () => {
   writeFileSync(path.join(folder, 'web', 'index.html'), '<!doctype html><title>app</title>');
   writeFileSync(path.join(folder, 'web', 'assets', 'a.js'), 'export {}');
   writeFileSync(path.join(folder, 'secret.txt'), 'outside the root');
-  server = await serveStatic(path.join(folder, 'web'), { port: 4391, headers: { 'Content-Security-Policy': "default-src 'none'" } });
+  server = await serveStatic((pathname) => webFileFor(path.join(folder, 'web'), pathname), { port: 4391, headers: { 'Content-Security-Policy': "default-src 'none'" } });
 });
 afterAll(async () => {
   await server.close();
