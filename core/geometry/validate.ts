@@ -25,8 +25,8 @@
  * boxes overlap gets the exact orient2d contact test (predicates.ts). Cost: O(n) for the
  * bucketing plus O(n·k), k = active segments (a few for ordinary section outlines).
  * Measured (npm run bench -- geometry): a 1,000,000-vertex circle-like ring validates in
- *   0.47 s on a shared 2-core machine at load ~17, 1.6× a native sort of its 1,000,000 x
- *   coordinates measured in the same run.
+ *   0.21–0.47 s warm on a shared 2-core machine at load ~16–17, 1.35–1.6× a native sort of its
+ *   1,000,000 x coordinates measured in the same run.
  * Containment (hole in outer, holes in each other, pieces in each other) samples up to 64
  * vertices of the inner ring with an exact point-in-ring test once no crossing was found.
  *

@@ -180,7 +180,7 @@ describe('validateRegion: cost on a large ring', () => {
     const ms = performance.now() - start;
     console.log(`validateRegion, 1,000,000-vertex ring: ${ms.toFixed(0)} ms (cold; npm run bench -- geometry measures it warm)`);
     expect(d).toEqual([]);
-    // Target: well under a second (measured 0.4–0.6 s warm on a shared 2-core machine, see the bench).
+    // Target: well under a second (measured 0.21–0.47 s warm on a shared 2-core machine, see the bench).
     // The assertion leaves room for a loaded test machine running files in parallel; a quadratic
     // sweep (about 10¹² pair tests) would take hours and fail it.
     expect(ms).toBeLessThan(8000);
