@@ -27,12 +27,15 @@
  * Measured (npm run bench -- geometry): a 1,000,000-vertex circle-like ring validates in
  *   0.21–0.47 s warm on a shared 2-core machine at load ~16–17, 1.35–1.6× a native sort of its
  *   1,000,000 x coordinates measured in the same run.
- * Containment (hole in outer, holes in each other, pieces in each other) samples up to 64
- * vertices of the inner ring with an exact point-in-ring test once no crossing was found.
+ * Containment (hole in outer, holes in each other, pieces in each other), once no crossing was
+ * found: with no contact at all between two boundaries, one vertex decides exactly (exact
+ * point-in-ring test, predicates.ts); when they touch, up to 4096 vertices and segment midpoints
+ * of the inner ring are located.
  *
  * Does not guarantee: arcs are checked on their flattening, so two boundaries closer than the
- * chord tolerance near an arc may be misjudged; containment through touching vertices is
- * decided by the sampled vertices. Reports at most MAX_CONTACT_DIAGNOSTICS contact problems.
+ * chord tolerance near an arc may be misjudged; containment between touching boundaries is
+ * decided by the sampled points (exact for straight rings of up to 2048 vertices whose touching
+ * boundaries share whole segments or meet only at vertices). Reports at most MAX_CONTACT_DIAGNOSTICS contact problems.
  * Sources: METHODS.md §1.1 ("Harmful input"), §2.6; Shamos & Hoey (1976) for sweep-based
  * intersection detection; Shewchuk (1997) for orient2d.
  */
@@ -47,7 +50,6 @@ export const MAX_COORDINATE = 1e9;
 export const ZERO_AREA_RATIO = 1e-12;
 export const FLATTEN_RATIO = 1e-6;
 export const MAX_CONTACT_DIAGNOSTICS = 50;
-const CONTAINMENT_SAMPLES = 64;
 
 export interface ValidationContext {
   readonly part?: string;
@@ -202,7 +204,7 @@ export function validateRegion(region: Region, context: ValidationContext = {}):
   });
   const contacts = contactDiagnostics(usable, context);
   diagnostics.push(...contacts.diagnostics);
-  diagnostics.push(...containmentDiagnostics(usable, contacts.crossed, context));
+  diagnostics.push(...containmentDiagnostics(usable, contacts, context));
   return diagnostics;
 }
 
@@ -286,13 +288,16 @@ interface ContactResult {
   readonly diagnostics: Diagnostic[];
   /** Pairs of ring indices (into the usable list) whose boundaries cross: "i,j" with i < j. */
   readonly crossed: Set<string>;
+  /** Pairs of rings whose boundaries touch (at points or along edges) without crossing. */
+  readonly touched: Set<string>;
 }
 
 function contactDiagnostics(rings: readonly CleanRing[], ctx: ValidationContext): ContactResult {
   const diagnostics: Diagnostic[] = [];
   const crossed = new Set<string>();
+  const touched = new Set<string>();
   const seen = new Set<string>();
-  if (rings.length === 0) return { diagnostics, crossed };
+  if (rings.length === 0) return { diagnostics, crossed, touched };
   const s = collectSegments(rings);
   const ends = new Uint32Array(s.x.length);
   for (let k = 0; k < ends.length; k++) ends[k] = segmentEnd(s, k);
@@ -300,8 +305,8 @@ function contactDiagnostics(rings: readonly CleanRing[], ctx: ValidationContext)
     const c = contactOf(s, a, b);
     if (c === CONTACT_NONE) return true;
     const ra = s.ringOf[a] ?? 0, rb = s.ringOf[b] ?? 0;
-    if (ra !== rb && c !== CONTACT_CROSS) return true;
     const key = ra < rb ? `${ra},${rb}` : `${rb},${ra}`;
+    if (ra !== rb && c !== CONTACT_CROSS) return void touched.add(key), true;
     if (ra !== rb && crossed.has(key)) return true;
     if (ra !== rb) crossed.add(key);
     const d = contactDiagnostic(s, rings, a, b, ctx);
@@ -312,7 +317,7 @@ function contactDiagnostics(rings: readonly CleanRing[], ctx: ValidationContext)
     diagnostics.push(d);
     return diagnostics.length < MAX_CONTACT_DIAGNOSTICS;
   });
-  return { diagnostics, crossed };
+  return { diagnostics, crossed, touched };
 }
 
 function contactDiagnostic(s: Segments, rings: readonly CleanRing[], a: number, b: number, ctx: ValidationContext): Diagnostic {
@@ -339,73 +344,110 @@ function contactDiagnostic(s: Segments, rings: readonly CleanRing[], a: number, 
 
 // ---------------------------------------------------------------------------------------------
 // Containment (run only between rings whose boundaries do not cross)
+//
+// Without any contact between two boundaries, every point of one ring is strictly inside or
+// strictly outside the other, so the first sample that is not on a boundary decides exactly.
+// When they touch, the samples are the inner ring's vertices and segment midpoints (up to
+// THOROUGH_SAMPLES), and the verdict is as good as that sampling.
 
-/** Classification of ring `inner` against ring `outer`: +1 inside, −1 outside, 0 undecided. */
-function ringInside(inner: Ring, outer: Ring): 1 | 0 | -1 {
+const THOROUGH_SAMPLES = 4096;
+
+/** Where a point lies relative to some material: +1 strictly in, −1 strictly out, 0 on a boundary. */
+type Locate = (x: number, y: number) => 1 | 0 | -1;
+
+/** Samples of ring `inner` located by `locate`: whether any was strictly in, any strictly out. */
+function sampleSides(inner: Ring, locate: Locate, thorough: boolean): { inside: boolean; outside: boolean } {
   const n = inner.xy.length >> 1;
-  const step = Math.max(1, Math.floor(n / CONTAINMENT_SAMPLES));
-  let decided: 1 | 0 | -1 = 0;
-  for (let i = 0; i < n; i += step) {
-    const side = pointInRing(outer, inner.xy[2 * i] ?? 0, inner.xy[2 * i + 1] ?? 0);
-    if (side === -1) return -1;
-    if (side === 1) decided = 1;
+  const step = thorough ? Math.max(1, Math.ceil(n / (THOROUGH_SAMPLES / 2))) : 1;
+  const sides = { inside: false, outside: false };
+  for (let pass = 0; pass < 2; pass++) {
+    for (let i = 0; i < n; i += step) {
+      const j = (i + 1) % n;
+      const x = pass === 0 ? (inner.xy[2 * i] ?? 0) : ((inner.xy[2 * i] ?? 0) + (inner.xy[2 * j] ?? 0)) / 2;
+      const y = pass === 0 ? (inner.xy[2 * i + 1] ?? 0) : ((inner.xy[2 * i + 1] ?? 0) + (inner.xy[2 * j + 1] ?? 0)) / 2;
+      const side = locate(x, y);
+      if (side === 1) sides.inside = true;
+      if (side === -1) sides.outside = true;
+      if ((!thorough && side !== 0) || (sides.inside && sides.outside)) return sides;
+    }
   }
-  if (decided !== 0) return decided;
-  // Every sampled vertex is on the boundary: try segment midpoints (chord midpoints).
-  for (let i = 0; i < n; i += step) {
-    const j = (i + 1) % n;
-    const side = pointInRing(outer, ((inner.xy[2 * i] ?? 0) + (inner.xy[2 * j] ?? 0)) / 2, ((inner.xy[2 * i + 1] ?? 0) + (inner.xy[2 * j + 1] ?? 0)) / 2);
-    if (side !== 0) return side;
-  }
-  return 0;
+  return sides;
 }
 
 function boxesOverlap(a: Bounds, b: Bounds): boolean {
   return a.minX <= b.maxX && b.minX <= a.maxX && a.minY <= b.maxY && b.minY <= a.maxY;
 }
 
-function containmentDiagnostics(rings: readonly CleanRing[], crossed: Set<string>, ctx: ValidationContext): Diagnostic[] {
+interface Pairs {
+  readonly crossed: Set<string>;
+  readonly touched: Set<string>;
+}
+
+const pairKey = (i: number, j: number): string => (i < j ? `${i},${j}` : `${j},${i}`);
+
+function containmentDiagnostics(rings: readonly CleanRing[], pairs: Pairs, ctx: ValidationContext): Diagnostic[] {
   const out: Diagnostic[] = [];
-  const boxes = rings.map((r) => r.bounds);
-  const index = new Map(rings.map((r, i) => [`${r.place.polygon},${r.place.ring}`, i]));
-  const uncrossed = (i: number, j: number): boolean => !crossed.has(i < j ? `${i},${j}` : `${j},${i}`);
+  const outerOf = new Map<number, number>();
+  rings.forEach((r, i) => { if (r.place.ring < 0) outerOf.set(r.place.polygon, i); });
   rings.forEach((r, i) => {
-    if (r.place.ring < 0 || r.degenerate === true) return;
-    const o = index.get(`${r.place.polygon},-1`);
+    const o = outerOf.get(r.place.polygon);
     const outer = o === undefined ? undefined : rings[o];
-    if (o === undefined || outer === undefined || outer.degenerate === true || !uncrossed(i, o)) return;
-    if (ringInside(r.ring, outer.ring) !== 1) {
+    if (r.place.ring < 0 || r.degenerate === true || o === undefined || outer === undefined || outer.degenerate === true) return;
+    if (pairs.crossed.has(pairKey(i, o))) return;
+    const sides = sampleSides(r.ring, (x, y) => pointInRing(outer.ring, x, y), pairs.touched.has(pairKey(i, o)));
+    if (sides.outside || !sides.inside) {
       out.push(makeDiagnostic('hole-outside', 'the hole does not lie inside its outer ring', ctx, r.place, 0, vertexAt(r.ring, 0)));
     }
   });
   for (let i = 0; i < rings.length; i++) {
     for (let j = i + 1; j < rings.length; j++) {
-      const a = rings[i], b = rings[j], ba = boxes[i], bb = boxes[j];
-      if (a === undefined || b === undefined || ba === undefined || bb === undefined) continue;
-      if (a.degenerate === true || b.degenerate === true) continue;
-      if (!boxesOverlap(ba, bb) || !uncrossed(i, j)) continue;
-      const d = pairOverlap(a, b, rings, index, ctx);
+      const a = rings[i], b = rings[j];
+      if (a === undefined || b === undefined || a.degenerate === true || b.degenerate === true) continue;
+      if (!boxesOverlap(a.bounds, b.bounds) || pairs.crossed.has(pairKey(i, j))) continue;
+      const d = pairOverlap(i, j, rings, pairs, ctx);
       if (d !== null) out.push(d);
     }
   }
   return out;
 }
 
-/** Holes of one polygon nested or coincident, or pieces inside one another's material. */
-function pairOverlap(a: CleanRing, b: CleanRing, rings: readonly CleanRing[], index: Map<string, number>, ctx: ValidationContext): Diagnostic | null {
+/** The material of polygon p: inside its outer ring and outside all its holes. */
+function materialLocator(p: number, rings: readonly CleanRing[]): Locate {
+  const own = rings.filter((r) => r.place.polygon === p && r.degenerate !== true);
+  return (x, y) => {
+    let result: 1 | 0 | -1 = 1;
+    for (const r of own) {
+      const side = pointInRing(r.ring, x, y);
+      if (side === 0) result = 0;
+      else if (r.place.ring < 0 ? side === -1 : side === 1) return -1;
+    }
+    return result;
+  };
+}
+
+/** Whether ring i touches any ring of polygon p. */
+function touchesPolygon(i: number, p: number, rings: readonly CleanRing[], pairs: Pairs): boolean {
+  return rings.some((r, k) => r.place.polygon === p && pairs.touched.has(pairKey(i, k)));
+}
+
+/** Two holes of one polygon overlapping (or coincident), or two pieces sharing material. */
+function pairOverlap(i: number, j: number, rings: readonly CleanRing[], pairs: Pairs, ctx: ValidationContext): Diagnostic | null {
+  const a = rings[i], b = rings[j];
+  if (a === undefined || b === undefined) return null;
   const sameHoles = a.place.polygon === b.place.polygon && a.place.ring >= 0 && b.place.ring >= 0;
   const twoOuters = a.place.polygon !== b.place.polygon && a.place.ring < 0 && b.place.ring < 0;
   if (!sameHoles && !twoOuters) return null;
-  const aInB = ringInside(a.ring, b.ring), bInA = ringInside(b.ring, a.ring);
-  if (sameHoles && (aInB !== -1 || bInA !== -1)) {
+  const thorough = pairs.touched.has(pairKey(i, j));
+  if (sameHoles) {
+    const aInB = sampleSides(a.ring, (x, y) => pointInRing(b.ring, x, y), thorough);
+    const bInA = sampleSides(b.ring, (x, y) => pointInRing(a.ring, x, y), thorough);
+    const coincident = !aInB.inside && !aInB.outside;
+    if (!aInB.inside && !bInA.inside && !coincident) return null;
     return makeDiagnostic('overlap', `the hole overlaps hole ${a.place.ring}`, ctx, b.place, 0, vertexAt(b.ring, 0));
   }
-  if (!twoOuters) return null;
-  // Piece a inside piece b's outer ring is fine only if it sits inside one of b's holes.
-  const inHoleOf = (inner: CleanRing, host: CleanRing): boolean =>
-    rings.some((h) => h.place.polygon === host.place.polygon && h.place.ring >= 0 && index.has(`${h.place.polygon},${h.place.ring}`) && ringInside(inner.ring, h.ring) === 1);
-  const aInside = aInB !== -1 && !inHoleOf(a, b);
-  const bInside = bInA !== -1 && !inHoleOf(b, a);
-  if (!aInside && !bInside) return null;
+  const aInB = sampleSides(a.ring, materialLocator(b.place.polygon, rings), touchesPolygon(i, b.place.polygon, rings, pairs));
+  const bInA = sampleSides(b.ring, materialLocator(a.place.polygon, rings), touchesPolygon(j, a.place.polygon, rings, pairs));
+  const coincident = !aInB.inside && !aInB.outside && !bInA.inside && !bInA.outside;
+  if (!aInB.inside && !bInA.inside && !coincident) return null;
   return makeDiagnostic('overlap', `the polygon overlaps polygon ${a.place.polygon} (pieces of one region may touch but not overlap)`, ctx, b.place, 0, vertexAt(b.ring, 0));
 }

@@ -154,6 +154,23 @@ describe('validateRegion: each diagnostic names the part, polygon, ring and vert
     expect(nested[0]).toMatchObject({ code: 'overlap', ring: 1 });
   });
 
+  it('overlap: two squares sharing parts of their top and bottom edges, whose boundaries touch but never cross', () => {
+    // [0,2]² and [1,3]×[0,2]: every contact is collinear or at a vertex, yet [1,2]×[0,2] is covered twice.
+    const d = validateRegion([piece(square(0, 0, 2, 2)), piece(square(1, 0, 3, 2))]);
+    expect(codes(d)).toEqual(['overlap']);
+    // Two identical pieces overlap everywhere.
+    expect(codes(validateRegion([piece(square(0, 0, 2, 2)), piece(square(0, 0, 2, 2))]))).toEqual(['overlap']);
+  });
+
+  it('hole-outside: a hole running along the outer ring\'s bottom edge and out through its side; a hole in the corner along two edges is fine', () => {
+    // The hole's top edge crosses the outer ring's right side at (10, 2).
+    const h = ringFromPoints([[8, 0], [8, 2], [12, 2], [12, 0]]);
+    expect(codes(validateRegion([piece(square(0, 0, 10, 10), [h])]))).toEqual(['hole-outside']);
+    // Touching only: the hole lies along the bottom and right edges, inside the outer ring.
+    const corner = ringFromPoints([[8, 0], [8, 2], [10, 2], [10, 0]]);
+    expect(validateRegion([piece(square(0, 0, 10, 10), [corner])])).toEqual([]);
+  });
+
   it('overlap: two pieces of one region crossing, and one piece lying inside another', () => {
     const crossing = validateRegion([piece(square(0, 0, 4, 4)), piece(square(3, 3, 6, 6))], { part: 'box girder' });
     expect(crossing).toHaveLength(1);
