@@ -78,6 +78,18 @@ describe('composition against closed forms', () => {
     expect(rel(mirrored.properties?.cx, -1355 / 76)).toBeLessThan(1e-12);
   });
 
+  it('a semicircle polygon part with one arc (bulge 1), mirrored and turned 90°, has cx = −4r/(3π) and Ix = π r⁴/8 (analytic_refs.csv semicircle, Gere & Timoshenko)', () => {
+    const r = 50;
+    const semi: Part = { ...common('half round', at(0, 0, 90, true)), type: 'polygon', outer: [[r, 0], [-r, 0]], outerBulges: [1, 0], holes: [] };
+    const got = sectionFromDocument(docOf([semi]));
+    expect(got.diagnostics).toEqual([]);
+    // Mirroring x → −x leaves the upper half-disc as it is; 90° CCW turns it into the left half.
+    expect(rel(got.properties?.area, 3926.9908169872415)).toBeLessThan(1e-13);
+    expect(rel(got.properties?.cx, -21.22065907891938)).toBeLessThan(1e-12);
+    expect(rel(got.properties?.Ix, 2454369.2606170257)).toBeLessThan(1e-12);
+    expect(rel(got.properties?.Iy, 685981.0040404109)).toBeLessThan(1e-12);
+  });
+
   it('a standard part from core/parts: a round bar of d = 50 mm has A = π d²/4 and Ix = π d⁴/64', () => {
     const bar: Part = { ...common('bar'), type: 'shape', shape: 'round-bar', params: { d: 50 } };
     const r = sectionFromDocument(docOf([bar]));
