@@ -34,8 +34,8 @@
  *
  * Does not guarantee: arcs are checked on their flattening, so two boundaries closer than the
  * chord tolerance near an arc may be misjudged; containment between touching boundaries is
- * decided by the sampled points (exact for straight rings of up to 2048 vertices whose touching
- * boundaries share whole segments or meet only at vertices). Reports at most MAX_CONTACT_DIAGNOSTICS contact problems.
+ * decided by the sampled points (exact for straight rings of up to 2048 vertices when every
+ * contact is a shared whole segment or a point that is a vertex of both rings). Reports at most MAX_CONTACT_DIAGNOSTICS contact problems.
  * Sources: METHODS.md §1.1 ("Harmful input"), §2.6; Shamos & Hoey (1976) for sweep-based
  * intersection detection; Shewchuk (1997) for orient2d.
  */
