@@ -8,7 +8,9 @@
  * Extra flags (e.g. a torsion option) go in PROPS_FLAGS and add their rows and keys in
  * `extraResults`; nothing else needs to change.
  */
+import { documentFromJson, parseJson } from '../../core/document/index.ts';
 import type { SectionProperties } from '../../core/properties/types.ts';
+import { MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type TorsionResult } from '../../core/torsion/index.ts';
 import { convertLength, defaultDisplaySet, formatSig, isLengthUnit, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
 import { loadSection, type LoadedSection } from '../load.ts';
@@ -18,6 +20,7 @@ export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'json', type: 'boolean', description: 'print one JSON object (keys below) instead of the table' },
   { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m: for GeoJSON the unit of its coordinates (required); for a document the unit to report in (default: its own)' },
   { name: 'eref', type: 'string', value: 'VALUE', description: 'documents with materials: reference modulus for the transformed section, e.g. 200GPa or 29000ksi (default: the first part\'s E)' },
+  { name: 'torsion', type: 'boolean', description: 'add finite-element torsion: J, Cw, shear centre xs, ys, meshElements, jRelativeError (one material only)' },
 ];
 
 /** The length dimension of every property (null: a pure number or an angle). */
@@ -71,7 +74,43 @@ interface ExtraResults {
 
 /** Results beyond the geometry, as JSON keys and table rows [symbol, value, unit, what]: the E-weighted values of a document with materials. */
 function extraResults(file: string, section: LoadedSection, flags: FlagValues, io: CliIo, unit: LengthUnit): ExtraResults {
-  return materialPropsResults(file, section, flags, io, unit);
+  const materials = materialPropsResults(file, section, flags, io, unit);
+  if (flags.torsion !== true) return materials;
+  const torsion = torsionResults(file, section, io, unit);
+  return { json: { ...materials.json, ...torsion.json }, rows: [...materials.rows, ...torsion.rows], errors: [...materials.errors, ...torsion.errors] };
+}
+
+/** --torsion: core/torsion on the section's region; refused when visible parts differ in material (one G only). */
+function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: LengthUnit): ExtraResults {
+  if (section.kind === 'document') {
+    const json = parseJson(io.readFile(file));
+    const parsed = json.ok ? documentFromJson(json.value) : null;
+    const used = new Set(parsed?.ok ? parsed.document.parts.filter((p) => p.visible && p.operation === 'add').map((p) => p.material ?? '(default)') : []);
+    if (used.size > 1) return { json: {}, rows: [], errors: [`${file}: --torsion: the finite-element torsion handles one material, but the parts use ${[...used].join(', ')}`] };
+  }
+  let r: TorsionResult;
+  try {
+    r = torsionConstants(section.region);
+  } catch (err) {
+    // Bad geometry, or a mesh/solver cap reached: say which, never a stack trace.
+    if (err instanceof MeshInputError || err instanceof MeshRefinementError || err instanceof TorsionSolveError) {
+      return { json: {}, rows: [], errors: [`${file}: --torsion: ${err.message}`] };
+    }
+    throw err;
+  }
+  const L = (v: number, power: number): number => convertLength(v, section.unit, unit, power);
+  const g = (v: number): string => formatSig(v, SIGNIFICANT, { grouping: ',' });
+  const values = { J: L(r.J, 4), Cw: L(r.Cw, 6), xs: L(r.xs, 1), ys: L(r.ys, 1), meshElements: r.meshElements, jRelativeError: r.jRelativeError, torsionComponents: r.components };
+  const rows: (readonly [string, string, string, string])[] = [
+    ['J', g(values.J), `${unit}⁴`, 'torsion constant (finite elements)'],
+    ['Cw', g(values.Cw), `${unit}⁶`, 'warping constant about the shear centre'],
+    ['xs', g(values.xs), unit, 'shear centre x (Trefftz)'],
+    ['ys', g(values.ys), unit, 'shear centre y (Trefftz)'],
+    ['meshElements', String(r.meshElements), '', '6-node triangles in the torsion mesh'],
+    ['jRelativeError', formatSig(r.jRelativeError * 100, 2), '%', 'estimated error of J (refined mesh and chord terms)'],
+  ];
+  if (r.components > 1) rows.push(['torsionComponents', String(r.components), '', 'separate pieces: each twists on its own, J values add']);
+  return { json: values, rows, errors: [] };
 }
 
 function describeInput(s: LoadedSection): string {
@@ -152,7 +191,7 @@ function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo):
 export const propsCommand: Command = {
   name: 'props',
   summary: 'section properties of a Sectionsmith document or a GeoJSON area',
-  usage: 'props FILE [--json] [--unit U] [--eref VALUE]',
+  usage: 'props FILE [--json] [--unit U] [--eref VALUE] [--torsion]',
   description: [
     'FILE is a Sectionsmith document (.json, "format": "sectionsmith-section") or a GeoJSON',
     'Polygon, MultiPolygon, Feature or FeatureCollection (RFC 7946) whose coordinates are lengths',
@@ -174,6 +213,10 @@ export const propsCommand: Command = {
     'transformedArea, transformedIx, transformedIy, massPerLength (kg/m), weightPerLength (N/m, or',
     'lbf/ft for in/ft), materialUnits and per-part modular ratios "materials". --eref VALUE sets the',
     'reference modulus (unit suffix Pa, kPa, MPa, GPa, psi or ksi; default MPa or psi).',
+    '',
+    '--torsion adds finite-element torsion of the (single-material) section: J (unit⁴), Cw (unit⁶,',
+    'about the shear centre), the Trefftz shear centre xs, ys (section coordinates), meshElements,',
+    'jRelativeError (estimated relative error of J) and torsionComponents (separate pieces).',
     '',
     'Bad input (unreadable file, JSON syntax, schema, geometry) exits with code 2 and names the',
     'file and the place: line and column, JSON path, or part, ring and vertex.',
