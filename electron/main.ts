@@ -159,13 +159,14 @@ function registerHandlers(): void {
   });
 }
 
-async function confirmDiscard(owner: BrowserWindow, documentName: string): Promise<boolean> {
+/** Main's own question before changes are lost; `documentName` null when closing the window. */
+async function confirmDiscard(owner: BrowserWindow, documentName: string | null): Promise<boolean> {
   const answer = await dialog.showMessageBox(owner, {
     type: 'warning',
     buttons: ['Discard Changes', 'Cancel'],
     defaultId: 1,
     cancelId: 1,
-    message: `"${documentName || 'Untitled section'}" has unsaved changes.`,
+    message: documentName === null ? 'The section has unsaved changes.' : `"${documentName || 'Untitled section'}" has unsaved changes.`,
     detail: 'If you continue, the changes since the last save are lost.',
   });
   return answer.response === 0;
@@ -201,7 +202,7 @@ function createWindow(): void {
   win.on('close', (event) => {
     if (!unsaved || closeConfirmed) return;
     event.preventDefault();
-    void confirmDiscard(win, win.getTitle()).then((discard) => {
+    void confirmDiscard(win, null).then((discard) => {
       if (!discard) return;
       closeConfirmed = true;
       win.close();
