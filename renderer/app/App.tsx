@@ -18,6 +18,7 @@ import { EntryPanel } from './EntryPanel.tsx';
 import { documentFromText } from './files.ts';
 import { MenuBar, type MenuAction } from './MenuBar.tsx';
 import { PartsPanel } from './PartsPanel.tsx';
+import { PartsPalette } from './PartsPalette.tsx';
 import { createResultsCache, shapeOutlineResolver } from './results.ts';
 import { ResultsPanel } from './ResultsPanel.tsx';
 import { fitView, zoomAt, type View } from './view.ts';
@@ -390,6 +391,7 @@ export function App(): ReactElement {
             ))}
           </div>
           <PartsPanel editor={editor} state={state} />
+          <PartsPalette editor={editor} state={state} />
           <EntryPanel editor={editor} state={state} />
         </aside>
         <main className="drawing">

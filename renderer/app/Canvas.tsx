@@ -219,6 +219,8 @@ function InteractionOverlay({ state, outlines, view }: { state: EditorState; out
   } else {
     for (const o of outlines) {
       if (!state.selection.includes(o.partId) || o.circle) continue;
+      // Standard parts: their outline points are chords of arcs, not corners worth marking.
+      if (state.doc.parts.find((p) => p.id === o.partId)?.type === 'shape') continue;
       for (const v of o.vertices) {
         const s = toScreen(view, v);
         items.push(<Rect key={`s${o.partId}-${s[0]}-${s[1]}`} x={s[0] - 2.5} y={s[1] - 2.5} width={5} height={5} fill={COLOURS.selection} listening={false} />);

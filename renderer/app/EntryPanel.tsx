@@ -6,6 +6,8 @@ import { useState, type ReactElement } from 'react';
 import type { Part } from '../../core/document/types.ts';
 import type { Editor, EditorState } from '../editor/editor.ts';
 import { parseNumber } from './numbers.ts';
+import { ShapeParameters } from './PartsPalette.tsx';
+import type { LengthUnit } from '../../core/units/index.ts';
 
 type Fields = Record<string, string>;
 
@@ -38,7 +40,7 @@ function Field({ id, label, f, set, title }: { id: string; label: string; f: Fie
   );
 }
 
-function SelectedPart({ editor, part, unit }: { editor: Editor; part: Part; unit: string }): ReactElement {
+function SelectedPart({ editor, part, unit }: { editor: Editor; part: Part; unit: LengthUnit }): ReactElement {
   const [error, setError] = useState('');
   const commit = (label: string, text: string, apply: (v: number) => Part | null): void => {
     const r = parseNumber(text, label);
@@ -78,6 +80,7 @@ function SelectedPart({ editor, part, unit }: { editor: Editor; part: Part; unit
           }}
         />
       </label>
+      {part.type === 'shape' && <ShapeParameters editor={editor} part={part} unit={unit} />}
       <div className="grid2">
         {part.type === 'rectangle' && num(`b (${unit})`, 'width', part.width, (v) => (v > 0 ? { ...part, width: v } : null))}
         {part.type === 'rectangle' && num(`h (${unit})`, 'height', part.height, (v) => (v > 0 ? { ...part, height: v } : null))}

@@ -70,6 +70,7 @@ export class Editor {
   private snap: SnapSettings = { grid: 10, gridOn: true, objectsOn: true, radius: 1 };
   private pickRadius = 1;
   private centroid: Vec | null = null;
+  private liveSnapshot: SectionDocument | null = null;
   private readonly listeners = new Set<() => void>();
   private readonly outlineCache = new WeakMap<SectionDocument, PartOutline[]>();
   private state: EditorState;
@@ -255,6 +256,7 @@ export class Editor {
   /** One command = one undo step. No step when nothing changed. */
   run(label: string, fn: (doc: SectionDocument, selection: readonly string[]) => { doc: SectionDocument; selection?: readonly string[] }): void {
     if (this.state.gesture) this.tool.key?.(this.context(), 'Escape');
+    if (this.liveSnapshot) this.commitLive('Change dimension');
     const out = fn(this.doc, this.selection);
     if (out.doc !== this.doc) this.commitStep(label, this.doc, out.doc, out.selection);
     else if (out.selection) this.selection = [...out.selection];
@@ -262,6 +264,7 @@ export class Editor {
   }
 
   undo(): void {
+    if (this.liveSnapshot) this.commitLive('Change dimension');
     if (this.state.gesture) {
       this.key('Escape');
       return;
@@ -288,6 +291,7 @@ export class Editor {
 
   /** Replace everything (new or opened file): history starts afresh and counts as saved. */
   load(doc: SectionDocument, file: OpenFile | null, dirty = false): void {
+    this.liveSnapshot = null;
     this.setDoc(doc);
     this.revision++;
     this.history = dirty ? { done: [], undone: [], savedAt: null } : emptyHistory();
@@ -380,6 +384,30 @@ export class Editor {
 
   reorder(id: string, direction: -1 | 1): void {
     this.run('Reorder', (doc) => ({ doc: reorderPart(doc, id, direction) }));
+  }
+
+  /**
+   * Live editing of one part (a dimension being typed): each call shows the change at once,
+   * outside history; commitLive records everything since the first call as one step.
+   */
+  livePart(id: string, fn: (p: Part) => Part): void {
+    this.liveSnapshot ??= this.doc;
+    this.setDoc({ ...this.doc, parts: this.doc.parts.map((p) => (p.id === id ? fn(p) : p)) });
+    this.emit();
+  }
+
+  commitLive(label: string): void {
+    const before = this.liveSnapshot;
+    this.liveSnapshot = null;
+    if (before && before !== this.doc) this.commitStep(label, before, this.doc);
+    this.emit();
+  }
+
+  /** Put back the document from before the live edit (Escape in a field). */
+  cancelLive(): void {
+    if (this.liveSnapshot) this.setDoc(this.liveSnapshot);
+    this.liveSnapshot = null;
+    this.emit();
   }
 
   /** A whole-document change as one step (e.g. a unit conversion). */

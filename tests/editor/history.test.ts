@@ -69,3 +69,26 @@ describe('undo history', () => {
     expect(ed.getState().undoLabel).toBe('Add plate');
   });
 });
+
+describe('live dimension edits', () => {
+  it('many live changes to one part become one undo step back to the value before the first', () => {
+    const ed = editorWith();
+    ed.addRectangle({ x: 0, y: 0, width: 10, height: 10 });
+    for (const w of [1, 12, 123]) ed.livePart('part-1', (p) => (p.type === 'rectangle' ? { ...p, width: w } : p));
+    ed.commitLive('Change b');
+    expect(ed.getState().undoLabel).toBe('Change b');
+    ed.undo();
+    const p = ed.getState().doc.parts[0];
+    expect(p?.type === 'rectangle' ? p.width : null).toBe(10);
+  });
+
+  it('cancelLive restores the document from before the live edit exactly', () => {
+    const ed = editorWith();
+    ed.addRectangle({ x: 0, y: 0, width: 10, height: 10 });
+    const before = ed.getState().doc;
+    ed.livePart('part-1', (p) => (p.type === 'rectangle' ? { ...p, width: 99 } : p));
+    ed.cancelLive();
+    expect(ed.getState().doc).toBe(before);
+    expect(ed.getState().undoLabel).toBe('Add plate');
+  });
+});
