@@ -139,3 +139,25 @@ export async function unsavedWorkIsOfferedBackInTheNextSession({ page, baseUrl, 
   await next.getByTestId('recovery-restore').click();
   await next.waitForFunction((n) => document.querySelectorAll('[data-testid^="part-row-"]').length === n - 1, parts);
 }
+
+export async function aSaveTheBrowserRefusesSaysWhyAndLeavesTheDocumentUnsaved({ page, baseUrl }) {
+  // A file handle whose writes are refused, as for a read-only or locked file.
+  await page.addInitScript(() => {
+    window.showSaveFilePicker = async ({ suggestedName }) => ({
+      kind: 'file',
+      name: suggestedName,
+      getFile: async () => new File([''], suggestedName),
+      createWritable: async () => { throw new DOMException('refused', 'NoModificationAllowedError'); },
+    });
+  });
+  await openApp(page, baseUrl);
+  await page.getByTestId('part-select-0').click();
+  await page.getByTestId('transform-delete').click();
+  await page.waitForFunction(() => document.title.includes('•'));
+  await menuItem(page, 'File', 'save-as');
+  const banner = page.getByTestId('error-banner');
+  await banner.waitFor({ timeout: 10_000 });
+  const message = await banner.textContent();
+  check(/locked or read-only/.test(message) && /unchanged/.test(message), `the message should say why the save failed: ${message}`);
+  check((await page.title()).includes('•'), `the document should still be marked unsaved, title ${JSON.stringify(await page.title())}`);
+}
