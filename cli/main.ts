@@ -6,11 +6,15 @@
 import { readFileSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import { EXIT_BAD_INPUT, EXIT_BUG, EXIT_OK, type CliIo, type Command } from './command.ts';
+import { memberCommand } from './commands/member.ts';
+import { partCommand } from './commands/part.ts';
 import { propsCommand } from './commands/props.ts';
 
 /** Every subcommand, in the order help lists them. */
 export const COMMANDS: readonly Command[] = [
   propsCommand,
+  partCommand,
+  memberCommand,
 ];
 
 const HELP_FLAG = { name: 'help', type: 'boolean', description: 'show this help' } as const;

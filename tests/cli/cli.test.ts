@@ -122,7 +122,8 @@ describe('bad input: exit code 2 and a message naming the file and the place', (
   it('no command or an unknown command is a usage error', async () => {
     expect((await cli()).code).toBe(2);
     const r = await cli('propz');
-    expect([r.code, r.err]).toEqual([2, 'sectionsmith: no command "propz"; commands: props (see sectionsmith --help)\n']);
+    expect([r.code, r.err]).toEqual([2, `sectionsmith: no command "propz"; commands: ${COMMANDS.map((c) => c.name).join(', ')} (see sectionsmith --help)\n`]);
+    expect(COMMANDS.map((c) => c.name)).toContain('props');
   });
 });
 
