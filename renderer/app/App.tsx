@@ -21,6 +21,7 @@ import { PartsPanel } from './PartsPanel.tsx';
 import { PartsPalette } from './PartsPalette.tsx';
 import { createResultsCache, shapeOutlineResolver } from './results.ts';
 import { ResultsPanel } from './ResultsPanel.tsx';
+import { TorsionClient, type TorsionState } from './torsion-client.ts';
 import { fitView, zoomAt, type View } from './view.ts';
 import { formatSig } from '../../core/units/index.ts';
 import exampleText from '../../assets/examples/footbridge-box-girder.section.json?raw';
@@ -103,6 +104,19 @@ export function App(): ReactElement {
   useEffect(() => {
     editor.setCentroid(results.properties ? [results.properties.cx, results.properties.cy] : null);
   }, [editor, results.properties]);
+
+  // Torsion by finite elements in a worker: started a moment after the drawing settles; any newer
+  // edit cancels a running solve, since its answer would describe an older section.
+  const [torsion, setTorsion] = useState<TorsionState>({ kind: 'idle' });
+  const torsionClient = useMemo(() => new TorsionClient(setTorsion), []);
+  const validDoc = results.properties ? state.doc : null;
+  useEffect(() => {
+    torsionClient.cancel();
+    if (!validDoc || state.gesture) return undefined;
+    const t = window.setTimeout(() => torsionClient.solve(validDoc), 400);
+    return () => window.clearTimeout(t);
+  }, [torsionClient, validDoc, state.gesture]);
+  useEffect(() => () => torsionClient.cancel(), [torsionClient]);
 
   // Window title: document name and an unsaved marker.
   const docName = state.file?.name ?? state.doc.name;
@@ -188,6 +202,8 @@ export function App(): ReactElement {
     [editor, host],
   );
 
+  const torsionRef = useRef<TorsionState>({ kind: 'idle' });
+  torsionRef.current = torsion;
   const exportAs = useCallback(
     async (kind: 'svg' | 'csv') => {
       const st = editor.getState();
@@ -200,7 +216,7 @@ export function App(): ReactElement {
       const file =
         kind === 'svg'
           ? { suggestedName: `${base}.svg`, mimeType: 'image/svg+xml', text: sectionSvg({ name: st.doc.name, unit: st.doc.unit, section, display }) }
-          : { suggestedName: `${base}.csv`, mimeType: 'text/csv', text: propertiesCsv({ name: st.doc.name, unit: st.doc.unit, properties: section.properties }) };
+          : { suggestedName: `${base}.csv`, mimeType: 'text/csv', text: propertiesCsv({ name: st.doc.name, unit: st.doc.unit, properties: section.properties, torsion: torsionRef.current.kind === 'done' && torsionRef.current.doc === st.doc ? torsionRef.current.result : null }) };
       try {
         if (await host.exportFile(file)) setBanner({ kind: 'info', title: `Exported ${file.suggestedName}`, lines: [] });
       } catch (err) {
@@ -452,7 +468,7 @@ export function App(): ReactElement {
             </label>
             <p className="muted small">Changing the document unit converts every length exactly, so the section stays the same physical size. The display unit changes only how results read.</p>
           </div>
-          <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={sig} />
+          <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={sig} torsion={torsion} current={state.doc} />
         </aside>
       </div>
       {asking && (

@@ -4,6 +4,8 @@ import type { LengthUnit } from '../../core/units/index.ts';
 import { formatSig, toDisplay, type DisplaySet } from '../../core/units/index.ts';
 import type { SectionProperties } from '../../core/properties/types.ts';
 import type { Results } from './results.ts';
+import type { TorsionState } from './torsion-client.ts';
+import type { SectionDocument } from '../../core/document/types.ts';
 import { RESULT_GROUPS, type ResultRow } from './result-rows.ts';
 
 interface Props {
@@ -11,7 +13,65 @@ interface Props {
   readonly unit: LengthUnit;
   readonly display: DisplaySet;
   readonly sig: number;
-  readonly onFocusDiagnostic?: (index: number) => void;
+  readonly torsion: TorsionState;
+  /** The document now shown: a torsion result for another one is stale. */
+  readonly current: SectionDocument;
+}
+
+function TorsionRows({ t, current, unit, display, sig }: { t: TorsionState; current: SectionDocument; unit: LengthUnit; display: DisplaySet; sig: number }): ReactElement {
+  const rows: [string, string, string, number, 'inertia' | 'warping' | 'length'][] = t.kind === 'done'
+    ? [
+        ['J', 'J', 'Saint-Venant torsion constant', t.result.J, 'inertia'],
+        ['Cw', 'Cw', 'warping constant', t.result.Cw, 'warping'],
+        ['xs', 'xs', 'shear centre x', t.result.xs, 'length'],
+        ['ys', 'ys', 'shear centre y', t.result.ys, 'length'],
+      ]
+    : [];
+  const stale = t.kind === 'done' && t.doc !== current;
+  return (
+    <table data-testid="torsion" data-state={t.kind}>
+      <caption>Torsion (finite elements, in the background)</caption>
+      <tbody>
+        {t.kind === 'running' && (
+          <tr>
+            <td colSpan={4}>
+              <progress max={1} value={t.fraction} data-testid="torsion-progress" /> solving… {Math.round(t.fraction * 100)} %
+            </td>
+          </tr>
+        )}
+        {t.kind === 'idle' && (
+          <tr>
+            <td colSpan={4} className="muted">waiting for the drawing to settle</td>
+          </tr>
+        )}
+        {t.kind === 'failed' && (
+          <tr>
+            <td colSpan={4} className="error">not computed: {t.message}</td>
+          </tr>
+        )}
+        {rows.map(([key, symbol, label, value, q]) => {
+          const d = display[q];
+          return (
+            <tr key={key} title={label} className={stale ? 'stale' : ''}>
+              <th scope="row">{symbol}</th>
+              <td className="value" data-testid={`result-${key}`} data-value={String(value)}>
+                {formatSig(toDisplay(value, unit, d), sig)}
+              </td>
+              <td className="unit">{d.label}</td>
+              <td className="label">{label}</td>
+            </tr>
+          );
+        })}
+        {t.kind === 'done' && (
+          <tr>
+            <td colSpan={4} className="muted small" data-testid="torsion-info">
+              {t.result.meshElements} elements, estimated error of J {formatSig(100 * t.result.jRelativeError, 2)} %, {Math.round(t.millis)} ms
+            </td>
+          </tr>
+        )}
+      </tbody>
+    </table>
+  );
 }
 
 /**
@@ -34,7 +94,7 @@ function shown(row: ResultRow, value: number, unit: LengthUnit, display: Display
   return { text: formatSig(toDisplay(value, unit, d), sig), unit: d.label };
 }
 
-export function ResultsPanel({ results, unit, display, sig }: Props): ReactElement {
+export function ResultsPanel({ results, unit, display, sig, torsion, current }: Props): ReactElement {
   const p = results.properties ?? results.stale;
   const stale = !results.properties && !!results.stale;
   return (
@@ -88,6 +148,7 @@ export function ResultsPanel({ results, unit, display, sig }: Props): ReactEleme
               </tbody>
             </table>
           ))}
+          {results.properties && <TorsionRows t={torsion} current={current} unit={unit} display={display} sig={sig} />}
         </div>
       )}
       <p className="caution" data-testid="caution">
