@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { isRegionValid, ringFromPoints, validateRegion } from '../../core/geometry/index.ts';
 import type { Diagnostic, Region, Ring } from '../../core/geometry/index.ts';
@@ -205,5 +206,45 @@ describe('validateRegion: cost on a large ring', () => {
     xy[2 * 500_000] = xy[20] ?? 0;
     xy[2 * 500_000 + 1] = xy[21] ?? 0;
     expect(codes(validateRegion(region))).toContain('self-intersection');
+  });
+});
+
+describe('validateRegion against a brute-force oracle', () => {
+  // Independent O(n²) check with integer arithmetic (exact for these small integers): two
+  // non-adjacent closed segments meeting, or two adjacent ones folding back over each other.
+  type P = readonly [number, number];
+  const orient = (a: P, b: P, c: P) => Math.sign((b[0] - a[0]) * (c[1] - a[1]) - (b[1] - a[1]) * (c[0] - a[0]));
+  const onSeg = (a: P, b: P, c: P) => Math.min(a[0], b[0]) <= c[0] && c[0] <= Math.max(a[0], b[0]) && Math.min(a[1], b[1]) <= c[1] && c[1] <= Math.max(a[1], b[1]);
+  const meet = (a: P, b: P, c: P, d: P) => {
+    const o1 = orient(a, b, c), o2 = orient(a, b, d), o3 = orient(c, d, a), o4 = orient(c, d, b);
+    if (o1 * o2 < 0 && o3 * o4 < 0) return true;
+    return (o1 === 0 && onSeg(a, b, c)) || (o2 === 0 && onSeg(a, b, d)) || (o3 === 0 && onSeg(c, d, a)) || (o4 === 0 && onSeg(c, d, b));
+  };
+  const bruteSelfIntersects = (pts: readonly P[]) => {
+    const n = pts.length;
+    const at = (i: number): P => pts[i % n] ?? [0, 0];
+    for (let i = 0; i < n; i++) {
+      for (let j = i + 1; j < n; j++) {
+        const adjacent = j === i + 1 || (i === 0 && j === n - 1);
+        if (!adjacent && meet(at(i), at(i + 1), at(j), at(j + 1))) return true;
+        if (adjacent) {
+          // Shared vertex v between u→v and v→w: folding back means w on line uv, pointing back.
+          const [u, v, w] = j === i + 1 ? [at(i), at(j), at(j + 1)] : [at(j), at(0), at(1)];
+          if (orient(u, v, w) === 0 && (v[0] - u[0]) * (w[0] - v[0]) + (v[1] - u[1]) * (w[1] - v[1]) < 0) return true;
+        }
+      }
+    }
+    return false;
+  };
+
+  it('reports self-intersection exactly when the O(n²) check finds one (random integer rings, 3–9 vertices)', () => {
+    const pt = fc.tuple(fc.integer({ min: 0, max: 6 }), fc.integer({ min: 0, max: 6 }));
+    fc.assert(
+      fc.property(fc.uniqueArray(pt, { minLength: 3, maxLength: 9, selector: ([x, y]) => `${x},${y}` }), (pts) => {
+        const d = validateRegion([piece(ringFromPoints(pts))]);
+        expect(codes(d).includes('self-intersection')).toBe(bruteSelfIntersects(pts));
+      }),
+      { seed: 42, numRuns: 500 },
+    );
   });
 });
