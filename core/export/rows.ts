@@ -56,3 +56,19 @@ export const PROPERTY_ROWS: readonly PropertyRow[] = [
 
 /** The rows shown in the drawing's small table (the CSV has every row). */
 export const DRAWING_TABLE_KEYS: readonly NumericKey[] = ['area', 'cx', 'cy', 'Ix', 'Iy', 'Ixy', 'I1', 'I2', 'thetaDeg', 'SxTop', 'SxBottom', 'SyLeft', 'SyRight', 'Zx', 'Zy', 'rx', 'ry'];
+
+/**
+ * For display only (the drawing's 4-figure table, never the CSV): round-off residue such as a
+ * centroid at 1e-14 mm on a symmetric section is shown as 0. A value counts as residue when it is
+ * below 1e-9 of the section's own size in its dimension (size = the larger overall dimension;
+ * area A; second moments Ip; angles 90°) — the same rule as the editor's results panel.
+ */
+export function displayedValue(row: PropertyRow, p: SectionProperties): number {
+  const size = Math.max(p.xMax - p.xMin, p.yMax - p.yMin);
+  const scale = row.quantity === null ? (row.plainUnit === 'deg' ? 90 : 1)
+    : row.quantity === 'area' ? p.area
+    : row.quantity === 'inertia' ? p.Ip
+    : size ** ({ length: 1, modulus: 3, warping: 6 } as const)[row.quantity];
+  const value = p[row.key];
+  return Math.abs(value) < 1e-9 * scale ? 0 : value;
+}

@@ -11,8 +11,8 @@
  *
  * Text: every piece of user text (names) is XML-escaped, and characters XML 1.0 forbids are
  * replaced by U+FFFD, so the file is well-formed whatever the names hold.
- * Numbers in the table use 4 significant figures in the display units; the full-precision
- * numbers are in the CSV export.
+ * Numbers in the table use 4 significant figures in the display units, round-off residue shown
+ * as 0 (rows.ts displayedValue); the full-precision numbers are in the CSV export.
  */
 import type { Region, Ring } from '../geometry/types.ts';
 import { CAUTION } from '../member/check.ts';
@@ -20,7 +20,7 @@ import type { SectionProperties } from '../properties/types.ts';
 import type { SectionResult } from '../section/index.ts';
 import { defaultDisplaySet, formatSig, toDisplay, type DisplaySet } from '../units/index.ts';
 import type { LengthUnit } from '../units/types.ts';
-import { DRAWING_TABLE_KEYS, PROPERTY_ROWS } from './rows.ts';
+import { displayedValue, DRAWING_TABLE_KEYS, PROPERTY_ROWS } from './rows.ts';
 
 export interface SvgInput {
   readonly name: string;
@@ -121,6 +121,11 @@ function regionBox(regions: readonly Region[]): { xMin: number; xMax: number; yM
   return Number.isFinite(box.xMin) ? box : { xMin: -1, xMax: 1, yMin: -1, yMax: 1 };
 }
 
+/** Principal axes along x and y (θ within round-off of 0° or 90°) would only redraw those axes. */
+function hasPrincipalAxes(p: SectionProperties): boolean {
+  return !p.isotropic && Math.min(Math.abs(p.thetaDeg), Math.abs(90 - Math.abs(p.thetaDeg))) > 1e-9 * 90;
+}
+
 function axesMarkup(p: SectionProperties, frame: Frame): string[] {
   const cx = frame.toX(p.cx);
   const cy = frame.toY(p.cy);
@@ -133,7 +138,7 @@ function axesMarkup(p: SectionProperties, frame: Frame): string[] {
     `<text x="${px(MARGIN + DRAW + 10)}" y="${px(cy + 4)}" font-size="12" fill="#3a5a8c">x</text>`,
     `<text x="${px(cx + 4)}" y="${px(TOP - 10)}" font-size="12" fill="#3a5a8c">y</text>`,
   ];
-  if (!p.isotropic && p.thetaDeg !== 0 && Math.abs(p.thetaDeg) !== 90) {
+  if (hasPrincipalAxes(p)) {
     const t = (p.thetaDeg * Math.PI) / 180;
     // Screen direction of axis 1 is (cos θ, −sin θ): the y flip.
     const [ux, uy] = [Math.cos(t), -Math.sin(t)];
@@ -161,7 +166,8 @@ function tableMarkup(p: SectionProperties, unit: LengthUnit, display: DisplaySet
   DRAWING_TABLE_KEYS.forEach((key, i) => {
     const row = PROPERTY_ROWS.find((r) => r.key === key);
     if (!row) return;
-    const value = row.quantity === null ? p[key] : toDisplay(p[key], unit, display[row.quantity]);
+    const shown = displayedValue(row, p);
+    const value = row.quantity === null ? shown : toDisplay(shown, unit, display[row.quantity]);
     const unitText = row.quantity === null ? (row.plainUnit === '-' ? '' : '°') : display[row.quantity].label;
     const y = TOP + (i + 1.5) * ROW;
     out.push(
@@ -192,7 +198,7 @@ export function sectionSvg(input: SvgInput): string {
     `<desc>Cross-section drawn by Sectionsmith, lengths in ${unit}, y up. ${escapeXml(CAUTION)}</desc>`,
     `<rect width="100%" height="100%" fill="#fff"/>`,
     `<text x="${MARGIN}" y="28" font-size="16" font-weight="bold">${escapeXml(input.name)}</text>`,
-    `<text x="${MARGIN}" y="46" font-size="11" fill="#555">Section coordinates in ${unit}, y up; centroid marked ⊕; dashed: centroidal x–y axes${p && !p.isotropic ? ', dotted: principal axes 1–2' : ''}</text>`,
+    `<text x="${MARGIN}" y="46" font-size="11" fill="#555">Section coordinates in ${unit}, y up; centroid marked ⊕; dashed: centroidal x–y axes${p && hasPrincipalAxes(p) ? ', dotted: principal axes 1–2' : ''}</text>`,
     `<g id="section" fill="#c9d6e8" stroke="#1d2b3a" stroke-width="1.2">`,
     ...regionPaths(section.region, frame, ''),
     `</g>`,

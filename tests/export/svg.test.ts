@@ -109,6 +109,25 @@ describe('SVG export', () => {
   });
 });
 
+describe('round-off residue in the drawing', () => {
+  it('shows a centroid of 1e-14 in and an angle of 6e-15° on a symmetric bar as 0 and draws no principal axes; 1e-3 in stays', () => {
+    const bar = document('bar', [rectangle('r', 'bar', 2, 8)]);
+    const section = sectionFromDocument(bar);
+    const props = section.properties;
+    if (!props) throw new Error('bar has no properties');
+    const noisy = { ...props, cx: 1e-14, Ixy: -4e-13, thetaDeg: 5.871e-15 };
+    const root = parseXml(sectionSvg({ name: 'bar', unit: 'in', section: { ...section, properties: noisy } }));
+    const texts = (byId(root, 'properties') as XmlElement).children.map((e) => e.text);
+    expect(texts[texts.indexOf('x̄') + 1]).toBe('0');
+    expect(texts[texts.indexOf('Ixy') + 1]).toBe('0');
+    expect(texts[texts.indexOf('θ') + 1]).toBe('0');
+    expect(byId(root, 'principal-axes')).toBeUndefined();
+    const offset = parseXml(sectionSvg({ name: 'bar', unit: 'in', section: { ...section, properties: { ...props, cx: 1e-3 } } }));
+    const offsetTexts = (byId(offset, 'properties') as XmlElement).children.map((e) => e.text);
+    expect(offsetTexts[offsetTexts.indexOf('x̄') + 1]).toBe('0.001');
+  });
+});
+
 describe('ringPathData arcs', () => {
   const frame = { toX: (x: number) => x, toY: (y: number) => -y, scale: 1 };
   it('an arc of bulge 0.5 over a chord of 2 has radius 2·(1 + 0.25)/(4·0.5) = 1.25, small, sweep-flag 1 (counter-clockwise in the section)', () => {
