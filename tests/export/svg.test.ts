@@ -124,7 +124,7 @@ describe('round-off residue in the drawing', () => {
     expect(byId(root, 'principal-axes')).toBeUndefined();
     const offset = parseXml(sectionSvg({ name: 'bar', unit: 'in', section: { ...section, properties: { ...props, cx: 1e-3 } } }));
     const offsetTexts = (byId(offset, 'properties') as XmlElement).children.map((e) => e.text);
-    expect(offsetTexts[offsetTexts.indexOf('x̄') + 1]).toBe('0.001');
+    expect(offsetTexts[offsetTexts.indexOf('x̄') + 1]).toBe('0.001000'); // 4 significant figures, trailing zeros kept
   });
 });
 
