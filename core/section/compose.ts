@@ -28,7 +28,7 @@
  */
 import type { Part, SectionDocument } from '../document/types.ts';
 import type { Diagnostic, Polygon, Region, Ring } from '../geometry/types.ts';
-import { BooleanError, arcContainsAngle, arcOfSegment, differenceRegions, normaliseRegion, transformRegion, unionRegions, validateRegion } from '../geometry/index.ts';
+import { BooleanError, MAX_COORDINATE, arcContainsAngle, arcOfSegment, differenceRegions, normaliseRegion, transformRegion, unionRegions, validateRegion } from '../geometry/index.ts';
 import { shapeRegion } from '../parts/index.ts';
 import { sectionProperties } from '../properties/index.ts';
 import type { SectionProperties } from '../properties/types.ts';
@@ -120,8 +120,23 @@ export function placedPart(part: Part, index: number, unit: LengthUnit): { regio
   }
   const { mirror, ...rigid } = part.placement;
   const placed = transformRegion(mirror ? mirroredLocal(local.region) : local.region, { ...rigid, mirror: false });
+  if (part.type === 'rectangle' || part.type === 'circle') return placedByConstruction(placed, part, label);
   const diagnostics = validateRegion(placed, { part: label });
   return diagnostics.length > 0 ? { region: [], diagnostics } : { region: normaliseRegion(placed), diagnostics: [] };
+}
+
+/**
+ * Rectangles and circles are valid by construction (the schema guarantees finite, positive
+ * sizes; four corners or two semicircles cannot cross themselves), so the full validation —
+ * which flattens arcs finely and costs milliseconds per hole — is skipped while dragging. Only
+ * what a placement can break is checked: the distance from the origin (validateRegion's limit).
+ */
+function placedByConstruction(placed: Region, part: Part, label: string): { region: Region; diagnostics: readonly Diagnostic[] } {
+  const box = regionBox(placed);
+  const reach = Math.max(Math.abs(box.minX), Math.abs(box.maxX), Math.abs(box.minY), Math.abs(box.maxY));
+  if (reach <= MAX_COORDINATE) return { region: normaliseRegion(placed), diagnostics: [] };
+  const message = `Part "${label}": it reaches ${reach} from the origin, beyond the limit of ${MAX_COORDINATE} (too few digits would remain for second moments).`;
+  return { region: [], diagnostics: [{ code: 'too-large', part: label, message, at: [part.placement.x, part.placement.y] }] };
 }
 
 // ---------------------------------------------------------------------------------------------
