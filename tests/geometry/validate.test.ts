@@ -247,4 +247,36 @@ describe('validateRegion against a brute-force oracle', () => {
       { seed: 42, numRuns: 500 },
     );
   });
+
+  // Axis-aligned integer rectangles: interiors overlap iff both overlap lengths are positive;
+  // one lies inside another (closed) iff its bounds lie within (interval arithmetic, exact).
+  const box = fc.tuple(fc.integer({ min: 0, max: 8 }), fc.integer({ min: 0, max: 8 }), fc.integer({ min: 1, max: 6 }), fc.integer({ min: 1, max: 6 }));
+  const interiorsOverlap = ([ax, ay, aw, ah]: number[], [bx, by, bw, bh]: number[]) =>
+    Math.min(ax + aw, bx + bw) - Math.max(ax, bx) > 0 && Math.min(ay + ah, by + bh) - Math.max(ay, by) > 0;
+  const within = ([ax, ay, aw, ah]: number[], [bx, by, bw, bh]: number[]) => ax >= bx && ay >= by && ax + aw <= bx + bw && ay + ah <= by + bh;
+  const cw = ([x, y, w, h]: number[]) => ringFromPoints([[x, y], [x, y + h], [x + w, y + h], [x + w, y]]);
+  const sq = ([x, y, w, h]: number[]) => square(x, y, x + w, y + h);
+
+  it('reports overlap of two pieces exactly when their interiors overlap (random rectangles that cross, touch, nest or coincide)', () => {
+    fc.assert(
+      fc.property(box, box, (a, b) => {
+        expect(codes(validateRegion([piece(sq(a)), piece(sq(b))])).includes('overlap')).toBe(interiorsOverlap(a, b));
+      }),
+      { seed: 42, numRuns: 400 },
+    );
+  });
+
+  it('reports two holes overlapping exactly when their interiors overlap, and hole-outside exactly when a hole leaves the outer ring', () => {
+    const outer = [2, 2, 8, 8];
+    fc.assert(
+      fc.property(box, box, (a, b) => {
+        const d = codes(validateRegion([piece(sq(outer), [cw(a), cw(b)])]));
+        const leaves = !within(a, outer) || !within(b, outer);
+        expect(d.includes('hole-outside')).toBe(leaves);
+        // Overlap between the holes is judged when neither crosses the outer ring.
+        if (!leaves) expect(d.includes('overlap')).toBe(interiorsOverlap(a, b));
+      }),
+      { seed: 42, numRuns: 400 },
+    );
+  });
 });
