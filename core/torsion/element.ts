@@ -80,11 +80,15 @@ export function shapeDerivatives(l1: number, l2: number, l3: number, g: readonly
  * Element stiffness (6 × 6, row-major, into ke) and load (into fe) for nodal coordinates
  * x[0..5], y[0..5] relative to the centroid (METHODS §7.2 area-form right-hand side).
  */
+const scratchX = new Float64Array(6);
+const scratchY = new Float64Array(6);
+
 export function elementStiffnessAndLoad(x: ArrayLike<number>, y: ArrayLike<number>, ke: Float64Array, fe: Float64Array): number {
   const g = elementGeometry(x, y);
   const area = g.twiceArea / 2;
-  const nx = new Float64Array(6);
-  const ny = new Float64Array(6);
+  // Module scratch (no per-element allocation); the function never re-enters itself.
+  const nx = scratchX;
+  const ny = scratchY;
   ke.fill(0);
   fe.fill(0);
   for (const [l1, l2, l3, w] of MIDEDGE_RULE) {

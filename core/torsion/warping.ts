@@ -218,15 +218,18 @@ function meshCentroid(q: QuadraticMesh): Moments {
 function massTimes(q: QuadraticMesh, X: Float64Array, Y: Float64Array, v: Float64Array): Float64Array {
   const out = new Float64Array(v.length);
   const e = q.elements;
+  const local = new Float64Array(6);
   for (let t = 0; t < e.length; t += 6) {
-    const xs = [X[e[t] ?? 0] ?? 0, X[e[t + 1] ?? 0] ?? 0, X[e[t + 2] ?? 0] ?? 0];
-    const ys = [Y[e[t] ?? 0] ?? 0, Y[e[t + 1] ?? 0] ?? 0, Y[e[t + 2] ?? 0] ?? 0];
-    const s = elementGeometry(xs, ys).twiceArea / 2 / 180;
+    const a = e[t]!;
+    const b = e[t + 1]!;
+    const c = e[t + 2]!;
+    const twice = (X[b]! - X[a]!) * (Y[c]! - Y[a]!) - (X[c]! - X[a]!) * (Y[b]! - Y[a]!);
+    const s = twice / 2 / 180;
+    for (let j = 0; j < 6; j++) local[j] = v[e[t + j]!]!;
     for (let i = 0; i < 6; i++) {
       let acc = 0;
-      for (let j = 0; j < 6; j++) acc += (MASS_T6[6 * i + j] ?? 0) * (v[e[t + j] ?? 0] ?? 0);
-      const ni = e[t + i] ?? 0;
-      out[ni] = (out[ni] ?? 0) + s * acc;
+      for (let j = 0; j < 6; j++) acc += MASS_T6[6 * i + j]! * local[j]!;
+      out[e[t + i]!]! += s * acc;
     }
   }
   return out;

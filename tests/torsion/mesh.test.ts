@@ -135,3 +135,14 @@ describe('bad input, caps and cancellation', () => {
     }
   });
 });
+
+describe('refineUniform', () => {
+  it('splits each triangle into four similar ones: 4× the triangles, same area, same smallest angle', async () => {
+    const { refineUniform, smallestAngleDeg } = await import('../../core/mesh/index.ts');
+    const m = meshRegion([polygon([[0, 0], [3, 0], [3, 1], [1, 1], [1, 2], [0, 2]])]);
+    const r = refineUniform(m);
+    expect(r.triangles.length).toBe(4 * m.triangles.length);
+    expect(meshArea(r.xy, r.triangles)).toBeCloseTo(4, 12);
+    expect(smallestAngleDeg(r.xy, r.triangles)).toBeCloseTo(m.minAngleDeg, 9);
+  });
+});
