@@ -251,11 +251,12 @@ describe('validateRegion against a brute-force oracle', () => {
   // Axis-aligned integer rectangles: interiors overlap iff both overlap lengths are positive;
   // one lies inside another (closed) iff its bounds lie within (interval arithmetic, exact).
   const box = fc.tuple(fc.integer({ min: 0, max: 8 }), fc.integer({ min: 0, max: 8 }), fc.integer({ min: 1, max: 6 }), fc.integer({ min: 1, max: 6 }));
-  const interiorsOverlap = ([ax, ay, aw, ah]: number[], [bx, by, bw, bh]: number[]) =>
+  type Box = readonly [x: number, y: number, w: number, h: number];
+  const interiorsOverlap = ([ax, ay, aw, ah]: Box, [bx, by, bw, bh]: Box) =>
     Math.min(ax + aw, bx + bw) - Math.max(ax, bx) > 0 && Math.min(ay + ah, by + bh) - Math.max(ay, by) > 0;
-  const within = ([ax, ay, aw, ah]: number[], [bx, by, bw, bh]: number[]) => ax >= bx && ay >= by && ax + aw <= bx + bw && ay + ah <= by + bh;
-  const cw = ([x, y, w, h]: number[]) => ringFromPoints([[x, y], [x, y + h], [x + w, y + h], [x + w, y]]);
-  const sq = ([x, y, w, h]: number[]) => square(x, y, x + w, y + h);
+  const within = ([ax, ay, aw, ah]: Box, [bx, by, bw, bh]: Box) => ax >= bx && ay >= by && ax + aw <= bx + bw && ay + ah <= by + bh;
+  const cw = ([x, y, w, h]: Box) => ringFromPoints([[x, y], [x, y + h], [x + w, y + h], [x + w, y]]);
+  const sq = ([x, y, w, h]: Box) => square(x, y, x + w, y + h);
 
   it('reports overlap of two pieces exactly when their interiors overlap (random rectangles that cross, touch, nest or coincide)', () => {
     fc.assert(
@@ -267,7 +268,7 @@ describe('validateRegion against a brute-force oracle', () => {
   });
 
   it('reports two holes overlapping exactly when their interiors overlap, and hole-outside exactly when a hole leaves the outer ring', () => {
-    const outer = [2, 2, 8, 8];
+    const outer: Box = [2, 2, 8, 8];
     fc.assert(
       fc.property(box, box, (a, b) => {
         const d = codes(validateRegion([piece(sq(outer), [cw(a), cw(b)])]));
