@@ -78,7 +78,7 @@ export function App(): ReactElement {
   const results = compute(state.doc);
   const outlines = editor.outlines(state.doc);
 
-  const [size, setSize] = useState({ width: 800, height: 600 });
+  const [size, setSize] = useState({ width: 0, height: 0 });
   const [view, setView] = useState<View>({ scale: 0.5, ox: 400, oy: 300 });
   const [overlays, setOverlays] = useState<Overlays>({ centroid: true, axes: true, principal: true, pna: false, fibres: false, dimensions: true });
   const [displayId, setDisplayId] = useState('document');

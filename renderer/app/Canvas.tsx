@@ -163,7 +163,7 @@ function ResultsOverlay({ p, view, overlays, width, height }: { p: SectionProper
     const x = toScreen(view, [p.pnaX, 0])[0];
     items.push(<Line key="pnax" points={[0, y, width, y]} stroke={COLOURS.pna} strokeWidth={1} dash={[3, 3]} />);
     items.push(<Line key="pnay" points={[x, 0, x, height]} stroke={COLOURS.pna} strokeWidth={1} dash={[3, 3]} />);
-    items.push(<Text key="pnal" x={width - 150} y={y - 15} text="plastic neutral axis (x)" fontSize={11} fill={COLOURS.pna} />);
+    items.push(<Text key="pnal" x={30} y={y + 3} text="plastic neutral axis (x)" fontSize={11} fill={COLOURS.pna} />);
   }
   if (overlays.fibres) {
     const top = toScreen(view, [p.cx, p.yMax]);
@@ -182,11 +182,11 @@ function ResultsOverlay({ p, view, overlays, width, height }: { p: SectionProper
     items.push(<Line key="dw" points={[a[0], yb, b[0], yb]} stroke={COLOURS.dimension} strokeWidth={1} />);
     items.push(<Line key="dwa" points={[a[0], a[1] + 4, a[0], yb + 4]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
     items.push(<Line key="dwb" points={[b[0], a[1] + 4, b[0], yb + 4]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
-    items.push(<Text key="dwl" x={(a[0] + b[0]) / 2 - 30} y={yb + 4} text={formatSig(p.xMax - p.xMin, 5)} fontSize={11} fill={COLOURS.dimension} />);
+    items.push(<Text key="dwl" x={(a[0] + b[0]) / 2 - 30} y={yb + 4} text={tick(Number((p.xMax - p.xMin).toPrecision(6)))} fontSize={11} fill={COLOURS.dimension} />);
     items.push(<Line key="dh" points={[xl, a[1], xl, b[1]]} stroke={COLOURS.dimension} strokeWidth={1} />);
     items.push(<Line key="dha" points={[a[0] - 4, a[1], xl - 4, a[1]]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
     items.push(<Line key="dhb" points={[a[0] - 4, b[1], xl - 4, b[1]]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
-    items.push(<Text key="dhl" x={xl - 16} y={(a[1] + b[1]) / 2 + 24} rotation={-90} text={formatSig(p.yMax - p.yMin, 5)} fontSize={11} fill={COLOURS.dimension} />);
+    items.push(<Text key="dhl" x={xl - 16} y={(a[1] + b[1]) / 2 + 24} rotation={-90} text={tick(Number((p.yMax - p.yMin).toPrecision(6)))} fontSize={11} fill={COLOURS.dimension} />);
   }
   if (overlays.centroid) {
     items.push(
