@@ -16,6 +16,7 @@ import {
   isAppUrl, isNavigationAllowed, PRIVILEGED_SCHEMES, responseHeaders, windowOptions,
 } from '../../electron/window-options.ts';
 import { HOST_COMMANDS } from '../../renderer/host/host.ts';
+import { parseDocument, serialiseDocument } from '../../core/document/index.ts';
 
 const electronDir = path.join(import.meta.dirname, '..', '..', 'electron');
 
@@ -141,6 +142,16 @@ describe('payload validation', () => {
     expect(checkedDocumentText(good)).toBe(good);
     expect(() => checkedDocumentText('{"format": ')).toThrow(/document:save: the text is not JSON/);
     expect(() => checkedDocumentText(JSON.stringify({ format: 'sectionsmith-section', version: 1, name: 'n', unit: 'furlong', parts: [], materials: [], defaultMaterial: null }))).toThrow(/unit: expected a length unit/);
+  });
+});
+
+describe('documents the app writes pass the save check', () => {
+  it('the shipped example, read and serialised by core/document, is accepted by document:save', () => {
+    const file = path.join(import.meta.dirname, '..', '..', 'assets', 'examples', 'footbridge-box-girder.section.json');
+    const parsed = parseDocument(readFileSync(file, 'utf8'), 'footbridge-box-girder.section.json');
+    if (!parsed.ok) throw new Error(parsed.errors.map((e) => e.message).join('; '));
+    const text = serialiseDocument(parsed.document);
+    expect(checkedDocumentText(text)).toBe(text);
   });
 });
 
