@@ -155,3 +155,39 @@ export async function frameTimeWhileDraggingTheExampleIsReported({ page, baseUrl
   console.log(`    editor drag: ${gaps.length} frames, mean ${mean.toFixed(1)} ms, p95 ${p95.toFixed(1)} ms; recompute mean ${rc.toFixed(2)} ms, max ${Math.max(...recompute).toFixed(2)} ms`);
   check(mean < 50, `mean frame time while dragging: expected under 50 ms, got ${mean.toFixed(1)} ms`);
 }
+
+export async function catalogueShapeStaysParametricAndADimensionChangeUpdatesResultsAsOneStep({ page, baseUrl }) {
+  await openApp(page, baseUrl);
+  await newSection(page);
+  await page.getByTestId('document-unit').selectOption('in');
+  await page.locator('summary', { hasText: 'Standard parts' }).click();
+  await page.getByTestId('catalogue-search').fill('W14X90');
+  await page.getByTestId('catalogue-result-0').click();
+  await page.getByTestId('result-Ix').waitFor();
+  // AISC Shapes Database v15.0, W14X90: Ix = 999 in⁴; the fillet model (r = kdes − tf) is expected within 1.5 %.
+  near('W14X90 Ix against AISC v15.0 (999 in⁴)', await resultValue(page, 'Ix'), 999, 0.015);
+  const before = await resultValue(page, 'Ix');
+  await page.getByTestId('param-tf').fill('0.9');
+  await page.getByTestId('param-tf').press('Enter');
+  const after = await resultValue(page, 'Ix');
+  check(after > before, `thicker flanges must raise Ix (${before} → ${after})`);
+  const undoTitle = await page.getByTestId('undo').getAttribute('title');
+  check(undoTitle === 'Undo Change dimension', `one undo step for the typed dimension, got "${undoTitle}"`);
+  await page.getByTestId('undo').click();
+  check((await resultValue(page, 'Ix')) === before, 'undo restores the catalogue dimensions');
+  await page.getByTestId('part-select-0').click();
+  await page.getByTestId('convert-to-outline').click();
+  const kind = await page.getByTestId('part-row-0').innerText();
+  check(/outline/.test(kind), `after converting, the part is an outline, got "${kind}"`);
+  near('Ix unchanged by converting (arcs kept exactly)', await resultValue(page, 'Ix'), before, 1e-9);
+}
+
+export async function torsionRunsInTheBackgroundAndMatchesTheThinStripClosedForm({ page, baseUrl }) {
+  await openApp(page, baseUrl);
+  await newSection(page);
+  // A 200 × 10 strip: J = (b·t³/3)(1 − 0.630·t/b) (Roark, Table 10.7, case 4; Timoshenko & Goodier §109).
+  await typePlate(page, { b: 200, h: 10 });
+  await page.waitForFunction(() => document.querySelector('[data-testid="torsion"]')?.getAttribute('data-state') === 'done', null, { timeout: 40_000 });
+  const J = await resultValue(page, 'J');
+  near('J of a 200 × 10 strip', J, ((200 * 10 ** 3) / 3) * (1 - (0.63 * 10) / 200), 0.01);
+}
