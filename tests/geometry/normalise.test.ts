@@ -1,7 +1,8 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { normaliseRegion, ringFromPoints, ringSignedArea } from '../../core/geometry/index.ts';
+import { normaliseRegion, reverseRing, ringFromPoints, ringSignedArea } from '../../core/geometry/index.ts';
 import type { Region } from '../../core/geometry/index.ts';
-import { piece, pointsOf, square } from './helpers.ts';
+import { piece, pointsOf, square, starRing } from './helpers.ts';
 
 const only = (region: Region) => {
   const p = region[0];
@@ -61,5 +62,27 @@ describe('normaliseRegion', () => {
   it('leaves an already normalised square unchanged', () => {
     const ring = square(0, 0, 3, 1);
     expect(only(normaliseRegion([piece(ring)])).outer).toEqual(ring);
+  });
+
+  it('gives the same ring, up to its start vertex, whichever way the input ran (METHODS.md §11: reverse then re-normalise)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: 1, max: 9, noNaN: true }), { minLength: 3, maxLength: 16 }), fc.boolean(), (radii, asHole) => {
+        const ring = starRing(1, -2, radii);
+        const norm = (r: typeof ring) => {
+          const p = normaliseRegion([asHole ? piece(square(-20, -20, 20, 20), [r]) : piece(r)])[0];
+          return asHole ? p?.holes[0] : p?.outer;
+        };
+        const a = norm(ring), b = norm(reverseRing(ring));
+        expect(a && b).toBeTruthy();
+        if (a === undefined || b === undefined) return;
+        expect(Math.sign(ringSignedArea(a))).toBe(asHole ? -1 : 1);
+        expect(ringSignedArea(b)).toBeCloseTo(ringSignedArea(a), 10);
+        // Same cyclic vertex sequence: rotate b to start where a starts.
+        const pa = pointsOf(a).map((q) => q.join(',')), pb = pointsOf(b).map((q) => q.join(','));
+        const k = pb.indexOf(pa[0] ?? '');
+        expect([...pb.slice(k), ...pb.slice(0, k)]).toEqual(pa);
+      }),
+      { seed: 42, numRuns: 200 },
+    );
   });
 });
