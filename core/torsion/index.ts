@@ -47,6 +47,8 @@ export interface TorsionAnalysis {
 export interface TorsionStressField {
   /** Node coordinates (x, y pairs), same as the analysis mesh. */
   readonly xy: Float64Array;
+  /** Four small triangles per T6 element over all its nodes (CCW), for drawing the map. */
+  readonly triangles: Int32Array;
   /** Shear stress components per unit torque at the nodes, τ/T in 1/length³. */
   readonly tauX: Float64Array;
   readonly tauY: Float64Array;
@@ -139,5 +141,5 @@ export function torsionStressField(analysis: TorsionAnalysis): TorsionStressFiel
     magnitude[i] = Math.hypot(tauX[i] ?? 0, tauY[i] ?? 0);
     maxMagnitude = Math.max(maxMagnitude, magnitude[i] ?? 0);
   }
-  return { xy: mesh.xy, tauX, tauY, magnitude, maxMagnitude, unboundedAtCorners: analysis.reentrantCorners > 0 };
+  return { xy: mesh.xy, triangles: childTriangles(mesh), tauX, tauY, magnitude, maxMagnitude, unboundedAtCorners: analysis.reentrantCorners > 0 };
 }

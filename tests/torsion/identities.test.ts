@@ -73,6 +73,9 @@ describe('torsional shear stress per unit torque', () => {
     }
     expect(centre).toBeLessThan(0.1 * peak);
     expect(f.unboundedAtCorners).toBe(false);
+    // The drawing triangles use every node, four per T6 element.
+    expect(f.triangles.length).toBe(4 * 3 * a.result.meshElements);
+    expect(new Set(f.triangles).size).toBe(a.result.meshNodes);
   });
   it('an L-shaped angle is flagged: its sharp re-entrant corner makes the true peak unbounded', () => {
     const a = torsionAnalysis([polygon([[0, 0], [100, 0], [100, 10], [10, 10], [10, 100], [0, 100]])]);
