@@ -36,7 +36,13 @@ const HANDLE_DB = 'sectionsmith-file-handles';
 
 const DOCUMENT_TYPES: PickerType[] = [{ description: 'Sectionsmith section or GeoJSON', accept: { 'application/json': ['.json', '.geojson'] } }];
 const SAVE_TYPES: PickerType[] = [{ description: 'Sectionsmith section', accept: { 'application/json': ['.json'] } }];
-const EXPORT_EXTENSIONS: Readonly<Record<string, string>> = { 'image/svg+xml': '.svg', 'text/csv': '.csv', 'text/html': '.html', 'application/json': '.json', 'text/plain': '.txt' };
+const EXPORT_TYPES: Readonly<Record<string, PickerType>> = {
+  'image/svg+xml': { description: 'SVG drawing', accept: { 'image/svg+xml': ['.svg'] } },
+  'text/csv': { description: 'CSV table', accept: { 'text/csv': ['.csv'] } },
+  'text/html': { description: 'HTML report', accept: { 'text/html': ['.html'] } },
+  'application/json': { description: 'JSON', accept: { 'application/json': ['.json'] } },
+  'text/plain': { description: 'Text', accept: { 'text/plain': ['.txt'] } },
+};
 
 export interface BrowserHost extends Host {
   /** Replace the window.confirm fallback with the UI's own dialog. */
@@ -95,8 +101,8 @@ export function createBrowserHost(win: Window & typeof globalThis = window): Bro
         download(win, file.suggestedName, file.mimeType, file.text);
         return true;
       }
-      const extension = EXPORT_EXTENSIONS[file.mimeType] ?? '.txt';
-      const handle = await cancellable(pickers.showSaveFilePicker({ suggestedName: file.suggestedName, types: [{ description: file.mimeType, accept: { [file.mimeType]: [extension] } }] }));
+      const type = EXPORT_TYPES[file.mimeType];
+      const handle = await cancellable(pickers.showSaveFilePicker({ suggestedName: file.suggestedName, types: type ? [type] : [] }));
       if (!handle) return false;
       await writeThrough(handle, file.text);
       return true;
