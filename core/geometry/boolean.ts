@@ -24,7 +24,9 @@
  *   input coordinates may move by that one-ulp snap, no more.
  * Errors: bad input (non-finite numbers) and the library's own exceptions ("Infinite loop…",
  *   "Unable to complete output ring…", invalid input) become a BooleanError naming the
- *   operation, the context and the parts. Does not: validate (validateRegion first).
+ *   operation, the context and the parts. Size: the library's runaway guard stops at 1,000,000
+ *   queued sweep events (two per segment), so inputs of more than about 500,000 segments after
+ *   flattening fail with a BooleanError. Does not: validate (validateRegion first).
  * Source: polygon-clipping (M. Fogel), a Martínez–Rueda–Feito sweep; METHODS.md §2.6.
  */
 import polygonClipping from 'polygon-clipping';
