@@ -196,8 +196,7 @@ function lockDown(contents: WebContents): void {
 
 function createWindow(): void {
   const win = new BrowserWindow(windowOptions(PRELOAD));
-  window = win;
-  lockDown(win.webContents);
+  window = win; // its web contents were locked down on 'web-contents-created'
   win.once('ready-to-show', () => win.show());
   win.on('close', (event) => {
     if (!unsaved || closeConfirmed) return;
@@ -214,6 +213,7 @@ function createWindow(): void {
   void win.loadURL(APP_ENTRY_URL);
 }
 
+// Every web contents (the window's, and any a future feature creates) is locked down at birth.
 app.on('web-contents-created', (_event, contents) => lockDown(contents));
 
 // macOS passes files opened from Finder this way, before or after ready.
