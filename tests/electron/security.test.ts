@@ -66,6 +66,8 @@ describe('window options', () => {
     expect(main).toMatch(/setPermissionCheckHandler\(denyPermissionCheck\)/);
     expect(main).toMatch(/setWindowOpenHandler\(denyWindowOpen\)/);
     expect(main).toMatch(/'will-navigate'/);
+    // …applied to every web contents when it is created.
+    expect(main).toMatch(/app\.on\('web-contents-created', \(_event, contents\) => lockDown\(contents\)\)/);
   });
 });
 
