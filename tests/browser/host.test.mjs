@@ -161,3 +161,22 @@ export async function aSaveTheBrowserRefusesSaysWhyAndLeavesTheDocumentUnsaved({
   check(/locked or read-only/.test(message) && /unchanged/.test(message), `the message should say why the save failed: ${message}`);
   check((await page.title()).includes('•'), `the document should still be marked unsaved, title ${JSON.stringify(await page.title())}`);
 }
+
+export async function exportThroughAFileHandleWritesTheChosenFile({ page, baseUrl }) {
+  await withPrivateFilePickers(page);
+  await openApp(page, baseUrl);
+  const unit = await page.getByTestId('document-unit').inputValue();
+  const area = await resultValue(page, 'area');
+  await menuItem(page, 'File', 'export-csv');
+  await page.waitForFunction(async () => {
+    for await (const name of (await navigator.storage.getDirectory()).keys()) if (name.endsWith('.csv')) return true;
+    return false;
+  });
+  const csv = await page.evaluate(async () => {
+    const root = await navigator.storage.getDirectory();
+    for await (const [name, handle] of root.entries()) if (name.endsWith('.csv')) return (await handle.getFile()).text();
+    return '';
+  });
+  const [header, values] = csv.trim().split('\r\n').map((line) => line.split(','));
+  same('CSV area written through the handle', Number(values[header.indexOf(`area [${unit}^2]`)]), area);
+}
