@@ -21,7 +21,7 @@
  * the theoretical stress unbounded there (METHODS §7.6); the field shows a finite mesh value.
  */
 import type { Region } from '../geometry/types.ts';
-import { MeshCancelledError, meshRegion } from '../mesh/index.ts';
+import { MeshCancelledError, MeshInputError, meshRegion } from '../mesh/index.ts';
 import { TorsionCancelledError } from './errors.ts';
 import type { TorsionOptions, TorsionResult } from './types.ts';
 import { bandOrdered, childTriangles, nodalGradient, prolongate, quadraticMesh, solveWarping, type QuadraticMesh, type WarpingSolution } from './warping.ts';
@@ -65,10 +65,17 @@ function stage(onProgress: TorsionOptions['onProgress'], from: number, to: numbe
   return (f) => onProgress(from + (to - from) * f);
 }
 
+function checkedOption(name: string, value: number, lo: number, hi: number): number {
+  if (!(value >= lo && value <= hi)) {
+    throw new MeshInputError({ code: 'bad-parameter', message: `torsion option ${name} = ${value} is outside ${lo}..${hi}` });
+  }
+  return value;
+}
+
 export function torsionAnalysis(region: Region, options: TorsionOptions = {}): TorsionAnalysis {
-  const layers = options.layers ?? defaultLayers;
-  const tolerance = options.tolerance ?? 1e-10;
-  const maxIterations = options.maxIterations ?? 20_000;
+  const layers = checkedOption('layers', options.layers ?? defaultLayers, 1, 64);
+  const tolerance = checkedOption('tolerance', options.tolerance ?? 1e-10, 1e-15, 1e-3);
+  const maxIterations = Math.floor(checkedOption('maxIterations', options.maxIterations ?? 20_000, 1, 10_000_000));
   try {
     const base = meshRegion(region, {
       layers: layers / 2,

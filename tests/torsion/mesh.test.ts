@@ -108,6 +108,10 @@ describe('bad input, caps and cancellation', () => {
     expect(codeOf(() => meshRegion([]))).toBe('empty-section');
     expect(codeOf(() => meshRegion([polygon([[0, 0], [1, 0], [2, 0]])]))).toBe('zero-area');
   });
+  it('out-of-range torsion options are rejected as bad-parameter, naming the option', () => {
+    expect(codeOf(() => torsionConstants([rectangle(0, 0, 1, 1)], { layers: 0.2 }))).toBe('bad-parameter');
+    expect(() => torsionConstants([rectangle(0, 0, 1, 1)], { tolerance: 0 })).toThrow(/tolerance/);
+  });
   it('the point cap throws MeshRefinementError', () => {
     expect(() => meshRegion([rectangle(0, 0, 100, 1)], { maxPoints: 50 })).toThrow(MeshRefinementError);
   });
