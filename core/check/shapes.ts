@@ -1,0 +1,113 @@
+/**
+ * From a table row's published dimensions to a part of the parts library, with the modelling
+ * conventions of core/catalogue (the same rules, applied to any row instead of the stored
+ * AISC v15.0 rows; tests/check/shapes.test.ts holds them equal to the catalogue's own params
+ * for every catalogue entry, so the two cannot drift apart):
+ *   W, M, HP, WT, MT — parallel flanges, root fillet r = kdes − tf.
+ *   S, C, ST — inner flange slope 2:12, tf the average thickness, r = kdes − flange thickness
+ *     at the web face.
+ *   MC — parallel flanges at the average tf, r = kdes − tf.
+ *   L — sharp root and toes; the longer leg b along y.
+ *   HSS (rectangular) — design wall tdes, outside corner radius 2·tdes.
+ *   HSS (round), PIPE — OD with tdes; a round HSS uses the nominal OD of its label when the
+ *     printed OD is that value rounded.
+ * A column "r" (root fillet radius) or "slope", when the table has one, replaces the convention.
+ *
+ * Units: any length unit, consistently (the conventions are ratios of the dimensions, except
+ *   the label's nominal OD, which is read in inches and used only for inch tables).
+ */
+import type { LengthUnit } from '../units/types.ts';
+
+/** The shape families a table row may name (AISC type codes). */
+export const TABLE_FAMILIES = ['W', 'M', 'HP', 'S', 'C', 'MC', 'WT', 'MT', 'ST', 'L', 'HSS', 'PIPE'] as const;
+export type TableFamily = (typeof TABLE_FAMILIES)[number];
+
+export function isTableFamily(value: string): value is TableFamily {
+  return (TABLE_FAMILIES as readonly string[]).includes(value);
+}
+
+/** The family named by a type cell ("w", "Pipe", "hss" …), or undefined. */
+export function familyOf(text: string): TableFamily | undefined {
+  const key = text.trim().toUpperCase();
+  return isTableFamily(key) ? key : undefined;
+}
+
+/** The dimensions each family needs (published symbols); optional ones follow in OPTIONAL_DIMENSIONS. */
+export const REQUIRED_DIMENSIONS: Readonly<Record<TableFamily, readonly string[]>> = {
+  W: ['d', 'bf', 'tw', 'tf', 'kdes'],
+  M: ['d', 'bf', 'tw', 'tf', 'kdes'],
+  HP: ['d', 'bf', 'tw', 'tf', 'kdes'],
+  S: ['d', 'bf', 'tw', 'tf', 'kdes'],
+  C: ['d', 'bf', 'tw', 'tf', 'kdes'],
+  MC: ['d', 'bf', 'tw', 'tf', 'kdes'],
+  WT: ['d', 'bf', 'tw', 'tf', 'kdes'],
+  MT: ['d', 'bf', 'tw', 'tf', 'kdes'],
+  ST: ['d', 'bf', 'tw', 'tf', 'kdes'],
+  L: ['d', 'b', 't'],
+  HSS: ['tdes'],
+  PIPE: ['OD', 'tdes'],
+};
+
+/** Every dimension symbol a table column may map to. */
+export const DIMENSION_SYMBOLS: readonly string[] = ['d', 'bf', 'tw', 'tf', 'kdes', 'b', 't', 'Ht', 'B', 'tnom', 'tdes', 'OD', 'ID', 'r', 'slope'];
+
+export interface TablePart {
+  readonly shape: string;
+  readonly params: Readonly<Record<string, number>>;
+  readonly modelling: string;
+}
+
+export type TablePartResult = { readonly ok: true; readonly part: TablePart } | { readonly ok: false; readonly message: string };
+
+const SLOPE_2_12 = 2 / 12;
+
+function need(dims: Readonly<Record<string, number>>, family: string, keys: readonly string[]): string | null {
+  const missing = keys.filter((k) => dims[k] === undefined);
+  return missing.length === 0 ? null : `a ${family} row needs ${missing.join(', ')} (no value given)`;
+}
+
+/** The nominal OD in a round HSS label ("HSS6.625X0.280" → 6.625), or NaN. */
+export function labelOD(designation: string): number {
+  const m = /^HSS(\d+(?:\.\d+)?)X\d*\.?\d+$/i.exec(designation.replace(/\s+/g, ''));
+  return m === null ? Number.NaN : Number(m[1]);
+}
+
+/**
+ * The part a row builds. `dims` holds the published dimensions by symbol in `unit`; the
+ * designation is used only for a round HSS's nominal OD (inch tables).
+ */
+export function tablePart(family: TableFamily, dims: Readonly<Record<string, number>>, designation: string, unit: LengthUnit): TablePartResult {
+  const missing = need(dims, family, REQUIRED_DIMENSIONS[family]);
+  if (family === 'HSS') {
+    const t = dims['tdes']!;
+    if (dims['OD'] !== undefined) {
+      const printed = dims['OD'];
+      const nominal = labelOD(designation);
+      // Inch tables print OD to 3 significant figures (6.63 for 6.625): use the label's value when it rounds to the printed one.
+      const useLabel = unit === 'in' && Number.isFinite(nominal) && Number(nominal.toPrecision(3)) === Number(printed.toPrecision(3));
+      if (missing !== null) return { ok: false, message: missing };
+      return { ok: true, part: { shape: 'pipe', params: { OD: useLabel ? nominal : printed, t }, modelling: useLabel ? `round HSS: nominal OD ${nominal} from the label, wall tdes` : 'round HSS: OD as given, wall tdes' } };
+    }
+    const m2 = need(dims, 'rectangular HSS', ['Ht', 'B', 'tdes']);
+    if (m2 !== null) return { ok: false, message: `${m2} (a round HSS needs OD and tdes)` };
+    const r = dims['r'] ?? 2 * t;
+    return { ok: true, part: { shape: 'rect-tube', params: { H: dims['Ht']!, B: dims['B']!, t, r }, modelling: dims['r'] === undefined ? 'rectangular HSS: wall tdes, outside corner radius 2·tdes' : 'rectangular HSS: wall tdes, outside corner radius r as given' } };
+  }
+  if (missing !== null) return { ok: false, message: missing };
+  if (family === 'PIPE') return { ok: true, part: { shape: 'pipe', params: { OD: dims['OD']!, t: dims['tdes']! }, modelling: 'pipe: OD with the design wall tdes (the published ID is nominal)' } };
+  if (family === 'L') {
+    // Published d is the shorter leg; the tabulated x axis has the longer leg b vertical (core/catalogue).
+    return { ok: true, part: { shape: 'angle', params: { d: dims['b']!, b: dims['d']!, t: dims['t']!, r: dims['r'] ?? 0, rt: 0 }, modelling: 'angle: sharp root and toes, longer leg along y' } };
+  }
+  const { d, bf, tw, tf, kdes } = dims as Record<'d' | 'bf' | 'tw' | 'tf' | 'kdes', number>;
+  const sloped = family === 'S' || family === 'C' || family === 'ST';
+  const slope = dims['slope'] ?? (sloped ? SLOPE_2_12 : 0);
+  const outstand = family === 'C' || family === 'MC' ? bf - tw : (bf - tw) / 2;
+  const atWeb = tf + (slope * outstand) / 2;
+  const shape = family === 'C' || family === 'MC' ? 'channel' : family === 'WT' || family === 'MT' || family === 'ST' ? 'tee' : 'i-shape';
+  const r = dims['r'] ?? Math.max(kdes - atWeb, 0);
+  const params = { d, bf, tw, tf, r, ...(slope > 0 ? { slope } : {}) };
+  const rule = dims['r'] !== undefined ? 'r as given' : slope > 0 ? 'r = kdes − flange thickness at the web' : 'r = kdes − tf';
+  const faces = slope > 0 ? `inner flange slope ${dims['slope'] !== undefined ? 'as given' : '2:12'}, tf average` : 'parallel flanges';
+  return { ok: true, part: { shape, params, modelling: `${family}: ${faces}, ${rule}` } };
+}
