@@ -9,12 +9,11 @@
 import { contextBridge, ipcRenderer } from 'electron';
 import { HOST_COMMANDS, type Host, type HostCommand, type OpenedFile, type SaveResult } from '../renderer/host/host.ts';
 import type { InvokeChannel, SendChannel } from './channels.ts';
+import { plainRemoteMessage } from './remote-error.ts';
 
-/** Electron prefixes a refusal from main with "Error invoking remote method 'x': Error: "; the user needs only the reason. */
-const REMOTE_PREFIX = /^Error invoking remote method '[^']+': (?:\w*Error: )?/;
 const invoke = <T>(channel: InvokeChannel, ...args: unknown[]): Promise<T> =>
   (ipcRenderer.invoke(channel, ...args) as Promise<T>).catch((error: unknown) => {
-    throw new Error(error instanceof Error ? error.message.replace(REMOTE_PREFIX, '') : String(error));
+    throw new Error(error instanceof Error ? plainRemoteMessage(error.message) : String(error));
   });
 const send = (channel: SendChannel, ...args: unknown[]): void => ipcRenderer.send(channel, ...args);
 const isHostCommand = (value: unknown): value is HostCommand => (HOST_COMMANDS as readonly unknown[]).includes(value);

@@ -9,6 +9,7 @@ import { appFileFor } from '../../electron/app-files.ts';
 import { CHANNELS } from '../../electron/channels.ts';
 import { assertTrustedSender, guarded, type SenderLike } from '../../electron/ipc-guard.ts';
 import { documentPathFromArgv } from '../../electron/launch-file.ts';
+import { plainRemoteMessage } from '../../electron/remote-error.ts';
 import { menuTemplate } from '../../electron/menu.ts';
 import { checkedArgs, checkedDocumentText, PAYLOADS, RejectedMessage } from '../../electron/payloads.ts';
 import {
@@ -144,6 +145,15 @@ describe('payload validation', () => {
     expect(checkedDocumentText(good)).toBe(good);
     expect(() => checkedDocumentText('{"format": ')).toThrow(/document:save: the text is not JSON/);
     expect(() => checkedDocumentText(JSON.stringify({ format: 'sectionsmith-section', version: 1, name: 'n', unit: 'furlong', parts: [], materials: [], defaultMaterial: null }))).toThrow(/unit: expected a length unit/);
+  });
+});
+
+describe('refusals reaching the page', () => {
+  it("lose Electron's remote-method prefix and keep main's reason word for word", () => {
+    const reason = 'Could not save "/w/a.section.json" (failed to write the new version): the disk is full (ENOSPC). The file on disk is unchanged.';
+    expect(plainRemoteMessage(`Error invoking remote method 'document:save': Error: ${reason}`)).toBe(reason);
+    expect(plainRemoteMessage(`Error invoking remote method 'document:save': RejectedMessage: document:save: rejected payload`)).toBe('document:save: rejected payload');
+    expect(plainRemoteMessage('already plain')).toBe('already plain');
   });
 });
 
