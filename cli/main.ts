@@ -6,6 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import { EXIT_BAD_INPUT, EXIT_BUG, EXIT_OK, type CliIo, type Command } from './command.ts';
+import { checkCommand } from './commands/check.ts';
 import { memberCommand } from './commands/member.ts';
 import { partCommand } from './commands/part.ts';
 import { propsCommand } from './commands/props.ts';
@@ -15,6 +16,7 @@ export const COMMANDS: readonly Command[] = [
   propsCommand,
   partCommand,
   memberCommand,
+  checkCommand,
 ];
 
 const HELP_FLAG = { name: 'help', type: 'boolean', description: 'show this help' } as const;

@@ -1,0 +1,155 @@
+/**
+ * `sectionsmith check TABLE.csv [--type T] [--map col=target,…] [--tolerance 1%,…] [--unit U]
+ * [--out REPORT.csv] [--json] [--mapping FILE] [--save-map FILE]`: rebuilds every row of a table
+ * of shapes from its dimensions and compares the tabulated properties (core/check).
+ * Exit codes: 0 every row passes; 1 some rows are flagged; 2 bad input or usage.
+ */
+import { writeFileSync } from 'node:fs';
+import { checkTable, familyOf, MappingError, parseTolerances, readStoredMapping, TableInputError, tableCheckCsv, TABLE_FAMILIES, type ColumnMapping, type TableCheck } from '../../core/check/index.ts';
+import { isLengthUnit } from '../../core/units/index.ts';
+import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagValues } from '../command.ts';
+
+/** Rows flagged: the table disagrees with its own dimensions somewhere. */
+export const EXIT_FLAGGED = 1;
+
+const list = (text: string | boolean | undefined): string[] => (typeof text === 'string' ? text.split(',').map((s) => s.trim()).filter((s) => s !== '') : []);
+
+function overridesOf(text: string | boolean | undefined): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const item of list(text)) {
+    const eq = item.lastIndexOf('=');
+    if (eq <= 0 || eq === item.length - 1) throw new MappingError(`--map: "${item}" is not COLUMN=TARGET (e.g. "Ix (in4)=Ix" or depth=d)`);
+    out[item.slice(0, eq).trim()] = item.slice(eq + 1).trim();
+  }
+  return out;
+}
+
+const pct = (v: number): string => `${v >= 0 ? '+' : ''}${(v * 100).toFixed(2)} %`;
+
+export function checkText(file: string, c: TableCheck): string {
+  const s = c.summary;
+  const lines = [
+    `${file}: ${s.rowsChecked} row${s.rowsChecked === 1 ? '' : 's'} checked, ${s.rowsFlagged} flagged; ${s.propertiesChecked} tabulated values compared, ${s.propertiesFlagged} beyond tolerance (unit ${c.unit})`,
+    'Each row rebuilt from its dimensions with the parts library; deviation = computed / table − 1.',
+    '',
+    'worst deviation of each property:',
+    ...s.worst.map((w) => `  ${w.symbol.padEnd(3)} ${pct(w.deviation).padStart(9)}  row ${w.row} ${w.designation}${w.flagged ? '  FLAGGED' : ''}`),
+    '',
+    'rows:',
+  ];
+  for (const r of c.rows) {
+    const worst = r.properties.reduce((a, p) => (Math.abs(p.deviation) > Math.abs(a) ? p.deviation : a), 0);
+    lines.push(`  ${String(r.row).padStart(4)}  ${r.designation.padEnd(16)} ${r.family.padEnd(4)} ${r.flagged ? 'FLAGGED' : 'pass   '}  ${r.properties.length} values, largest ${pct(worst)}`);
+    for (const f of r.findings) lines.push(`          ${f}`);
+  }
+  if (c.ignoredColumns.length > 0) {
+    lines.push('', 'columns not checked:');
+    for (const col of c.ignoredColumns) lines.push(`  ${col.header}: ${col.why}`);
+  }
+  lines.push('', `CAUTION: ${CAUTION}`, '');
+  return lines.join('\n');
+}
+
+function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
+  const fail = (message: string): number => {
+    io.err(`sectionsmith check: ${message}\n`);
+    return EXIT_BAD_INPUT;
+  };
+  if (positionals.length !== 1) return fail(`expected one TABLE.csv, got ${positionals.length === 0 ? 'none' : positionals.join(' ')}\nusage: sectionsmith ${checkCommand.usage}`);
+  const file = positionals[0]!;
+  const unit = flags.unit ?? 'in';
+  if (!isLengthUnit(unit)) return fail(`--unit: expected in, ft, mm, cm or m, got ${JSON.stringify(unit)}`);
+  let type;
+  if (typeof flags.type === 'string') {
+    type = familyOf(flags.type);
+    if (type === undefined) return fail(`--type: unknown type "${flags.type}"; known: ${TABLE_FAMILIES.join(', ')}`);
+  }
+  let text: string;
+  try {
+    text = io.readFile(file);
+  } catch (err) {
+    return fail(`${file}: cannot read the file: ${(err as { code?: string }).code === 'ENOENT' ? 'no such file' : err instanceof Error ? err.message : String(err)}`);
+  }
+  let result: TableCheck;
+  try {
+    let stored: ColumnMapping | undefined;
+    if (typeof flags.mapping === 'string') {
+      const where = flags.mapping;
+      let value: unknown;
+      try {
+        value = JSON.parse(io.readFile(where)) as unknown;
+      } catch (err) {
+        return fail(`--mapping ${where}: cannot read it as JSON: ${err instanceof Error ? err.message : String(err)}`);
+      }
+      stored = readStoredMapping(value, `--mapping ${where}`);
+    }
+    result = checkTable(text, {
+      unit,
+      ...(type !== undefined ? { type } : {}),
+      overrides: overridesOf(flags.map),
+      ...(stored !== undefined ? { mapping: stored } : {}),
+      tolerances: parseTolerances(list(flags.tolerance)),
+    });
+  } catch (err) {
+    if (err instanceof TableInputError || err instanceof MappingError) return fail(`${file}: ${err.message}`);
+    throw err;
+  }
+  try {
+    if (typeof flags.out === 'string') writeFileSync(flags.out, tableCheckCsv(result), 'utf8');
+    if (typeof flags['save-map'] === 'string') writeFileSync(flags['save-map'], `${JSON.stringify(result.mapping, null, 2)}\n`, 'utf8');
+  } catch (err) {
+    return fail(`cannot write: ${err instanceof Error ? err.message : String(err)}`);
+  }
+  if (flags.json === true) {
+    const body = { file, caution: CAUTION, unit: result.unit, summary: result.summary, rows: result.rows, ignoredColumns: result.ignoredColumns, mapping: result.mapping };
+    io.out(`${JSON.stringify(body, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`);
+  } else {
+    io.out(checkText(file, result));
+  }
+  return result.summary.rowsFlagged > 0 ? EXIT_FLAGGED : EXIT_OK;
+}
+
+export const checkCommand: Command = {
+  name: 'check',
+  summary: 'check a table of shapes (CSV) against properties rebuilt from its dimensions',
+  usage: 'check TABLE.csv [--type T] [--map COL=TARGET,…] [--tolerance 1%,…] [--unit U] [--out REPORT.csv] [--json]',
+  description: [
+    'Reads a CSV table of shapes (a designation column, a type column or --type, dimension',
+    'columns and tabulated property columns), rebuilds each row with the parts library using',
+    'the catalogue conventions (W: r = kdes − tf; S, C: 2:12 flange slope; HSS and Pipe: tdes),',
+    'computes A, Ix, Iy, Sx, Sy, Zx, Zy, rx, ry (angles also Iw, Iz, rz) and flags every value',
+    'that differs from the table by more than its tolerance. Inch tables also have their',
+    'designations read as AISC labels (family, nominal weight, legs, walls) and compared.',
+    '',
+    'Columns are recognised by trade symbol with the unit in a suffix or bracket: d_in, bf, tw,',
+    'tf, kdes, t, b, Ht, B, tnom, tdes, OD; A_in2, Ix_in4, "Ix [mm^4]", "Sx (10^3 mm^3)". A',
+    'column without a unit is in --unit (default in). Types: W, M, HP, S, C, MC, WT, MT, ST, L,',
+    'HSS, PIPE.',
+    '',
+    '--map corrects the mapping: COLUMN=TARGET, several separated by commas; TARGET is',
+    'designation, type, ignore, a dimension or property symbol, optionally with a unit',
+    '("Depth=d:mm", "I major=Ix:10^6mm^4"). --save-map FILE writes the mapping used (JSON);',
+    '--mapping FILE reads one back (--map still wins). Give each flag once: a repeated flag',
+    'keeps only its last value, so list several items with commas.',
+    '',
+    '--tolerance: a default ("1%", or a fraction "0.01"), per property ("Iy=3%") or per family',
+    'and property ("MC:Iy=7%"), several separated by commas. Default 1 %.',
+    '',
+    '--out REPORT.csv writes one row per table row (status, findings, table and computed values,',
+    'deviation and tolerance in %). --json prints the summary, rows and mapping as JSON.',
+    '',
+    'Exit codes: 0 every row passes; 1 some rows are flagged; 2 bad input (the message names the',
+    'row and the column).',
+  ].join('\n'),
+  flags: [
+    { name: 'type', type: 'string', value: 'T', description: 'family of rows without a type column: W, M, HP, S, C, MC, WT, MT, ST, L, HSS, PIPE' },
+    { name: 'map', type: 'string', value: 'COL=TARGET,…', description: 'correct the column mapping (see above)' },
+    { name: 'tolerance', type: 'string', value: 'SPEC,…', description: 'tolerances: 1%, Iy=3%, MC:Iy=7% (default 1 %)' },
+    { name: 'unit', type: 'string', value: 'U', description: 'unit of columns without one: in|ft|mm|cm|m (default in)' },
+    { name: 'out', type: 'string', value: 'REPORT.csv', description: 'write the per-row report as CSV' },
+    { name: 'mapping', type: 'string', value: 'FILE', description: 'read a saved column mapping (JSON)' },
+    { name: 'save-map', type: 'string', value: 'FILE', description: 'write the column mapping used (JSON)' },
+    { name: 'json', type: 'boolean', description: 'print JSON instead of text' },
+  ],
+  run: runCheck,
+};
