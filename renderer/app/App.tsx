@@ -21,6 +21,7 @@ import { PartsPanel } from './PartsPanel.tsx';
 import { PartsPalette } from './PartsPalette.tsx';
 import { createResultsCache, shapeOutlineResolver } from './results.ts';
 import { ResultsPanel } from './ResultsPanel.tsx';
+import { MaterialsPanel } from './MaterialsPanel.tsx';
 import { TorsionClient, type TorsionState } from './torsion-client.ts';
 import { fitView, zoomAt, type View } from './view.ts';
 import { formatSig } from '../../core/units/index.ts';
@@ -469,6 +470,7 @@ export function App(): ReactElement {
             <p className="muted small">Changing the document unit converts every length exactly, so the section stays the same physical size. The display unit changes only how results read.</p>
           </div>
           <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={sig} torsion={torsion} current={state.doc} />
+          <MaterialsPanel editor={editor} doc={state.doc} valid={!!results.properties} />
         </aside>
       </div>
       {asking && (

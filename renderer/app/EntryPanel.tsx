@@ -7,6 +7,7 @@ import type { Part } from '../../core/document/types.ts';
 import type { Editor, EditorState } from '../editor/editor.ts';
 import { parseNumber } from './numbers.ts';
 import { ShapeParameters } from './PartsPalette.tsx';
+import { materialChoices } from './MaterialsPanel.tsx';
 import type { LengthUnit } from '../../core/units/index.ts';
 
 type Fields = Record<string, string>;
@@ -79,6 +80,21 @@ function SelectedPart({ editor, part, unit }: { editor: Editor; part: Part; unit
             if (name !== part.name) editor.updatePart(part.id, 'Rename part', (q) => ({ ...q, name }));
           }}
         />
+      </label>
+      <label className="field wide">
+        <span>material</span>
+        <select
+          data-testid="selected-material"
+          value={part.material ?? ''}
+          onChange={(e) => editor.updatePart(part.id, 'Part material', (q) => ({ ...q, material: e.target.value === '' ? null : e.target.value }))}
+        >
+          <option value="">document default</option>
+          {materialChoices(editor.getState().doc).map((m) => (
+            <option key={m.id} value={m.id}>
+              {m.name}
+            </option>
+          ))}
+        </select>
       </label>
       {part.type === 'shape' && <ShapeParameters editor={editor} part={part} unit={unit} />}
       <div className="grid2">

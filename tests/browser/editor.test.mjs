@@ -191,3 +191,16 @@ export async function torsionRunsInTheBackgroundAndMatchesTheThinStripClosedForm
   const J = await resultValue(page, 'J');
   near('J of a 200 × 10 strip', J, ((200 * 10 ** 3) / 3) * (1 - (0.63 * 10) / 200), 0.01);
 }
+
+export async function oneSteelMaterialGivesEIEqualToETimesIAndSteelWeight({ page, baseUrl }) {
+  await openApp(page, baseUrl);
+  await page.getByTestId('default-material').selectOption('astm-a992');
+  await page.getByTestId('result-EIx').waitFor();
+  // One material: EI = E·I (identity). E = 29,000 ksi for structural steel (AISC 360 §B4, common practice); 1 psi = 6894.757293168361 Pa.
+  const E = 29_000_000 * 6894.757293168361;
+  const IxM4 = (await resultValue(page, 'Ix')) * 1e-12; // mm⁴ → m⁴, exact factor
+  near('EIx = E·Ix (N·m²)', await resultValue(page, 'EIx'), E * IxM4, 1e-6);
+  // Steel density 490 lb/ft³ ≈ 7850 kg/m³ (AISC Manual, common practice): mass = ρ·A.
+  const Am2 = (await resultValue(page, 'area')) * 1e-6;
+  near('mass per length ≈ 7850 kg/m³ · A', await resultValue(page, 'massPerLength'), 7850 * Am2, 0.002);
+}
