@@ -89,6 +89,7 @@ function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo):
       overrides: overridesOf(flags.map),
       ...(stored !== undefined ? { mapping: stored } : {}),
       tolerances: parseTolerances(list(flags.tolerance)),
+      ...(flags['own-labels'] === true ? { readLabels: false } : {}),
     });
   } catch (err) {
     if (err instanceof TableInputError || err instanceof MappingError) return fail(`${file}: ${err.message}`);
@@ -119,7 +120,8 @@ export const checkCommand: Command = {
     'the catalogue conventions (W: r = kdes − tf; S, C: 2:12 flange slope; HSS and Pipe: tdes),',
     'computes A, Ix, Iy, Sx, Sy, Zx, Zy, rx, ry (angles also Iw, Iz, rz) and flags every value',
     'that differs from the table by more than its tolerance. Inch tables also have their',
-    'designations read as AISC labels (family, nominal weight, legs, walls) and compared.',
+    'designations read as AISC labels (family, nominal weight, legs, walls) and looked up in the',
+    'AISC Shapes Database v15.0 (dimensions compared); --own-labels turns that off.',
     '',
     'Columns are recognised by trade symbol with the unit in a suffix or bracket: d_in, bf, tw,',
     'tf, kdes, t, b, Ht, B, tnom, tdes, OD; A_in2, Ix_in4, "Ix [mm^4]", "Sx (10^3 mm^3)". A',
@@ -149,6 +151,7 @@ export const checkCommand: Command = {
     { name: 'out', type: 'string', value: 'REPORT.csv', description: 'write the per-row report as CSV' },
     { name: 'mapping', type: 'string', value: 'FILE', description: 'read a saved column mapping (JSON)' },
     { name: 'save-map', type: 'string', value: 'FILE', description: 'write the column mapping used (JSON)' },
+    { name: 'own-labels', type: 'boolean', description: "designations are a maker's own: do not read them as AISC labels" },
     { name: 'json', type: 'boolean', description: 'print JSON instead of text' },
   ],
   run: runCheck,
