@@ -7,6 +7,7 @@ import { readFileSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import { EXIT_BAD_INPUT, EXIT_BUG, EXIT_OK, type CliIo, type Command } from './command.ts';
 import { checkCommand } from './commands/check.ts';
+import { compareCommand } from './commands/compare.ts';
 import { memberCommand } from './commands/member.ts';
 import { partCommand } from './commands/part.ts';
 import { propsCommand } from './commands/props.ts';
@@ -17,6 +18,7 @@ export const COMMANDS: readonly Command[] = [
   partCommand,
   memberCommand,
   checkCommand,
+  compareCommand,
 ];
 
 const HELP_FLAG = { name: 'help', type: 'boolean', description: 'show this help' } as const;

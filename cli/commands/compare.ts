@@ -1,0 +1,105 @@
+/**
+ * `sectionsmith compare FILE [FILE…] [--baseline NAME] [--sort COL] [--span L --load W]
+ * [--min-ix X] [--limit N] [--unit U] [--csv OUT] [--json]`: alternatives side by side, one
+ * document file each (the document format holds one section; alternatives are separate files).
+ */
+import { writeFileSync } from 'node:fs';
+import { COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, columnUnit, lightestMeeting, sortAlternatives, type CompareColumn, type Comparison, type Targets } from '../../core/compare/index.ts';
+import { parseDocument, type SectionDocument } from '../../core/document/index.ts';
+import { formatSig, isLengthUnit } from '../../core/units/index.ts';
+import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagValues } from '../command.ts';
+
+function positive(flag: string, text: string | boolean | undefined): number | undefined {
+  if (typeof text !== 'string') return undefined;
+  const v = Number(text);
+  if (!(Number.isFinite(v) && v > 0)) throw new CompareError(`--${flag}: expected a positive number, got ${JSON.stringify(text)}`);
+  return v;
+}
+
+function text(c: Comparison, order: readonly CompareColumn[], sortBy: CompareColumn, pick: ReturnType<typeof lightestMeeting> | null): string {
+  const g = (v: number | null): string => (v === null ? '-' : formatSig(v, 4));
+  const head = ['alternative', ...order.map((k) => `${k} [${columnUnit(k, c.unit)}]`)];
+  const alts = sortAlternatives(c, sortBy);
+  const rows = alts.map((a) => [a.name, ...order.map((k) => `${g(a.values[k])} (${a.ratios[k] === null ? '-' : `${formatSig(a.ratios[k], 3)}×`})`)]);
+  const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
+  const line = (r: readonly string[]): string => r.map((v, i) => v.padEnd(widths[i]!)).join('  ');
+  const out = [`${c.alternatives.length} alternatives; ratios (×) to "${c.baseline}"; sorted by ${sortBy}${c.beam ? `; simply supported span ${c.beam.span} ${c.unit}, uniform load ${c.beam.load} N/m` : ''}`, '', line(head), ...rows.map(line)];
+  for (const a of c.alternatives) for (const n of a.notes) out.push(`  ${a.name}: ${n}`);
+  if (pick !== null) {
+    out.push('', pick.choice === null ? 'no alternative meets the targets' : `lightest meeting the targets (by ${pick.by}): ${pick.choice.name}`);
+    for (const f of pick.failing) out.push(`  not meeting: ${f}`);
+  }
+  out.push('', `CAUTION: ${CAUTION}`, '');
+  return out.join('\n');
+}
+
+function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
+  const fail = (m: string): number => {
+    io.err(`sectionsmith compare: ${m}\n`);
+    return EXIT_BAD_INPUT;
+  };
+  if (positionals.length === 0) return fail(`expected one or more document files\nusage: sectionsmith ${compareCommand.usage}`);
+  if (flags.unit !== undefined && !isLengthUnit(flags.unit)) return fail(`--unit: expected in, ft, mm, cm or m, got ${JSON.stringify(flags.unit)}`);
+  const sortBy = (flags.sort ?? 'A') as CompareColumn;
+  if (!COMPARE_COLUMNS.includes(sortBy)) return fail(`--sort: unknown column "${String(flags.sort)}"; columns: ${COMPARE_COLUMNS.join(', ')}`);
+  const docs: SectionDocument[] = [];
+  for (const file of positionals) {
+    let t: string;
+    try {
+      t = io.readFile(file);
+    } catch {
+      return fail(`${file}: cannot read the file`);
+    }
+    const parsed = parseDocument(t, file);
+    if (!parsed.ok) return fail(parsed.errors.map((e) => e.message).join('\n'));
+    docs.push(parsed.document);
+  }
+  try {
+    const span = positive('span', flags.span);
+    const load = positive('load', flags.load);
+    if ((span === undefined) !== (load === undefined)) return fail('--span and --load go together (span in the unit, load in N/m)');
+    const c = compareDocuments(docs, {
+      ...(typeof flags.unit === 'string' && isLengthUnit(flags.unit) ? { unit: flags.unit } : {}),
+      ...(typeof flags.baseline === 'string' ? { baseline: flags.baseline } : {}),
+      beam: span !== undefined && load !== undefined ? { span, load } : null,
+    });
+    const minIx = positive('min-ix', flags['min-ix']);
+    const ratio = positive('limit', flags.limit);
+    const targets: Targets = { ...(minIx !== undefined ? { minIx } : {}), ...(ratio !== undefined ? { deflectionRatio: ratio } : {}) };
+    const pick = minIx !== undefined || ratio !== undefined ? lightestMeeting(c, targets) : null;
+    if (typeof flags.csv === 'string') writeFileSync(flags.csv, comparisonCsv(c), 'utf8');
+    if (flags.json === true) io.out(`${JSON.stringify({ ...c, alternatives: sortAlternatives(c, sortBy), pick: pick === null ? null : { name: pick.choice?.name ?? null, by: pick.by, failing: pick.failing } }, null, 2)}\n`);
+    else io.out(text(c, COMPARE_COLUMNS, sortBy, pick));
+  } catch (err) {
+    if (err instanceof CompareError) return fail(err.message);
+    throw err;
+  }
+  return EXIT_OK;
+}
+
+export const compareCommand: Command = {
+  name: 'compare',
+  summary: 'alternative sections side by side, ratios to a baseline, lightest meeting a target',
+  usage: 'compare FILE [FILE…] [--baseline NAME] [--sort COL] [--span L --load W] [--min-ix X] [--limit N] [--csv OUT] [--json]',
+  description: [
+    'Each FILE is a Sectionsmith document holding one alternative (its "name" names it). The',
+    'table lists A, Ix, Iy, Sx (smaller fibre), Zx, Ix/A, Sx/A, Zx/A and, for documents with',
+    'materials, EIx (N·m²), weight (N/m) and, with --span (in the unit) and --load (N/m), the',
+    'midspan deflection (m) of a simply supported beam; each with its ratio to --baseline',
+    '(default: the first file). --sort COL orders the rows. --min-ix X and --limit N (deflection',
+    '≤ span/N) pick the lightest alternative meeting them (by weight when all have one, else A).',
+    '--csv OUT writes the table as CSV.',
+  ].join('\n'),
+  flags: [
+    { name: 'baseline', type: 'string', value: 'NAME', description: 'the alternative the ratios refer to (default: the first)' },
+    { name: 'sort', type: 'string', value: 'COL', description: `sort column: ${COMPARE_COLUMNS.join(', ')} (default A)` },
+    { name: 'unit', type: 'string', value: 'U', description: 'length unit of the table (default: the first document\'s)' },
+    { name: 'span', type: 'string', value: 'L', description: 'shared simply supported span, in the unit' },
+    { name: 'load', type: 'string', value: 'W', description: 'shared uniform load, N/m' },
+    { name: 'min-ix', type: 'string', value: 'X', description: 'target: Ix at least X (unit^4)' },
+    { name: 'limit', type: 'string', value: 'N', description: 'target: deflection at most span/N (e.g. 360)' },
+    { name: 'csv', type: 'string', value: 'OUT', description: 'write the comparison as CSV' },
+    { name: 'json', type: 'boolean', description: 'print JSON instead of the table' },
+  ],
+  run: runCompare,
+};
