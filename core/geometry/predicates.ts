@@ -91,11 +91,15 @@ export function pointInRing(ring: Ring, px: number, py: number): 1 | 0 | -1 {
     const j = i + 1 === n ? 0 : i + 1;
     const ax = xy[2 * i] ?? 0, ay = xy[2 * i + 1] ?? 0, bx = xy[2 * j] ?? 0, by = xy[2 * j + 1] ?? 0;
     const o = leftTurn(ax, ay, bx, by, px, py);
-    if (o === 0 && within(ax, bx, px) && within(ay, by, py)) return 0;
+    const b = bulge?.[i] ?? 0;
+    if (o === 0 && within(ax, bx, px) && within(ay, by, py)) {
+      if (b === 0 || (px === ax && py === ay) || (px === bx && py === by)) return 0;
+      // On the chord of an arc, which is not the boundary: the crossing rule is ambiguous there.
+      return windingByAngles(ring, px, py);
+    }
     if (ay <= py) {
       if (by > py && o > 0) wn++;
     } else if (by <= py && o < 0) wn--;
-    const b = bulge?.[i] ?? 0;
     if (b === 0) continue;
     const arc = arcFromBulge(ax, ay, bx, by, b);
     const d = Math.hypot(px - arc.cx, py - arc.cy);
@@ -106,4 +110,40 @@ export function pointInRing(ring: Ring, px: number, py: number): 1 | 0 | -1 {
     if (d < arc.r) wn += b > 0 ? 1 : -1;
   }
   return wn !== 0 ? 1 : -1;
+}
+
+/**
+ * Winding number by summing the angle each segment subtends at p (exact up to rounding, then
+ * rounded to an integer). Used only where p lies on the chord of an arc, where the crossing rule
+ * is ambiguous. A line subtends atan2(cross, dot); an arc subtends its chord's angle, plus its
+ * sweep's sign × 2π when p lies between the chord and the arc, or ±π when p is on the chord itself.
+ */
+function windingByAngles(ring: Ring, px: number, py: number): 1 | 0 | -1 {
+  const { xy, bulge } = ring;
+  const n = ringVertexCount(ring);
+  let total = 0;
+  for (let i = 0; i < n; i++) {
+    const j = i + 1 === n ? 0 : i + 1;
+    const ax = xy[2 * i] ?? 0, ay = xy[2 * i + 1] ?? 0, bx = xy[2 * j] ?? 0, by = xy[2 * j + 1] ?? 0;
+    const ux = ax - px, uy = ay - py, vx = bx - px, vy = by - py;
+    const o = leftTurn(ax, ay, bx, by, px, py);
+    const b = bulge?.[i] ?? 0;
+    const onChord = o === 0 && within(ax, bx, px) && within(ay, by, py);
+    if (b === 0) {
+      if (onChord) return 0;
+      total += Math.atan2(ux * vy - uy * vx, ux * vx + uy * vy);
+      continue;
+    }
+    const arc = arcFromBulge(ax, ay, bx, by, b);
+    const d = Math.hypot(px - arc.cx, py - arc.cy);
+    const onArcSide = b > 0 ? o < 0 : o > 0;
+    if (onArcSide && Math.abs(d - arc.r) <= 1e-12 * arc.r) return 0;
+    if (onChord) {
+      total += b > 0 ? Math.PI : -Math.PI;
+      continue;
+    }
+    total += Math.atan2(ux * vy - uy * vx, ux * vx + uy * vy);
+    if (onArcSide && d < arc.r) total += b > 0 ? 2 * Math.PI : -2 * Math.PI;
+  }
+  return Math.round(total / (2 * Math.PI)) !== 0 ? 1 : -1;
 }

@@ -40,6 +40,22 @@ describe('pointInRing with arcs', () => {
     expect(pointInRing(bitten, 0.2, 3.9)).toBe(-1); // distance √3.25 < 2: inside the bite
     expect(validateRegion([piece(bitten)])).toEqual([]);
   });
+
+  it('treats a point on the chord of an arc as inside, not on the boundary (the chord is not an edge)', () => {
+    // A circle of radius 50 as two semicircles: its chord is the diameter on y = 0. Every point of
+    // the open diameter is strictly inside the disc (x² + y² < r²); the two end points are on it.
+    const c = circle(0, 0, 50);
+    expect(pointInRing(c, 40, 0)).toBe(1);
+    expect(pointInRing(c, -49.5, 0)).toBe(1);
+    expect(pointInRing(c, 0, 0)).toBe(1);
+    expect(pointInRing(c, 50, 0)).toBe(0);
+    // A concentric bore whose vertices lie on that chord is a valid hole (a pipe wall).
+    const bore = ringFromPoints([[40, 0], [-40, 0]], [-1, -1]);
+    expect(validateRegion([{ outer: c, holes: [bore] }])).toEqual([]);
+    // The concave bite's chord (4,4)→(0,4) lies outside the bitten square.
+    const bitten = ringFromPoints([[0, 0], [4, 0], [4, 4], [0, 4]], [0, 0, -1, 0]);
+    expect(pointInRing(bitten, 2, 4)).toBe(-1);
+  });
 });
 
 describe('sweepPairs', () => {
