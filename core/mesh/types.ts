@@ -32,7 +32,7 @@ export interface MeshOptions {
   readonly layers?: number;
   /** Fewest elements across a compact piece: size ≤ √(piece area) / this (default 8). */
   readonly compactDivisions?: number;
-  /** Largest arc sweep per chord, degrees (default 3.6, METHODS §7.8: ≈ −0.13 % on a full circle). */
+  /** Largest arc sweep per chord, degrees (default 2.5, METHODS §7.8: ≈ −0.063 % on a full circle). */
   readonly maxChordAngleDeg?: number;
   /** Minimum-angle target of the refinement, degrees (default 22; at most 30). */
   readonly minAngleDeg?: number;

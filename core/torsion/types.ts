@@ -21,7 +21,7 @@ export interface TorsionOptions {
   readonly layers?: number;
   /** Cancellation/progress hook: called now and then with a fraction 0..1; return false to abort. */
   readonly onProgress?: (fraction: number) => boolean | void;
-  /** Largest arc sweep per chord of the mesh, degrees (default 3.6). Optional extension. */
+  /** Largest arc sweep per chord of the mesh, degrees (default 2.5). Optional extension. */
   readonly maxChordAngleDeg?: number;
   /** Minimum-angle target of the mesh, degrees (default 22). Optional extension. */
   readonly minAngleDeg?: number;
