@@ -4,7 +4,8 @@
  * document file each (the document format holds one section; alternatives are separate files).
  */
 import { writeFileSync } from 'node:fs';
-import { COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, columnUnit, lightestMeeting, sortAlternatives, type CompareColumn, type Comparison, type Targets } from '../../core/compare/index.ts';
+import { reportHtml } from '../../core/report/index.ts';
+import { COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, comparisonSvg, columnUnit, lightestMeeting, sortAlternatives, type CompareColumn, type Comparison, type Targets } from '../../core/compare/index.ts';
 import { parseDocument, type SectionDocument } from '../../core/document/index.ts';
 import { formatSig, isLengthUnit } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagValues } from '../command.ts';
@@ -68,6 +69,17 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
     const targets: Targets = { ...(minIx !== undefined ? { minIx } : {}), ...(ratio !== undefined ? { deflectionRatio: ratio } : {}) };
     const pick = minIx !== undefined || ratio !== undefined ? lightestMeeting(c, targets) : null;
     if (typeof flags.csv === 'string') writeFileSync(flags.csv, comparisonCsv(c), 'utf8');
+    if (typeof flags.svg === 'string' || typeof flags.report === 'string') {
+      const svg = comparisonSvg(docs, c.unit);
+      if (typeof flags.svg === 'string') writeFileSync(flags.svg, svg, 'utf8');
+      if (typeof flags.report === 'string') {
+        const g = (v: number | null): string => (v === null ? '-' : formatSig(v, 4));
+        const rows = sortAlternatives(c, sortBy).map((a) => [a.name, ...COMPARE_COLUMNS.map((k) => `${g(a.values[k])}${a.ratios[k] === null ? '' : ` (${formatSig(a.ratios[k], 3)}×)`}`)]);
+        const checks = c.beam === null ? [] : c.alternatives.map((a) => `${a.name}: midspan deflection ${g(a.values.deflection)} m, simply supported span ${c.beam!.span} ${c.unit}, uniform ${c.beam!.load} N/m`);
+        const materials = docs.map((d) => `${d.name}: ${d.defaultMaterial ?? 'no default material'}${d.materials.length > 0 ? `; ${d.materials.map((m) => m.name).join(', ')}` : ''}`);
+        writeFileSync(flags.report, reportHtml({ title: `Comparison of ${c.alternatives.length} alternatives`, drawings: [svg], tables: [{ title: `Properties (ratios to "${c.baseline}")`, columns: ['alternative', ...COMPARE_COLUMNS.map((k) => `${k} [${columnUnit(k, c.unit)}]`)], rows }], materials, memberChecks: checks }), 'utf8');
+      }
+    }
     if (flags.json === true) io.out(`${JSON.stringify({ ...c, alternatives: sortAlternatives(c, sortBy), pick: pick === null ? null : { name: pick.choice?.name ?? null, by: pick.by, failing: pick.failing } }, null, 2)}\n`);
     else io.out(text(c, COMPARE_COLUMNS, sortBy, pick));
   } catch (err) {
@@ -88,7 +100,7 @@ export const compareCommand: Command = {
     'midspan deflection (m) of a simply supported beam; each with its ratio to --baseline',
     '(default: the first file). --sort COL orders the rows. --min-ix X and --limit N (deflection',
     '≤ span/N) pick the lightest alternative meeting them (by weight when all have one, else A).',
-    '--csv OUT writes the table as CSV.',
+    '--csv OUT writes the table as CSV; --svg OUT the outlines at one scale; --report OUT.html a printable report.',
   ].join('\n'),
   flags: [
     { name: 'baseline', type: 'string', value: 'NAME', description: 'the alternative the ratios refer to (default: the first)' },
@@ -99,6 +111,8 @@ export const compareCommand: Command = {
     { name: 'min-ix', type: 'string', value: 'X', description: 'target: Ix at least X (unit^4)' },
     { name: 'limit', type: 'string', value: 'N', description: 'target: deflection at most span/N (e.g. 360)' },
     { name: 'csv', type: 'string', value: 'OUT', description: 'write the comparison as CSV' },
+    { name: 'svg', type: 'string', value: 'OUT', description: 'write the outlines side by side at one scale (SVG)' },
+    { name: 'report', type: 'string', value: 'OUT.html', description: 'write a printable HTML report' },
     { name: 'json', type: 'boolean', description: 'print JSON instead of the table' },
   ],
   run: runCompare,

@@ -128,3 +128,4 @@ export function lightestMeeting(c: Comparison, targets: Targets): { choice: Alte
 }
 
 export { comparisonCsv, columnUnit } from './csv.ts';
+export { comparisonSvg } from './svg.ts';
