@@ -22,6 +22,7 @@ import { PartsPalette } from './PartsPalette.tsx';
 import { createResultsCache, shapeOutlineResolver } from './results.ts';
 import { ResultsPanel } from './ResultsPanel.tsx';
 import { MaterialsPanel } from './MaterialsPanel.tsx';
+import { MemberPanel } from './MemberPanel.tsx';
 import { TorsionClient, type TorsionState } from './torsion-client.ts';
 import { fitView, zoomAt, type View } from './view.ts';
 import { formatSig } from '../../core/units/index.ts';
@@ -471,6 +472,7 @@ export function App(): ReactElement {
           </div>
           <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={sig} torsion={torsion} current={state.doc} />
           <MaterialsPanel editor={editor} doc={state.doc} valid={!!results.properties} />
+          <MemberPanel doc={state.doc} valid={!!results.properties} />
         </aside>
       </div>
       {asking && (

@@ -5,7 +5,7 @@
  * Core gives EA in N, EI in N·m², mass in kg/m; shown in kN, kN·m², kg/m, or for inch
  * documents kip, kip·in², lb/ft. data-value keeps core's SI number.
  */
-import { useMemo, type ReactElement } from 'react';
+import { useDeferredValue, useMemo, type ReactElement } from 'react';
 import type { SectionDocument } from '../../core/document/types.ts';
 import { BUILT_IN_MATERIALS, compositeProperties, materialPiecesFromDocument } from '../../core/materials/index.ts';
 import { formatSig } from '../../core/units/index.ts';
@@ -32,7 +32,9 @@ function Row({ k, symbol, value, shown, unit, label }: { k: string; symbol: stri
   );
 }
 
-export function MaterialsPanel({ editor, doc, valid }: { editor: Editor; doc: SectionDocument; valid: boolean }): ReactElement {
+export function MaterialsPanel({ editor, doc: current, valid }: { editor: Editor; doc: SectionDocument; valid: boolean }): ReactElement {
+  // A step behind a drag, so splitting by material never slows the drawing.
+  const doc = useDeferredValue(current);
   const used = doc.defaultMaterial !== null || doc.parts.some((p) => p.material !== null);
   const composite = useMemo(() => {
     if (!used || !valid) return null;

@@ -204,3 +204,22 @@ export async function oneSteelMaterialGivesEIEqualToETimesIAndSteelWeight({ page
   const Am2 = (await resultValue(page, 'area')) * 1e-6;
   near('mass per length ≈ 7850 kg/m³ · A', await resultValue(page, 'massPerLength'), 7850 * Am2, 0.002);
 }
+
+export async function memberCheckOfTheGirderMatchesTheUniformLoadClosedForm({ page, baseUrl }) {
+  await openApp(page, baseUrl);
+  await page.getByTestId('default-material').selectOption('astm-a992');
+  await page.getByTestId('result-EIx').waitFor();
+  await page.locator('summary', { hasText: 'Member check' }).click();
+  await page.getByTestId('member-span').fill('24000');
+  await page.getByTestId('member-point').fill('0');
+  await page.getByTestId('member-uniform').fill('20');
+  await page.getByTestId('result-deflectionMax').waitFor();
+  const EI = await resultValue(page, 'EIx');
+  // Simply supported, uniform w: δ = 5wL⁴/(384 EI), M = wL²/8 (AISC Manual Table 3-23, case 1; Roark Table 8.1).
+  const w = 20_000;
+  const L = 24;
+  near('δmax = 5wL⁴/384EI', Math.abs(await resultValue(page, 'deflectionMax')), (5 * w * L ** 4) / (384 * EI), 1e-6);
+  near('Mmax = wL²/8', Math.abs(await resultValue(page, 'momentMax')), (w * L ** 2) / 8, 1e-9);
+  const verdict = await page.getByTestId('member-verdict').innerText();
+  check(/L\/360/.test(verdict), `the verdict names the limit, got "${verdict}"`);
+}
