@@ -145,15 +145,22 @@ function localRings(pieces: readonly WeightedRegion[], ox: number, oy: number, f
 }
 
 /** Sorted projections s of all vertices and of arc extreme points in ±n (the breakpoints of g). */
-function breakpoints(rings: readonly LocalRing[], f: Frame): number[] {
-  const s: number[] = [];
+function breakpoints(rings: readonly LocalRing[], f: Frame): Float64Array {
+  let count = 0;
+  for (const ring of rings) count += ring.xy.length >> 1;
+  let s = new Float64Array(count);
+  let used = 0;
+  const push = (v: number): void => {
+    if (used === s.length) { const grown = new Float64Array(2 * s.length + 4); grown.set(s); s = grown; }
+    s[used++] = v;
+  };
   const phiUp = Math.atan2(f.ny, f.nx);
   for (const ring of rings) {
     const n = ring.xy.length >> 1;
     for (let i = 0; i < n; i++) {
       const x = ring.xy[2 * i]!;
       const y = ring.xy[2 * i + 1]!;
-      s.push(f.nx * x + f.ny * y);
+      push(f.nx * x + f.ny * y);
       const b = ring.bulge?.[i] ?? 0;
       if (isStraight(b)) continue;
       const j = (i + 1) % n;
@@ -162,12 +169,14 @@ function breakpoints(rings: readonly LocalRing[], f: Frame): number[] {
         const tau = sweepOffsetOfAngle(arc, phi);
         if (Number.isNaN(tau)) continue;
         const [px, py] = arcPointOffset(arc, tau);
-        s.push(f.nx * (x + px) + f.ny * (y + py));
+        push(f.nx * (x + px) + f.ny * (y + py));
       }
     }
   }
-  s.sort((a, b) => a - b);
-  return s.filter((v, i) => i === 0 || v !== s[i - 1]);
+  const sorted = s.subarray(0, used).sort();
+  let m = 0;
+  for (let i = 0; i < sorted.length; i++) if (i === 0 || sorted[i] !== sorted[m - 1]) sorted[m++] = sorted[i]!;
+  return sorted.slice(0, m);
 }
 
 /** Pieces of one segment after splitting it at the line s = d; pushes start point, bulge, side. */
@@ -390,7 +399,88 @@ function brentRoot(g: (d: number) => number, a0: number, b0: number, ga: number,
   return { d: b, iterations: BRENT_CAP, converged: false };
 }
 
-function solveBalance(g: (d: number) => number, s: readonly number[], gEnds: [number, number], polygonsOnly: boolean, zeroTol: number): Root {
+/**
+ * Straight-edged rings only (METHODS §5.3): the cut width w(s) is piecewise linear between the
+ * sorted, distinct vertex projections u. Each edge P→Q with s_P ≠ s_Q adds sign(s_Q − s_P)·t(s)
+ * over its s-range (∮ t ds = A in the right-handed (t, s) frame); the pieces are accumulated as
+ * difference arrays, one binary search per edge end, then integrated once from the top. Returns
+ * the approximate g(u_k) = 2·ΣwA₊(u_k) − W − N at every breakpoint, used only to locate the
+ * bracket: the bracket is then confirmed by exact clipping evaluations, so rounding here can
+ * cost evaluations but never change the answer.
+ */
+function sweepBalance(rings: readonly LocalRing[], f: Frame, u: Float64Array, W: number, axialForce: number): Float64Array {
+  const m = u.length;
+  const c0 = new Float64Array(m);
+  const c1 = new Float64Array(m);
+  const indexOf = (v: number): number => {
+    let lo = 0, hi = m - 1;
+    while (lo < hi) { const mid = (lo + hi) >> 1; if (u[mid]! < v) lo = mid + 1; else hi = mid; }
+    return lo;
+  };
+  for (const ring of rings) {
+    const { xy, weight } = ring;
+    const n = xy.length >> 1;
+    let px = xy[2 * n - 2]!, py = xy[2 * n - 1]!;
+    let sp = f.nx * px + f.ny * py, tp = f.tx * px + f.ty * py;
+    for (let i = 0; i < n; i++) {
+      const x = xy[2 * i]!, y = xy[2 * i + 1]!;
+      const sq = f.nx * x + f.ny * y, tq = f.tx * x + f.ty * y;
+      if (sp !== sq) {
+        const beta = (tq - tp) / (sq - sp);
+        const sign = sq > sp ? weight : -weight;
+        const ia = indexOf(sq > sp ? sp : sq), ib = indexOf(sq > sp ? sq : sp);
+        const a = sign * (tp - beta * sp), b = sign * beta;
+        c0[ia] = c0[ia]! + a; c1[ia] = c1[ia]! + b; c0[ib] = c0[ib]! - a; c1[ib] = c1[ib]! - b;
+      }
+      px = x; py = y; sp = sq; tp = tq;
+    }
+  }
+  // Prefix sums give w(s) = c0 + c1·s on interval [u_k, u_k+1]; integrate from the top.
+  let a0 = 0, a1 = 0;
+  for (let k = 0; k < m; k++) { a0 += c0[k]!; a1 += c1[k]!; c0[k] = a0; c1[k] = a1; }
+  const g = c0;
+  let above = 0;
+  g[m - 1] = -W - axialForce;
+  for (let k = m - 2; k >= 0; k--) {
+    const lo = u[k]!, hi = u[k + 1]!;
+    above += (c0[k]! + 0.5 * c1[k]! * (lo + hi)) * (hi - lo);
+    g[k] = 2 * above - W - axialForce;
+  }
+  return g;
+}
+
+/**
+ * Largest index i in [a, b] with pred(i), given pred(a) and pred monotone (true, then false).
+ * Without a hint: plain bisection. With a hint: galloping search outward from it (a few
+ * evaluations when the hint is right, O(log n) when it is not).
+ */
+function lastTrue(pred: (i: number) => boolean, a: number, b: number, hint?: number): number {
+  let lo = a, hi = b + 1;
+  if (hint !== undefined) {
+    const h = Math.min(b, Math.max(a, hint));
+    let step = 1;
+    if (pred(h)) {
+      lo = h;
+      while (lo + step <= b && pred(lo + step)) { lo += step; step *= 2; }
+      hi = Math.min(lo + step, b + 1);
+    } else {
+      hi = h;
+      while (hi - step > a && !pred(hi - step)) { hi -= step; step *= 2; }
+      lo = Math.max(hi - step, a);
+    }
+  }
+  while (hi - lo > 1) { const mid = (lo + hi) >> 1; if (pred(mid)) lo = mid; else hi = mid; }
+  return lo;
+}
+
+function solveBalance(
+  g: (d: number) => number,
+  s: Float64Array,
+  gEnds: [number, number],
+  polygonsOnly: boolean,
+  zeroTol: number,
+  approx?: Float64Array,
+): Root {
   let evaluations = 0;
   const cache = new Map<number, number>([[0, gEnds[0]], [s.length - 1, gEnds[1]]]);
   const gi = (i: number): number => {
@@ -400,12 +490,16 @@ function solveBalance(g: (d: number) => number, s: readonly number[], gEnds: [nu
   };
   const last = s.length - 1;
   if (gi(0) <= zeroTol) return { d: s[0]!, method: 'breakpoint', evaluations, converged: true };
-  let lo = 0, hi = last;
-  while (hi - lo > 1) { const mid = (lo + hi) >> 1; if (gi(mid) > zeroTol) lo = mid; else hi = mid; }
+  const hintOf = (test: (v: number) => boolean): number | undefined => {
+    if (approx === undefined) return undefined;
+    let k = 0;
+    while (k + 1 < approx.length && test(approx[k + 1]!)) k++;
+    return k;
+  };
+  const lo = lastTrue((i) => gi(i) > zeroTol, 0, last - 1, hintOf((v) => v > zeroTol));
+  const hi = lo + 1;
   if (gi(hi) >= -zeroTol) {
-    let lo2 = hi, hi2 = last;
-    if (gi(last) >= -zeroTol) lo2 = last;
-    while (hi2 - lo2 > 1) { const mid = (lo2 + hi2) >> 1; if (gi(mid) >= -zeroTol) lo2 = mid; else hi2 = mid; }
+    const lo2 = lastTrue((i) => gi(i) >= -zeroTol, hi, last, hintOf((v) => v >= -zeroTol));
     if (lo2 === hi) return { d: s[hi]!, method: 'breakpoint', evaluations, converged: true };
     return { d: (s[hi]! + s[lo2]!) / 2, method: 'plateau', evaluations, converged: true, plateau: [s[hi]!, s[lo2]!] };
   }
@@ -429,7 +523,7 @@ interface CoreResult {
   readonly centroidMinus: number;
 }
 
-function plasticAxisCore(pieces: readonly WeightedRegion[], angleDeg: Degrees, axialForce: number): CoreResult {
+function plasticAxisCore(pieces: readonly WeightedRegion[], angleDeg: Degrees, axialForce: number, useSweep = true): CoreResult {
   checkPieces(pieces, axialForce);
   const [c, sn] = cosSinDegrees(angleDeg);
   const f: Frame = { nx: -sn, ny: c, tx: c, ty: sn };
@@ -445,7 +539,8 @@ function plasticAxisCore(pieces: readonly WeightedRegion[], angleDeg: Degrees, a
   const s = breakpoints(rings, f);
   const g = (d: number): number => 2 * upperSide(rings, f, d).A - W - axialForce;
   const polygonsOnly = rings.every((r) => r.bulge === undefined || r.bulge.every(isStraight));
-  const root = solveBalance(g, s, [W - axialForce, -W - axialForce], polygonsOnly, 1e-12 * W);
+  const approx = polygonsOnly && useSweep ? sweepBalance(rings, f, s, W, axialForce) : undefined;
+  const root = solveBalance(g, s, [W - axialForce, -W - axialForce], polygonsOnly, 1e-12 * W, approx);
   const up = upperSide(rings, f, root.d);
   const lowA = W - up.A;
   const lowQs = Qs - up.Qs;
@@ -482,6 +577,18 @@ export function plasticNeutralAxisWeighted(
   axialForce = 0,
 ): WeightedPlasticAxis {
   return plasticAxisCore(pieces, angleDeg, axialForce).axis;
+}
+
+/**
+ * The same balance found by bisection over all breakpoints, without the width sweep (each step a
+ * full clipping pass). Kept as the independent check of the sweep-located bracket in the tests.
+ */
+export function plasticNeutralAxisWeightedByBisection(
+  pieces: readonly WeightedRegion[],
+  angleDeg: Degrees,
+  axialForce = 0,
+): WeightedPlasticAxis {
+  return plasticAxisCore(pieces, angleDeg, axialForce, false).axis;
 }
 
 /** PNA and plastic modulus of one region with the PNA at angleDeg (CCW from +x), METHODS §5. */
