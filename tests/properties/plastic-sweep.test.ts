@@ -50,6 +50,17 @@ describe('plastic neutral axis: sweep-located bracket agrees with bisection', ()
     }
     expect(cases).toBe(6 * 6 * 3);
   });
+  it('a 6,000-vertex star with a hole straddling the origin (linear-time sort path): d and moment equal to 1e−12', () => {
+    const big = normaliseRegion([poly(ring(star(rand, 6000, -5, 3, 60, 100)), ring(star(rand, 5000, 0, 0, 10, 30)))]);
+    for (const angle of [0, -90, 33]) {
+      const pieces = [{ region: big, weight: 1 }];
+      const fast = plasticNeutralAxisWeighted(pieces, degrees(angle));
+      const slow = plasticNeutralAxisWeightedByBisection(pieces, degrees(angle));
+      expectRel(fast.d, slow.d, 1e-12, 100);
+      expectRel(fast.moment, slow.moment, 1e-12);
+      expect(fast.evaluations).toBeLessThan(slow.evaluations);
+    }
+  });
   it('two separated plates (plateau between y = 10 and y = 90): both report d = 50 and the same interval', () => {
     // Equal plates [0,100]×[0,10] and [0,100]×[90,100]: any d in [10, 90] balances; the rule is the middle.
     const region: Region = [poly(rectRing(0, 0, 100, 10)), poly(rectRing(0, 90, 100, 100))];
