@@ -19,35 +19,54 @@ import { orient2d } from 'robust-predicates';
 import { reverseRing, ringSignedArea } from './ring.ts';
 import type { Polygon, Region, Ring } from './types.ts';
 
-/** Vertices and bulges as growable plain arrays while cleaning. */
+/**
+ * Vertices and bulges while cleaning: typed arrays with a length, no per-vertex allocation (rings
+ * may hold millions of vertices). Capacity is the input vertex count; cleaning only removes.
+ */
 interface Chain {
-  x: number[];
-  y: number[];
-  b: number[];
+  x: Float64Array;
+  y: Float64Array;
+  b: Float64Array;
+  n: number;
+}
+
+function emptyChain(capacity: number): Chain {
+  return { x: new Float64Array(capacity), y: new Float64Array(capacity), b: new Float64Array(capacity), n: 0 };
+}
+
+function push(c: Chain, x: number, y: number, b: number): void {
+  c.x[c.n] = x;
+  c.y[c.n] = y;
+  c.b[c.n] = b;
+  c.n++;
+}
+
+/** Removes vertex v, shifting the later ones down. */
+function removeAt(c: Chain, v: number): void {
+  c.x.copyWithin(v, v + 1, c.n);
+  c.y.copyWithin(v, v + 1, c.n);
+  c.b.copyWithin(v, v + 1, c.n);
+  c.n--;
 }
 
 function chainWithoutRepeats(ring: Ring): Chain {
   const { xy, bulge } = ring;
   const n = xy.length >> 1;
-  const c: Chain = { x: [], y: [], b: [] };
+  const c = emptyChain(n);
   for (let i = 0; i < n; i++) {
     const x = xy[2 * i] ?? 0;
     const y = xy[2 * i + 1] ?? 0;
-    const last = c.x.length - 1;
+    const last = c.n - 1;
     if (last >= 0 && c.x[last] === x && c.y[last] === y) {
       // Segment last → i has zero length: the kept vertex takes over vertex i's outgoing segment.
       c.b[last] = bulge?.[i] ?? 0;
       continue;
     }
-    c.x.push(x);
-    c.y.push(y);
-    c.b.push(bulge?.[i] ?? 0);
+    push(c, x, y, bulge?.[i] ?? 0);
   }
-  while (c.x.length > 1 && c.x[c.x.length - 1] === c.x[0] && c.y[c.y.length - 1] === c.y[0]) {
+  while (c.n > 1 && c.x[c.n - 1] === c.x[0] && c.y[c.n - 1] === c.y[0]) {
     // The closing segment last → first has zero length; the segment before it now ends at vertex 0.
-    c.x.pop();
-    c.y.pop();
-    c.b.pop();
+    c.n--;
   }
   return c;
 }
@@ -61,54 +80,49 @@ function isPassThrough(c: Chain, u: number, v: number, w: number): boolean {
 }
 
 function chainWithoutCollinear(c: Chain): Chain {
-  const out: Chain = { x: [], y: [], b: [] };
-  const n = c.x.length;
+  const out = emptyChain(c.n);
   // A vertex k is removable when segment (k−1 → k) and (k → k+1) are straight and k is a pass-through.
-  for (let i = 0; i < n; i++) {
-    out.x.push(c.x[i] ?? 0);
-    out.y.push(c.y[i] ?? 0);
-    out.b.push(c.b[i] ?? 0);
+  for (let i = 0; i < c.n; i++) {
+    push(out, c.x[i] ?? 0, c.y[i] ?? 0, c.b[i] ?? 0);
     popWhilePassThrough(out);
   }
   // Seam: vertex 0 and the last vertex were never tested with their cyclic neighbours.
   let changed = true;
-  while (changed && out.x.length > 3) {
-    changed = removeIfPassThrough(out, out.x.length - 1) || removeIfPassThrough(out, 0);
+  while (changed && out.n > 3) {
+    changed = removeIfPassThrough(out, out.n - 1) || removeIfPassThrough(out, 0);
   }
   return out;
 }
 
 /** Removes vertex v when both of its segments are straight and it lies strictly inside u→w. */
 function removeIfPassThrough(c: Chain, v: number): boolean {
-  const n = c.x.length;
+  const n = c.n;
   const u = (v + n - 1) % n;
   const w = (v + 1) % n;
   if ((c.b[u] ?? 0) !== 0 || (c.b[v] ?? 0) !== 0 || !isPassThrough(c, u, v, w)) return false;
-  c.x.splice(v, 1);
-  c.y.splice(v, 1);
-  c.b.splice(v, 1);
+  removeAt(c, v);
   return true;
 }
 
 function popWhilePassThrough(c: Chain): void {
-  while (c.x.length >= 3) {
-    const w = c.x.length - 1, v = w - 1, u = w - 2;
+  while (c.n >= 3) {
+    const w = c.n - 1, v = w - 1, u = w - 2;
     if ((c.b[u] ?? 0) !== 0 || (c.b[v] ?? 0) !== 0 || !isPassThrough(c, u, v, w)) return;
-    c.x.splice(v, 1);
-    c.y.splice(v, 1);
-    c.b.splice(v, 1);
+    removeAt(c, v);
   }
 }
 
 function ringFromChain(c: Chain): Ring {
-  const n = c.x.length;
+  const n = c.n;
   const xy = new Float64Array(2 * n);
+  let curved = false;
   for (let i = 0; i < n; i++) {
     xy[2 * i] = c.x[i] ?? 0;
     xy[2 * i + 1] = c.y[i] ?? 0;
+    if ((c.b[i] ?? 0) !== 0) curved = true;
   }
-  if (c.b.every((b) => b === 0)) return { xy };
-  return { xy, bulge: Float64Array.from(c.b) };
+  if (!curved) return { xy };
+  return { xy, bulge: c.b.slice(0, n) };
 }
 
 /** Cleans one ring and gives it the requested winding (+1 counter-clockwise, −1 clockwise). */
