@@ -418,6 +418,7 @@ export function App(): ReactElement {
             state={state}
             outlines={outlines}
             properties={p ?? results.stale}
+            shearCentre={torsion.kind === 'done' && torsion.doc === state.doc ? [torsion.result.xs, torsion.result.ys] : null}
             diagnostics={results.diagnostics}
             overlays={overlays}
             view={view}

@@ -29,6 +29,8 @@ interface Props {
   readonly state: EditorState;
   readonly outlines: readonly PartOutline[];
   readonly properties: SectionProperties | null;
+  /** Shear centre (section coordinates) from the finished torsion solve of this very document, if any. */
+  readonly shearCentre?: readonly [number, number] | null;
   readonly diagnostics: readonly Diagnostic[];
   readonly overlays: Overlays;
   readonly view: View;
@@ -140,7 +142,7 @@ function PartShape({ o, view, subtract, selected }: { o: PartOutline; view: View
   );
 }
 
-function ResultsOverlay({ p, view, overlays, width, height }: { p: SectionProperties; view: View; overlays: Overlays; width: number; height: number }): ReactElement {
+function ResultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: SectionProperties; view: View; overlays: Overlays; width: number; height: number; shearCentre: readonly [number, number] | null }): ReactElement {
   const c = toScreen(view, [p.cx, p.cy]);
   const far = Math.hypot(width, height);
   const items: ReactElement[] = [];
@@ -194,6 +196,16 @@ function ResultsOverlay({ p, view, overlays, width, height }: { p: SectionProper
         <Circle radius={7} stroke={COLOURS.centroid} strokeWidth={1.5} />
         <Line points={[-11, 0, 11, 0]} stroke={COLOURS.centroid} strokeWidth={1.5} />
         <Line points={[0, -11, 0, 11]} stroke={COLOURS.centroid} strokeWidth={1.5} />
+      </Group>,
+    );
+  }
+  if (overlays.centroid && shearCentre) {
+    // Shear centre (Trefftz, finite elements): a small diamond, labelled, distinct from the centroid's circle.
+    const s = toScreen(view, shearCentre);
+    items.push(
+      <Group key="sc" x={s[0]} y={s[1]}>
+        <Line points={[0, -8, 8, 0, 0, 8, -8, 0]} closed stroke={COLOURS.centroid} strokeWidth={1.5} />
+        <Text x={9} y={-16} text="shear centre" fontSize={11} fill={COLOURS.centroid} />
       </Group>,
     );
   }
@@ -397,7 +409,7 @@ export function Canvas(props: Props): ReactElement {
           ))}
         </Layer>
         <Layer listening={false}>
-          {props.properties && <ResultsOverlay p={props.properties} view={view} overlays={overlays} width={size.width} height={size.height} />}
+          {props.properties && <ResultsOverlay p={props.properties} view={view} overlays={overlays} width={size.width} height={size.height} shearCentre={props.shearCentre ?? null} />}
           <DiagnosticMarks diagnostics={props.diagnostics} view={view} />
         </Layer>
         <Layer listening={false}>

@@ -105,6 +105,10 @@ export function ResultsPanel({ results, unit, display, sig, torsion, current }: 
           {formatSig(results.millis, 2)} ms
         </span>
       </header>
+      {/* First under the heading, so it is read before any number. */}
+      <p className="caution" data-testid="caution">
+        Preliminary results. Verify with a licensed engineer and the local building code, which govern.
+      </p>
       {results.diagnostics.length > 0 && (
         <div className="diagnostics" role="alert" data-testid="diagnostics">
           <strong>{results.properties ? 'Note' : 'The geometry needs attention'}</strong>
@@ -151,9 +155,6 @@ export function ResultsPanel({ results, unit, display, sig, torsion, current }: 
           {results.properties && <TorsionRows t={torsion} current={current} unit={unit} display={display} sig={sig} />}
         </div>
       )}
-      <p className="caution" data-testid="caution">
-        Preliminary results. Verify with a licensed engineer and the local building code, which govern.
-      </p>
     </section>
   );
 }
