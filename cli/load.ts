@@ -10,7 +10,7 @@ import { geoJsonPathOf, isGeoJson, regionFromGeoJson } from '../core/geojson.ts'
 import { sectionProperties } from '../core/properties/index.ts';
 import type { SectionProperties } from '../core/properties/types.ts';
 import { type ComposedPart, sectionFromDocument } from '../core/section/index.ts';
-import type { LengthUnit } from '../core/units/index.ts';
+import { isLengthUnit, type LengthUnit } from '../core/units/index.ts';
 import type { CliIo } from './command.ts';
 
 export interface LoadedSection {
@@ -90,4 +90,32 @@ export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | u
     return { ok: false, messages: [`${file}: not a Sectionsmith document (no "format": "sectionsmith-section") and not GeoJSON (no "type" Polygon, MultiPolygon, Feature or FeatureCollection)`] };
   }
   return fromDocument(file, json.value);
+}
+
+/**
+ * The shared front of the commands that take one section FILE and an optional --unit: checks
+ * the arguments, loads the file, and writes every problem to stderr naming the command.
+ * Returns null when the command should exit with EXIT_BAD_INPUT.
+ */
+export function loadSectionArgument(
+  command: { readonly name: string; readonly usage: string },
+  positionals: readonly string[],
+  unitFlag: string | undefined,
+  io: CliIo,
+): { readonly file: string; readonly unitFlag: LengthUnit | undefined; readonly section: LoadedSection } | null {
+  if (positionals.length !== 1) {
+    io.err(`sectionsmith ${command.name}: expected one FILE, got ${positionals.length === 0 ? 'none' : positionals.join(' ')}\nusage: sectionsmith ${command.usage}\n`);
+    return null;
+  }
+  const file = positionals[0] as string;
+  if (unitFlag !== undefined && !isLengthUnit(unitFlag)) {
+    io.err(`sectionsmith ${command.name}: --unit: expected in, ft, mm, cm or m, got ${JSON.stringify(unitFlag)}\n`);
+    return null;
+  }
+  const loaded = loadSection(file, io, unitFlag);
+  if (!loaded.ok) {
+    io.err(`${loaded.messages.join('\n')}\n`);
+    return null;
+  }
+  return { file, unitFlag, section: loaded.section };
 }

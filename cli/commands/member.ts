@@ -22,7 +22,7 @@ import { CAUTION as MEMBER_CAUTION, type MemberResult } from '../../core/member/
 import { sectionMemberCheck } from '../../core/member/section-member.ts';
 import { convertLength, formatSig, isLengthUnit, LENGTH_UNITS, type LengthUnit } from '../../core/units/index.ts';
 import { EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
-import { loadSection, type LoadedSection } from '../load.ts';
+import { loadSectionArgument, type LoadedSection } from '../load.ts';
 
 export const MEMBER_FLAGS: readonly FlagSpec[] = [
   { name: 'span', type: 'string', value: 'L', description: 'span, in the document unit (required); a cantilever\'s length' },
@@ -221,22 +221,9 @@ function reportText(file: string, r: MemberReport): string {
 }
 
 function runMember(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
-  if (positionals.length !== 1) {
-    io.err(`sectionsmith member: expected one FILE, got ${positionals.length === 0 ? 'none' : positionals.join(' ')}\nusage: sectionsmith ${memberCommand.usage}\n`);
-    return EXIT_BAD_INPUT;
-  }
-  const file = positionals[0] as string;
-  const unitFlag = stringFlag(flags, 'unit');
-  if (unitFlag !== undefined && !isLengthUnit(unitFlag)) {
-    io.err(`sectionsmith member: --unit: expected in, ft, mm, cm or m, got ${JSON.stringify(unitFlag)}\n`);
-    return EXIT_BAD_INPUT;
-  }
-  const loaded = loadSection(file, io, unitFlag);
-  if (!loaded.ok) {
-    io.err(`${loaded.messages.join('\n')}\n`);
-    return EXIT_BAD_INPUT;
-  }
-  const section = loaded.section;
+  const loaded = loadSectionArgument(memberCommand, positionals, stringFlag(flags, 'unit'), io);
+  if (!loaded) return EXIT_BAD_INPUT;
+  const { file, section } = loaded;
   const units = outputUnits(section.unit);
   try {
     const pieces = piecesFor(section, section.kind === 'document' ? io.readFile(file) : undefined, flags, units);

@@ -11,9 +11,9 @@
 import { documentFromJson, parseJson } from '../../core/document/index.ts';
 import type { SectionProperties } from '../../core/properties/types.ts';
 import { MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type TorsionResult } from '../../core/torsion/index.ts';
-import { convertLength, defaultDisplaySet, formatSig, isLengthUnit, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
+import { convertLength, defaultDisplaySet, formatSig, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
-import { loadSection, type LoadedSection } from '../load.ts';
+import { loadSectionArgument, type LoadedSection } from '../load.ts';
 import { materialPropsResults } from './member.ts';
 
 export const PROPS_FLAGS: readonly FlagSpec[] = [
@@ -162,22 +162,9 @@ function json(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResu
 }
 
 function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
-  if (positionals.length !== 1) {
-    io.err(`sectionsmith props: expected one FILE, got ${positionals.length === 0 ? 'none' : positionals.join(' ')}\nusage: sectionsmith ${propsCommand.usage}\n`);
-    return EXIT_BAD_INPUT;
-  }
-  const file = positionals[0] as string;
-  const unitFlag = flags.unit;
-  if (unitFlag !== undefined && !isLengthUnit(unitFlag)) {
-    io.err(`sectionsmith props: --unit: expected in, ft, mm, cm or m, got ${JSON.stringify(unitFlag)}\n`);
-    return EXIT_BAD_INPUT;
-  }
-  const loaded = loadSection(file, io, unitFlag);
-  if (!loaded.ok) {
-    io.err(`${loaded.messages.join('\n')}\n`);
-    return EXIT_BAD_INPUT;
-  }
-  const section = loaded.section;
+  const loaded = loadSectionArgument(propsCommand, positionals, typeof flags.unit === 'string' ? flags.unit : undefined, io);
+  if (!loaded) return EXIT_BAD_INPUT;
+  const { file, unitFlag, section } = loaded;
   const unit = unitFlag ?? section.unit;
   const extra = extraResults(file, section, flags, io, unit);
   if (extra.errors.length > 0) {
