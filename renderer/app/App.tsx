@@ -2,7 +2,7 @@
  * The application shell: menu bar, tools, drawing, part list, exact input and results.
  * It wires the headless editor to the host (files, title, recovery) and to core (results).
  */
-import { useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore, type ReactElement } from 'react';
+import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState, useSyncExternalStore, type ReactElement } from 'react';
 import { newDocument, serialiseDocument, type SectionDocument } from '../../core/document/index.ts';
 import { getPartType } from '../../core/parts/index.ts';
 import { propertiesCsv, sectionSvg } from '../../core/export/index.ts';
@@ -23,6 +23,8 @@ import { createResultsCache, shapeOutlineResolver } from './results.ts';
 import { ResultsPanel } from './ResultsPanel.tsx';
 import { MaterialsPanel } from './MaterialsPanel.tsx';
 import { MemberPanel } from './MemberPanel.tsx';
+import { StressPanel } from './StressPanel.tsx';
+import { computeStress, type ForceTexts } from './stress.ts';
 import { TorsionClient, type TorsionState } from './torsion-client.ts';
 import { fitView, zoomAt, type View } from './view.ts';
 import { formatSig } from '../../core/units/index.ts';
@@ -82,7 +84,7 @@ export function App(): ReactElement {
 
   const [size, setSize] = useState({ width: 0, height: 0 });
   const [view, setView] = useState<View>({ scale: 0.5, ox: 400, oy: 300 });
-  const [overlays, setOverlays] = useState<Overlays>({ centroid: true, axes: true, principal: true, pna: false, fibres: false, dimensions: true });
+  const [overlays, setOverlays] = useState<Overlays>({ centroid: true, axes: true, principal: true, pna: false, fibres: false, dimensions: true, stress: false, kern: false });
   const [displayId, setDisplayId] = useState('document');
   const [sig, setSig] = useState(4);
   const [banner, setBanner] = useState<Banner | null>(null);
@@ -338,6 +340,17 @@ export function App(): ReactElement {
   const activeTool = TOOLS.find((t) => t.id === state.toolId);
   const p = results.properties;
 
+  // Normal stress under the panel's forces: computed while the panel is open or an overlay shows it,
+  // a step behind a drag so dragging stays smooth.
+  const [forces, setForces] = useState<ForceTexts>({ N: '', Mx: '', My: '', Vx: '', Vy: '' });
+  const [stressOpen, setStressOpen] = useState(false);
+  const stressShown = useRef(false);
+  const stressDoc = useDeferredValue(state.doc);
+  const stressCache = useMemo(() => createResultsCache(), []);
+  const stressProps = stressDoc === state.doc ? p : stressCache(stressDoc).properties;
+  const stressWanted = stressOpen || overlays.stress || overlays.kern;
+  const stress = useMemo(() => (stressWanted ? computeStress(stressDoc, stressProps, forces) : null), [stressWanted, stressDoc, stressProps, forces]);
+
   return (
     <div className="app">
       <MenuBar
@@ -420,6 +433,7 @@ export function App(): ReactElement {
             properties={p ?? results.stale}
             shearCentre={torsion.kind === 'done' && torsion.doc === state.doc ? [torsion.result.xs, torsion.result.ys] : null}
             diagnostics={results.diagnostics}
+            stress={stress?.ok && stressDoc === state.doc ? stress.view : null}
             overlays={overlays}
             view={view}
             onView={setView}
@@ -473,6 +487,20 @@ export function App(): ReactElement {
           </div>
           <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={sig} torsion={torsion} current={state.doc} />
           <MaterialsPanel editor={editor} doc={state.doc} valid={!!results.properties} />
+          <StressPanel
+            doc={state.doc}
+            texts={forces}
+            onTexts={setForces}
+            outcome={stress}
+            onOpen={(open) => {
+              setStressOpen(open);
+              // Opening the panel the first time shows the map and the kern; View switches them off.
+              if (open && !stressShown.current) {
+                stressShown.current = true;
+                setOverlays((o) => ({ ...o, stress: true, kern: true }));
+              }
+            }}
+          />
           <MemberPanel doc={state.doc} valid={!!results.properties} />
         </aside>
       </div>

@@ -14,6 +14,10 @@ import type { SectionProperties } from '../../core/properties/types.ts';
 import { COLOURS } from './palette.ts';
 import { gridStep, toScreen, toSection, zoomAt, type View } from './view.ts';
 import { formatSig } from '../../core/units/index.ts';
+import { arcOfSegment, ringVertexCount } from '../../core/geometry/ring.ts';
+import type { Region } from '../../core/geometry/types.ts';
+import { stressAt } from '../../core/stress/index.ts';
+import { stressColour, type StressView } from './stress.ts';
 
 export interface Overlays {
   readonly centroid: boolean;
@@ -22,6 +26,9 @@ export interface Overlays {
   readonly pna: boolean;
   readonly fibres: boolean;
   readonly dimensions: boolean;
+  /** Colour map of the normal stress, extremes and neutral axis (needs forces in the stress panel). */
+  readonly stress: boolean;
+  readonly kern: boolean;
 }
 
 interface Props {
@@ -32,6 +39,8 @@ interface Props {
   /** Shear centre (section coordinates) from the finished torsion solve of this very document, if any. */
   readonly shearCentre?: readonly [number, number] | null;
   readonly diagnostics: readonly Diagnostic[];
+  /** Stresses of the current document under the stress panel's forces, when computed. */
+  readonly stress?: StressView | null;
   readonly overlays: Overlays;
   readonly view: View;
   readonly onView: (v: View) => void;
@@ -208,6 +217,98 @@ function ResultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: 
         <Text x={9} y={-16} text="shear centre" fontSize={11} fill={COLOURS.centroid} />
       </Group>,
     );
+  }
+  return <>{items}</>;
+}
+
+/** Traces a region (arcs exact) on a canvas context in screen coordinates; holes by the even–odd rule. */
+function traceRegion(ctx: { moveTo: (x: number, y: number) => void; lineTo: (x: number, y: number) => void; arc: (x: number, y: number, r: number, a0: number, a1: number, ccw: boolean) => void; closePath: () => void }, view: View, region: Region): void {
+  for (const polygon of region) {
+    for (const ring of [polygon.outer, ...polygon.holes]) {
+      const n = ringVertexCount(ring);
+      for (let i = 0; i < n; i++) {
+        const s = toScreen(view, [ring.xy[2 * i] ?? 0, ring.xy[2 * i + 1] ?? 0]);
+        if (i === 0) ctx.moveTo(s[0], s[1]);
+        const arc = arcOfSegment(ring, i);
+        if (arc) {
+          // Screen y is down: section angle t draws at −t, and a CCW sweep runs anticlockwise on screen.
+          const c = toScreen(view, [arc.cx, arc.cy]);
+          ctx.arc(c[0], c[1], arc.r * view.scale, -arc.t0, -(arc.t0 + arc.sweep), arc.sweep > 0);
+        } else {
+          const j = i + 1 === n ? 0 : i + 1;
+          const e = toScreen(view, [ring.xy[2 * j] ?? 0, ring.xy[2 * j + 1] ?? 0]);
+          ctx.lineTo(e[0], e[1]);
+        }
+      }
+      ctx.closePath();
+    }
+  }
+}
+
+/** The stress map (an exact linear gradient per piece), the extremes, the neutral axis, and the kern. */
+function StressOverlay({ sv, view, overlays }: { sv: StressView; view: View; overlays: Overlays }): ReactElement {
+  const items: ReactElement[] = [];
+  if (overlays.stress) {
+    const { plane } = sv;
+    const g = Math.hypot(plane.kx, plane.ky);
+    const dir: Vec = g > 0 ? [plane.kx / g, plane.ky / g] : [1, 0];
+    sv.pieces.forEach((piece, k) => {
+      items.push(
+        <Shape
+          key={`sm${k}`}
+          listening={false}
+          sceneFunc={(ctx) => {
+            const c = ctx._context;
+            // The field is linear: a gradient along its direction, with stops at the colour-scale knots, is exact.
+            const d0 = plane.cx * dir[0] + plane.cy * dir[1];
+            const along = (a: number): Vec => [plane.cx + dir[0] * (a - d0), plane.cy + dir[1] * (a - d0)];
+            const ex: number[] = [];
+            for (const p of piece.region) for (let i = 0; i < ringVertexCount(p.outer); i++) ex.push((p.outer.xy[2 * i] ?? 0) * dir[0] + (p.outer.xy[2 * i + 1] ?? 0) * dir[1]);
+            // Padded, since arcs may bulge past the vertices; the stops sample the exact field.
+            const lo = Math.min(...ex), hi = Math.max(...ex);
+            const pad = 0.5 * (hi - lo) + 1e-9;
+            const a0 = lo - pad, a1 = hi + pad;
+            const p0 = toScreen(view, along(a0));
+            const p1 = toScreen(view, along(a1));
+            const grad = c.createLinearGradient(p0[0], p0[1], p1[0], p1[1]);
+            const steps = 32;
+            for (let i = 0; i <= steps; i++) {
+              const [x, y] = along(a0 + ((a1 - a0) * i) / steps);
+              grad.addColorStop(i / steps, stressColour(stressAt(plane, piece.E, x, y), sv.scale));
+            }
+            c.beginPath();
+            traceRegion(c, view, piece.region);
+            c.fillStyle = grad;
+            c.fill('evenodd');
+            c.strokeStyle = COLOURS.partStroke;
+            c.lineWidth = 1;
+            c.stroke();
+          }}
+        />,
+      );
+    });
+    if (sv.axis.segment) {
+      const [a, b] = sv.axis.segment.map((q) => toScreen(view, q)) as [Vec, Vec];
+      items.push(<Line key="na" points={[a[0], a[1], b[0], b[1]]} stroke={COLOURS.neutralAxis} strokeWidth={1.6} dash={[12, 5]} />);
+      const far = a[0] > b[0] ? a : b;
+      items.push(<Text key="nal" x={far[0] - 90} y={far[1] - 16} text="neutral axis" fontSize={11} fill={COLOURS.neutralAxis} />);
+    }
+    for (const [key, p, label] of [['max', sv.maxAt, 'σmax'], ['min', sv.minAt, 'σmin']] as const) {
+      const s = toScreen(view, p);
+      items.push(
+        <Group key={`x${key}`} x={s[0]} y={s[1]}>
+          <Circle radius={6} stroke={COLOURS.stressMark} strokeWidth={2} fill={COLOURS.handle} />
+          <Circle radius={2} fill={COLOURS.stressMark} />
+          <Text x={9} y={key === 'max' ? -18 : 6} text={label} fontSize={12} fontStyle="bold" fill={COLOURS.stressMark} />
+        </Group>,
+      );
+    }
+  }
+  if (overlays.kern && sv.kern.length >= 3) {
+    items.push(<Line key="kern" points={flat(view, sv.kern)} closed stroke={COLOURS.kern} strokeWidth={1.8} fill="rgba(44,138,122,0.12)" />);
+    const top = sv.kern.reduce((a, b) => (b[1] > a[1] ? b : a));
+    const s = toScreen(view, top);
+    items.push(<Text key="kernl" x={s[0] + 6} y={s[1] - 16} text="kern" fontSize={11} fontStyle="italic" fill={COLOURS.kern} />);
   }
   return <>{items}</>;
 }
@@ -408,6 +509,11 @@ export function Canvas(props: Props): ReactElement {
             <PartShape key={x.part.id} o={x.o as PartOutline} view={view} subtract selected={selected.has(x.part.id)} />
           ))}
         </Layer>
+        {props.stress && (overlays.stress || overlays.kern) && (
+          <Layer listening={false}>
+            <StressOverlay sv={props.stress} view={view} overlays={overlays} />
+          </Layer>
+        )}
         <Layer listening={false}>
           {props.properties && <ResultsOverlay p={props.properties} view={view} overlays={overlays} width={size.width} height={size.height} shearCentre={props.shearCentre ?? null} />}
           <DiagnosticMarks diagnostics={props.diagnostics} view={view} />

@@ -26,6 +26,8 @@ const OVERLAY_NAMES: readonly [keyof Overlays, string][] = [
   ['pna', 'Plastic neutral axes'],
   ['fibres', 'Extreme-fibre distances'],
   ['dimensions', 'Overall dimensions'],
+  ['stress', 'Stress map, extremes, neutral axis'],
+  ['kern', 'Kern (core)'],
 ];
 
 export function MenuBar(props: Props): ReactElement {

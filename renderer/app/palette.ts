@@ -20,4 +20,7 @@ export const COLOURS = {
   diagnostic: '#c42b2b',
   rulerBack: '#ebe6da',
   rulerText: '#51606e',
+  neutralAxis: '#1f2a36',
+  stressMark: '#7a2e55',
+  kern: '#2c8a7a',
 } as const;

@@ -223,3 +223,34 @@ export async function memberCheckOfTheGirderMatchesTheUniformLoadClosedForm({ pa
   const verdict = await page.getByTestId('member-verdict').innerText();
   check(/L\/360/.test(verdict), `the verdict names the limit, got "${verdict}"`);
 }
+
+export async function stressOfATypedPlateUnderMxFollowsTheFlexureFormulaAndItsKernIsTheMiddleThirdRhombus({ page, baseUrl }) {
+  await openApp(page, baseUrl);
+  await newSection(page);
+  await typePlate(page, { b: 100, h: 200 });
+  await page.getByTestId('result-Ix').waitFor();
+  await page.locator('summary', { hasText: 'Normal stress and kern' }).click();
+  await page.getByTestId('stress-Mx').fill('50');
+  await page.getByTestId('result-sigmaMax').waitFor();
+  const unit = await page.getByTestId('result-sigmaMax').getAttribute('data-unit');
+  check(unit === 'MPa', `stresses of a millimetre document read in MPa, got ${unit}`);
+  // Flexure formula σ = M·c/I (Gere & Timoshenko, Mechanics of Materials, §5.5); no materials, so E does not enter.
+  // M = 50 kN·m = 5e7 N·mm, c = h/2 = 100 mm, I = b·h³/12 mm⁴; N/mm² = MPa exactly.
+  const I = (100 * 200 ** 3) / 12;
+  const sigma = (5e7 * 100) / I;
+  near('σmax = +M·c/I (tension at +y)', await resultValue(page, 'sigmaMax'), sigma, 1e-12);
+  near('σmin = −M·c/I', await resultValue(page, 'sigmaMin'), -sigma, 1e-12);
+  // Middle-third rule (common practice; Gere & Timoshenko, eccentric axial loads): the kern of a b × h rectangle
+  // is the rhombus with half-diagonals b/6 along x and h/6 along y, about the centroid (here the origin).
+  const kern = JSON.parse(await page.getByTestId('kern-vertices').getAttribute('data-value'));
+  check(kern.length === 4, `the kern of a rectangle has 4 corners, got ${kern.length}`);
+  const want = [[100 / 6, 0], [0, 200 / 6], [-100 / 6, 0], [0, -200 / 6]];
+  for (const [x, y] of want) {
+    const hit = kern.some(([kx, ky]) => Math.abs(kx - x) < 1e-9 && Math.abs(ky - y) < 1e-9);
+    check(hit, `kern corner (${x}, ${y}) expected among ${JSON.stringify(kern)}`);
+  }
+  // The overlay switches sit with the others under View and were turned on by opening the panel.
+  await page.getByTestId('menu-view').click();
+  check(await page.getByTestId('overlay-stress').isChecked(), 'the stress map overlay is on after opening the panel');
+  check(await page.getByTestId('overlay-kern').isChecked(), 'the kern overlay is on after opening the panel');
+}
