@@ -69,7 +69,7 @@ function readForce(text: string, unit: ForceUnit, what: string): number {
 function readMoment(text: string, unit: MomentUnit, what: string): number {
   if (text.trim() === '') return 0;
   // Also accepted: kNm, kN*m, kN.m for kN·m (and likewise for the others).
-  const t = text.replace('−', '-').replace(/([A-Za-z])[*.]?(m|mm|in|ft)\s*$/, '$1·$2');
+  const t = text.replace('−', '-').replace(/(N|kN|lbf|kip)\s*[*.·]?\s*(mm|m|in|ft)\s*$/, '$1·$2');
   const q = parseQuantity(t, MOMENT_UNITS, unit, what);
   const [force, length] = MOMENT_FORCE[q.unit];
   return forceToNewtons(q.value, force) * convertLength(1, length, 'm');
