@@ -3,7 +3,7 @@
  * layers are separate (§11): grid and rulers, document shapes, results overlay, interaction overlay.
  */
 import { useEffect, useRef, useState, type ReactElement } from 'react';
-import { Stage, Layer, Line, Circle, Shape, Text, Group, Rect } from 'react-konva';
+import { Stage, Layer, Line, Circle, Shape, Text, Group, Rect, Label, Tag } from 'react-konva';
 import type Konva from 'konva';
 import type { Editor, EditorState } from '../editor/editor.ts';
 import type { PartOutline, Vec } from '../editor/geometry.ts';
@@ -246,7 +246,7 @@ function traceRegion(ctx: { moveTo: (x: number, y: number) => void; lineTo: (x: 
 }
 
 /** The stress map (an exact linear gradient per piece), the extremes, the neutral axis, and the kern. */
-function StressOverlay({ sv, view, overlays }: { sv: StressView; view: View; overlays: Overlays }): ReactElement {
+function StressOverlay({ sv, view, overlays, width, height }: { sv: StressView; view: View; overlays: Overlays; width: number; height: number }): ReactElement {
   const items: ReactElement[] = [];
   if (overlays.stress) {
     const { plane } = sv;
@@ -290,8 +290,17 @@ function StressOverlay({ sv, view, overlays }: { sv: StressView; view: View; ove
     if (sv.axis.segment) {
       const [a, b] = sv.axis.segment.map((q) => toScreen(view, q)) as [Vec, Vec];
       items.push(<Line key="na" points={[a[0], a[1], b[0], b[1]]} stroke={COLOURS.neutralAxis} strokeWidth={1.6} dash={[12, 5]} />);
-      const far = a[0] > b[0] ? a : b;
-      items.push(<Text key="nal" x={far[0] - 90} y={far[1] - 16} text="neutral axis" fontSize={11} fill={COLOURS.neutralAxis} />);
+      // Labelled on the visible part of the line, toward its right end.
+      const [l, r] = a[0] <= b[0] ? [a, b] : [b, a];
+      const t = (Math.min(r[0], width - 110) - l[0]) / (r[0] - l[0] || 1);
+      const lx = l[0] + Math.max(0, Math.min(1, t)) * (r[0] - l[0]);
+      const ly = l[1] + Math.max(0, Math.min(1, t)) * (r[1] - l[1]);
+      items.push(
+        <Label key="nal" x={Math.max(4, Math.min(width - 100, lx + 6))} y={Math.max(4, Math.min(height - 24, ly - 22))}>
+          <Tag fill={COLOURS.paper} opacity={0.85} cornerRadius={2} />
+          <Text text="neutral axis" fontSize={11} fill={COLOURS.neutralAxis} padding={2} />
+        </Label>,
+      );
     }
     for (const [key, p, label] of [['max', sv.maxAt, 'σmax'], ['min', sv.minAt, 'σmin']] as const) {
       const s = toScreen(view, p);
@@ -299,7 +308,10 @@ function StressOverlay({ sv, view, overlays }: { sv: StressView; view: View; ove
         <Group key={`x${key}`} x={s[0]} y={s[1]}>
           <Circle radius={6} stroke={COLOURS.stressMark} strokeWidth={2} fill={COLOURS.handle} />
           <Circle radius={2} fill={COLOURS.stressMark} />
-          <Text x={9} y={key === 'max' ? -18 : 6} text={label} fontSize={12} fontStyle="bold" fill={COLOURS.stressMark} />
+          <Label x={s[0] > width - 170 ? -150 : 9} y={key === 'max' ? -20 : 6}>
+            <Tag fill={COLOURS.paper} opacity={0.85} cornerRadius={2} />
+            <Text text={`${label} ${sv.labels[key]}`} fontSize={12} fontStyle="bold" fill={COLOURS.stressMark} padding={2} />
+          </Label>
         </Group>,
       );
     }
@@ -511,7 +523,7 @@ export function Canvas(props: Props): ReactElement {
         </Layer>
         {props.stress && (overlays.stress || overlays.kern) && (
           <Layer listening={false}>
-            <StressOverlay sv={props.stress} view={view} overlays={overlays} />
+            <StressOverlay sv={props.stress} view={view} overlays={overlays} width={size.width} height={size.height} />
           </Layer>
         )}
         <Layer listening={false}>

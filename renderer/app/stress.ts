@@ -13,7 +13,7 @@ import { compositeProperties, materialPiecesFromDocument, parseQuantity, pascals
 import type { SectionProperties } from '../../core/properties/types.ts';
 import { regionFromDocument } from '../../core/section/index.ts';
 import { averageShear, kern, neutralAxis, strainPlane, stressExtremes, type NeutralAxis, type SectionStiffness, type StrainPlane } from '../../core/stress/index.ts';
-import { convertLength } from '../../core/units/index.ts';
+import { convertLength, formatSig } from '../../core/units/index.ts';
 
 export type MomentUnit = 'N·mm' | 'N·m' | 'kN·m' | 'kN·mm' | 'lbf·in' | 'lbf·ft' | 'kip·in' | 'kip·ft';
 export const MOMENT_UNITS: readonly MomentUnit[] = ['N·mm', 'N·m', 'kN·m', 'kN·mm', 'lbf·in', 'lbf·ft', 'kip·in', 'kip·ft'];
@@ -57,6 +57,8 @@ export interface StressView {
   readonly tauX: number;
   readonly tauY: number;
   readonly withMaterials: boolean;
+  /** The extremes as shown on the canvas, e.g. "104.0 MPa". */
+  readonly labels: { readonly max: string; readonly min: string };
 }
 
 /** "−12.5 kN·m" or a bare number in the default unit → the SI value (N or N·m); throws QuantityError naming the input. */
@@ -138,7 +140,7 @@ function stressOf(doc: SectionDocument, properties: SectionProperties | null, te
   const shear = averageShear({ N, Mx, My, Vx, Vy }, properties.area * m2);
   return {
     ok: true,
-    view: { plane, pieces, ...best, scale: Math.max(Math.abs(best.max), Math.abs(best.min)), axis, kern: k.vertices, tauX: shear.tauX, tauY: shear.tauY, withMaterials },
+    view: { plane, pieces, ...best, labels: { max: `${formatSig(pascalsTo(best.max, u.stress), 4)} ${u.stress}`, min: `${formatSig(pascalsTo(best.min, u.stress), 4)} ${u.stress}` }, scale: Math.max(Math.abs(best.max), Math.abs(best.min)), axis, kern: k.vertices, tauX: shear.tauX, tauY: shear.tauY, withMaterials },
   };
 }
 
