@@ -17,6 +17,7 @@ import { formatSig } from '../../core/units/index.ts';
 import { arcOfSegment, ringVertexCount } from '../../core/geometry/ring.ts';
 import type { Region } from '../../core/geometry/types.ts';
 import { stressAt } from '../../core/stress/index.ts';
+import { pascalsTo } from '../../core/materials/index.ts';
 import { stressColour, type StressView } from './stress.ts';
 
 export interface Overlays {
@@ -315,6 +316,23 @@ function StressOverlay({ sv, view, overlays, width, height }: { sv: StressView; 
         </Group>,
       );
     }
+  }
+  if (overlays.stress) {
+    // Legend: the symmetric scale ±|σ|max, compression left, in the panel's stress unit.
+    const w = 180, x0 = RULER + 14, y0 = height - 52;
+    const half = formatSig(pascalsTo(sv.scale, sv.unit), 3);
+    const stops: (string | number)[] = [];
+    for (let i = 0; i <= 8; i++) stops.push(i / 8, stressColour(((i - 4) / 4) * sv.scale, sv.scale));
+    items.push(
+      <Group key="legend" x={x0} y={y0}>
+        <Rect x={-6} y={-18} width={w + 12} height={50} fill={COLOURS.paper} opacity={0.9} cornerRadius={3} stroke={COLOURS.gridMajor} />
+        <Text x={0} y={-14} text={`normal stress σ (${sv.unit})`} fontSize={11} fill={COLOURS.dimension} />
+        <Rect x={0} y={0} width={w} height={10} fillLinearGradientStartPoint={{ x: 0, y: 0 }} fillLinearGradientEndPoint={{ x: w, y: 0 }} fillLinearGradientColorStops={stops} stroke={COLOURS.dimension} strokeWidth={0.5} />
+        <Text x={0} y={14} text={`−${half}`} fontSize={10} fill={COLOURS.dimension} />
+        <Text x={w / 2 - 3} y={14} text="0" fontSize={10} fill={COLOURS.dimension} />
+        <Text x={w - 60} y={14} width={60} align="right" text={`+${half}`} fontSize={10} fill={COLOURS.dimension} />
+      </Group>,
+    );
   }
   if (overlays.kern && sv.kern.length >= 3) {
     items.push(<Line key="kern" points={flat(view, sv.kern)} closed stroke={COLOURS.kern} strokeWidth={1.8} fill="rgba(44,138,122,0.12)" />);

@@ -65,6 +65,15 @@ export function StressPanel({ doc, texts, onTexts, outcome, onOpen }: Props): Re
                 <td className="unit">{u.stress}</td>
                 <td className="label">{at(v.minAt)}</td>
               </tr>
+              {v.withMaterials && v.perPiece.length > 1 &&
+                v.perPiece.map((q, i) => (
+                  <tr key={`piece${i}`}>
+                    <th>σ in</th>
+                    <td className="value" data-testid={`result-sigmaPiece-${i}`}>{formatSig(s(q.max), 4)} / {formatSig(s(q.min), 4)}</td>
+                    <td className="unit">{u.stress}</td>
+                    <td className="label">{q.label}: largest / smallest</td>
+                  </tr>
+                ))}
               <tr>
                 <th>neutral axis</th>
                 <td className="value" data-testid="result-neutralAxis">{v.axis.exists ? `${formatSig(Math.abs(v.axis.angleDeg) < 1e-9 ? 0 : v.axis.angleDeg, 4)}°` : 'none'}</td>

@@ -57,6 +57,10 @@ export interface StressView {
   readonly tauX: number;
   readonly tauY: number;
   readonly withMaterials: boolean;
+  /** Per piece (one per part with a material): its own largest and smallest stress (Pa). */
+  readonly perPiece: readonly { readonly label: string; readonly max: number; readonly min: number }[];
+  /** The stress unit of the panel and legend. */
+  readonly unit: StressUnit;
   /** The extremes as shown on the canvas, e.g. "104.0 MPa". */
   readonly labels: { readonly max: string; readonly min: string };
 }
@@ -123,8 +127,10 @@ function stressOf(doc: SectionDocument, properties: SectionProperties | null, te
   const m2 = convertLength(1, doc.unit, 'm', 2), m3 = convertLength(1, doc.unit, 'm', 3);
   const plane = strainPlane(stiffness, { N: N / m2, Mx: Mx / m3, My: My / m3 });
   let best: { max: number; maxAt: Point; min: number; minAt: Point } | null = null;
+  const perPiece: { label: string; max: number; min: number }[] = [];
   for (const piece of pieces) {
     const e = stressExtremes(plane, piece.E, piece.region);
+    perPiece.push({ label: piece.label, max: e.max, min: e.min });
     if (!best) best = { ...e };
     else {
       if (e.max > best.max) Object.assign(best, { max: e.max, maxAt: e.maxAt });
@@ -140,7 +146,7 @@ function stressOf(doc: SectionDocument, properties: SectionProperties | null, te
   const shear = averageShear({ N, Mx, My, Vx, Vy }, properties.area * m2);
   return {
     ok: true,
-    view: { plane, pieces, ...best, labels: { max: `${formatSig(pascalsTo(best.max, u.stress), 4)} ${u.stress}`, min: `${formatSig(pascalsTo(best.min, u.stress), 4)} ${u.stress}` }, scale: Math.max(Math.abs(best.max), Math.abs(best.min)), axis, kern: k.vertices, tauX: shear.tauX, tauY: shear.tauY, withMaterials },
+    view: { plane, pieces, perPiece, unit: u.stress, ...best, labels: { max: `${formatSig(pascalsTo(best.max, u.stress), 4)} ${u.stress}`, min: `${formatSig(pascalsTo(best.min, u.stress), 4)} ${u.stress}` }, scale: Math.max(Math.abs(best.max), Math.abs(best.min)), axis, kern: k.vertices, tauX: shear.tauX, tauY: shear.tauY, withMaterials },
   };
 }
 
