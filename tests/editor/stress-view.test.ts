@@ -6,6 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { Part, SectionDocument } from '../../core/document/types.ts';
+import { builtInMaterial, materialInSI } from '../../core/materials/index.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
 import { computeStress, stressUnits, toStressUnit, type ForceTexts } from '../../renderer/app/stress.ts';
 import { emptyDoc } from './helpers.ts';
@@ -72,5 +73,17 @@ describe('stress view: forces with units', () => {
     const v = run(docOf(round(100)), { Mx: '1' });
     expect(v.kern.length).toBeGreaterThan(8);
     for (const [x, y] of v.kern) expect(Math.hypot(x, y)).toBeCloseTo(12.5, 9);
+  });
+
+  it('a steel plate on an aluminium plate under N alone: one strain, so the stresses of the parts stand as E_steel : E_aluminium', () => {
+    // Uniform strain ε = N/EA in both (METHODS §6): σ_i = E_i·ε, so σ_steel/σ_al = E_steel/E_al (identity).
+    const steel = { ...common, id: 's', name: 'steel', type: 'rectangle', width: 100, height: 20, placement: { ...common.placement, y: 60 }, material: 'astm-a992' } as const;
+    const alu = { ...common, id: 'a', name: 'alu', type: 'rectangle', width: 100, height: 100, material: 'al-6061-t6' } as const;
+    const doc: SectionDocument = { ...emptyDoc(), parts: [steel, alu] };
+    const v = run(doc, { N: '100' });
+    const [s, a] = v.perPiece;
+    const ratio = materialInSI(builtInMaterial('astm-a992')!).E / materialInSI(builtInMaterial('al-6061-t6')!).E;
+    expect(s!.max / a!.max).toBeCloseTo(ratio, 9);
+    expect(s!.min / s!.max).toBeCloseTo(1, 9);
   });
 });
