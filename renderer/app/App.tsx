@@ -131,16 +131,18 @@ export function App(): ReactElement {
 
   // Recovery text shortly after each change; cleared when the work becomes clean again (saved,
   // or undone back to the saved state). A fresh start never clears it: that text may be the
-  // previous session's, still on offer.
+  // previous session's, still on offer. While that offer is unanswered nothing is written, so
+  // the earlier work is not overwritten by new edits; answering it resumes writing at once.
   const wasDirty = useRef(false);
   useEffect(() => {
+    if (recovery !== null) return undefined;
     if (!state.dirty && !wasDirty.current) return undefined;
     const t = window.setTimeout(() => {
       wasDirty.current = state.dirty;
       void host.writeRecovery(state.dirty ? serialiseDocument(state.doc) : null);
     }, RECOVERY_DELAY_MS);
     return () => window.clearTimeout(t);
-  }, [host, state.doc, state.dirty]);
+  }, [host, state.doc, state.dirty, recovery]);
 
   const loadDoc = useCallback(
     (doc: SectionDocument, file: { name: string; handle: string | null } | null, dirty = false) => {
