@@ -63,14 +63,32 @@ const MC_NOTE = 'parallel flanges at the average thickness tf: the MC flange slo
 const ANGLE_NOTE = 'sharp root and toes: the database states no radii (kdes kept as published)';
 const HSS_NOTE = 'design wall thickness tdes (0.93·tnom, as tabulated) is used for geometry';
 
+/**
+ * The part a rolled flanged shape builds from its published dimensions, by the conventions
+ * above: S, C and ST flanges slope 2:12 (from memory; `given.slope` overrides), and the root
+ * fillet radius is kdes − the flange thickness at the web face (`given.r` overrides).
+ * C and MC are channels, WT, MT and ST tees, the rest (W, M, S, HP) I shapes.
+ */
+export function flangedPart(
+  family: string,
+  dims: { readonly d: number; readonly bf: number; readonly tw: number; readonly tf: number; readonly kdes: number },
+  given: { readonly slope?: number | undefined; readonly r?: number | undefined } = {},
+): { shape: 'i-shape' | 'channel' | 'tee'; params: Record<string, number>; slope: number } {
+  const { d, bf, tw, tf, kdes } = dims;
+  const sloped = family === 'S' || family === 'C' || family === 'ST';
+  const slope = given.slope ?? (sloped ? 2 / 12 : 0);
+  const shape = family === 'C' || family === 'MC' ? 'channel' : family === 'WT' || family === 'MT' || family === 'ST' ? 'tee' : 'i-shape';
+  // A channel's flange runs from the web to one toe; an I's or a tee's from the web to each toe.
+  const outstand = shape === 'channel' ? bf - tw : (bf - tw) / 2;
+  const atWeb = tf + (slope * outstand) / 2;
+  const r = given.r ?? Math.max(kdes - atWeb, 0);
+  return { shape, params: { d, bf, tw, tf, r, ...(slope > 0 ? { slope } : {}) }, slope };
+}
+
 function flangedEntry(row: Row): CatalogueEntry {
   const [designation, type, W, d, bf, tw, tf, kdes, WGi] = row as unknown as [string, Family, number, number, number, number, number, number, number | null];
   const sloped = type === 'S' || type === 'C' || type === 'ST';
-  const slope = sloped ? 2 / 12 : 0;
-  const outstand = type === 'C' ? bf - tw : (bf - tw) / 2;
-  const atWeb = tf + (slope * outstand) / 2;
-  const shape = type === 'C' || type === 'MC' ? 'channel' : type === 'WT' || type === 'MT' || type === 'ST' ? 'tee' : 'i-shape';
-  const params = { d, bf, tw, tf, r: Math.max(kdes - atWeb, 0), ...(sloped ? { slope } : {}) };
+  const { shape, params } = flangedPart(type, { d, bf, tw, tf, kdes });
   const modelling = [type === 'MC' ? MC_NOTE : sloped ? SLOPE_NOTE : FILLET_NOTE];
   if (shape === 'tee') modelling.push(`tee cut from the ${type === 'ST' ? 'S' : type === 'MT' ? 'M' : 'W'} shape: d is the depth of the tee`);
   return { designation, family: type, source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, bf, tw, tf, kdes, ...(WGi === null ? {} : { WGi }) }, shape, params, modelling, userDefined: false };

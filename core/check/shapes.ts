@@ -16,6 +16,7 @@
  * Units: any length unit, consistently (the conventions are ratios of the dimensions, except
  *   the label's nominal OD, which is read in inches and used only for inch tables).
  */
+import { flangedPart } from '../catalogue/index.ts';
 import type { LengthUnit } from '../units/types.ts';
 
 /** The shape families a table row may name (AISC type codes). */
@@ -59,8 +60,6 @@ export interface TablePart {
 
 export type TablePartResult = { readonly ok: true; readonly part: TablePart } | { readonly ok: false; readonly message: string };
 
-const SLOPE_2_12 = 2 / 12;
-
 function need(dims: Readonly<Record<string, number>>, family: string, keys: readonly string[]): string | null {
   const missing = keys.filter((k) => dims[k] === undefined);
   return missing.length === 0 ? null : `a ${family} row needs ${missing.join(', ')} (no value given)`;
@@ -99,14 +98,7 @@ export function tablePart(family: TableFamily, dims: Readonly<Record<string, num
     // Published d is the shorter leg; the tabulated x axis has the longer leg b vertical (core/catalogue).
     return { ok: true, part: { shape: 'angle', params: { d: dims['b']!, b: dims['d']!, t: dims['t']!, r: dims['r'] ?? 0, rt: 0 }, modelling: 'angle: sharp root and toes, longer leg along y' } };
   }
-  const { d, bf, tw, tf, kdes } = dims as Record<'d' | 'bf' | 'tw' | 'tf' | 'kdes', number>;
-  const sloped = family === 'S' || family === 'C' || family === 'ST';
-  const slope = dims['slope'] ?? (sloped ? SLOPE_2_12 : 0);
-  const outstand = family === 'C' || family === 'MC' ? bf - tw : (bf - tw) / 2;
-  const atWeb = tf + (slope * outstand) / 2;
-  const shape = family === 'C' || family === 'MC' ? 'channel' : family === 'WT' || family === 'MT' || family === 'ST' ? 'tee' : 'i-shape';
-  const r = dims['r'] ?? Math.max(kdes - atWeb, 0);
-  const params = { d, bf, tw, tf, r, ...(slope > 0 ? { slope } : {}) };
+  const { shape, params, slope } = flangedPart(family, dims as Record<'d' | 'bf' | 'tw' | 'tf' | 'kdes', number>, { slope: dims['slope'], r: dims['r'] });
   const rule = dims['r'] !== undefined ? 'r as given' : slope > 0 ? 'r = kdes − flange thickness at the web' : 'r = kdes − tf';
   const faces = slope > 0 ? `inner flange slope ${dims['slope'] !== undefined ? 'as given' : '2:12'}, tf average` : 'parallel flanges';
   return { ok: true, part: { shape, params, modelling: `${family}: ${faces}, ${rule}` } };
