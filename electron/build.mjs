@@ -8,10 +8,12 @@ import { fileURLToPath } from 'node:url';
 
 export const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 export const OUT_ELECTRON = path.join(ROOT, 'out', 'electron');
-export const WEB_ROOT = path.join(ROOT, 'dist', 'web');
+// SECTIONSMITH_WEB_OUT moves the browser build elsewhere, so two test runs on one machine do not
+// overwrite each other's files.
+export const WEB_ROOT = process.env.SECTIONSMITH_WEB_OUT ? path.resolve(process.env.SECTIONSMITH_WEB_OUT) : path.join(ROOT, 'dist', 'web');
 
 export async function buildRenderer() {
-  await viteBuild({ configFile: path.join(ROOT, 'renderer', 'vite.config.ts'), logLevel: 'error' });
+  await viteBuild({ configFile: path.join(ROOT, 'renderer', 'vite.config.ts'), logLevel: 'error', build: { outDir: WEB_ROOT } });
 }
 
 export async function buildElectron() {
