@@ -1,10 +1,15 @@
 #!/usr/bin/env node
-// The `sectionsmith` command. Registers tsx so the TypeScript sources run as they are right
-// after `npm ci` (no build step), then hands the arguments to cli/main.ts.
+// The `sectionsmith` command. Runs cli/main.ts from a bundle that cli/bundle.mjs keeps in step
+// with the sources (rebuilt whenever any input changed), or, where no bundle can be made, from
+// the TypeScript sources through tsx. Either way it works right after `npm ci`, with no build step.
 import { fileURLToPath } from 'node:url';
-import { register } from 'tsx/esm/api';
+import { loadCli } from './bundle.mjs';
 
-// Our own tsconfig, whatever the working directory (a tsconfig there must not change how we run).
-register({ tsconfig: fileURLToPath(new URL('../tsconfig.json', import.meta.url)) });
-const { runCli, processIo } = await import('./main.ts');
-process.exitCode = await runCli(process.argv.slice(2), processIo());
+let cli = await loadCli();
+if (cli === null) {
+  const { register } = await import('tsx/esm/api');
+  // Our own tsconfig, whatever the working directory (a tsconfig there must not change how we run).
+  register({ tsconfig: fileURLToPath(new URL('../tsconfig.json', import.meta.url)) });
+  cli = await import('./main.ts');
+}
+process.exitCode = await cli.runCli(process.argv.slice(2), cli.processIo());
