@@ -4,10 +4,19 @@
  * of core: commands read files, call core, and print.
  */
 
-/** Exit codes: 0 success; 1 an internal error (a bug); 2 bad input or bad usage. */
+/**
+ * Exit codes, the same for every command: 0 success; 1 a result that needs attention (check:
+ * some rows flagged); 2 bad input or bad usage; 3 an internal error (a bug), kept apart from 1 so
+ * a crash never reads as "flagged".
+ */
 export const EXIT_OK = 0;
-export const EXIT_BUG = 1;
+export const EXIT_FLAGGED = 1;
 export const EXIT_BAD_INPUT = 2;
+export const EXIT_BUG = 3;
+
+/** The exit codes as help prints them. */
+export const EXIT_CODES_HELP =
+  'exit codes: 0 success; 1 a result that needs attention (check: some rows flagged); 2 bad input or usage (the message names the file and the place); 3 internal error (please report it).';
 
 /** Where a command reads and writes; the process's own in cli/main.ts, a recorder in tests. */
 export interface CliIo {
@@ -24,9 +33,17 @@ export interface FlagSpec {
   /** Placeholder shown in help for string flags, e.g. 'U'. */
   readonly value?: string;
   readonly description: string;
+  /**
+   * A string flag that may be given several times (`--map a=b --map c=d`). Its values arrive in
+   * order in the run function's `lists` argument, never in `flags` (where only one would fit).
+   */
+  readonly multiple?: boolean;
 }
 
 export type FlagValues = Readonly<Record<string, string | boolean | undefined>>;
+
+/** Every value of each repeatable flag, in the order given; [] when the flag is absent. */
+export type FlagLists = Readonly<Record<string, readonly string[]>>;
 
 export interface Command {
   readonly name: string;
@@ -37,7 +54,7 @@ export interface Command {
   /** Paragraphs shown by `sectionsmith help NAME`. */
   readonly description: string;
   readonly flags: readonly FlagSpec[];
-  readonly run: (positionals: readonly string[], flags: FlagValues, io: CliIo) => number | Promise<number>;
+  readonly run: (positionals: readonly string[], flags: FlagValues, io: CliIo, lists: FlagLists) => number | Promise<number>;
 }
 
 /** The caution printed with every result (results feed structural decisions). */

@@ -5,7 +5,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { parseArgs } from 'node:util';
-import { EXIT_BAD_INPUT, EXIT_BUG, EXIT_OK, type CliIo, type Command } from './command.ts';
+import { EXIT_BAD_INPUT, EXIT_BUG, EXIT_CODES_HELP, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagValues } from './command.ts';
 import { checkCommand } from './commands/check.ts';
 import { compareCommand } from './commands/compare.ts';
 import { memberCommand } from './commands/member.ts';
@@ -23,14 +23,14 @@ export const COMMANDS: readonly Command[] = [
 
 const HELP_FLAG = { name: 'help', type: 'boolean', description: 'show this help' } as const;
 
-function flagLine(flag: { name: string; type: string; value?: string; description: string }): string {
+function flagLine(flag: { name: string; type: string; value?: string; description: string; multiple?: boolean }): string {
   const left = flag.type === 'string' ? `--${flag.name} ${flag.value ?? 'VALUE'}` : `--${flag.name}`;
-  return `  ${left.padEnd(18)} ${flag.description}`;
+  return `  ${left.padEnd(18)} ${flag.description}${flag.multiple === true ? ' (may be repeated)' : ''}`;
 }
 
 export function commandHelp(command: Command): string {
   const flags = [...command.flags, HELP_FLAG].map(flagLine).join('\n');
-  return `usage: sectionsmith ${command.usage}\n\n${command.description}\n\nflags:\n${flags}\n`;
+  return `usage: sectionsmith ${command.usage}\n\n${command.description}\n\nflags:\n${flags}\n\n${EXIT_CODES_HELP}\n`;
 }
 
 export function generalHelp(): string {
@@ -46,7 +46,7 @@ export function generalHelp(): string {
     'commands:',
     list,
     '',
-    'exit codes: 0 success; 2 bad input or usage (the message names the file and the place); 1 internal error.',
+    EXIT_CODES_HELP,
     '',
     details,
   ].join('\n');
@@ -57,20 +57,42 @@ function version(): string {
   return pkg.version ?? 'unknown';
 }
 
+/**
+ * A command's arguments by its flag list (strict: an unknown flag or a missing value throws).
+ * A flag marked `multiple` keeps every value, in order, in `lists`; any other flag given twice
+ * is refused rather than silently keeping the last value.
+ */
+export function parseFlags(command: Command, args: readonly string[]): { positionals: string[]; flags: FlagValues; lists: FlagLists } {
+  const specs = [...command.flags, HELP_FLAG];
+  const options = Object.fromEntries(specs.map((f) => [f.name, { type: f.type, multiple: true }]));
+  const parsed = parseArgs({ args: [...args], options, allowPositionals: true, strict: true });
+  const flags: Record<string, string | boolean | undefined> = {};
+  const lists: Record<string, readonly string[]> = {};
+  for (const spec of specs) {
+    const values = (parsed.values[spec.name] ?? []) as readonly (string | boolean)[];
+    if ('multiple' in spec && spec.multiple === true) {
+      lists[spec.name] = values.filter((v): v is string => typeof v === 'string');
+      continue;
+    }
+    if (values.length > 1 && spec.type === 'string') throw new Error(`--${spec.name} was given ${values.length} times; give it once`);
+    flags[spec.name] = values[values.length - 1];
+  }
+  return { positionals: parsed.positionals, flags, lists };
+}
+
 async function runCommand(command: Command, args: readonly string[], io: CliIo): Promise<number> {
-  const options = Object.fromEntries([...command.flags, HELP_FLAG].map((f) => [f.name, { type: f.type }]));
   let parsed;
   try {
-    parsed = parseArgs({ args: [...args], options, allowPositionals: true, strict: true });
+    parsed = parseFlags(command, args);
   } catch (err) {
     io.err(`sectionsmith ${command.name}: ${err instanceof Error ? err.message : String(err)}\nrun "sectionsmith help ${command.name}" for the flags\n`);
     return EXIT_BAD_INPUT;
   }
-  if (parsed.values.help === true) {
+  if (parsed.flags.help === true) {
     io.out(commandHelp(command));
     return EXIT_OK;
   }
-  return command.run(parsed.positionals, parsed.values, io);
+  return command.run(parsed.positionals, parsed.flags, io, parsed.lists);
 }
 
 /** Runs the command line; returns the exit code. Never throws. */
