@@ -1,25 +1,51 @@
 /**
- * `sectionsmith check TABLE.csv [--type T] [--map col=target,…] [--tolerance 1%,…] [--unit U]
+ * `sectionsmith check TABLE.csv [--type T] [--map col=target …] [--tolerance 1% …] [--unit U]
  * [--out REPORT.csv] [--json] [--mapping FILE] [--save-map FILE]`: rebuilds every row of a table
  * of shapes from its dimensions and compares the tabulated properties (core/check).
- * Exit codes: 0 every row passes; 1 some rows are flagged; 2 bad input or usage.
+ * Exit codes: 0 every row passes; 1 some rows are flagged; 2 bad input or usage; 3 an internal
+ * error (cli/command.ts), never 1, so a crash cannot read as "flagged".
  */
 import { writeFileSync } from 'node:fs';
 import { checkTable, familyOf, MappingError, parseTolerances, readStoredMapping, TableInputError, tableCheckCsv, TABLE_FAMILIES, type ColumnMapping, type TableCheck } from '../../core/check/index.ts';
 import { isLengthUnit } from '../../core/units/index.ts';
-import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagValues } from '../command.ts';
+import { CAUTION, EXIT_BAD_INPUT, EXIT_FLAGGED, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagValues } from '../command.ts';
 
-/** Rows flagged: the table disagrees with its own dimensions somewhere. */
-export const EXIT_FLAGGED = 1;
+/** Rows flagged: the table disagrees with its own dimensions somewhere (cli/command.ts). */
+export { EXIT_FLAGGED };
 
-const list = (text: string | boolean | undefined): string[] => (typeof text === 'string' ? text.split(',').map((s) => s.trim()).filter((s) => s !== '') : []);
+/** Every value of a repeatable flag, each split at commas: `--tolerance 1.5%,A=1% --tolerance Zx=2%` → three items. */
+const list = (values: readonly string[] | undefined): string[] => (values ?? []).flatMap((v) => v.split(',')).map((s) => s.trim()).filter((s) => s !== '');
 
-function overridesOf(text: string | boolean | undefined): Record<string, string> {
+/**
+ * `--map` items: COLUMN=TARGET, several per value separated by commas, the flag repeatable. A
+ * target never holds a comma, so a piece without "=" is the front of a column name that does
+ * ("Ix, in4=Ix"): it is joined to the piece after it.
+ */
+export function mapItems(values: readonly string[]): string[] {
+  const items: string[] = [];
+  for (const value of values) {
+    let pending = '';
+    for (const piece of value.split(',')) {
+      const joined = pending === '' ? piece : `${pending},${piece}`;
+      if (joined.includes('=')) {
+        items.push(joined.trim());
+        pending = '';
+      } else pending = joined;
+    }
+    if (pending.trim() !== '') items.push(pending.trim());
+  }
+  return items.filter((s) => s !== '');
+}
+
+function overridesOf(values: readonly string[] | undefined): Record<string, string> {
   const out: Record<string, string> = {};
-  for (const item of list(text)) {
+  for (const item of mapItems(values ?? [])) {
     const eq = item.lastIndexOf('=');
     if (eq <= 0 || eq === item.length - 1) throw new MappingError(`--map: "${item}" is not COLUMN=TARGET (e.g. "Ix (in4)=Ix" or depth=d)`);
-    out[item.slice(0, eq).trim()] = item.slice(eq + 1).trim();
+    const column = item.slice(0, eq).trim();
+    const target = item.slice(eq + 1).trim();
+    if (out[column] !== undefined && out[column] !== target) throw new MappingError(`--map: column "${column}" is given two targets, ${out[column]} and ${target}`);
+    out[column] = target;
   }
   return out;
 }
@@ -50,7 +76,7 @@ export function checkText(file: string, c: TableCheck): string {
   return lines.join('\n');
 }
 
-function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
+function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo, lists: FlagLists): number {
   const fail = (message: string): number => {
     io.err(`sectionsmith check: ${message}\n`);
     return EXIT_BAD_INPUT;
@@ -86,9 +112,9 @@ function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo):
     result = checkTable(text, {
       unit,
       ...(type !== undefined ? { type } : {}),
-      overrides: overridesOf(flags.map),
+      overrides: overridesOf(lists.map),
       ...(stored !== undefined ? { mapping: stored } : {}),
-      tolerances: parseTolerances(list(flags.tolerance)),
+      tolerances: parseTolerances(list(lists.tolerance)),
       ...(flags['own-labels'] === true ? { readLabels: false } : {}),
     });
   } catch (err) {
@@ -113,7 +139,7 @@ function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo):
 export const checkCommand: Command = {
   name: 'check',
   summary: 'check a table of shapes (CSV) against properties rebuilt from its dimensions',
-  usage: 'check TABLE.csv [--type T] [--map COL=TARGET,…] [--tolerance 1%,…] [--unit U] [--out REPORT.csv] [--json]',
+  usage: 'check TABLE.csv [--type T] [--map COL=TARGET …] [--tolerance 1% …] [--unit U] [--out REPORT.csv] [--json]',
   description: [
     'Reads a CSV table of shapes (a designation column, a type column or --type, dimension',
     'columns and tabulated property columns), rebuilds each row with the parts library using',
@@ -128,25 +154,25 @@ export const checkCommand: Command = {
     'column without a unit is in --unit (default in). Types: W, M, HP, S, C, MC, WT, MT, ST, L,',
     'HSS, PIPE.',
     '',
-    '--map corrects the mapping: COLUMN=TARGET, several separated by commas; TARGET is',
-    'designation, type, ignore, a dimension or property symbol, optionally with a unit',
-    '("Depth=d:mm", "I major=Ix:10^6mm^4"). --save-map FILE writes the mapping used (JSON);',
-    '--mapping FILE reads one back (--map still wins). Give each flag once: a repeated flag',
-    'keeps only its last value, so list several items with commas.',
+    '--map corrects the mapping: COLUMN=TARGET, the flag repeated or several items separated by',
+    'commas; TARGET is designation, type, ignore, a dimension or property symbol, optionally',
+    'with a unit ("Depth=d:mm", "I major=Ix:10^6mm^4"). --save-map FILE writes the mapping used',
+    '(JSON); --mapping FILE reads one back (--map still wins).',
     '',
-    '--tolerance: a default ("1%", or a fraction "0.01"), per property ("Iy=3%") or per family',
-    'and property ("MC:Iy=7%"), several separated by commas. Default 1 %.',
+    '--tolerance: a default ("1%", or a fraction "0.01"), per property ("Zx=2%") or per family',
+    'and property ("MC:Iy=7%"), the flag repeated or several separated by commas; the most',
+    'specific applies. Default 1 %.',
     '',
     '--out REPORT.csv writes one row per table row (status, findings, table and computed values,',
     'deviation and tolerance in %). --json prints the summary, rows and mapping as JSON.',
     '',
     'Exit codes: 0 every row passes; 1 some rows are flagged; 2 bad input (the message names the',
-    'row and the column).',
+    'row and the column); 3 an internal error (please report it).',
   ].join('\n'),
   flags: [
     { name: 'type', type: 'string', value: 'T', description: 'family of rows without a type column: W, M, HP, S, C, MC, WT, MT, ST, L, HSS, PIPE' },
-    { name: 'map', type: 'string', value: 'COL=TARGET,…', description: 'correct the column mapping (see above)' },
-    { name: 'tolerance', type: 'string', value: 'SPEC,…', description: 'tolerances: 1%, Iy=3%, MC:Iy=7% (default 1 %)' },
+    { name: 'map', type: 'string', value: 'COL=TARGET', description: 'correct the column mapping (see above)', multiple: true },
+    { name: 'tolerance', type: 'string', value: 'SPEC', description: 'tolerances: 1%, Zx=2%, MC:Iy=7% (default 1 %)', multiple: true },
     { name: 'unit', type: 'string', value: 'U', description: 'unit of columns without one: in|ft|mm|cm|m (default in)' },
     { name: 'out', type: 'string', value: 'REPORT.csv', description: 'write the per-row report as CSV' },
     { name: 'mapping', type: 'string', value: 'FILE', description: 'read a saved column mapping (JSON)' },
