@@ -57,6 +57,11 @@ export interface Host {
   openRecent?(handle: string): Promise<OpenedFile | null>;
   /** The document given on the command line or by the OS at start, once; null if none. */
   launchFile?(): Promise<OpenedFile | null>;
+  /**
+   * Render a report's HTML (core/report) to a PDF and save it where the user chooses; false if
+   * cancelled. Hosts that cannot make PDFs leave it out (the browser build prints the HTML instead).
+   */
+  printToPdf?(html: string, suggestedName: string): Promise<boolean>;
   /** Subscribe to host commands (menu items); returns the unsubscribe function. */
   onCommand?(listener: (command: HostCommand) => void): () => void;
 }
