@@ -57,23 +57,41 @@ function fromDocument(file: string, value: unknown): LoadResult {
   };
 }
 
-function fromGeoJson(file: string, value: unknown, unit: LengthUnit | undefined): LoadResult {
+/** A GeoJSON file read into a region, before validation; the parsed JSON is not kept. */
+interface GeoJsonRead {
+  readonly kind: 'geojson';
+  readonly unit: LengthUnit;
+  readonly region: Region;
+  readonly sources: readonly string[];
+}
+
+function readGeoJson(file: string, value: unknown, unit: LengthUnit | undefined): GeoJsonRead | LoadFailure {
   if (unit === undefined) {
     return { ok: false, messages: [`${file}: GeoJSON carries no length unit; say what its coordinates are with --unit in|ft|mm|cm|m`] };
   }
   const read = regionFromGeoJson(value);
   if (!read.ok) return { ok: false, messages: read.errors.map((e) => `${file}: ${e.message}`) };
+  return { kind: 'geojson', unit, region: read.region, sources: read.sources };
+}
+
+function fromGeoJson(file: string, read: GeoJsonRead): LoadResult {
   // Validate before normalising, so ring and vertex indices are the file's own positions.
   const diagnostics = validateRegion(read.region);
   if (diagnostics.length > 0) {
     return { ok: false, messages: diagnostics.map((d) => `${file}: ${geoJsonPathOf(read.sources, d.polygon ?? 0, d.ring, d.vertex)}: ${d.message}`) };
   }
   const region = normaliseRegion(read.region);
-  return { ok: true, section: { kind: 'geojson', name: file, unit, region, properties: sectionProperties(region), parts: 0, hiddenParts: 0 } };
+  return { ok: true, section: { kind: 'geojson', name: file, unit: read.unit, region, properties: sectionProperties(region), parts: 0, hiddenParts: 0 } };
 }
 
-/** Reads FILE as a document or as GeoJSON (which needs `geoJsonUnit`). */
-export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined): LoadResult {
+type LoadFailure = { readonly ok: false; readonly messages: readonly string[] };
+
+/**
+ * Reads and parses FILE. A GeoJSON file comes back as its region only: the text and the parsed
+ * JSON (for a million vertices, about 100 MB of small arrays) become garbage before any
+ * computing starts, so the collector does not trace them again and again during it.
+ */
+function readSectionFile(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined): GeoJsonRead | { readonly kind: 'document'; readonly value: unknown } | LoadFailure {
   let text: string;
   try {
     text = io.readFile(file);
@@ -84,12 +102,20 @@ export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | u
   }
   const json = parseJson(text);
   if (!json.ok) return { ok: false, messages: json.errors.map((e) => `${file}: ${e.message}`) };
-  if (isGeoJson(json.value)) return fromGeoJson(file, json.value, geoJsonUnit);
+  if (isGeoJson(json.value)) return readGeoJson(file, json.value, geoJsonUnit);
   const format = (json.value as { format?: unknown } | null)?.format;
   if (typeof json.value === 'object' && json.value !== null && format === undefined && !('version' in json.value)) {
     return { ok: false, messages: [`${file}: not a Sectionsmith document (no "format": "sectionsmith-section") and not GeoJSON (no "type" Polygon, MultiPolygon, Feature or FeatureCollection)`] };
   }
-  return fromDocument(file, json.value);
+  return { kind: 'document', value: json.value };
+}
+
+/** Reads FILE as a document or as GeoJSON (which needs `geoJsonUnit`). */
+export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined): LoadResult {
+  const read = readSectionFile(file, io, geoJsonUnit);
+  if ('ok' in read) return read;
+  if (read.kind === 'document') return fromDocument(file, read.value);
+  return fromGeoJson(file, read);
 }
 
 /**
