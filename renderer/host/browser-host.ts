@@ -8,7 +8,8 @@
  * Writes through a handle are committed when the writable stream closes (the browser writes a
  * swap file first), so a failed save leaves the old file as it was.
  *
- * Recovery text and the recent-files list live in localStorage; handles in IndexedDB.
+ * Recovery text, the recent-files list and settings (under SETTINGS_PREFIX) live in localStorage;
+ * handles in IndexedDB. Tables (openTable) are read through a picker or input limited to CSV/text.
  * confirmDiscard uses window.confirm until the UI installs its own dialog (setConfirmDiscard).
  * While there are unsaved changes, leaving the page asks first (beforeunload).
  */
@@ -31,10 +32,12 @@ interface PickerWindow {
 
 export const RECENT_KEY = 'sectionsmith.recentFiles';
 export const RECOVERY_KEY = 'sectionsmith.recovery';
+export const SETTINGS_PREFIX = 'sectionsmith.setting.';
 const RECENT_LIMIT = 10;
 const HANDLE_DB = 'sectionsmith-file-handles';
 
 const DOCUMENT_TYPES: PickerType[] = [{ description: 'Sectionsmith section or GeoJSON', accept: { 'application/json': ['.json', '.geojson'] } }];
+const TABLE_TYPES: PickerType[] = [{ description: 'Table of shapes (CSV)', accept: { 'text/csv': ['.csv'], 'text/plain': ['.txt'] } }];
 const SAVE_TYPES: PickerType[] = [{ description: 'Sectionsmith section', accept: { 'application/json': ['.json'] } }];
 const EXPORT_TYPES: Readonly<Record<string, PickerType>> = {
   'image/svg+xml': { description: 'SVG drawing', accept: { 'image/svg+xml': ['.svg'] } },
@@ -79,6 +82,22 @@ export function createBrowserHost(win: Window & typeof globalThis = window): Bro
       if (!handle) return null;
       const text = await (await handle.getFile()).text();
       return { name: handle.name, handle: await remember(handle), text };
+    },
+    async openTable() {
+      if (!pickers.showOpenFilePicker) return openWithInput(win, '.csv,.txt,text/csv,text/plain');
+      const chosen = await cancellable(pickers.showOpenFilePicker({ types: TABLE_TYPES, multiple: false }));
+      const handle = chosen?.[0];
+      if (!handle) return null;
+      return { name: handle.name, handle: null, text: await (await handle.getFile()).text() };
+    },
+    readSetting: async (key) => win.localStorage.getItem(SETTINGS_PREFIX + key),
+    async writeSetting(key, value) {
+      try {
+        if (value === null) win.localStorage.removeItem(SETTINGS_PREFIX + key);
+        else win.localStorage.setItem(SETTINGS_PREFIX + key, value);
+      } catch (error) {
+        throw new Error(`The setting could not be kept: ${storageReason(error)}.`);
+      }
     },
     async save(id, text) {
       const handle = await handleFor(id);
@@ -199,11 +218,11 @@ function download(win: Window & typeof globalThis, name: string, mimeType: strin
   win.setTimeout(() => win.URL.revokeObjectURL(url), 60_000);
 }
 
-function openWithInput(win: Window): Promise<OpenedFile | null> {
+function openWithInput(win: Window, accept = '.json,.geojson,application/json,application/geo+json'): Promise<OpenedFile | null> {
   return new Promise((resolve, reject) => {
     const input = win.document.createElement('input');
     input.type = 'file';
-    input.accept = '.json,.geojson,application/json,application/geo+json';
+    input.accept = accept;
     input.addEventListener('change', () => {
       const file = input.files?.[0];
       if (!file) return resolve(null);

@@ -62,6 +62,15 @@ export interface Host {
    * cancelled. Hosts that cannot make PDFs leave it out (the browser build prints the HTML instead).
    */
   printToPdf?(html: string, suggestedName: string): Promise<boolean>;
+  /**
+   * Ask the user for a table (CSV or plain text) and return its text; null if cancelled. The
+   * handle is null: a table is read, never saved back. Hosts without it leave it out.
+   */
+  openTable?(): Promise<OpenedFile | null>;
+  /** A small setting kept between sessions (e.g. a remembered column mapping); null when none. */
+  readSetting?(key: string): Promise<string | null>;
+  /** Keep (text) or forget (null) a setting; throws an Error saying why when it cannot be kept. */
+  writeSetting?(key: string, value: string | null): Promise<void>;
   /** Subscribe to host commands (menu items); returns the unsubscribe function. */
   onCommand?(listener: (command: HostCommand) => void): () => void;
 }
