@@ -24,6 +24,9 @@ import { ResultsPanel } from './ResultsPanel.tsx';
 import { MaterialsPanel } from './MaterialsPanel.tsx';
 import { MemberPanel } from './MemberPanel.tsx';
 import { StressPanel } from './StressPanel.tsx';
+import { CompareView } from './CompareView.tsx';
+import { SectionReport } from './ReportView.tsx';
+import type { MemberCase } from './report-input.ts';
 import { computeStress, type ForceTexts } from './stress.ts';
 import { TorsionClient, type TorsionState } from './torsion-client.ts';
 import { fitView, zoomAt, type View } from './view.ts';
@@ -91,6 +94,8 @@ export function App(): ReactElement {
   const [recovery, setRecovery] = useState<string | null>(null);
   const [cursor, setCursor] = useState<Vec | null>(null);
   const [pendingFit, setPendingFit] = useState(true);
+  const [shown, setShown] = useState<'compare' | 'print-report' | null>(null);
+  const [memberCase, setMemberCase] = useState<MemberCase | null>(null);
   const display = (DISPLAY_CHOICES.find((d) => d.id === displayId) ?? DISPLAY_CHOICES[0])!.set(state.doc.unit);
 
   const fit = useCallback(() => {
@@ -279,6 +284,9 @@ export function App(): ReactElement {
           return editor.select(editor.getState().doc.parts.map((p) => p.id));
         case 'open-launch-file':
           return;
+        case 'compare':
+        case 'print-report':
+          return setShown(action);
       }
     },
     [confirmDiscard, editor, exportAs, fit, host, loadDoc, openText, save, size],
@@ -503,9 +511,11 @@ export function App(): ReactElement {
               }
             }}
           />
-          <MemberPanel doc={state.doc} valid={!!results.properties} />
+          <MemberPanel doc={state.doc} valid={!!results.properties} onCase={setMemberCase} />
         </aside>
       </div>
+      {shown === 'compare' && <CompareView sections={[{ name: state.doc.name, doc: state.doc }]} fileName={docName} display={display} sig={sig} onClose={() => setShown(null)} />}
+      {shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} display={display} sig={sig} torsion={torsion} member={memberCase} onClose={() => setShown(null)} />}
       {asking && (
         <div className="modal-back">
           <div className="modal" role="dialog" aria-modal="true" data-testid="confirm-discard">

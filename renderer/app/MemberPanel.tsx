@@ -4,12 +4,13 @@
  * the bending stress per material, with the deflected shape and the moment diagram drawn.
  * Inputs in the document unit and kN (kip for inch documents); core works in SI.
  */
-import { useDeferredValue, useMemo, useState, type ReactElement } from 'react';
+import { useDeferredValue, useEffect, useMemo, useState, type ReactElement } from 'react';
 import type { SectionDocument } from '../../core/document/types.ts';
 import { materialPiecesFromDocument } from '../../core/materials/index.ts';
-import { COMMON_DEFLECTION_RATIOS, LIMIT_CAUTION, SUPPORTS, sectionMemberCheck, type Support } from '../../core/member/index.ts';
+import { COMMON_DEFLECTION_RATIOS, LIMIT_CAUTION, SUPPORTS, sectionMemberCheck, type SectionMemberInput, type Support } from '../../core/member/index.ts';
 import { convertLength, formatSig } from '../../core/units/index.ts';
 import { parseNumber } from './numbers.ts';
+import type { MemberCase } from './report-input.ts';
 
 const N_PER_KIP = 4448.2216152605; // exact by definition (1 lbf = 4.4482216152605 N)
 const SUPPORT_NAMES: Readonly<Record<Support, string>> = { simple: 'simply supported', cantilever: 'cantilever (fixed at left)', fixed: 'fixed at both ends', propped: 'propped cantilever' };
@@ -38,7 +39,8 @@ function Plot({ xs, ys, label, unit, testid, flip }: { xs: readonly number[]; ys
   );
 }
 
-export function MemberPanel({ doc: current, valid }: { doc: SectionDocument; valid: boolean }): ReactElement {
+/** `onCase` hears the load case whenever the open panel computes one (null when its inputs are unusable), for the report. */
+export function MemberPanel({ doc: current, valid, onCase }: { doc: SectionDocument; valid: boolean; onCase?: (c: MemberCase | null) => void }): ReactElement {
   // Computed only while the panel is open, and a step behind a drag so dragging stays smooth.
   const doc = useDeferredValue(current);
   const [open, setOpen] = useState(false);
@@ -65,11 +67,13 @@ export function MemberPanel({ doc: current, valid }: { doc: SectionDocument; val
     const P = (nums.P as number) * (inch ? N_PER_KIP : 1000);
     // kip/ft → N/m: 1 kip/ft = 4448.2216152605 N / 0.3048 m (exact factors).
     const w = (nums.w as number) * (inch ? N_PER_KIP / 0.3048 : 1000);
-    const r = sectionMemberCheck(pieces.pieces, doc.unit, {
-      span: nums.span as number, support: f.support, points: P !== 0 ? [{ P, a: at }] : [], uniform: w, selfWeight: f.self, limitRatio: nums.ratio as number,
-    });
-    return r.ok ? { result: r.result } : { error: r.issues.join(' ') };
+    const input: SectionMemberInput = { span: nums.span as number, support: f.support, points: P !== 0 ? [{ P, a: at }] : [], uniform: w, selfWeight: f.self, limitRatio: nums.ratio as number };
+    const r = sectionMemberCheck(pieces.pieces, doc.unit, input);
+    return r.ok ? { result: r.result, input } : { error: r.issues.join(' ') };
   }, [doc, valid, f, inch, open]);
+  useEffect(() => {
+    if (open) onCase?.('input' in outcome && outcome.input ? { unit: doc.unit, input: outcome.input } : null);
+  }, [open, outcome, doc.unit, onCase]);
 
   const lenOut = (m: number): number => convertLength(m, 'm', inch ? 'in' : 'mm');
   const lu = inch ? 'in' : 'mm';

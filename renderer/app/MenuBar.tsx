@@ -5,7 +5,8 @@ import type { Overlays } from './Canvas.tsx';
 export type MenuAction =
   | 'new' | 'open' | 'save' | 'save-as' | 'export-svg' | 'export-csv'
   | 'undo' | 'redo' | 'delete' | 'duplicate' | 'select-all'
-  | 'zoom-in' | 'zoom-out' | 'zoom-fit' | 'open-example';
+  | 'zoom-in' | 'zoom-out' | 'zoom-fit' | 'open-example'
+  | 'compare' | 'print-report';
 
 interface Props {
   readonly onAction: (a: MenuAction) => void;
@@ -89,6 +90,9 @@ export function MenuBar(props: Props): ReactElement {
           <hr />
           {item('export-svg', 'Export drawing (SVG)…')}
           {item('export-csv', 'Export properties (CSV)…')}
+          <hr />
+          {item('compare', 'Compare alternatives…')}
+          {item('print-report', 'Print report…')}
         </>,
       )}
       {menu(
