@@ -59,6 +59,8 @@ export interface CheckOptions {
   readonly tolerances?: Tolerances;
   /** Read designations as AISC labels (default: when the table unit is in). */
   readonly readLabels?: boolean;
+  /** Called after each row with the rows done and the rows in all (a view's progress bar). */
+  readonly onProgress?: (done: number, total: number) => void;
 }
 
 export interface PropertyCheck {
@@ -275,6 +277,7 @@ export function checkTable(text: string, options: CheckOptions = {}): TableCheck
       else tabulated.push({ symbol: c.symbol, value: convertLength(value * c.scale, c.unit, unit, CHECKED_PROPERTIES[c.symbol]!.power) });
     });
     results.push(checkRow(row, designation, family, dims, tabulated, unit, tolerances, readLabels));
+    options.onProgress?.(row, rows.length);
   });
 
   return summarise(unit, mapping, results);

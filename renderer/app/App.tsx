@@ -24,6 +24,7 @@ import { ResultsPanel } from './ResultsPanel.tsx';
 import { MaterialsPanel } from './MaterialsPanel.tsx';
 import { MemberPanel } from './MemberPanel.tsx';
 import { StressPanel } from './StressPanel.tsx';
+import { CheckView } from './CheckView.tsx';
 import { CompareView } from './CompareView.tsx';
 import { SectionReport } from './ReportView.tsx';
 import type { MemberCase } from './report-input.ts';
@@ -94,7 +95,7 @@ export function App(): ReactElement {
   const [recovery, setRecovery] = useState<string | null>(null);
   const [cursor, setCursor] = useState<Vec | null>(null);
   const [pendingFit, setPendingFit] = useState(true);
-  const [shown, setShown] = useState<'compare' | 'print-report' | null>(null);
+  const [shown, setShown] = useState<'compare' | 'print-report' | 'check-table' | null>(null);
   const [memberCase, setMemberCase] = useState<MemberCase | null>(null);
   const display = (DISPLAY_CHOICES.find((d) => d.id === displayId) ?? DISPLAY_CHOICES[0])!.set(state.doc.unit);
 
@@ -286,6 +287,7 @@ export function App(): ReactElement {
           return;
         case 'compare':
         case 'print-report':
+        case 'check-table':
           return setShown(action);
       }
     },
@@ -515,6 +517,7 @@ export function App(): ReactElement {
         </aside>
       </div>
       {shown === 'compare' && <CompareView sections={[{ name: state.doc.name, doc: state.doc }]} fileName={docName} display={display} sig={sig} onClose={() => setShown(null)} />}
+      {shown === 'check-table' && <CheckView host={host} onClose={() => setShown(null)} />}
       {shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} display={display} sig={sig} torsion={torsion} member={memberCase} onClose={() => setShown(null)} />}
       {asking && (
         <div className="modal-back">

@@ -6,7 +6,7 @@ export type MenuAction =
   | 'new' | 'open' | 'save' | 'save-as' | 'export-svg' | 'export-csv'
   | 'undo' | 'redo' | 'delete' | 'duplicate' | 'select-all'
   | 'zoom-in' | 'zoom-out' | 'zoom-fit' | 'open-example'
-  | 'compare' | 'print-report';
+  | 'compare' | 'print-report' | 'check-table';
 
 interface Props {
   readonly onAction: (a: MenuAction) => void;
@@ -93,6 +93,7 @@ export function MenuBar(props: Props): ReactElement {
           <hr />
           {item('compare', 'Compare alternatives…')}
           {item('print-report', 'Print report…')}
+          {item('check-table', 'Check a section table (CSV)…')}
         </>,
       )}
       {menu(
