@@ -504,6 +504,145 @@ function sweepBalance(rings: readonly LocalRing[], f: Frame, u: Float64Array, W:
   return g;
 }
 
+/** Total vertices from which the Newton-located bracket replaces the sorted sweep (below it, sorting is cheap). */
+const NEWTON_FROM_VERTICES = 4096;
+const NEWTON_CAP = 60;
+
+/**
+ * One pass over straight-edged rings: the weighted area on the side s ≥ d and the weighted cut
+ * width there, with no clipping output. In the right-handed (t, s) frame A = ∮ t ds (METHODS §1.1),
+ * and the cut line contributes nothing (ds = 0 along it), so A₊(d) = Σ over edges of ∫ t ds over
+ * the part of the edge with s ≥ d; the cut width −dA₊/dd = Σ t at upward minus downward crossings.
+ */
+function upperAreaAndWidth(rings: readonly LocalRing[], f: Frame, d: number): [number, number] {
+  let area = 0, width = 0;
+  const { nx, ny, tx, ty } = f;
+  for (const ring of rings) {
+    const xy = ring.xy;
+    const n = xy.length >> 1;
+    let a = 0, w = 0;
+    const px = xy[2 * n - 2]!, py = xy[2 * n - 1]!;
+    let sp = nx * px + ny * py, tp = tx * px + ty * py;
+    for (let i = 0; i < n; i++) {
+      const x = xy[2 * i]!, y = xy[2 * i + 1]!;
+      const sq = nx * x + ny * y, tq = tx * x + ty * y;
+      if (sp >= d) {
+        if (sq >= d) a += 0.5 * (tp + tq) * (sq - sp);
+        else {
+          const tc = tp + ((d - sp) / (sq - sp)) * (tq - tp);
+          a += 0.5 * (tp + tc) * (d - sp);
+          w -= tc;
+        }
+      } else if (sq >= d) {
+        const tc = tp + ((d - sp) / (sq - sp)) * (tq - tp);
+        a += 0.5 * (tc + tq) * (sq - d);
+        w += tc;
+      }
+      sp = sq; tp = tq;
+    }
+    area += ring.weight * a;
+    width += ring.weight * w;
+  }
+  return [area, width];
+}
+
+/** Smallest and largest vertex projection s (straight-edged rings). */
+function projectionRange(rings: readonly LocalRing[], f: Frame): [number, number] {
+  let lo = Infinity, hi = -Infinity;
+  for (const { xy } of rings) {
+    for (let i = 0; i < xy.length; i += 2) {
+      const v = f.nx * xy[i]! + f.ny * xy[i + 1]!;
+      if (v < lo) lo = v;
+      if (v > hi) hi = v;
+    }
+  }
+  return [lo, hi];
+}
+
+/** The largest vertex projection below x (or at x, when `orAt`); −Infinity when none. */
+function breakpointBelow(rings: readonly LocalRing[], f: Frame, x: number, orAt: boolean): number {
+  let best = -Infinity;
+  for (const { xy } of rings) {
+    for (let i = 0; i < xy.length; i += 2) {
+      const v = f.nx * xy[i]! + f.ny * xy[i + 1]!;
+      if ((v < x || (orAt && v === x)) && v > best) best = v;
+    }
+  }
+  return best;
+}
+
+/** The smallest vertex projection above x; Infinity when none. */
+function breakpointAbove(rings: readonly LocalRing[], f: Frame, x: number): number {
+  let best = Infinity;
+  for (const { xy } of rings) {
+    for (let i = 0; i < xy.length; i += 2) {
+      const v = f.nx * xy[i]! + f.ny * xy[i + 1]!;
+      if (v > x && v < best) best = v;
+    }
+  }
+  return best;
+}
+
+type NewtonFound =
+  | { readonly kind: 'bracket'; readonly sl: number; readonly sh: number; readonly gl: number; readonly gh: number }
+  | { readonly kind: 'breakpoint'; readonly d: number };
+
+/**
+ * Straight-edged rings with many vertices (METHODS §5.3): Newton's method on g(d) = 2A₊ − W − N,
+ * g′ = −2·width, safeguarded by bisection inside [s_min, s_max], locates d in O(n) per step with
+ * no sorting; then the breakpoints around it are found by linear scans and confirmed by exact
+ * clipping evaluations, with the same tests as solveBalance: g > tolerance below and < −tolerance
+ * above gives the bracket in which g is exactly quadratic; |g| ≤ tolerance at one breakpoint with
+ * the neighbours on either side strictly signed gives that breakpoint. Anything else (a plateau,
+ * no convergence within NEWTON_CAP) returns null and the caller uses the sorted sweep. So this
+ * only ever changes how the bracket is found, never the answer. `passes` counts the O(n) passes.
+ */
+function newtonBracket(
+  rings: readonly LocalRing[],
+  f: Frame,
+  W: number,
+  axialForce: number,
+  Qs: number,
+  g: (d: number) => number,
+  zeroTol: number,
+): { readonly found: NewtonFound | null; readonly passes: number } {
+  let passes = 1;
+  let [a, b] = projectionRange(rings, f);
+  const span = b - a;
+  let d = Math.min(b, Math.max(a, Qs / W));
+  let converged = false;
+  for (let k = 0; k < NEWTON_CAP && !converged; k++) {
+    const [up, width] = upperAreaAndWidth(rings, f, d);
+    passes++;
+    const gd = 2 * up - W - axialForce;
+    if (gd === 0) { converged = true; break; }
+    if (gd > 0) a = d; else b = d;
+    let next = width > 0 ? d + gd / (2 * width) : Number.NaN;
+    if (!(next > a && next < b)) next = 0.5 * (a + b);
+    converged = Math.abs(next - d) <= 1e-13 * span || b - a <= 1e-13 * span;
+    d = next;
+  }
+  if (!converged) return { found: null, passes };
+  const sl = breakpointBelow(rings, f, d, true), sh = breakpointAbove(rings, f, d);
+  passes += 2;
+  if (!Number.isFinite(sl) || !Number.isFinite(sh)) return { found: null, passes };
+  const gl = g(sl), gh = g(sh);
+  passes += 2;
+  if (gl > zeroTol && gh < -zeroTol) return { found: { kind: 'bracket', sl, sh, gl, gh }, passes };
+  // The balance holds at a breakpoint (common: a symmetric section has vertices on its PNA). As
+  // in solveBalance it must be the only one: g > tolerance at the breakpoint below, < −tolerance above.
+  if (gl > zeroTol && Math.abs(gh) <= zeroTol) {
+    const next = breakpointAbove(rings, f, sh);
+    passes += 2;
+    if (Number.isFinite(next) && g(next) < -zeroTol) return { found: { kind: 'breakpoint', d: sh }, passes };
+  } else if (gh < -zeroTol && Math.abs(gl) <= zeroTol) {
+    const previous = breakpointBelow(rings, f, sl, false);
+    passes += 2;
+    if (Number.isFinite(previous) && g(previous) > zeroTol) return { found: { kind: 'breakpoint', d: sl }, passes };
+  }
+  return { found: null, passes };
+}
+
 /**
  * Largest index i in [a, b] with pred(i), given pred(a) and pred monotone (true, then false).
  * Without a hint: plain bisection. With a hint: galloping search outward from it (a few
@@ -591,11 +730,32 @@ function plasticAxisCore(pieces: readonly WeightedRegion[], angleDeg: Degrees, a
   if (Math.abs(axialForce) > W) {
     throw new RangeError(`plastic neutral axis: axial force ${axialForce} exceeds the full-yield force ${W} of the section`);
   }
-  const s = breakpoints(rings, f);
   const g = (d: number): number => 2 * upperSide(rings, f, d).A - W - axialForce;
   const polygonsOnly = rings.every((r) => r.bulge === undefined || r.bulge.every(isStraight));
-  const approx = polygonsOnly && useSweep ? sweepBalance(rings, f, s, W, axialForce) : undefined;
-  const root = solveBalance(g, s, [W - axialForce, -W - axialForce], polygonsOnly, 1e-12 * W, approx);
+  const zeroTol = 1e-12 * W;
+  const vertices = rings.reduce((sum, r) => sum + (r.xy.length >> 1), 0);
+  // The same g by the one-pass trapezoid sums (no clipping output): exact for straight edges.
+  const gFast = (d: number): number => 2 * upperAreaAndWidth(rings, f, d)[0] - W - axialForce;
+  const located = polygonsOnly && useSweep && vertices >= NEWTON_FROM_VERTICES ? newtonBracket(rings, f, W, axialForce, Qs, gFast, zeroTol) : null;
+  let root: Root;
+  if (located?.found?.kind === 'breakpoint') {
+    root = { d: located.found.d, method: 'breakpoint', evaluations: located.passes, converged: true };
+  } else if (located?.found) {
+    // The same closed-form quadratic as solveBalance, on the confirmed bracket.
+    const { sl, sh, gl, gh } = located.found;
+    const x = quadraticRootInUnit(gl, gFast((sl + sh) / 2), gh);
+    if (Number.isNaN(x)) {
+      const r = brentRoot(gFast, sl, sh, gl, gh, RELATIVE_TOLERANCE * (sh - sl));
+      root = { d: r.d, method: 'brent', evaluations: located.passes + 1 + r.iterations, converged: r.converged };
+    } else {
+      root = { d: sl + x * (sh - sl), method: 'quadratic', evaluations: located.passes + 1, converged: true };
+    }
+  } else {
+    const s = breakpoints(rings, f);
+    const approx = polygonsOnly && useSweep ? sweepBalance(rings, f, s, W, axialForce) : undefined;
+    const found = solveBalance(g, s, [W - axialForce, -W - axialForce], polygonsOnly, zeroTol, approx);
+    root = located ? { ...found, evaluations: found.evaluations + located.passes } : found;
+  }
   const up = upperSide(rings, f, root.d);
   const lowA = W - up.A;
   const lowQs = Qs - up.Qs;

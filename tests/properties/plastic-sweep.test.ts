@@ -61,6 +61,35 @@ describe('plastic neutral axis: sweep-located bracket agrees with bisection', ()
       expect(fast.evaluations).toBeLessThan(slow.evaluations);
     }
   });
+  it('Newton-located bracket (≥ 4,096 vertices): on a PNA through vertices, with axial force, and on a plateau it gives what bisection gives', () => {
+    // An 8,000-gon inscribed in an ellipse: vertices 0 and 4,000 lie on y = cy, the PNA for bending
+    // about x by symmetry, so both searches must end on that breakpoint (exact identity: symmetry).
+    const n = 8000;
+    const pts: number[] = [];
+    for (let i = 0; i < n; i++) pts.push(700 + 200 * Math.cos((2 * Math.PI * i) / n), -300 + 100 * Math.sin((2 * Math.PI * i) / n));
+    const ellipse = normaliseRegion([poly(ring(pts))]);
+    const cases: [Region, number, number][] = [[ellipse, 0, 0], [ellipse, -90, 0], [ellipse, 41, 0], [ellipse, 0, 0.4], [ellipse, 120, -0.25]];
+    // Two 5,000-vertex stars far apart along y, equal areas by construction (one is the other moved):
+    // the balance holds anywhere in the gap between them, so the fast path must hand over to the sweep.
+    const one = star(rand, 5000, 0, 0, 60, 100);
+    const other = one.map((v, i) => (i % 2 === 1 ? v + 500 : v));
+    const pair = normaliseRegion([poly(ring(one)), poly(ring(other))]);
+    cases.push([pair, 0, 0]);
+    for (const [region, angle, share] of cases) {
+      const W = 2 * plasticNeutralAxisWeightedByBisection([{ region, weight: 1 }], degrees(angle)).weightedAreaPlus;
+      const fast = plasticNeutralAxisWeighted([{ region, weight: 1 }], degrees(angle), share * W);
+      const slow = plasticNeutralAxisWeightedByBisection([{ region, weight: 1 }], degrees(angle), share * W);
+      expect(fast.method).toBe(slow.method);
+      expectRel(fast.d, slow.d, 1e-12, 1000);
+      expectRel(fast.moment, slow.moment, 1e-12);
+      expect(Math.abs(fast.residual)).toBeLessThanOrEqual(1e-11 * W);
+      // Fewer passes than bisection shows the Newton path answered (a hand-over to the sweep costs more).
+      if (region === ellipse) expect(fast.evaluations).toBeLessThan(slow.evaluations);
+    }
+    expect(plasticNeutralAxisWeighted([{ region: ellipse, weight: 1 }], degrees(0)).method).toBe('breakpoint');
+    expect(plasticNeutralAxisWeighted([{ region: ellipse, weight: 1 }], degrees(0)).d).toBe(-300);
+    expect(plasticNeutralAxisWeighted([{ region: pair, weight: 1 }], degrees(0)).method).toBe('plateau');
+  });
   it('two separated plates (plateau between y = 10 and y = 90): both report d = 50 and the same interval', () => {
     // Equal plates [0,100]×[0,10] and [0,100]×[90,100]: any d in [10, 90] balances; the rule is the middle.
     const region: Region = [poly(rectRing(0, 0, 100, 10)), poly(rectRing(0, 90, 100, 100))];
