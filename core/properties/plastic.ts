@@ -507,6 +507,7 @@ function sweepBalance(rings: readonly LocalRing[], f: Frame, u: Float64Array, W:
 /** Total vertices from which the Newton-located bracket replaces the sorted sweep (below it, sorting is cheap). */
 const NEWTON_FROM_VERTICES = 4096;
 const NEWTON_CAP = 60;
+const PLATEAU_WALK = 16;
 
 /**
  * One pass over straight-edged rings: the weighted area on the side s ≥ d and the weighted cut
@@ -585,17 +586,19 @@ function breakpointAbove(rings: readonly LocalRing[], f: Frame, x: number): numb
 
 type NewtonFound =
   | { readonly kind: 'bracket'; readonly sl: number; readonly sh: number; readonly gl: number; readonly gh: number }
-  | { readonly kind: 'breakpoint'; readonly d: number };
+  | { readonly kind: 'breakpoint'; readonly d: number }
+  | { readonly kind: 'plateau'; readonly low: number; readonly high: number };
 
 /**
  * Straight-edged rings with many vertices (METHODS §5.3): Newton's method on g(d) = 2A₊ − W − N,
  * g′ = −2·width, safeguarded by bisection inside [s_min, s_max], locates d in O(n) per step with
  * no sorting; then the breakpoints around it are found by linear scans and confirmed by exact
- * clipping evaluations, with the same tests as solveBalance: g > tolerance below and < −tolerance
- * above gives the bracket in which g is exactly quadratic; |g| ≤ tolerance at one breakpoint with
- * the neighbours on either side strictly signed gives that breakpoint. Anything else (a plateau,
- * no convergence within NEWTON_CAP) returns null and the caller uses the sorted sweep. So this
- * only ever changes how the bracket is found, never the answer. `passes` counts the O(n) passes.
+ * evaluations, with the same tests as solveBalance: g > tolerance below and < −tolerance above
+ * gives the bracket in which g is exactly quadratic; |g| ≤ tolerance at one breakpoint, or at a
+ * run of them (a plateau), with the neighbours outside strictly signed, gives that breakpoint or
+ * plateau. Anything else (no convergence within NEWTON_CAP, a run longer than PLATEAU_WALK)
+ * returns null and the caller uses the sorted sweep. So this only ever changes how the answer
+ * is found, never the answer. `passes` counts the O(n) passes.
  */
 function newtonBracket(
   rings: readonly LocalRing[],
@@ -629,18 +632,40 @@ function newtonBracket(
   const gl = g(sl), gh = g(sh);
   passes += 2;
   if (gl > zeroTol && gh < -zeroTol) return { found: { kind: 'bracket', sl, sh, gl, gh }, passes };
-  // The balance holds at a breakpoint (common: a symmetric section has vertices on its PNA). As
-  // in solveBalance it must be the only one: g > tolerance at the breakpoint below, < −tolerance above.
-  if (gl > zeroTol && Math.abs(gh) <= zeroTol) {
-    const next = breakpointAbove(rings, f, sh);
-    passes += 2;
-    if (Number.isFinite(next) && g(next) < -zeroTol) return { found: { kind: 'breakpoint', d: sh }, passes };
-  } else if (gh < -zeroTol && Math.abs(gl) <= zeroTol) {
-    const previous = breakpointBelow(rings, f, sl, false);
-    passes += 2;
-    if (Number.isFinite(previous) && g(previous) > zeroTol) return { found: { kind: 'breakpoint', d: sl }, passes };
-  }
-  return { found: null, passes };
+  // Otherwise the balance holds (within tolerance) at one or more breakpoints next to d: a vertex
+  // on the PNA, common in symmetric sections, or a plateau. As in solveBalance the run of such
+  // breakpoints reaches from the first with g ≤ tolerance to the last with g ≥ −tolerance; walk
+  // to its ends (at most PLATEAU_WALK steps each way) and check the breakpoints just outside it.
+  const within = (v: number): boolean => Math.abs(v) <= zeroTol;
+  let low: number, high: number;
+  if (within(gl)) {
+    low = sl;
+    for (let k = 0; ; k++) {
+      const previous = breakpointBelow(rings, f, low, false);
+      if (!Number.isFinite(previous) || k === PLATEAU_WALK) return { found: null, passes };
+      const gp = g(previous);
+      passes += 2;
+      if (gp > zeroTol) break;
+      if (!within(gp)) return { found: null, passes };
+      low = previous;
+    }
+  } else if (gl > zeroTol && within(gh)) low = sh;
+  else return { found: null, passes };
+  if (within(gh)) {
+    high = sh;
+    for (let k = 0; ; k++) {
+      const next = breakpointAbove(rings, f, high);
+      if (!Number.isFinite(next) || k === PLATEAU_WALK) return { found: null, passes };
+      const gn = g(next);
+      passes += 2;
+      if (gn < -zeroTol) break;
+      if (!within(gn)) return { found: null, passes };
+      high = next;
+    }
+  } else if (gh < -zeroTol) high = sl;
+  else return { found: null, passes };
+  if (low === high) return { found: { kind: 'breakpoint', d: low }, passes };
+  return { found: { kind: 'plateau', low, high }, passes };
 }
 
 /**
@@ -740,6 +765,9 @@ function plasticAxisCore(pieces: readonly WeightedRegion[], angleDeg: Degrees, a
   let root: Root;
   if (located?.found?.kind === 'breakpoint') {
     root = { d: located.found.d, method: 'breakpoint', evaluations: located.passes, converged: true };
+  } else if (located?.found?.kind === 'plateau') {
+    const { low, high } = located.found;
+    root = { d: (low + high) / 2, method: 'plateau', evaluations: located.passes, converged: true, plateau: [low, high] };
   } else if (located?.found) {
     // The same closed-form quadratic as solveBalance, on the confirmed bracket.
     const { sl, sh, gl, gh } = located.found;
