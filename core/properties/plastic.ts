@@ -119,17 +119,31 @@ function checkPieces(pieces: readonly WeightedRegion[], axialForce: number): voi
   if (!Number.isFinite(axialForce)) throw new RangeError(`plastic neutral axis: axial force ${axialForce} is not finite`);
 }
 
+/**
+ * The ring moved to the local origin, with its integrals there. The last copy of each ring is
+ * kept (weakly, so it goes with the ring): the four axes of sectionProperties share one origin,
+ * and a million-vertex ring is then copied once instead of four times.
+ */
+const localCopies = new WeakMap<Float64Array, { ox: number; oy: number; xy: Float64Array; raw: ReturnType<typeof ringIntegrals> }>();
+function localCopy(ring: Ring, ox: number, oy: number): { xy: Float64Array; raw: ReturnType<typeof ringIntegrals> } {
+  const cached = localCopies.get(ring.xy);
+  if (cached && cached.ox === ox && cached.oy === oy) return cached;
+  const xy = new Float64Array(ring.xy.length);
+  for (let i = 0; i < xy.length; i += 2) {
+    xy[i] = ring.xy[i]! - ox;
+    xy[i + 1] = ring.xy[i + 1]! - oy;
+  }
+  const made = { ox, oy, xy, raw: ringIntegrals({ xy, bulge: ring.bulge }, 0, 0) };
+  localCopies.set(ring.xy, made);
+  return made;
+}
+
 function localRings(pieces: readonly WeightedRegion[], ox: number, oy: number, f: Frame): LocalRing[] {
   const out: LocalRing[] = [];
   for (const { region, weight } of pieces) {
     for (const polygon of region) {
       for (const ring of [polygon.outer, ...polygon.holes]) {
-        const xy = new Float64Array(ring.xy.length);
-        for (let i = 0; i < xy.length; i += 2) {
-          xy[i] = ring.xy[i]! - ox;
-          xy[i + 1] = ring.xy[i + 1]! - oy;
-        }
-        const raw = ringIntegrals({ xy, bulge: ring.bulge }, 0, 0);
+        const { xy, raw } = localCopy(ring, ox, oy);
         out.push({
           xy,
           bulge: ring.bulge,
@@ -333,38 +347,34 @@ interface Side {
 }
 
 /**
- * Straight-edged ring: Sutherland–Hodgman against s ≥ d streamed straight into the first-moment
- * vertex sums of METHODS §1.1 (A, ∫x, ∫y), with no allocation. Output vertices: each edge P→Q emits
- * the crossing point when it crosses the line, then Q when Q is inside.
+ * Straight-edged ring: A, ∫s dA and ∫t dA over the part with s ≥ d, in one pass with no clipping
+ * output. In the right-handed (t, s) frame Green's theorem gives A = ∮ t ds, ∫s dA = ∮ t·s ds and
+ * ∫t dA = ∮ ½t² ds (METHODS §1.1); the cut line adds nothing (ds = 0 along it), so each sum runs
+ * over the parts of the edges with s ≥ d, where t is linear in s and the integrals are exact:
+ * ∫ t ds = Δs(ta + tb)/2, ∫ t s ds = Δs(2ta·sa + ta·sb + tb·sa + 2tb·sb)/6, ∫ ½t² ds = Δs(ta² + ta·tb + tb²)/6.
  */
 function upperSideStraight(xy: Float64Array, f: Frame, d: number): [number, number, number] {
   const n = xy.length >> 1;
-  let a = 0, qx = 0, qy = 0;
-  let first = true, fx = 0, fy = 0, lx = 0, ly = 0;
-  const emit = (x: number, y: number): void => {
-    if (first) { fx = x; fy = y; first = false; } else {
-      const c = lx * y - x * ly;
-      a += c; qx += (ly + y) * c; qy += (lx + x) * c;
-    }
-    lx = x; ly = y;
+  const { nx, ny, tx, ty } = f;
+  let a = 0, qs = 0, qt = 0;
+  const piece = (ta: number, sa: number, tb: number, sb: number): void => {
+    const ds = sb - sa;
+    a += (ta + tb) * ds;
+    qs += (2 * ta * sa + ta * sb + tb * sa + 2 * tb * sb) * ds;
+    qt += (ta * ta + ta * tb + tb * tb) * ds;
   };
-  let px = xy[2 * n - 2]!, py = xy[2 * n - 1]!;
-  let sp = f.nx * px + f.ny * py - d;
+  const px = xy[2 * n - 2]!, py = xy[2 * n - 1]!;
+  let sp = nx * px + ny * py, tp = tx * px + ty * py;
   for (let i = 0; i < n; i++) {
     const x = xy[2 * i]!, y = xy[2 * i + 1]!;
-    const sq = f.nx * x + f.ny * y - d;
-    if ((sp < 0 && sq > 0) || (sp > 0 && sq < 0)) {
-      const t = sp / (sp - sq);
-      emit(px + t * (x - px), py + t * (y - py));
-    }
-    if (sq >= 0) emit(x, y);
-    px = x; py = y; sp = sq;
+    const sq = nx * x + ny * y, tq = tx * x + ty * y;
+    if (sp >= d) {
+      if (sq >= d) piece(tp, sp, tq, sq);
+      else piece(tp, sp, tp + ((d - sp) / (sq - sp)) * (tq - tp), d);
+    } else if (sq >= d) piece(tp + ((d - sp) / (sq - sp)) * (tq - tp), d, tq, sq);
+    sp = sq; tp = tq;
   }
-  if (first) return [0, 0, 0];
-  const c = lx * fy - fx * ly;
-  a += c; qx += (ly + fy) * c; qy += (lx + fx) * c;
-  const Qy = qy / 6, Qx = qx / 6;
-  return [a / 2, f.nx * Qy + f.ny * Qx, f.tx * Qy + f.ty * Qx];
+  return [a / 2, qs / 6, qt / 6];
 }
 
 function upperSide(rings: readonly LocalRing[], f: Frame, d: number): Side {
