@@ -182,6 +182,7 @@ export function serialiseDocument(doc: SectionDocument): string {
     name: doc.name,
     unit: doc.unit,
     defaultMaterial: doc.defaultMaterial,
+    ...(doc.referenceModulus !== undefined ? { referenceModulus: 'material' in doc.referenceModulus ? { material: doc.referenceModulus.material } : { value: doc.referenceModulus.value, unit: doc.referenceModulus.unit } } : {}),
     materials: doc.materials.map(orderedMaterial),
     parts: doc.parts.map(orderedPart),
   };

@@ -11,6 +11,7 @@
  * composed) or whether a `shape` names a registered part type (core/section reports that).
  */
 import * as v from 'valibot';
+import { STRESS_UNITS } from '../materials/quantities.ts';
 import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type SectionDocument } from './types.ts';
 
 export interface DocumentIssue {
@@ -83,6 +84,14 @@ const part = v.variant('type', [polygonPart, rectanglePart, circlePart, shapePar
 
 const material = v.looseObject({ id: v.pipe(text('a non-empty string'), v.minLength(1, 'a non-empty string')), name: text() }, 'a material object { id, name, … }');
 
+const referenceModulus = v.union(
+  [
+    v.strictObject({ material: v.pipe(text('a material id'), v.minLength(1, 'a material id')) }),
+    v.strictObject({ value: positive('a positive finite modulus'), unit: v.picklist(STRESS_UNITS, `a stress unit: ${STRESS_UNITS.map((u) => `"${u}"`).join(', ')}`) }),
+  ],
+  'a reference modulus { material: id } or { value, unit }',
+);
+
 export const documentSchema = v.strictObject({
   format: v.literal(DOCUMENT_FORMAT, `"${DOCUMENT_FORMAT}"`),
   version: v.literal(DOCUMENT_VERSION, `${DOCUMENT_VERSION}`),
@@ -91,6 +100,7 @@ export const documentSchema = v.strictObject({
   parts: v.array(part, 'an array of parts'),
   materials: v.array(material, 'an array of materials'),
   defaultMaterial: v.nullable(text('a material id (string) or null')),
+  referenceModulus: v.optional(referenceModulus),
 }, 'a Sectionsmith document object');
 
 /** A short description of a JSON value for "got …" (strings quoted, long things abbreviated). */
@@ -146,6 +156,10 @@ function crossFieldIssues(doc: SectionDocument): DocumentIssue[] {
   const knownMaterial = (id: string | null): boolean => id === null || materialIds.has(id);
   if (!knownMaterial(doc.defaultMaterial)) {
     issues.push({ path: 'defaultMaterial', message: `defaultMaterial: expected the id of an entry in materials or null, got ${JSON.stringify(doc.defaultMaterial)}` });
+  }
+  const ref = doc.referenceModulus;
+  if (ref !== undefined && 'material' in ref && !materialIds.has(ref.material)) {
+    issues.push({ path: 'referenceModulus.material', message: `referenceModulus.material: expected the id of an entry in materials, got ${JSON.stringify(ref.material)}` });
   }
   const partIds = new Set<string>();
   doc.parts.forEach((p, i) => {

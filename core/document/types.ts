@@ -4,6 +4,7 @@
  * stored here. The schema, validation and migrations live beside this file (schema.ts,
  * migrations.ts); this file is the type contract the rest of the code builds on.
  */
+import type { StressUnit } from '../materials/quantities.ts';
 import type { LengthUnit } from '../units/types.ts';
 
 export const DOCUMENT_FORMAT = 'sectionsmith-section';
@@ -74,6 +75,15 @@ export interface MaterialRef {
   readonly [key: string]: unknown;
 }
 
+/**
+ * Reference modulus E_ref of the transformed section: the E of a material in `materials`, or a
+ * typed stress in its unit. Absent means the material of the first part (the default).
+ * Only E_ref's choice is stored; modular ratios and transformed values are never stored.
+ */
+export type ReferenceModulus =
+  | { readonly material: string }
+  | { readonly value: number; readonly unit: StressUnit };
+
 export interface SectionDocument {
   readonly format: typeof DOCUMENT_FORMAT;
   readonly version: typeof DOCUMENT_VERSION;
@@ -82,4 +92,6 @@ export interface SectionDocument {
   readonly parts: readonly Part[];
   readonly materials: readonly MaterialRef[];
   readonly defaultMaterial: string | null;
+  /** Optional (added with the materials editor); old files without it load unchanged. */
+  readonly referenceModulus?: ReferenceModulus;
 }

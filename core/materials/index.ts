@@ -5,3 +5,4 @@ export * from './library.ts';
 export * from './composite.ts';
 export * from './widths.ts';
 export * from './document.ts';
+export * from './reference.ts';

@@ -8,6 +8,7 @@ import type { Editor, EditorState } from '../editor/editor.ts';
 import { parseNumber } from './numbers.ts';
 import { ShapeParameters } from './PartsPalette.tsx';
 import { materialChoices } from './MaterialsPanel.tsx';
+import { withPartMaterial } from './material-form.ts';
 import type { LengthUnit } from '../../core/units/index.ts';
 
 type Fields = Record<string, string>;
@@ -86,7 +87,7 @@ function SelectedPart({ editor, part, unit }: { editor: Editor; part: Part; unit
         <select
           data-testid="selected-material"
           value={part.material ?? ''}
-          onChange={(e) => editor.updatePart(part.id, 'Part material', (q) => ({ ...q, material: e.target.value === '' ? null : e.target.value }))}
+          onChange={(e) => editor.replaceDocument('Part material', (d) => withPartMaterial(d, part.id, e.target.value === '' ? null : e.target.value))}
         >
           <option value="">document default</option>
           {materialChoices(editor.getState().doc).map((m) => (

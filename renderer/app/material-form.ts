@@ -211,7 +211,6 @@ export function materialFromDraft(d: MaterialDraft, origin: DraftOrigin | null, 
   if (d.strengthBasis === 'yield' && numbers.fu !== undefined && numbers.fy !== undefined && numbers.fu < numbers.fy) {
     errors.fu = `fu (tensile strength): ${numbers.fu} ${d.stressUnit} is below the yield strength fy = ${numbers.fy} ${d.stressUnit}`;
   }
-  if (Object.keys(errors).length > 0) return { ok: false, errors };
   const taken = new Set([...doc.materials.map((m) => m.id), ...BUILT_IN_MATERIALS.map((m) => m.id)]);
   const id = editingId ?? materialIdFor(name, taken);
   const sources = sourcesFor(d, origin, numbers);
@@ -221,11 +220,15 @@ export function materialFromDraft(d: MaterialDraft, origin: DraftOrigin | null, 
     ...(d.fromMemory ? { fromMemory: true } : {}),
     ...(d.note.trim() !== '' ? { note: d.note.trim() } : {}),
   };
-  const parsed = v.safeParse(MaterialSchema, candidate);
-  if (parsed.success) return { ok: true, material: parsed.output };
-  for (const issue of parsed.issues) {
+  // The schema runs even when some fields did not read, so every wrong field is named at once;
+  // a field keeps its first message (a field that did not read is absent from the candidate).
+  const parsed = v.safeParse(MaterialSchema, candidate, { abortEarly: false });
+  if (parsed.success && Object.keys(errors).length === 0) return { ok: true, material: parsed.output };
+  for (const issue of parsed.issues ?? []) {
     const f = fieldOf(issue);
-    errors[f] ??= f === 'form' ? issue.message : `${FIELD_LABELS[f]}: ${issue.message}`;
+    if (f === 'form' && Object.keys(errors).length > 0) continue;
+    // The schema's own messages start with the field's key ("nu must be below 0.5"); the label says it better.
+    errors[f] ??= f === 'form' ? issue.message : `${FIELD_LABELS[f]}: ${issue.message.replace(new RegExp(`^${f}\\s+`), '')}`;
   }
   return { ok: false, errors };
 }

@@ -77,10 +77,19 @@ describe('material form: typed text to a stored material', () => {
     expect(bad({ density: '-1' }).density).toMatch(/density.*must not be negative/);
     expect(bad({ fy: 'abc' }).fy).toMatch(/^fy .*"abc" is not a number/);
     // ν of an isotropic solid lies in (−1, 0.5) (Timoshenko & Goodier, Theory of Elasticity: positive strain energy).
-    expect(bad({ nu: '0.6' }).nu).toMatch(/ν \(Poisson ratio\): nu must be below 0.5/);
+    expect(bad({ nu: '0.6' }).nu).toMatch(/ν \(Poisson ratio\): must be below 0.5/);
     expect(bad({ nu: '', G: '' }).G).toMatch(/give the shear modulus G or the Poisson ratio ν/);
     expect(bad({ fu: '300' }).fu).toMatch(/fu .*300 MPa is below the yield strength fy = 355 MPa/);
     expect(bad({}, { name: '  ' }).name).toMatch(/name: enter a name/);
+  });
+
+  it('several wrong fields are named at once: an unreadable E does not hide a ν out of range or a blank fy', () => {
+    const base = s355Draft(doc());
+    const r = materialFromDraft({ ...base, text: { ...base.text, E: 'two hundred', nu: '0.7', fy: '' } }, null, null, doc());
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(Object.keys(r.errors).sort()).toEqual(['E', 'fy', 'nu']);
+    expect(r.errors.nu).toMatch(/below 0.5/);
   });
 
   it('a second material with the same name (any case) is refused, naming the name', () => {
