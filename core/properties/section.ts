@@ -52,6 +52,22 @@ export function centroidalFromIntegrals(raw: RawIntegrals): CentroidalIntegrals 
   };
 }
 
+/**
+ * A principal axis this close to x or y (degrees) is x or y with rounding in Ixy: a symmetric
+ * section's Ixy comes out as ~1e−16·I, not 0, which tilts θ by ~1e−14°. Z1 and Z2 then reuse Zx
+ * and Zy instead of two more plastic searches. Z changes with the axis angle by about Z per
+ * radian, so the snap moves Z1, Z2 by at most ~2e−11 relative, well inside METHODS' 1e−9.
+ */
+const AXIS_SNAP_DEG = 1e-9;
+
+/** Plastic modulus with the PNA at angleDeg, reusing Zx (PNA along x) or Zy (along y) when the angle is one of those. */
+function plasticModulusAt(region: Region, angleDeg: number, Zx: number, Zy: number): number {
+  const r = ((angleDeg % 180) + 180) % 180;
+  if (Math.min(r, 180 - r) <= AXIS_SNAP_DEG) return Zx;
+  if (Math.abs(r - 90) <= AXIS_SNAP_DEG) return Zy;
+  return plasticNeutralAxis(region, angleDeg as Degrees).Z;
+}
+
 /** Every property of the SectionProperties contract for one normalised region. */
 export function sectionProperties(region: Region): SectionProperties {
   const first = centroidalFromIntegrals(regionIntegrals(region));
@@ -63,8 +79,8 @@ export function sectionProperties(region: Region): SectionProperties {
   const s = elasticModuli(region, { cx, cy, Ix, Iy, I1: p.I1, I2: p.I2, thetaDeg: p.thetaDeg });
   const px = plasticAboutX(region);
   const py = plasticAboutY(region);
-  const z1 = plasticNeutralAxis(region, p.thetaDeg as Degrees);
-  const z2 = plasticNeutralAxis(region, (p.thetaDeg + 90) as Degrees);
+  const z1 = plasticModulusAt(region, p.thetaDeg, px.Zx, py.Zy);
+  const z2 = plasticModulusAt(region, p.thetaDeg + 90, px.Zx, py.Zy);
   return {
     area: A,
     cx,
@@ -84,8 +100,8 @@ export function sectionProperties(region: Region): SectionProperties {
     ...s,
     Zx: px.Zx,
     Zy: py.Zy,
-    Z1: z1.Z,
-    Z2: z2.Z,
+    Z1: z1,
+    Z2: z2,
     pnaY: px.pnaY,
     pnaX: py.pnaX,
     shapeFactorX: px.Zx / Math.min(s.SxTop, s.SxBottom),
