@@ -208,7 +208,7 @@ export function CheckView({ host, onClose }: Props): ReactElement {
             {!table && !importError && <span className="muted">A designation column, a shape type column (or a type chosen below), dimension columns and tabulated properties.</span>}
           </div>
           {importError && (
-            <div className="check-error" role="alert" data-testid="check-error">
+            <div className="check-error" role="alert" data-testid="check-import-error">
               <strong>{importError.title}</strong> {importError.message}
             </div>
           )}
@@ -490,7 +490,6 @@ function Report({ result, millis, flaggedOnly, onFlaggedOnly, page, onPage, onEx
                   <span className="sub">table · computed · deviation</span>
                 </th>
               ))}
-              <th>findings</th>
             </tr>
           </thead>
           <tbody>
@@ -508,24 +507,33 @@ function Report({ result, millis, flaggedOnly, onFlaggedOnly, page, onPage, onEx
 
 function ReportRow({ row, symbols }: { row: RowCheck; symbols: readonly string[] }): ReactElement {
   return (
-    <tr data-testid={`report-row-${row.row}`} data-flagged={row.flagged ? 'true' : 'false'} className={row.flagged ? 'flagged-row' : ''}>
-      <td className="num">{row.row}</td>
-      <th scope="row">{row.designation}</th>
-      <td>{row.family}</td>
-      <td className={row.flagged ? 'status bad' : 'status good'}>{row.flagged ? 'flagged' : 'pass'}</td>
-      {symbols.map((k) => {
-        const p = row.properties.find((q) => q.symbol === k);
-        if (!p) return <td key={k} className="muted">—</td>;
-        return (
-          <td key={k} className={p.flagged ? 'value flagged' : 'value'} data-testid={`cell-${row.row}-${k}`} data-flagged={p.flagged ? 'true' : 'false'} data-deviation={p.deviation} title={`tolerance ${(p.tolerance * 100).toFixed(2)} %`}>
-            <span className="pair">
-              {formatSig(p.tabulated, 4)} · {formatSig(p.computed, 4)}
-            </span>
-            <span className="dev">{pct(p.deviation)}</span>
+    <>
+      <tr data-testid={`report-row-${row.row}`} data-flagged={row.flagged ? 'true' : 'false'} className={row.flagged ? 'flagged-row' : ''}>
+        <td className="num">{row.row}</td>
+        <th scope="row">{row.designation}</th>
+        <td>{row.family}</td>
+        <td className={row.flagged ? 'verdict bad' : 'verdict good'}>{row.flagged ? 'flagged' : 'pass'}</td>
+        {symbols.map((k) => {
+          const p = row.properties.find((q) => q.symbol === k);
+          if (!p) return <td key={k} className="muted">—</td>;
+          return (
+            <td key={k} className={p.flagged ? 'value flagged' : 'value'} data-testid={`cell-${row.row}-${k}`} data-flagged={p.flagged ? 'true' : 'false'} data-deviation={p.deviation} title={`tolerance ${(p.tolerance * 100).toFixed(2)} %`}>
+              <span className="pair">
+                {formatSig(p.tabulated, 4)} · {formatSig(p.computed, 4)}
+              </span>
+              <span className="dev">{pct(p.deviation)}</span>
+            </td>
+          );
+        })}
+      </tr>
+      {row.findings.length > 0 && (
+        <tr className="findings-row" data-testid={`findings-${row.row}`}>
+          <td />
+          <td colSpan={symbols.length + 3} className="findings small">
+            {row.findings.join(' · ')}
           </td>
-        );
-      })}
-      <td className="findings small">{row.findings.join('; ')}</td>
-    </tr>
+        </tr>
+      )}
+    </>
   );
 }
