@@ -12,6 +12,7 @@
 import { documentFromJson, parseJson } from '../../core/document/index.ts';
 import { compositeProperties, type MaterialPiece } from '../../core/materials/composite.ts';
 import { materialPiecesFromDocument } from '../../core/materials/document.ts';
+import { documentReferenceModulus } from '../../core/materials/reference.ts';
 import {
   densityToKgPerM3, FORCE_UNITS, forceToNewtons, newtonsTo, parseQuantity, pascalsTo, QuantityError,
   STRESS_UNITS, stressToPascals, type DensityUnit, type ForceUnit, type StressUnit,
@@ -305,7 +306,10 @@ export function materialPropsResults(file: string, section: LoadedSection, flags
   const found = materialPiecesFromDocument(doc);
   const problems = [...found.issues, ...found.diagnostics.map((d) => d.message)];
   if (problems.length > 0) return { json: {}, rows: [], errors: problems.map((p) => `${file}: ${p}`) };
-  let eRef: number | undefined;
+  // --eref overrides the document's stored choice (referenceModulus), which overrides the first part's E.
+  const stored = documentReferenceModulus(doc);
+  if (!stored.ok) return { json: {}, rows: [], errors: [`${file}: ${stored.message}`] };
+  let eRef: number | undefined = stored.eRef;
   try {
     if (erefText !== undefined) {
       const q = parseQuantity(erefText, STRESS_UNITS, units.stress, '--eref');
@@ -317,6 +321,7 @@ export function materialPropsResults(file: string, section: LoadedSection, flags
     throw err;
   }
   const c = compositeProperties(found.pieces, section.unit, eRef);
+  const erefFrom = erefText !== undefined ? '--eref' : stored.from === 'material' ? `the document's choice: ${stored.materialName ?? 'a material'}` : stored.from === 'typed' ? "the document's typed value" : 'first part';
   const k = converters(units);
   const L = (v: number, p = 1): number => convertLength(v, section.unit, reportUnit, p);
   const weight = imperial(reportUnit) ? c.weightPerLengthLbPerFt : c.weightPerLength;
@@ -338,7 +343,7 @@ export function materialPropsResults(file: string, section: LoadedSection, flags
     ['EI2', g(values.EI2), `${f}·${u}²`, 'minor principal bending stiffness'],
     ['thetaEIDeg', g(values.thetaEIDeg), 'deg', 'angle of the EI1 axis, CCW from +x'],
     ['cxE', g(values.cxE), u, 'E-weighted centroid x'], ['cyE', g(values.cyE), u, 'E-weighted centroid y'],
-    ['eRef', g(values.eRef), units.stress, `reference modulus (${c.eRefFrom === 'given' ? '--eref' : 'first part'})`],
+    ['eRef', g(values.eRef), units.stress, `reference modulus (${erefFrom})`],
     ['transformedArea', g(values.transformedArea), `${u}²`, 'transformed area EA / E_ref'],
     ['transformedIx', g(values.transformedIx), `${u}⁴`, 'transformed Ix = EIx / E_ref'],
     ['transformedIy', g(values.transformedIy), `${u}⁴`, 'transformed Iy = EIy / E_ref'],

@@ -19,7 +19,7 @@ import { materialPropsResults } from './member.ts';
 export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'json', type: 'boolean', description: 'print one JSON object (keys below) instead of the table' },
   { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m: for GeoJSON the unit of its coordinates (required); for a document the unit to report in (default: its own)' },
-  { name: 'eref', type: 'string', value: 'VALUE', description: 'documents with materials: reference modulus for the transformed section, e.g. 200GPa or 29000ksi (default: the first part\'s E)' },
+  { name: 'eref', type: 'string', value: 'VALUE', description: 'documents with materials: reference modulus for the transformed section, e.g. 200GPa or 29000ksi (default: the document\'s referenceModulus, else the first part\'s E)' },
   { name: 'torsion', type: 'boolean', description: 'add finite-element torsion: J, Cw, shear centre xs, ys, meshElements, jRelativeError (one material only)' },
 ];
 
@@ -198,8 +198,9 @@ export const propsCommand: Command = {
     'A document whose parts have materials adds the E-weighted (transformed) section: EA (N, or',
     'lbf for in/ft), EIx, EIy, EIxy, EI1, EI2 (force·unit²), thetaEIDeg, cxE, cyE, eRef (MPa or psi),',
     'transformedArea, transformedIx, transformedIy, massPerLength (kg/m), weightPerLength (N/m, or',
-    'lbf/ft for in/ft), materialUnits and per-part modular ratios "materials". --eref VALUE sets the',
-    'reference modulus (unit suffix Pa, kPa, MPa, GPa, psi or ksi; default MPa or psi).',
+    'lbf/ft for in/ft), materialUnits and per-part modular ratios "materials". The reference modulus is',
+    'the document\'s referenceModulus when it has one (a material\'s E or a typed value), else the first',
+    'part\'s E; --eref VALUE overrides both (unit suffix Pa, kPa, MPa, GPa, psi or ksi; default MPa or psi).',
     '',
     '--torsion adds finite-element torsion of the (single-material) section: J (unit⁴), Cw (unit⁶,',
     'about the shear centre), the Trefftz shear centre xs, ys (section coordinates), meshElements,',
