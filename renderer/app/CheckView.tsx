@@ -19,6 +19,8 @@ import './check-view.css';
 
 const PAGE = 100;
 const SUPER: Readonly<Record<number, string>> = { 1: '', 2: '²', 3: '³', 4: '⁴' };
+/** A tabulated value as the table printed it (up to 6 significant figures, no padding zeros); computed values get 4. */
+const tabulatedText = (v: number): string => String(Number(v.toPrecision(6)));
 const pct = (v: number): string => (Number.isFinite(v) ? `${v >= 0 ? '+' : '−'}${Math.abs(v * 100).toFixed(2)} %` : '∞');
 
 interface Table {
@@ -519,7 +521,7 @@ function ReportRow({ row, symbols }: { row: RowCheck; symbols: readonly string[]
           return (
             <td key={k} className={p.flagged ? 'value flagged' : 'value'} data-testid={`cell-${row.row}-${k}`} data-flagged={p.flagged ? 'true' : 'false'} data-deviation={p.deviation} title={`tolerance ${(p.tolerance * 100).toFixed(2)} %`}>
               <span className="pair">
-                {formatSig(p.tabulated, 4)} · {formatSig(p.computed, 4)}
+                {tabulatedText(p.tabulated)} · {formatSig(p.computed, 4)}
               </span>
               <span className="dev">{pct(p.deviation)}</span>
             </td>

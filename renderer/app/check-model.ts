@@ -121,8 +121,8 @@ export function targetText(symbol: string, unitText: string, tableUnit: LengthUn
 /** Core's bad-input messages name command-line flags; in the view the same fixes are made in the mapping and the options. */
 export function viewMessage(message: string): string {
   return message
-    .replace(/--map "?([^"=]+?)=([^"\s;,)]+)"?(?: or another target)?/g, 'the mapping (set column "$1" to $2)')
     .replace(/--map COLUMN=(\w+)/g, 'the mapping (set a column to $1)')
+    .replace(/--map "?([^"=]+?)=([^"\s;,)]+)"?(?: or another target)?/g, 'the mapping (set column "$1" to $2)')
     .replace(/--map (\S+?)=…/g, 'the mapping of "$1"')
     .replace(/^--map /, 'mapping: ')
     .replace(/give --type/g, 'choose the shape type')

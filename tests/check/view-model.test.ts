@@ -1,0 +1,81 @@
+/**
+ * The pure logic of the table-check view (renderer/app/check-model.ts): the key a mapping is
+ * remembered under, reading it back, and the dropdown choices as target texts that core/check
+ * reads back to the same role (a round-trip identity).
+ */
+import { describe, expect, it } from 'vitest';
+import { mapColumns, roleFromTarget } from '../../core/check/index.ts';
+import { fnv1a, mappingKey, powerOf, readRemembered, rememberedText, symbolOf, targetChoices, targetText, unitChoices, unitTextOf, viewMessage } from '../../renderer/app/check-model.ts';
+
+describe('the remembered-mapping key', () => {
+  it('FNV-1a 32-bit gives the published test vectors: "" → 811c9dc5, "a" → e40c292c, "foobar" → bf9cf968 (Fowler–Noll–Vo reference test suite, from memory)', () => {
+    expect(fnv1a('')).toBe('811c9dc5');
+    expect(fnv1a('a')).toBe('e40c292c');
+    expect(fnv1a('foobar')).toBe('bf9cf968');
+  });
+
+  it('is one per header signature: spaces around headers do not count, order and names do, the count is in the key', () => {
+    const k = mappingKey(['label', 'A_in2', 'Ix_in4']);
+    expect(mappingKey([' label ', 'A_in2', 'Ix_in4 '])).toBe(k);
+    expect(mappingKey(['A_in2', 'label', 'Ix_in4'])).not.toBe(k);
+    expect(mappingKey(['label', 'A_in2', 'Ix_in3'])).not.toBe(k);
+    expect(k).toMatch(/^check-mapping:3:[0-9a-f]{8}$/);
+    // Joined with a separator no header holds: ["a,b"] and ["a", "b"] are different tables.
+    expect(mappingKey(['ab', 'c'])).not.toBe(mappingKey(['a', 'bc']));
+  });
+});
+
+describe('reading a remembered mapping back', () => {
+  const headers = ['Section', 'Kind', 'Overall depth', 'Ix (in4)'];
+  const mapping = mapColumns(headers, 'in', { 'Overall depth': 'd' });
+
+  it('round-trips the mapping, the table unit and the shape type', () => {
+    const text = rememberedText(headers, { mapping, unit: 'mm', type: 'W' });
+    expect(readRemembered(headers, text)).toEqual({ mapping, unit: 'mm', type: 'W' });
+  });
+
+  it('is refused for other headers (a colliding key), damaged JSON, a bad unit or a bad column', () => {
+    const text = rememberedText(headers, { mapping, unit: 'in', type: null });
+    expect(readRemembered(['Section', 'Kind', 'Depth', 'Ix (in4)'], text)).toBeNull();
+    expect(readRemembered(headers, '{"headers": [')).toBeNull();
+    expect(readRemembered(headers, text.replace('"unit":"in"', '"unit":"furlong"'))).toBeNull();
+    expect(readRemembered(headers, text.replace('"symbol":"d"', '"symbol":"zz"'))).toBeNull();
+    expect(readRemembered(headers, null)).toBeNull();
+  });
+});
+
+describe('dropdown choices as target texts', () => {
+  it('every unit choice of every property and dimension reads back through core/check to the same symbol and unit', () => {
+    const symbols = targetChoices().flatMap((g) => g.choices.map((c) => c.value)).filter((s) => powerOf(s) !== null);
+    expect(symbols).toEqual(expect.arrayContaining(['d', 'bf', 'tw', 'tf', 'A', 'Ix', 'Sx', 'Zx', 'rx']));
+    for (const symbol of symbols) {
+      for (const choice of unitChoices(powerOf(symbol)!)) {
+        const role = roleFromTarget(targetText(symbol, choice.value, 'in'), 'in', 'column');
+        expect(symbolOf(role), `${symbol} ${choice.value}`).toBe(symbol);
+        expect(unitTextOf(role), `${symbol} ${choice.value}`).toBe(choice.value);
+      }
+    }
+  });
+
+  it('a unit of the wrong power falls back to the table unit to the right power; designation, type and ignore take none', () => {
+    expect(targetText('Ix', 'mm', 'cm')).toBe('Ix:cm4');
+    expect(targetText('d', '10^6mm4', 'mm')).toBe('d:mm');
+    expect(targetText('A', 'in2', 'mm')).toBe('A:in2');
+    expect(targetText('designation', 'in', 'in')).toBe('designation');
+    expect(targetText('ignore', 'in4', 'in')).toBe('ignore');
+  });
+
+  it('scaled metric units: 10^6 mm⁴ reads as scale 10⁶ (the SI prefix arithmetic of the header "Ix [10^6 mm^4]")', () => {
+    const role = roleFromTarget(targetText('Ix', '10^6mm4', 'mm'), 'mm', 'I');
+    expect(role).toEqual({ role: 'property', symbol: 'Ix', unit: 'mm', scale: 1e6 });
+    expect(unitChoices(4).map((c) => c.label)).toContain('10⁶ mm⁴');
+  });
+});
+
+describe('messages for the view', () => {
+  it('command-line hints become the view\'s own controls', () => {
+    expect(viewMessage('columns "a" and "b" both map to Ix; correct one with --map "b=ignore" or another target')).toBe('columns "a" and "b" both map to Ix; correct one with the mapping (set column "b" to ignore)');
+    expect(viewMessage('no type column: add one, name one with --map COLUMN=type, or give --type')).toBe('no type column: add one, name one with the mapping (set a column to type), or choose the shape type');
+    expect(viewMessage('--tolerance Qx=2%: unknown property "Qx"')).toBe('tolerance Qx=2%: unknown property "Qx"');
+  });
+});
