@@ -125,9 +125,28 @@ function ringFromChain(c: Chain): Ring {
   return { xy, bulge: c.b.slice(0, n) };
 }
 
+/**
+ * True when cleaning would change nothing: straight edges only, no repeated consecutive vertex
+ * (the closing pair included) and no pass-through vertex, all tested cyclically as the chain
+ * passes would. One scan, no allocation: the common case of a clean million-vertex outline.
+ */
+function alreadyClean(ring: Ring): boolean {
+  const { xy, bulge } = ring;
+  const n = xy.length >> 1;
+  if (n < 4 || (bulge !== undefined && bulge.some((b) => b !== 0))) return false;
+  let ux = xy[2 * n - 4]!, uy = xy[2 * n - 3]!, vx = xy[2 * n - 2]!, vy = xy[2 * n - 1]!;
+  for (let i = 0; i < n; i++) {
+    const wx = xy[2 * i]!, wy = xy[2 * i + 1]!;
+    if (wx === vx && wy === vy) return false;
+    if (orient2d(ux, uy, vx, vy, wx, wy) === 0 && (vx - ux) * (wx - vx) + (vy - uy) * (wy - vy) > 0) return false;
+    ux = vx; uy = vy; vx = wx; vy = wy;
+  }
+  return true;
+}
+
 /** Cleans one ring and gives it the requested winding (+1 counter-clockwise, −1 clockwise). */
 export function normaliseRing(ring: Ring, winding: 1 | -1): Ring {
-  const cleaned = ringFromChain(chainWithoutCollinear(chainWithoutRepeats(ring)));
+  const cleaned = alreadyClean(ring) ? { xy: ring.xy.slice() } : ringFromChain(chainWithoutCollinear(chainWithoutRepeats(ring)));
   const area = ringSignedArea(cleaned);
   return area * winding < 0 ? reverseRing(cleaned) : cleaned;
 }

@@ -22,7 +22,8 @@
 function bucketOrder(keys: Float64Array): { order: Uint32Array; floor: Float64Array } {
   const n = keys.length;
   let lo = Infinity, hi = -Infinity;
-  for (const k of keys) {
+  for (let i = 0; i < n; i++) {
+    const k = keys[i]!;
     if (k < lo) lo = k;
     if (k > hi) hi = k;
   }
@@ -32,20 +33,20 @@ function bucketOrder(keys: Float64Array): { order: Uint32Array; floor: Float64Ar
   const count = new Uint32Array(n + 1);
   const bucketMin = new Float64Array(n).fill(Infinity);
   for (let i = 0; i < n; i++) {
-    const k = keys[i] ?? 0;
+    const k = keys[i]!;
     const b = Math.min(n - 1, Math.floor((k - lo) * scale));
     bucket[i] = b;
-    count[b + 1] = (count[b + 1] ?? 0) + 1;
-    if (k < (bucketMin[b] ?? Infinity)) bucketMin[b] = k;
+    count[b + 1]!++;
+    if (k < bucketMin[b]!) bucketMin[b] = k;
   }
-  for (let b = 0; b < n; b++) count[b + 1] = (count[b + 1] ?? 0) + (count[b] ?? 0);
+  for (let b = 0; b < n; b++) count[b + 1]! += count[b]!;
   const order = new Uint32Array(n);
   const floor = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    const b = bucket[i] ?? 0;
-    const at = count[b] ?? 0;
+    const b = bucket[i]!;
+    const at = count[b]!;
     order[at] = i;
-    floor[at] = bucketMin[b] ?? 0;
+    floor[at] = bucketMin[b]!;
     count[b] = at + 1;
   }
   return { order, floor };
@@ -53,7 +54,8 @@ function bucketOrder(keys: Float64Array): { order: Uint32Array; floor: Float64Ar
 
 function spread(v: Float64Array): number {
   let lo = Infinity, hi = -Infinity;
-  for (const x of v) {
+  for (let i = 0; i < v.length; i++) {
+    const x = v[i]!;
     if (x < lo) lo = x;
     if (x > hi) hi = x;
   }
@@ -65,8 +67,8 @@ export function sweepPairs(x: Float64Array, y: Float64Array, ends: Uint32Array, 
   const [u, w] = spread(x) >= spread(y) ? [x, y] : [y, x];
   const uLo = new Float64Array(n), uHi = new Float64Array(n), wLo = new Float64Array(n), wHi = new Float64Array(n);
   for (let k = 0; k < n; k++) {
-    const e = ends[k] ?? 0;
-    const u0 = u[k] ?? 0, u1 = u[e] ?? 0, w0 = w[k] ?? 0, w1 = w[e] ?? 0;
+    const e = ends[k]!;
+    const u0 = u[k]!, u1 = u[e]!, w0 = w[k]!, w1 = w[e]!;
     uLo[k] = Math.min(u0, u1);
     uHi[k] = Math.max(u0, u1);
     wLo[k] = Math.min(w0, w1);
@@ -75,19 +77,20 @@ export function sweepPairs(x: Float64Array, y: Float64Array, ends: Uint32Array, 
   const { order, floor } = bucketOrder(uLo);
   const active: number[] = [];
   for (let o = 0; o < n; o++) {
-    const s = order[o] ?? 0;
-    const passed = floor[o] ?? 0;
-    const sLo = uLo[s] ?? 0, sHi = uHi[s] ?? 0, lo = wLo[s] ?? 0, hi = wHi[s] ?? 0;
+    const s = order[o]!;
+    const passed = floor[o]!;
+    const sLo = uLo[s]!, sHi = uHi[s]!, lo = wLo[s]!, hi = wHi[s]!;
     let i = 0;
     while (i < active.length) {
-      const a = active[i] ?? 0;
-      if ((uHi[a] ?? 0) < passed) {
+      const a = active[i]!;
+      const aHi = uHi[a]!;
+      if (aHi < passed) {
         // Swap-remove: every segment still to come starts beyond segment a's upper end.
-        active[i] = active[active.length - 1] ?? 0;
+        active[i] = active[active.length - 1]!;
         active.pop();
         continue;
       }
-      const overlaps = (uLo[a] ?? 0) <= sHi && sLo <= (uHi[a] ?? 0) && (wLo[a] ?? 0) <= hi && lo <= (wHi[a] ?? 0);
+      const overlaps = uLo[a]! <= sHi && sLo <= aHi && wLo[a]! <= hi && lo <= wHi[a]!;
       if (overlaps && !visit(a, s)) return;
       i++;
     }

@@ -132,10 +132,28 @@ function bulgeProblem(ring: Ring, bulge: Float64Array, ctx: ValidationContext, p
   return null;
 }
 
+/** True when two consecutive vertices (the last and the first included) are the same point. */
+function hasRepeats(xy: Float64Array): boolean {
+  const n = xy.length >> 1;
+  let px = xy[2 * n - 2]!, py = xy[2 * n - 1]!;
+  for (let i = 0; i < n; i++) {
+    const x = xy[2 * i]!, y = xy[2 * i + 1]!;
+    if (x === px && y === py) return true;
+    px = x; py = y;
+  }
+  return false;
+}
+
 /** Drops exactly repeated consecutive vertices and a repeated closing vertex, keeping indices. */
 function cleanRing(ring: Ring, place: Place): CleanRing {
   const src = ring.xy;
   const n = src.length >> 1;
+  if (ring.bulge === undefined && n > 1 && !hasRepeats(src)) {
+    // Nothing to drop (the usual case): the ring as it is, read-only from here on.
+    const original = new Uint32Array(n);
+    for (let i = 0; i < n; i++) original[i] = i;
+    return { place, ring: { xy: src }, original, bounds: ringBounds(ring) };
+  }
   const keep = new Uint32Array(n);
   // groupEnd[k]: the last of the copies of kept vertex k; its segment is the one leaving the group.
   const groupEnd = new Uint32Array(n);
@@ -301,8 +319,8 @@ function contactDiagnostics(rings: readonly CleanRing[], ctx: ValidationContext)
   const s = collectSegments(rings);
   const ends = new Uint32Array(s.x.length);
   for (let k = 0; k < ends.length; k++) ends[k] = segmentEnd(s, k);
-  sweepPairs(s.x, s.y, ends, (a, b) => {
-    const c = contactOf(s, a, b);
+  /** Records contact c between segments a and b; false once enough diagnostics are gathered. */
+  const consider = (a: number, b: number, c: Contact): boolean => {
     if (c === CONTACT_NONE) return true;
     const ra = s.ringOf[a] ?? 0, rb = s.ringOf[b] ?? 0;
     const key = ra < rb ? `${ra},${rb}` : `${rb},${ra}`;
@@ -316,7 +334,14 @@ function contactDiagnostics(rings: readonly CleanRing[], ctx: ValidationContext)
     seen.add(spot);
     diagnostics.push(d);
     return diagnostics.length < MAX_CONTACT_DIAGNOSTICS;
-  });
+  };
+  // Neighbouring segments of a ring always share their vertex: the only fault between them is
+  // doubling back, checked here in one pass; the sweep then skips them (two of its visits per segment).
+  for (let a = 0; a < ends.length; a++) {
+    const a1 = ends[a] ?? 0;
+    if (doublesBack(s, a, a1, ends[a1] ?? 0) && !consider(a, a1, CONTACT_OVERLAP)) return { diagnostics, crossed, touched };
+  }
+  sweepPairs(s.x, s.y, ends, (a, b) => (ends[a] === b || ends[b] === a ? true : consider(a, b, contactOf(s, a, b))));
   return { diagnostics, crossed, touched };
 }
 
