@@ -78,6 +78,18 @@ export function ringProjectionRange(
   out: [number, number],
 ): void {
   const n = xy.length >> 1;
+  if (bulge === undefined) {
+    // Straight edges: the vertices alone, with the running extremes kept in locals.
+    let lo = out[0], hi = out[1];
+    for (let i = 0; i < n; i++) {
+      const s = ux * (xy[2 * i]! - ox) + uy * (xy[2 * i + 1]! - oy);
+      if (s < lo) lo = s;
+      if (s > hi) hi = s;
+    }
+    out[0] = lo;
+    out[1] = hi;
+    return;
+  }
   const phiMax = Math.atan2(uy, ux);
   const phiMin = phiMax + Math.PI;
   for (let i = 0; i < n; i++) {
