@@ -147,8 +147,13 @@ export function CheckView({ host, onClose }: Props): ReactElement {
     setEdits((e) => ({ ...e, [header]: targetText(symbol, unitText, unit) }));
   };
 
+  // What the shown report was made with; a later change of the mapping or the options marks it as out of date.
+  const inputs = JSON.stringify([table?.name, mapping?.ok === true ? mapping.mapping : null, unit, type, baseTolerance, extraTolerance, ownLabels]);
+  const [ranWith, setRanWith] = useState<string | null>(null);
+
   const run = (): void => {
     if (!table || mapping?.ok !== true || !tolerances.ok) return;
+    setRanWith(inputs);
     setPage(0);
     setExportNote(null);
     started.current = { headers: table.headers, unit, type: type === '' ? null : type };
@@ -301,6 +306,11 @@ export function CheckView({ host, onClose }: Props): ReactElement {
           </div>
         )}
 
+        {state.kind === 'done' && ranWith !== inputs && (
+          <p className="check-stale" role="status" data-testid="check-stale">
+            The mapping or the options changed since this report was made: check the rows again to bring it up to date.
+          </p>
+        )}
         {state.kind === 'done' && (
           <Report
             result={state.result}

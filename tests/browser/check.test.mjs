@@ -139,6 +139,9 @@ export async function aColumnCorrectedByDropdownIsUsedAndRememberedForTheSameHea
   await page.getByTestId('check-tolerance-extra').fill('A=1%');
   const after = await runCheck(page);
   check(after.checked === 7 && after.flagged === 0, `with the corrected column all 7 W rows pass, got ${JSON.stringify(after)}`);
+  check((await page.getByTestId('check-stale').count()) === 0, 'a fresh report is not marked out of date');
+  await page.getByTestId('check-tolerance').fill('2%');
+  await page.getByTestId('check-stale').waitFor();
   // A new visit (same browser storage): the correction comes back for the same headers.
   await page.reload();
   await page.getByTestId('menu-file').waitFor({ timeout: 20_000 });
