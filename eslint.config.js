@@ -5,7 +5,7 @@ import tseslint from 'typescript-eslint';
 const nodeBuiltins = ['node:*', 'fs', 'path', 'os', 'child_process', 'crypto', 'url', 'util', 'stream', 'worker_threads'];
 
 export default tseslint.config(
-  { ignores: ['node_modules/**', 'dist/**', 'out/**', 'tests/browser/artifacts/**', '**/*.mjs', '**/*.js'] },
+  { ignores: ['node_modules/**', 'dist/**', 'out/**', 'tests/browser/artifacts/**', '**/*.js'] },
   ...tseslint.configs.recommended,
   {
     rules: {
