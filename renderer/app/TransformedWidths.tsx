@@ -19,8 +19,8 @@ function tableHeights(c: CompositeProperties): { y: number; what: string }[] {
   const rows: { y: number; what: string }[] = [];
   for (let i = 0; i + 1 < edges.length; i++) rows.push({ y: ((edges[i] as number) + (edges[i + 1] as number)) / 2, what: 'mid-band' });
   const near = rows.find((r) => Math.abs(r.y - c.cy) <= 1e-9 * Math.max(1, Math.abs((edges[0] ?? 0) - (edges[edges.length - 1] ?? 0))));
-  if (near) near.what = 'mid-band, at the E-weighted centroid';
-  else rows.push({ y: c.cy, what: 'E-weighted centroid' });
+  if (near) near.what = 'mid-band · E-centroid';
+  else rows.push({ y: c.cy, what: 'E-centroid' });
   return rows.sort((a, b) => b.y - a.y);
 }
 
@@ -61,7 +61,7 @@ export function TransformedWidths({ pieces, c, unit }: { pieces: readonly Materi
         </text>
       </svg>
       <table>
-        <caption>Widths at heights y ({unit}); n·b to E_ref</caption>
+        <caption>Widths b and n·b (to E_ref) at heights y, {unit}; E-centroid = E-weighted centroid</caption>
         <thead>
           <tr>
             <th scope="col">y</th>

@@ -150,7 +150,8 @@ export async function transformedWidthsShownOnRequestWidenTheSteelByItsModularRa
   const nb = Number(await page.getByTestId('width-nb-0').getAttribute('data-value'));
   near('actual width', b, 110, 1e-12);
   near('transformed width', nb, 281.25, 1e-12);
-  await page.getByTestId('materials-panel').screenshot({ path: path.join(artifactsDir, 'transformed-widths.png') });
+  await page.getByTestId('transformed-widths').scrollIntoViewIfNeeded();
+  await page.screenshot({ path: path.join(artifactsDir, 'transformed-widths.png') });
 }
 
 export async function aDocumentUsingLibraryMaterialsAndAChosenERefSavesAndReopensWithTheSameNumbers({ page, baseUrl, artifactsDir }) {
