@@ -21,6 +21,7 @@ import { checkedDocumentText, MAX_TEXT_BYTES, type PayloadOf } from './payloads.
 import { readRecentFiles, withRecent, writeRecentFiles, type RecentFile } from './recent-files.ts';
 import { createRecoveryStore } from './recovery.ts';
 import { saveAtomically } from './save.ts';
+import { createSettingsStore } from './settings.ts';
 import {
   APP_ENTRY_URL, APP_SCHEME, denyPermissionCheck, denyPermissionRequest, denyWindowOpen,
   isNavigationAllowed, PRIVILEGED_SCHEMES, responseHeaders, windowOptions,
@@ -41,6 +42,7 @@ let closeConfirmed = false;
 
 const recovery = createRecoveryStore(path.join(app.getPath('userData'), 'recovery'));
 const recentListFile = path.join(app.getPath('userData'), 'recent-files.json');
+const settings = createSettingsStore(app.getPath('userData'));
 let recent: RecentFile[] = [];
 
 function sendCommand(command: HostCommand): void {
@@ -152,6 +154,24 @@ function registerHandlers(): void {
   handle('recent:list', async () => recent);
   handle('recovery:write', async (text) => (text === null ? recovery.clear() : recovery.write(text)));
   handle('recovery:read', async () => recovery.read());
+  handle('table:open', async () => {
+    if (!window) return null;
+    const choice = await dialog.showOpenDialog(window, {
+      title: 'Import a table of shapes',
+      defaultPath: defaultFolder(),
+      properties: ['openFile'],
+      filters: [{ name: 'Table of shapes (CSV)', extensions: ['csv', 'txt'] }, { name: 'All files', extensions: ['*'] }],
+    });
+    const chosen = choice.filePaths[0];
+    if (choice.canceled || !chosen) return null;
+    // Read only: the path is not granted for saving and not listed among recent documents.
+    const info = await fs.stat(chosen);
+    if (!info.isFile()) throw new Error(`"${chosen}" is not a file.`);
+    if (info.size > MAX_TEXT_BYTES) throw new Error(`"${chosen}" is ${info.size} bytes; the largest table this build reads is ${MAX_TEXT_BYTES} bytes.`);
+    return { name: path.basename(chosen), handle: null, text: await fs.readFile(chosen, 'utf8') };
+  });
+  handle('settings:read', async (key) => settings.read(key));
+  handle('settings:write', async (key, value) => settings.write(key, value));
   listen('window:set-title', (title) => window?.setTitle(title));
   listen('window:set-unsaved', (value) => {
     unsaved = value;

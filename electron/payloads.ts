@@ -6,6 +6,7 @@
 import * as v from 'valibot';
 import { validateDocument } from '../core/document/schema.ts';
 import type { Channel } from './channels.ts';
+import { SETTING_KEY, SETTING_KEY_MAX, SETTING_VALUE_MAX } from './settings.ts';
 
 /** Largest text accepted over IPC or read from disk (a document of many thousand vertices is < 5 MB). */
 export const MAX_TEXT_BYTES = 64 * 1024 * 1024;
@@ -20,6 +21,13 @@ const fileName = v.pipe(
   v.regex(/^[^/\\:*?"<>|\p{Cc}]+$/u, 'a file name without folders or the characters / \\ : * ? " < > |'),
   v.check((name) => name !== '.' && name !== '..', 'a file name, not . or ..'),
 );
+const settingKey = v.pipe(
+  v.string('a setting key'),
+  v.minLength(1, 'a non-empty setting key'),
+  v.maxLength(SETTING_KEY_MAX, `a setting key of at most ${SETTING_KEY_MAX} characters`),
+  v.regex(SETTING_KEY, 'a setting key of letters, digits and . _ : -'),
+);
+const settingValue = v.nullable(v.pipe(v.string('text or null'), v.maxLength(SETTING_VALUE_MAX, `a setting of at most ${SETTING_VALUE_MAX} characters`)));
 const shortText = v.pipe(v.string('text'), v.maxLength(500, 'text of at most 500 characters'));
 
 export const EXPORT_MIME_TYPES = ['image/svg+xml', 'text/csv', 'text/html', 'application/json', 'text/plain'] as const;
@@ -42,6 +50,9 @@ export const PAYLOADS = {
   'recent:list': v.strictTuple([]),
   'recovery:write': v.strictTuple([v.nullable(text)]),
   'recovery:read': v.strictTuple([]),
+  'table:open': v.strictTuple([]),
+  'settings:read': v.strictTuple([settingKey]),
+  'settings:write': v.strictTuple([settingKey, settingValue]),
   'window:set-title': v.strictTuple([shortText]),
   'window:set-unsaved': v.strictTuple([v.boolean('true or false')]),
   'menu:command': v.strictTuple([]),

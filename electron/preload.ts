@@ -32,6 +32,9 @@ const host: Host = {
   setUnsaved: (unsaved) => send('window:set-unsaved', unsaved),
   openRecent: (handle) => invoke<OpenedFile | null>('document:open-recent', handle),
   launchFile: () => invoke<OpenedFile | null>('document:launch-file'),
+  openTable: () => invoke<OpenedFile | null>('table:open'),
+  readSetting: (key) => invoke<string | null>('settings:read', key),
+  writeSetting: (key, value) => invoke<void>('settings:write', key, value),
   onCommand(listener) {
     const relay = (_event: unknown, command: unknown): void => {
       if (isHostCommand(command)) listener(command);

@@ -77,6 +77,7 @@ describe('IPC channels', () => {
     expect(CHANNELS.map((c) => c.name)).toEqual([
       'document:open', 'document:open-recent', 'document:launch-file', 'document:save', 'document:save-as',
       'export:save', 'dialog:confirm-discard', 'recent:list', 'recovery:write', 'recovery:read',
+      'table:open', 'settings:read', 'settings:write',
       'window:set-title', 'window:set-unsaved', 'menu:command',
     ]);
     expect(Object.keys(PAYLOADS).sort()).toEqual(CHANNELS.map((c) => c.name).sort());
