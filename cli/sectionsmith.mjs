@@ -5,11 +5,25 @@
 import { fileURLToPath } from 'node:url';
 import { loadCli } from './bundle.mjs';
 
-let cli = await loadCli();
-if (cli === null) {
-  const { register } = await import('tsx/esm/api');
-  // Our own tsconfig, whatever the working directory (a tsconfig there must not change how we run).
-  register({ tsconfig: fileURLToPath(new URL('../tsconfig.json', import.meta.url)) });
-  cli = await import('./main.ts');
+// A defect outside runCli (start-up, a late asynchronous throw) exits 3 like any internal error
+// (cli/command.ts EXIT_BUG), never Node's default 1, which `check` uses for "rows flagged".
+const EXIT_BUG = 3;
+const bug = (error) => {
+  process.stderr.write(`sectionsmith: internal error (please report it): ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
+  process.exit(EXIT_BUG);
+};
+process.on('uncaughtException', bug);
+process.on('unhandledRejection', bug);
+
+try {
+  let cli = await loadCli();
+  if (cli === null) {
+    const { register } = await import('tsx/esm/api');
+    // Our own tsconfig, whatever the working directory (a tsconfig there must not change how we run).
+    register({ tsconfig: fileURLToPath(new URL('../tsconfig.json', import.meta.url)) });
+    cli = await import('./main.ts');
+  }
+  process.exitCode = await cli.runCli(process.argv.slice(2), cli.processIo());
+} catch (error) {
+  bug(error);
 }
-process.exitCode = await cli.runCli(process.argv.slice(2), cli.processIo());

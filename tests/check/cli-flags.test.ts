@@ -17,6 +17,7 @@ import { mapItems } from '../../cli/commands/check.ts';
 
 const CLI = new URL('../../cli/sectionsmith.mjs', import.meta.url).pathname;
 const THROWS = new URL('../cli/children/stdout-throws.mjs', import.meta.url).pathname;
+const LATE = new URL('../cli/children/late-throw.mjs', import.meta.url).pathname;
 const FIXTURE = new URL('../fixtures/aisc-v15-subset.csv', import.meta.url).pathname;
 
 function run(args: string[], preload?: string): { code: number; out: string; err: string } {
@@ -132,6 +133,14 @@ describe('exit codes', () => {
     expect(r.code).toBe(3);
     expect(r.err).toContain('internal error (please report it)');
     expect(r.err).toContain('simulated defect');
+  });
+
+  // Node's own exit code for an uncaught exception is 1 (Node.js documentation, "Exit codes": 1 Uncaught Fatal Exception).
+  it('a defect outside the command (an uncaught asynchronous throw) also exits 3, where Node alone exits 1', () => {
+    const r = run(['check', table('late.csv'), ...PASSING], LATE);
+    expect(r.code).toBe(3);
+    expect(r.err).toContain('internal error (please report it)');
+    expect(r.err).toContain('simulated late defect');
   });
 
   it('--help and check --help list all four exit codes', () => {
