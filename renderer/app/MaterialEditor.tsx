@@ -74,7 +74,11 @@ function NumberInput({ form, field, unit, onText }: { form: FormState; field: Nu
           {error}
         </span>
       )}
-      {source && unchanged && <span className="mf-source">source: {source}</span>}
+      {source && unchanged && (
+        <span className="mf-source" title={source}>
+          source: {source}
+        </span>
+      )}
     </div>
   );
 }

@@ -76,12 +76,15 @@ export function blankDraft(doc: SectionDocument): MaterialDraft {
   };
 }
 
-/** Shortest decimal text that reads back to the same double (JavaScript's own). */
-const numberText = (x: number | undefined): string => (x === undefined ? '' : String(x));
+/**
+ * A stored number as the form shows it: eight significant figures, trailing zeros dropped
+ * (7849.0471 for 490 lb/ft³ in kg/m³). Left as shown, the field keeps the stored number exactly.
+ */
+const numberText = (x: number | undefined): string => (x === undefined ? '' : String(Number(x.toPrecision(8))));
 
 /** A draft showing a stored material; `name` overrides its name (e.g. "… (copy)"). */
 export function draftFromMaterial(m: Material, densityUnit: DensityUnit, name = m.name): { draft: MaterialDraft; origin: DraftOrigin } {
-  const density = densityUnit === 'kg/m3' ? m.density : Number(kgPerM3To(m.density, densityUnit).toPrecision(12));
+  const density = densityUnit === 'kg/m3' ? m.density : kgPerM3To(m.density, densityUnit);
   const shown: Record<NumberField, string> = {
     E: numberText(m.E), G: numberText(m.G), nu: numberText(m.nu), density: numberText(density),
     fy: numberText(m.fy), fu: numberText(m.fu), Emin: numberText(m.Emin), Fb: numberText(m.Fb),

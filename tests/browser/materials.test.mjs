@@ -76,7 +76,7 @@ export async function aNewMaterialWithBadFieldsIsRefusedFieldByFieldKeepsTheText
   await page.getByTestId('material-row-trailer-rail-steel').waitFor({ state: 'detached' });
 }
 
-export async function aLibraryMaterialDuplicatedAndEditedKeepsItsOtherValuesAndDeletingItReassignsThePartToTheDefault({ page, baseUrl }) {
+export async function aLibraryMaterialDuplicatedAndEditedKeepsItsOtherValuesAndDeletingItReassignsThePartToTheDefault({ page, baseUrl, artifactsDir }) {
   await openApp(page, baseUrl);
   await flitchBeam(page);
   // Choosing library materials copied both into the document.
@@ -85,6 +85,7 @@ export async function aLibraryMaterialDuplicatedAndEditedKeepsItsOtherValuesAndD
   await page.getByTestId('material-duplicate-astm-a36').click();
   check((await page.getByTestId('mf-name').inputValue()) === 'Steel ASTM A36 (Fy 36 ksi) (copy)', 'the duplicate is named as a copy');
   check((await page.getByTestId('mf-E').inputValue()) === '29000', 'the duplicate shows E = 29000 (ksi, the library value)');
+  await page.getByTestId('material-editor').screenshot({ path: path.join(artifactsDir, 'duplicate-form.png') });
   await page.getByTestId('mf-name').fill('Plate steel, reduced E');
   await page.getByTestId('mf-E').fill('14500');
   await page.getByTestId('mf-save').click();
@@ -95,6 +96,7 @@ export async function aLibraryMaterialDuplicatedAndEditedKeepsItsOtherValuesAndD
   await page.waitForFunction(() => Math.abs(Number(document.querySelector('[data-testid="piece-n-1"]')?.getAttribute('data-value')) - 9.0625) < 1e-12);
 
   await page.getByTestId('material-delete-plate-steel-reduced-e').click();
+  await page.getByTestId('material-editor').screenshot({ path: path.join(artifactsDir, 'delete-box.png') });
   const message = await page.getByTestId('material-delete-message').innerText();
   check(/will use the document default, "Douglas Fir-Larch No\. 2"/.test(message), `the delete names the part and its new material, got "${message}"`);
   check(/Part 2|part/i.test(message), `the part is named, got "${message}"`);

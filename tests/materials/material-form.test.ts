@@ -203,3 +203,17 @@ describe('materials in the document', () => {
     expect(plan.ok && plan.summary).toEqual(['the document will have no default material']);
   });
 });
+
+describe('material form: how stored numbers read', () => {
+  it('490 lb/ft³ stored in kg/m³ shows as 7849.0471 (8 figures of 490 × 0.45359237 / 0.3048³) and, untouched, is stored back exactly', () => {
+    const a36 = builtInMaterial('astm-a36')!;
+    const { draft, origin } = draftFromMaterial(a36, 'kg/m3');
+    expect(draft.text.density).toBe('7849.0471');
+    const r = materialFromDraft(draft, origin, null, doc());
+    expect(r.ok && r.material.density).toBe(a36.density);
+  });
+
+  it('the same density shown in lb/ft³ reads 490', () => {
+    expect(draftFromMaterial(builtInMaterial('astm-a36')!, 'lb/ft3').draft.text.density).toBe('490');
+  });
+});
