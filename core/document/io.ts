@@ -10,10 +10,15 @@
 import type { LengthUnit } from '../units/types.ts';
 import { migrateToCurrent } from './migrations.ts';
 import { validateDocument, type DocumentIssue } from './schema.ts';
-import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type MaterialRef, type Part, type SectionDocument } from './types.ts';
+import { fileFromSection, firstSectionView } from './sections.ts';
+import { DOCUMENT_FORMAT, SECTION_VIEW_VERSION, type MaterialRef, type Part, type SectionDocument, type SectionFile } from './types.ts';
 
+/**
+ * `file` is the whole file (every section); `document` is the view of its first section, for
+ * callers that read one section only. Write back `file` (serialiseDocument), never `document`.
+ */
 export type ParseResult =
-  | { readonly ok: true; readonly document: SectionDocument; readonly migratedFrom: number | null }
+  | { readonly ok: true; readonly file: SectionFile; readonly document: SectionDocument; readonly migratedFrom: number | null }
   | { readonly ok: false; readonly errors: readonly DocumentIssue[] };
 
 export type JsonResult = { readonly ok: true; readonly value: unknown } | { readonly ok: false; readonly errors: readonly DocumentIssue[] };
@@ -134,7 +139,7 @@ export function documentFromJson(value: unknown): ParseResult {
   if (!migrated.ok) return { ok: false, errors: migrated.issues };
   const validated = validateDocument(migrated.value);
   if (!validated.ok) return { ok: false, errors: validated.issues };
-  return { ok: true, document: validated.document, migratedFrom: migrated.migratedFrom };
+  return { ok: true, file: validated.document, document: firstSectionView(validated.document), migratedFrom: migrated.migratedFrom };
 }
 
 /**
@@ -148,9 +153,13 @@ export function parseDocument(text: string, fileName: string): ParseResult {
   return { ok: false, errors: result.errors.map((e) => ({ ...e, message: `${fileName}: ${e.message}` })) };
 }
 
-/** An empty document in the given unit. */
+/**
+ * An empty one-section document in the given unit (the shape the computing code takes; as
+ * JSON it is a version 1 file, which reads back through its migration). For a whole new file,
+ * newSectionFile (sections.ts).
+ */
 export function newDocument(unit: LengthUnit, name = 'Untitled section'): SectionDocument {
-  return { format: DOCUMENT_FORMAT, version: DOCUMENT_VERSION, name, unit, parts: [], materials: [], defaultMaterial: null };
+  return { format: DOCUMENT_FORMAT, version: SECTION_VIEW_VERSION, name, unit, parts: [], materials: [], defaultMaterial: null };
 }
 
 function orderedPart(p: Part): Record<string, unknown> {
@@ -174,17 +183,22 @@ function orderedMaterial(m: MaterialRef): Record<string, unknown> {
   return { id: m.id, name: m.name, ...Object.fromEntries(rest.map((k) => [k, m[k]])) };
 }
 
-/** Stable text for a document: fixed key order, 2-space indent, number arrays on one line. */
-export function serialiseDocument(doc: SectionDocument): string {
+/**
+ * Stable text for a file: fixed key order, 2-space indent, number arrays on one line. A
+ * one-section document is written as a file holding that one section (fileFromSection).
+ */
+export function serialiseDocument(input: SectionFile | SectionDocument): string {
+  const doc = 'sections' in input ? input : fileFromSection(input);
+  const ref = doc.referenceModulus;
   const ordered = {
     format: doc.format,
     version: doc.version,
     name: doc.name,
     unit: doc.unit,
     defaultMaterial: doc.defaultMaterial,
-    ...(doc.referenceModulus !== undefined ? { referenceModulus: 'material' in doc.referenceModulus ? { material: doc.referenceModulus.material } : { value: doc.referenceModulus.value, unit: doc.referenceModulus.unit } } : {}),
+    ...(ref !== undefined ? { referenceModulus: 'material' in ref ? { material: ref.material } : { value: ref.value, unit: ref.unit } } : {}),
     materials: doc.materials.map(orderedMaterial),
-    parts: doc.parts.map(orderedPart),
+    sections: doc.sections.map((s) => ({ id: s.id, name: s.name, parts: s.parts.map(orderedPart) })),
   };
   // Arrays holding only numbers go on one line. JSON.stringify never puts a raw newline inside a
   // string, so the leading "[\n" anchors the pattern to structure, never to text in a name.

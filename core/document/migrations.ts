@@ -7,15 +7,20 @@
  *      release. Kept so the migration path is exercised by a real step with its own test:
  *      `units` (not `unit`); parts carry `kind`, a flat `x`, `y`, `angle` (degrees), `flip`,
  *      and `subtract: boolean`; no ids, materials or visibility.
- *   1  the first released format (core/document/types.ts).
+ *   1  the first released format: one section, `parts` at the top level beside `name`, `unit`,
+ *      `materials`, `defaultMaterial`.
+ *   2  several named sections (alternatives) in one file: the document-wide fields stay at the
+ *      top, the parts move into `sections: [{ id, name, parts }]` (core/document/types.ts).
+ *      A version 1 file becomes one section with id "s1", named after the document
+ *      ("Section 1" when the document's name is blank).
  *
- * A file newer than this build is rejected with "document is version 7; this build reads up to 1"
+ * A file newer than this build is rejected with "document is version 7; this build reads up to 2"
  * rather than guessed at. Each `up` receives a value already checked against its own version's
- * schema, so it can be written plainly.
+ * schema (and `check`, for rules across fields), so it can be written plainly.
  */
 import * as v from 'valibot';
 import { DOCUMENT_FORMAT, DOCUMENT_VERSION } from './types.ts';
-import { describeValue, issuesOf, type DocumentIssue } from './schema.ts';
+import { describeValue, issuesOf, version1Issues, version1Schema, type DocumentIssue } from './schema.ts';
 
 const finite = v.pipe(v.number('a finite number'), v.finite('a finite number'));
 const point = v.tuple([finite, finite], 'a point [x, y] of two finite numbers');
@@ -62,15 +67,37 @@ function upFrom0(doc: Version0): unknown {
   };
 }
 
+type Version1 = v.InferOutput<typeof version1Schema>;
+
+/** The name a version 1 document's only section gets. */
+export const FIRST_SECTION_ID = 's1';
+
+function upFrom1(doc: Version1): unknown {
+  return {
+    format: DOCUMENT_FORMAT,
+    version: 2,
+    name: doc.name,
+    unit: doc.unit,
+    materials: doc.materials,
+    defaultMaterial: doc.defaultMaterial,
+    sections: [{ id: FIRST_SECTION_ID, name: doc.name.trim() === '' ? 'Section 1' : doc.name, parts: doc.parts }],
+  };
+}
+
 export interface Migration {
   /** The version this step reads; it produces version `from + 1`. */
   readonly from: number;
   readonly schema: v.GenericSchema;
+  /** Rules across fields of that version, reported with the paths of that version's layout. */
+  readonly check?: (doc: never) => readonly DocumentIssue[];
   readonly up: (doc: never) => unknown;
 }
 
 /** MIGRATIONS[k] upgrades version k to k + 1; its length is DOCUMENT_VERSION. */
-export const MIGRATIONS: readonly Migration[] = [{ from: 0, schema: version0, up: upFrom0 as (doc: never) => unknown }];
+export const MIGRATIONS: readonly Migration[] = [
+  { from: 0, schema: version0, up: upFrom0 as (doc: never) => unknown },
+  { from: 1, schema: version1Schema, check: version1Issues as (doc: never) => readonly DocumentIssue[], up: upFrom1 as (doc: never) => unknown },
+];
 
 export const OLDEST_READABLE_VERSION = DOCUMENT_VERSION - MIGRATIONS.length;
 
@@ -101,8 +128,11 @@ export function migrateToCurrent(value: unknown): MigrationResult {
     const step = MIGRATIONS[k - OLDEST_READABLE_VERSION];
     if (!step) return { ok: false, issues: [{ path: 'version', message: `no migration from version ${k}` }] };
     const issues = issuesOf(step.schema, current);
-    if (issues.length > 0) return { ok: false, issues: issues.map((i) => ({ ...i, message: `${i.message} (version ${k} layout)` })) };
-    current = step.up(v.parse(step.schema, current) as never);
+    const parsed = issues.length === 0 ? (v.parse(step.schema, current) as never) : null;
+    const all = parsed !== null && step.check ? step.check(parsed) : issues;
+    // Problems in the file's own layout say so; later steps check what an earlier step produced.
+    if (all.length > 0) return { ok: false, issues: k === version ? all.map((i) => ({ ...i, message: `${i.message} (version ${k} layout)` })) : all };
+    current = step.up(parsed as never);
   }
   return { ok: true, value: current, migratedFrom: version === DOCUMENT_VERSION ? null : version };
 }

@@ -1,9 +1,11 @@
 /**
- * Validation of the current document format (version DOCUMENT_VERSION) with valibot, plus the
- * checks that span several fields (unique ids, bulge counts, material references).
+ * Validation of the current document format (version DOCUMENT_VERSION, a SectionFile) with
+ * valibot, plus the checks that span several fields (unique section ids and names, unique part
+ * ids within a section, bulge counts, material references). The version 1 layout (one section,
+ * parts at the top) is kept here too, for its migration.
  *
  * Every problem becomes a DocumentIssue with a JSON path in the user's file
- * (`parts[2].placement.rotationDeg`) and an "expected …, got …" sentence. Unknown keys are
+ * (`sections[1].parts[2].placement.rotationDeg`) and an "expected …, got …" sentence. Unknown keys are
  * rejected (a misspelt key would otherwise silently fall back to nothing), except inside
  * material entries, whose fields belong to the materials module.
  *
@@ -12,7 +14,7 @@
  */
 import * as v from 'valibot';
 import { STRESS_UNITS } from '../materials/quantities.ts';
-import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type SectionDocument } from './types.ts';
+import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type MaterialRef, type Part, type SectionFile } from './types.ts';
 
 export interface DocumentIssue {
   /** JSON path in the file, e.g. 'parts[2].placement.rotationDeg'; '' for the whole file. */
@@ -92,15 +94,36 @@ const referenceModulus = v.union(
   'a reference modulus { material: id } or { value, unit }',
 );
 
+const nonBlank = (what: string) => v.pipe(text(what), v.check((t) => t.trim().length > 0, what));
+
+const unit = v.picklist(['in', 'ft', 'mm', 'cm', 'm'], 'a length unit: "in", "ft", "mm", "cm" or "m"');
+
+/** Version 1: one section, its parts at the top level (read only through its migration). */
+export const version1Schema = v.strictObject({
+  format: v.literal(DOCUMENT_FORMAT, `"${DOCUMENT_FORMAT}"`),
+  version: v.literal(1, '1'),
+  name: text(),
+  unit,
+  parts: v.array(part, 'an array of parts'),
+  materials: v.array(material, 'an array of materials'),
+  defaultMaterial: v.nullable(text('a material id (string) or null')),
+}, 'a Sectionsmith document object');
+
+const section = v.strictObject({
+  id: nonBlank('a non-empty string'),
+  name: nonBlank('a non-empty name (not only spaces)'),
+  parts: v.array(part, 'an array of parts'),
+}, 'a section object { id, name, parts }');
+
 export const documentSchema = v.strictObject({
   format: v.literal(DOCUMENT_FORMAT, `"${DOCUMENT_FORMAT}"`),
   version: v.literal(DOCUMENT_VERSION, `${DOCUMENT_VERSION}`),
   name: text(),
-  unit: v.picklist(['in', 'ft', 'mm', 'cm', 'm'], 'a length unit: "in", "ft", "mm", "cm" or "m"'),
-  parts: v.array(part, 'an array of parts'),
+  unit,
   materials: v.array(material, 'an array of materials'),
   defaultMaterial: v.nullable(text('a material id (string) or null')),
   referenceModulus: v.optional(referenceModulus),
+  sections: v.pipe(v.array(section, 'an array of sections'), v.minLength(1, 'at least one section')),
 }, 'a Sectionsmith document object');
 
 /** A short description of a JSON value for "got …" (strings quoted, long things abbreviated). */
@@ -145,53 +168,82 @@ function issueToDocumentIssue(issue: AnyIssue): DocumentIssue {
   return { path, message: `${where}: expected ${issue.message}, got ${describeValue(issue.input)}` };
 }
 
-/** Problems across fields that the per-field schema cannot see. */
-function crossFieldIssues(doc: SectionDocument): DocumentIssue[] {
-  const issues: DocumentIssue[] = [];
-  const materialIds = new Set<string>();
-  doc.materials.forEach((m, i) => {
-    if (materialIds.has(m.id)) issues.push({ path: `materials[${i}].id`, message: `materials[${i}].id: expected a unique id, got ${JSON.stringify(m.id)} again` });
-    materialIds.add(m.id);
+/** Duplicate material ids, and a default material that is not in the list; returns the known ids. */
+function materialIssues(materials: readonly MaterialRef[], defaultMaterial: string | null, issues: DocumentIssue[]): ReadonlySet<string> {
+  const ids = new Set<string>();
+  materials.forEach((m, i) => {
+    if (ids.has(m.id)) issues.push({ path: `materials[${i}].id`, message: `materials[${i}].id: expected a unique id, got ${JSON.stringify(m.id)} again` });
+    ids.add(m.id);
   });
-  const knownMaterial = (id: string | null): boolean => id === null || materialIds.has(id);
-  if (!knownMaterial(doc.defaultMaterial)) {
-    issues.push({ path: 'defaultMaterial', message: `defaultMaterial: expected the id of an entry in materials or null, got ${JSON.stringify(doc.defaultMaterial)}` });
+  if (defaultMaterial !== null && !ids.has(defaultMaterial)) {
+    issues.push({ path: 'defaultMaterial', message: `defaultMaterial: expected the id of an entry in materials or null, got ${JSON.stringify(defaultMaterial)}` });
   }
-  const ref = doc.referenceModulus;
-  if (ref !== undefined && 'material' in ref && !materialIds.has(ref.material)) {
-    issues.push({ path: 'referenceModulus.material', message: `referenceModulus.material: expected the id of an entry in materials, got ${JSON.stringify(ref.material)}` });
-  }
+  return ids;
+}
+
+/** Part ids unique in the list, materials known, one bulge per segment; `at` is the list's path ('parts', 'sections[1].parts'). */
+function partListIssues(parts: readonly Part[], at: string, materialIds: ReadonlySet<string>, issues: DocumentIssue[]): void {
   const partIds = new Set<string>();
-  doc.parts.forEach((p, i) => {
-    const at = `parts[${i}]`;
-    if (partIds.has(p.id)) issues.push({ path: `${at}.id`, message: `${at}.id: expected a unique id, got ${JSON.stringify(p.id)} again` });
+  parts.forEach((p, i) => {
+    const here = `${at}[${i}]`;
+    if (partIds.has(p.id)) issues.push({ path: `${here}.id`, message: `${here}.id: expected a unique id, got ${JSON.stringify(p.id)} again` });
     partIds.add(p.id);
-    if (!knownMaterial(p.material)) issues.push({ path: `${at}.material`, message: `${at}.material: expected the id of an entry in materials or null, got ${JSON.stringify(p.material)}` });
+    if (p.material !== null && !materialIds.has(p.material)) issues.push({ path: `${here}.material`, message: `${here}.material: expected the id of an entry in materials or null, got ${JSON.stringify(p.material)}` });
     if (p.type !== 'polygon') return;
     if (p.outerBulges && p.outerBulges.length !== p.outer.length) {
-      issues.push({ path: `${at}.outerBulges`, message: `${at}.outerBulges: expected ${p.outer.length} bulges (one per segment of outer), got ${p.outerBulges.length}` });
+      issues.push({ path: `${here}.outerBulges`, message: `${here}.outerBulges: expected ${p.outer.length} bulges (one per segment of outer), got ${p.outerBulges.length}` });
     }
     if (p.holeBulges) {
       if (p.holeBulges.length !== p.holes.length) {
-        issues.push({ path: `${at}.holeBulges`, message: `${at}.holeBulges: expected ${p.holes.length} bulge arrays (one per hole), got ${p.holeBulges.length}` });
+        issues.push({ path: `${here}.holeBulges`, message: `${here}.holeBulges: expected ${p.holes.length} bulge arrays (one per hole), got ${p.holeBulges.length}` });
       } else {
         p.holeBulges.forEach((b, h) => {
           const n = p.holes[h]?.length ?? 0;
-          if (b.length !== n) issues.push({ path: `${at}.holeBulges[${h}]`, message: `${at}.holeBulges[${h}]: expected ${n} bulges (one per segment of holes[${h}]), got ${b.length}` });
+          if (b.length !== n) issues.push({ path: `${here}.holeBulges[${h}]`, message: `${here}.holeBulges[${h}]: expected ${n} bulges (one per segment of holes[${h}]), got ${b.length}` });
         });
       }
     }
   });
+}
+
+/** Cross-field problems of a version 1 document (paths as in that file: parts[2]…). */
+export function version1Issues(doc: { readonly parts: readonly Part[]; readonly materials: readonly MaterialRef[]; readonly defaultMaterial: string | null }): DocumentIssue[] {
+  const issues: DocumentIssue[] = [];
+  const ids = materialIssues(doc.materials, doc.defaultMaterial, issues);
+  partListIssues(doc.parts, 'parts', ids, issues);
   return issues;
 }
 
-export type ValidationResult = { readonly ok: true; readonly document: SectionDocument } | { readonly ok: false; readonly issues: readonly DocumentIssue[] };
+/** Problems across fields that the per-field schema cannot see. */
+function crossFieldIssues(doc: SectionFile): DocumentIssue[] {
+  const issues: DocumentIssue[] = [];
+  const materialIds = materialIssues(doc.materials, doc.defaultMaterial, issues);
+  const ref = doc.referenceModulus;
+  if (ref !== undefined && 'material' in ref && !materialIds.has(ref.material)) {
+    issues.push({ path: 'referenceModulus.material', message: `referenceModulus.material: expected the id of an entry in materials, got ${JSON.stringify(ref.material)}` });
+  }
+  const sectionIds = new Set<string>();
+  const sectionNames = new Map<string, number>();
+  doc.sections.forEach((s, k) => {
+    const at = `sections[${k}]`;
+    if (sectionIds.has(s.id)) issues.push({ path: `${at}.id`, message: `${at}.id: expected a unique section id, got ${JSON.stringify(s.id)} again` });
+    sectionIds.add(s.id);
+    const key = s.name.trim();
+    const earlier = sectionNames.get(key);
+    if (earlier !== undefined) issues.push({ path: `${at}.name`, message: `${at}.name: expected a name no other section has, got ${JSON.stringify(s.name)}, already the name of sections[${earlier}]` });
+    else sectionNames.set(key, k);
+    partListIssues(s.parts, `${at}.parts`, materialIds, issues);
+  });
+  return issues;
+}
+
+export type ValidationResult = { readonly ok: true; readonly document: SectionFile } | { readonly ok: false; readonly issues: readonly DocumentIssue[] };
 
 /** Validates a parsed JSON value against the current format; never throws on user data. */
 export function validateDocument(value: unknown): ValidationResult {
   const result = v.safeParse(documentSchema, value, { abortEarly: false });
   if (!result.success) return { ok: false, issues: result.issues.map(issueToDocumentIssue) };
-  const document = result.output as SectionDocument;
+  const document = result.output as SectionFile;
   const issues = crossFieldIssues(document);
   return issues.length > 0 ? { ok: false, issues } : { ok: true, document };
 }

@@ -3,12 +3,25 @@
  * One length unit per document; every length in it is in that unit. Computed results are never
  * stored here. The schema, validation and migrations live beside this file (schema.ts,
  * migrations.ts); this file is the type contract the rest of the code builds on.
+ *
+ * Two shapes:
+ *   SectionFile      what a file holds (version 2): document-wide name, unit, materials and
+ *                    default material, and one or more named sections (alternatives), each
+ *                    with its own parts.
+ *   SectionDocument  one section seen on its own, with the document-wide fields beside its
+ *                    parts: exactly the layout of a version 1 file. Everything that computes
+ *                    (core/section, core/materials, core/member, core/export, the editor's
+ *                    tools) takes this shape; core/document/sections.ts makes it from a file
+ *                    (sectionView) and writes an edited one back (withSectionView).
  */
 import type { StressUnit } from '../materials/quantities.ts';
 import type { LengthUnit } from '../units/types.ts';
 
 export const DOCUMENT_FORMAT = 'sectionsmith-section';
-export const DOCUMENT_VERSION = 1;
+/** The version files are written in (SectionFile). */
+export const DOCUMENT_VERSION = 2;
+/** A one-section view (SectionDocument) has the layout of this version: the last one-section format. */
+export const SECTION_VIEW_VERSION = 1;
 
 export interface Placement {
   /** Translation of the part's local origin, document unit. */
@@ -84,9 +97,13 @@ export type ReferenceModulus =
   | { readonly material: string }
   | { readonly value: number; readonly unit: StressUnit };
 
+/**
+ * One section (alternative) on its own: its parts with the document's unit and materials.
+ * As a view of a SectionFile, `name` is the section's name.
+ */
 export interface SectionDocument {
   readonly format: typeof DOCUMENT_FORMAT;
-  readonly version: typeof DOCUMENT_VERSION;
+  readonly version: typeof SECTION_VIEW_VERSION;
   readonly name: string;
   readonly unit: LengthUnit;
   readonly parts: readonly Part[];
@@ -94,4 +111,29 @@ export interface SectionDocument {
   readonly defaultMaterial: string | null;
   /** Optional (added with the materials editor); old files without it load unchanged. */
   readonly referenceModulus?: ReferenceModulus;
+}
+
+/** One named alternative in a file: its own parts; unit and materials are the file's. */
+export interface Section {
+  /** Unique in the file; never shown (names are). */
+  readonly id: string;
+  /** Unique in the file, not empty or blank: how people and `--section NAME` refer to it. */
+  readonly name: string;
+  readonly parts: readonly Part[];
+}
+
+/** What a file holds (version DOCUMENT_VERSION). */
+export interface SectionFile {
+  readonly format: typeof DOCUMENT_FORMAT;
+  readonly version: typeof DOCUMENT_VERSION;
+  /** The document's own name (e.g. the member being designed). */
+  readonly name: string;
+  readonly unit: LengthUnit;
+  /** Shared by every section; a part's `material` names one of these. */
+  readonly materials: readonly MaterialRef[];
+  readonly defaultMaterial: string | null;
+  /** Optional, document-wide like the materials (see SectionDocument.referenceModulus). */
+  readonly referenceModulus?: ReferenceModulus;
+  /** At least one, in the order people put them (the first is the default one). */
+  readonly sections: readonly Section[];
 }

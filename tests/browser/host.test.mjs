@@ -13,7 +13,7 @@ export async function saveAsDownloadThenReopenGivesTheSameDocumentAndNumbers({ p
   check(saved.name.endsWith('.section.json'), `download name should end in .section.json, got ${saved.name}`);
   const json = JSON.parse(saved.text);
   same('saved format', json.format, 'sectionsmith-section');
-  same('saved part count', json.parts.length, before.parts);
+  same('saved part count', json.sections[0].parts.length, before.parts);
 
   await menuItem(page, 'File', 'new');
   await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length === 0);
@@ -56,7 +56,7 @@ export async function saveThroughAFileHandleWritesBackToTheSameFileWithoutAsking
   await page.waitForFunction(async (n) => {
     try { return (await (await (await navigator.storage.getDirectory()).getFileHandle(n)).getFile()).size > 0; } catch { return false; }
   }, name);
-  same('parts in the saved file', JSON.parse(await privateFileText(page, name)).parts.length, parts);
+  same('parts in the saved file', JSON.parse(await privateFileText(page, name)).sections[0].parts.length, parts);
 
   // Change the document (delete the first part), then Save: no picker, same file, new content.
   await page.getByTestId('part-select-0').click();
@@ -66,7 +66,7 @@ export async function saveThroughAFileHandleWritesBackToTheSameFileWithoutAsking
   await page.getByTestId('save').click();
   await page.waitForFunction(() => !document.title.includes('•'));
   same('picker calls after Save', await page.evaluate(() => window.__pickerCalls), 1);
-  same('parts in the file after Save', JSON.parse(await privateFileText(page, name)).parts.length, parts - 1);
+  same('parts in the file after Save', JSON.parse(await privateFileText(page, name)).sections[0].parts.length, parts - 1);
 
   // Open it again through the open picker.
   await menuItem(page, 'File', 'new');

@@ -87,7 +87,8 @@ describe('bad input: exit code 2 and a message naming the file and the place', (
     const r = await cli('props', path, '--json');
     expect(r.code).toBe(2);
     expect(r.out).toBe('');
-    expect(r.err).toBe(`${path}: parts[0].placement.rotationDeg: expected a finite number (degrees), got "ninety"\n`);
+    // docText writes the one-section (version 1) layout: the path is that file's own, and says so.
+    expect(r.err).toBe(`${path}: parts[0].placement.rotationDeg: expected a finite number (degrees), got "ninety" (version 1 layout)\n`);
   });
 
   it('geometry in a document: the part, its JSON path down to the vertex, and the problem', async () => {
@@ -159,6 +160,6 @@ describe('the real launcher as a process', () => {
     expect(help.code).toBe(0);
     expect(help.stdout).toMatch(/usage: sectionsmith props FILE/);
     expect(broken.code).toBe(2);
-    expect(broken.stderr).toBe(`${bad}: document is version 7; this build reads up to 1. Open it with a newer Sectionsmith.\n`);
+    expect(broken.stderr).toBe(`${bad}: document is version 7; this build reads up to 2. Open it with a newer Sectionsmith.\n`);
   });
 });

@@ -1,5 +1,6 @@
 // core/document: validation messages (path + expected/got), migrations, newer-version rejection,
 // stable serialisation. Expected texts are the format's own rules (core/document/types.ts).
+// Sections (version 2) and their one-section views: tests/document/sections.test.ts.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
@@ -17,8 +18,9 @@ const plate = {
   id: 'p1', name: 'web', type: 'rectangle', operation: 'add', material: null, visible: true,
   placement: { x: 0, y: 0, rotationDeg: 0, mirror: false }, width: 10, height: 300,
 };
+/** A version 2 file whose one section holds `parts`. */
 const withParts = (parts: unknown[], extra: Record<string, unknown> = {}): string =>
-  JSON.stringify({ ...newDocument('mm', 'Mezzanine flitch beam'), parts, ...extra });
+  JSON.stringify({ format: 'sectionsmith-section', version: 2, name: 'Mezzanine flitch beam', unit: 'mm', materials: [], defaultMaterial: null, sections: [{ id: 's1', name: 'Mezzanine flitch beam', parts }], ...extra });
 
 function messages(text: string): string[] {
   const r = parseDocument(text, 'beam.json');
@@ -26,31 +28,31 @@ function messages(text: string): string[] {
 }
 
 describe('validation errors name the path and say expected vs got', () => {
-  it('a rotation given as text: parts[2].placement.rotationDeg: expected a finite number …, got "ninety"', () => {
+  it('a rotation given as text: sections[0].parts[2].placement.rotationDeg: expected a finite number …, got "ninety"', () => {
     const bad = { ...plate, id: 'p3', placement: { ...plate.placement, rotationDeg: 'ninety' } };
     expect(messages(withParts([plate, { ...plate, id: 'p2' }, bad]))).toEqual([
-      'beam.json: parts[2].placement.rotationDeg: expected a finite number (degrees), got "ninety"',
+      'beam.json: sections[0].parts[2].placement.rotationDeg: expected a finite number (degrees), got "ninety"',
     ]);
   });
 
   it('reports every problem at once, each at its own path', () => {
     const bad = { ...plate, width: -3, placement: { x: 0, rotationDeg: 0, mirror: 'no' } };
     expect(messages(withParts([bad]))).toEqual([
-      'beam.json: parts[0].placement.y: expected the key "y" in parts[0].placement, got nothing (the key is missing)',
-      'beam.json: parts[0].placement.mirror: expected true or false, got "no"',
-      'beam.json: parts[0].width: expected a positive finite number, got -3',
+      'beam.json: sections[0].parts[0].placement.y: expected the key "y" in sections[0].parts[0].placement, got nothing (the key is missing)',
+      'beam.json: sections[0].parts[0].placement.mirror: expected true or false, got "no"',
+      'beam.json: sections[0].parts[0].width: expected a positive finite number, got -3',
     ]);
   });
 
   it('an unknown part type lists the known ones', () => {
     expect(messages(withParts([{ ...plate, type: 'ellipse' }]))).toEqual([
-      'beam.json: parts[0].type: expected a part object with "type" one of "polygon", "rectangle", "circle", "shape", got "ellipse"',
+      'beam.json: sections[0].parts[0].type: expected a part object with "type" one of "polygon", "rectangle", "circle", "shape", got "ellipse"',
     ]);
   });
 
   it('a misspelt key is an error, not silently ignored', () => {
     expect(messages(withParts([{ ...plate, widht: 10 }]))).toEqual([
-      'beam.json: parts[0].widht: unexpected key "widht" in parts[0]; check its spelling against the format',
+      'beam.json: sections[0].parts[0].widht: unexpected key "widht" in sections[0].parts[0]; check its spelling against the format',
     ]);
   });
 
@@ -58,12 +60,12 @@ describe('validation errors name the path and say expected vs got', () => {
     const poly = { ...plate, type: 'polygon', outer: [[0, 0], [1, 0], [1, 'x']], holes: [] } as Record<string, unknown>;
     delete poly.width;
     delete poly.height;
-    const text = JSON.stringify({ ...newDocument('mm'), unit: 'inch', parts: [poly] });
+    const text = withParts([poly], { unit: 'inch' });
     expect(messages(text)).toEqual([
       'beam.json: unit: expected a length unit: "in", "ft", "mm", "cm" or "m", got "inch"',
-      'beam.json: parts[0].outer[2][1]: expected a finite number, got "x"',
+      'beam.json: sections[0].parts[0].outer[2][1]: expected a finite number, got "x"',
     ]);
-    expect(messages(JSON.stringify({ ...newDocument('mm'), format: 'other' }))).toEqual(['beam.json: format: expected "sectionsmith-section", got "other"']);
+    expect(messages(withParts([], { format: 'other' }))).toEqual(['beam.json: format: expected "sectionsmith-section", got "other"']);
   });
 
   it('cross-field rules: unique ids, known materials, one bulge per segment', () => {
@@ -71,9 +73,9 @@ describe('validation errors name the path and say expected vs got', () => {
     delete poly.width;
     delete poly.height;
     expect(messages(withParts([plate, poly, { ...plate }]))).toEqual([
-      'beam.json: parts[1].material: expected the id of an entry in materials or null, got "oak"',
-      'beam.json: parts[1].outerBulges: expected 3 bulges (one per segment of outer), got 2',
-      'beam.json: parts[2].id: expected a unique id, got "p1" again',
+      'beam.json: sections[0].parts[1].material: expected the id of an entry in materials or null, got "oak"',
+      'beam.json: sections[0].parts[1].outerBulges: expected 3 bulges (one per segment of outer), got 2',
+      'beam.json: sections[0].parts[2].id: expected a unique id, got "p1" again',
     ]);
   });
 
@@ -171,10 +173,11 @@ describe('serialisation', () => {
 
   it('keys come in a fixed order, with 2-space indentation and points on one line', () => {
     const text = serialiseDocument(doc);
-    expect(text.startsWith('{\n  "format": "sectionsmith-section",\n  "version": 1,\n  "name": "Trailer frame",\n  "unit": "in",')).toBe(true);
-    expect(text).toContain('"outer": [\n        [0, 0],\n        [2, 0],\n        [2, 1]\n      ],');
+    expect(text.startsWith('{\n  "format": "sectionsmith-section",\n  "version": 2,\n  "name": "Trailer frame",\n  "unit": "in",')).toBe(true);
+    expect(text).toContain('"sections": [\n    {\n      "id": "s1",\n      "name": "Trailer frame",\n      "parts": [');
+    expect(text).toContain('"outer": [\n            [0, 0],\n            [2, 0],\n            [2, 1]\n          ],');
     expect(text).toContain('"outerBulges": [0, 0.5, 0]');
-    expect(text).toContain('"params": {\n        "bf": 2.5,\n        "d": 8,\n        "tw": 0.3\n      }');
+    expect(text).toContain('"params": {\n            "bf": 2.5,\n            "d": 8,\n            "tw": 0.3\n          }');
     expect(text.indexOf('"id": "a36"')).toBeLessThan(text.indexOf('"fy": 36'));
     expect(text.endsWith('}\n')).toBe(true);
   });

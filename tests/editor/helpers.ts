@@ -1,11 +1,11 @@
 /** Small builders for headless editor tests (section coordinates, y up, millimetres). */
-import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type SectionDocument } from '../../core/document/types.ts';
+import { DOCUMENT_FORMAT, SECTION_VIEW_VERSION, type SectionDocument } from '../../core/document/types.ts';
 import { Editor } from '../../renderer/editor/editor.ts';
 import type { Vec } from '../../renderer/editor/geometry.ts';
 import type { PointerInput } from '../../renderer/editor/tools/tool.ts';
 
 export function emptyDoc(): SectionDocument {
-  return { format: DOCUMENT_FORMAT, version: DOCUMENT_VERSION, name: 'test', unit: 'mm', parts: [], materials: [], defaultMaterial: null };
+  return { format: DOCUMENT_FORMAT, version: SECTION_VIEW_VERSION, name: 'test', unit: 'mm', parts: [], materials: [], defaultMaterial: null };
 }
 
 /** An editor with a 1 mm pick radius and a 10 mm grid, snapping as given. */

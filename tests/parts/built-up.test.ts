@@ -4,7 +4,7 @@
  * rectangles, and the AISC v15.0 table for the rolled piece.
  */
 import { describe, expect, it } from 'vitest';
-import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type Part, type SectionDocument } from '../../core/document/types.ts';
+import { DOCUMENT_FORMAT, SECTION_VIEW_VERSION, type Part, type SectionDocument } from '../../core/document/types.ts';
 import { boltHolePattern, boxFromChannels, coverPlatedI, doubleAnglesBackToBack, flitchBeam, getPartType, plateGirder, type BuiltUpPiece } from '../../core/parts/index.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
 import { sectionProperties } from '../../core/properties/index.ts';
@@ -17,7 +17,7 @@ function document(pieces: readonly BuiltUpPiece[], unit: LengthUnit = 'in'): Sec
     const { role: _role, ...rest } = piece;
     return { ...rest, id: `p${i}`, material: null, visible: true } as Part;
   });
-  return { format: DOCUMENT_FORMAT, version: DOCUMENT_VERSION, name: 'built-up check', unit, parts, materials: [], defaultMaterial: null };
+  return { format: DOCUMENT_FORMAT, version: SECTION_VIEW_VERSION, name: 'built-up check', unit, parts, materials: [], defaultMaterial: null };
 }
 
 function composed(pieces: readonly BuiltUpPiece[], unit: LengthUnit = 'in'): SectionProperties {
