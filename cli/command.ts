@@ -54,7 +54,8 @@ export interface Command {
   /** Paragraphs shown by `sectionsmith help NAME`. */
   readonly description: string;
   readonly flags: readonly FlagSpec[];
-  readonly run: (positionals: readonly string[], flags: FlagValues, io: CliIo, lists: FlagLists) => number | Promise<number>;
+  /** `lists` holds the repeatable flags' values (cli/main.ts always passes it; a direct call may leave it out). */
+  readonly run: (positionals: readonly string[], flags: FlagValues, io: CliIo, lists?: FlagLists) => number | Promise<number>;
 }
 
 /** The caution printed with every result (results feed structural decisions). */

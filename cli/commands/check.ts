@@ -76,7 +76,7 @@ export function checkText(file: string, c: TableCheck): string {
   return lines.join('\n');
 }
 
-function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo, lists: FlagLists): number {
+function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo, lists: FlagLists = {}): number {
   const fail = (message: string): number => {
     io.err(`sectionsmith check: ${message}\n`);
     return EXIT_BAD_INPUT;
