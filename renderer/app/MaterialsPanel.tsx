@@ -28,6 +28,7 @@ import { formatSig } from '../../core/units/index.ts';
 import type { Editor } from '../editor/editor.ts';
 import { MaterialEditor } from './MaterialEditor.tsx';
 import { imperialUnit, withDefaultMaterial, withMaterialStored } from './material-form.ts';
+import { parseNumber } from './numbers.ts';
 import { TransformedWidths } from './TransformedWidths.tsx';
 import './material-editor.css';
 
@@ -160,6 +161,39 @@ function ReferenceChoice({ editor, doc, c }: { editor: Editor; doc: SectionDocum
   );
 }
 
+/** Mp with the plastic neutral axis at a typed angle (0° = bending about x, 90° about y), per-material yield forces balanced. */
+function PlasticAtAngle({ pieces, unit, moment, toMoment }: { pieces: readonly MaterialPiece[]; unit: SectionDocument['unit']; moment: string; toMoment: (nm: number) => number }): ReactElement {
+  const [text, setText] = useState('30');
+  const r = useMemo(() => {
+    const a = parseNumber(text, 'angle of the plastic neutral axis');
+    if (!a.ok) return { error: a.message };
+    if (Math.abs(a.value) > 360) return { error: `angle of the plastic neutral axis: ${a.value}° is outside −360…360°` };
+    try {
+      return { p: plasticCapacity(pieces, unit, a.value) };
+    } catch (err) {
+      return { error: err instanceof Error ? err.message : String(err) };
+    }
+  }, [pieces, unit, text]);
+  return (
+    <div className="mp-angle">
+      <label className="field">
+        <span>plastic moment with the neutral axis at θ (degrees CCW from +x)</span>
+        <input data-testid="mp-angle" value={text} onChange={(e) => setText(e.target.value)} />
+      </label>
+      {'error' in r ? (
+        <span className="mf-error" role="alert">
+          {r.error}
+        </span>
+      ) : (
+        <span className="mp-angle-value" data-testid="result-MpAngle" data-value={String(r.p.Mp)}>
+          Mp = {formatSig(toMoment(r.p.Mp), 4)} {moment}
+          <span className="muted small"> (PNA at distance {formatSig(r.p.d, 4)} {unit} from the origin along its normal)</span>
+        </span>
+      )}
+    </div>
+  );
+}
+
 export function MaterialsPanel({ editor, doc: current, valid }: { editor: Editor; doc: SectionDocument; valid: boolean }): ReactElement {
   // A step behind a drag, so splitting by material never slows the drawing.
   const doc = useDeferredValue(current);
@@ -224,23 +258,37 @@ export function MaterialsPanel({ editor, doc: current, valid }: { editor: Editor
               )}
             </tbody>
           </table>
-          <table>
-            <caption>Per material piece (n = E_i / E_ref; first yield bending about x)</caption>
+          <table className="pieces">
+            <caption>Per material piece: n = E_i / E_ref; moment at first yield of that material, bending about x and about y</caption>
+            <thead>
+              <tr>
+                <th scope="col">part · material</th>
+                <th scope="col">n</th>
+                <th scope="col">My,x ({k.moment})</th>
+                <th scope="col">My,y ({k.moment})</th>
+              </tr>
+            </thead>
             <tbody>
               {composite.c.pieces.map((p, i) => (
                 <tr key={i} data-testid={`piece-${i}`}>
-                  <th scope="row">{p.label}</th>
+                  <th scope="row">
+                    {p.label}
+                    <span className="muted small piece-material">{composite.names[i]}</span>
+                  </th>
                   <td className="value nowrap" data-testid={`piece-n-${i}`} data-value={String(p.n)} title="modular ratio E_i / E_ref">
-                    n {formatSig(p.n, 4)}
+                    {formatSig(p.n, 4)}
                   </td>
-                  <td className="unit nowrap" title="moment at first yield of this material, bending about x">
-                    My,x {formatSig(k.m(p.firstYieldMx), 3)} {k.moment}
+                  <td className="value nowrap" data-testid={`piece-myx-${i}`} data-value={String(p.firstYieldMx)}>
+                    {formatSig(k.m(p.firstYieldMx), 3)}
                   </td>
-                  <td className="label">{composite.names[i]}</td>
+                  <td className="value nowrap" data-testid={`piece-myy-${i}`} data-value={String(p.firstYieldMy)}>
+                    {formatSig(k.m(p.firstYieldMy), 3)}
+                  </td>
                 </tr>
               ))}
             </tbody>
           </table>
+          <PlasticAtAngle pieces={composite.pieces} unit={u} moment={k.moment} toMoment={k.m} />
           {composite.mp && composite.mp.cautions.length > 0 && (
             <ul className="muted small" data-testid="materials-cautions">
               {composite.mp.cautions.map((m, i) => (

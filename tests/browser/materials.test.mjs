@@ -68,6 +68,13 @@ export async function aNewMaterialWithBadFieldsIsRefusedFieldByFieldKeepsTheText
   await page.getByTestId('result-EIx').waitFor();
   // One material: EIx = E·Ix = 2e11 Pa × (100·200³/12) mm⁴ × 1e-12 m⁴/mm⁴ (identity, exact arithmetic).
   near('EIx = E·b·h³/12', await resultValue(page, 'EIx'), 2e11 * ((100 * 200 ** 3) / 12) * 1e-12, 1e-12);
+  // Plastic moment of a rectangle, Mp = fy·b·h²/4 (common practice): 250e6 Pa × 0.1 m × 0.2² m² / 4 = 250 000 N·m.
+  near('Mp,x = fy·b·h²/4', await resultValue(page, 'MpxMaterials'), 250e6 * 0.1 * 0.2 ** 2 / 4, 1e-9);
+  near('Mp,y = fy·h·b²/4', await resultValue(page, 'MpyMaterials'), 250e6 * 0.2 * 0.1 ** 2 / 4, 1e-9);
+  await page.getByTestId('mp-angle').fill('90');
+  await page.waitForFunction((want) => Math.abs(Number(document.querySelector('[data-testid="result-MpAngle"]')?.getAttribute('data-value')) - want) < 1e-6 * want, 250e6 * 0.2 * 0.1 ** 2 / 4);
+  // First yield of one material: My = fy·S = fy·b·h²/6 (flexure formula).
+  near('My,x = fy·b·h²/6', Number(await page.getByTestId('piece-myx-0').getAttribute('data-value')), 250e6 * 0.1 * 0.2 ** 2 / 6, 1e-9);
   await page.screenshot({ path: path.join(artifactsDir, 'materials-panel.png') });
   // Two undo steps: the default, then the material itself.
   await menuItem(page, 'Edit', 'undo');
