@@ -8,7 +8,7 @@
  */
 import { useEffect, useMemo, useRef, useState, type ReactElement } from 'react';
 import {
-  CAUTION, CHECKED_PROPERTIES, DEFAULT_TOLERANCE, MappingError, mapColumns, parseTable, parseTolerances, splitHeader, TABLE_FAMILIES, TableInputError, tableCheckCsv,
+  CAUTION, CHECKED_PROPERTIES, DEFAULT_TOLERANCE, MappingError, mapColumns, parseTable, parseTolerances, roleFromTarget, splitHeader, TABLE_FAMILIES, TableInputError, tableCheckCsv,
   type ColumnMapping, type RowCheck, type TableCheck, type TableFamily, type Tolerances,
 } from '../../core/check/index.ts';
 import { formatSig, LENGTH_UNITS, type LengthUnit } from '../../core/units/index.ts';
@@ -123,6 +123,24 @@ export function CheckView({ host, onClose }: Props): ReactElement {
       return { ok: false, message: err instanceof MappingError ? viewMessage(err.message) : String(err) };
     }
   }, [table, unit, edits, remembered]);
+
+  // What the dropdowns show: the mapping itself, or, while two columns claim one role, each column as the user set it.
+  const shownMapping = useMemo((): ColumnMapping | null => {
+    if (!table || !mapping) return null;
+    if (mapping.ok) return mapping.mapping;
+    const base = mapColumns(table.headers, unit, {}, remembered ?? undefined);
+    return {
+      columns: base.columns.map((c) => {
+        const edit = edits[c.header];
+        if (edit === undefined) return c;
+        try {
+          return { header: c.header, ...roleFromTarget(edit, unit, c.header) };
+        } catch {
+          return c;
+        }
+      }),
+    };
+  }, [table, mapping, unit, edits, remembered]);
 
   const tolerances = useMemo((): { ok: true; value: Tolerances } | { ok: false; message: string } => {
     try {
@@ -264,7 +282,7 @@ export function CheckView({ host, onClose }: Props): ReactElement {
                 {tolerances.message}
               </div>
             )}
-            <MappingTable table={table} mapping={mapping.ok ? mapping.mapping : null} edits={edits} onColumn={setColumn} />
+            <MappingTable table={table} mapping={shownMapping} edits={edits} onColumn={setColumn} />
             {!mapping.ok && (
               <div className="check-error" role="alert" data-testid="check-mapping-error">
                 {mapping.message}

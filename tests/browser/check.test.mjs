@@ -167,8 +167,16 @@ export async function badTablesGetAMessageNamingTheRowAndColumn({ page, baseUrl 
   await chooser.setFiles({ name: 'quote.csv', mimeType: 'text/csv', buffer: Buffer.from('label,shape_type,A_in2\n"W8X31,W,9.13\n') });
   const msg = await page.getByTestId('check-import-error').filter({ hasText: 'quote.csv' }).innerText();
   check(/quote\.csv/.test(msg) && /CSV/.test(msg), `unterminated quote reported with the file, got "${msg}"`);
-  // A per-property tolerance naming an unknown property is refused before the check.
+  // Two columns set to one property: refused before the check, naming both columns.
   await importTable(page, 'ok.csv', SUBSET);
+  const header = cells()[0];
+  await page.getByTestId(`map-target-${header.indexOf('Sx_in3')}`).selectOption('Ix');
+  const twice = await page.getByTestId('check-mapping-error').innerText();
+  check(/columns "Ix_in4" and "Sx_in3" both map to Ix/.test(twice), `two columns on Ix named, got "${twice}"`);
+  check((await page.getByTestId(`map-target-${header.indexOf('Sx_in3')}`).inputValue()) === 'Ix', 'the dropdown keeps what the user chose');
+  check(await page.getByTestId('check-run').isDisabled(), 'the check waits for a consistent mapping');
+  await page.getByTestId('check-reset').click();
+  // A per-property tolerance naming an unknown property is refused before the check.
   await page.getByTestId('check-tolerance-extra').fill('Qx=2%');
   const tol = await page.getByTestId('check-tolerance-error').innerText();
   check(/unknown property "Qx"/.test(tol), `unknown tolerance property named, got "${tol}"`);
