@@ -18,11 +18,12 @@ const material = (id: string, E: number) => ({ id, name: id, kind: 'other', stre
 const part = (id: string, mat: string, y: number, height: number) => ({
   id, name: id, type: 'rectangle', operation: 'add', material: mat, visible: true, placement: { x: 25, y, rotationDeg: 0, mirror: false }, width: 50, height,
 });
+// A version 2 file (the field is file-wide, beside the materials); one section.
 const strip = (referenceModulus?: unknown): Record<string, unknown> => ({
-  format: 'sectionsmith-section', version: 1, name: 'footbridge deck strip', unit: 'mm', defaultMaterial: null,
+  format: 'sectionsmith-section', version: 2, name: 'footbridge deck strip', unit: 'mm', defaultMaterial: null,
   ...(referenceModulus !== undefined ? { referenceModulus } : {}),
   materials: [material('steel', 200_000), material('aluminium', 70_000)],
-  parts: [part('steel bar', 'steel', 5, 10), part('aluminium bar', 'aluminium', 20, 20)],
+  sections: [{ id: 's1', name: 'steel under aluminium', parts: [part('steel bar', 'steel', 5, 10), part('aluminium bar', 'aluminium', 20, 20)] }],
 });
 const EA = 200_000 * 500 + 70_000 * 1000; // N, exact
 

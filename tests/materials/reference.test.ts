@@ -23,6 +23,13 @@ describe('the optional referenceModulus field of a document', () => {
     if (r.ok) expect(documentReferenceModulus(r.document)).toEqual({ ok: true, eRef: undefined, from: 'first piece' });
   });
 
+  it('a version 1 file (one section, no referenceModulus) loads and E_ref is the first part\'s', () => {
+    const v1 = JSON.stringify({ format: 'sectionsmith-section', version: 1, name: 'old flitch beam', unit: 'mm', defaultMaterial: 'df-l-no2', materials: [builtInMaterial('df-l-no2')], parts: [] });
+    const r = parseDocument(v1, 'old.section.json');
+    expect(r.ok).toBe(true);
+    if (r.ok) expect(documentReferenceModulus(r.document)).toEqual({ ok: true, eRef: undefined, from: 'first piece' });
+  });
+
   it('a material choice and a typed value survive save and load unchanged', () => {
     for (const ref of [{ material: 'astm-a36' }, { value: 1.6, unit: 'GPa' as const }]) {
       const r = parseDocument(serialiseDocument(withMaterials(ref)), 'flitch.section.json');
