@@ -213,3 +213,27 @@ export async function twoThousandRowsAreCheckedWhileThePageKeepsRenderingProgres
   check(/rows 1–100 of 2000/.test(pageText), `the report shows a page of 100 rows, got "${pageText}"`);
   await page.screenshot({ path: path.join(artifactsDir, 'x2000.png') });
 }
+
+export async function aMillimetreTableWithoutUnitsPassesOnceItsUnitIsChosen({ page, baseUrl }) {
+  await openCheck(page, baseUrl);
+  // The W rows converted to mm (1 in = 25.4 mm exactly), headers without units: plain numbers.
+  const rows = cells();
+  const keep = [['label', 0], ['shape_type', 0], ['d_in', 1], ['bf_in', 1], ['tw_in', 1], ['tf_in', 1], ['kdes_in', 1], ['A_in2', 2], ['Ix_in4', 4], ['Zx_in3', 3]];
+  const idx = keep.map(([h]) => rows[0].indexOf(h));
+  const body = rows.slice(1).filter((r) => /^W\d/.test(r[0])).map((r) => idx.map((i, k) => (keep[k][1] === 0 ? r[i] : String(Number(r[i]) * 25.4 ** keep[k][1]))));
+  const table = Papa.unparse([keep.map(([h]) => h.replace(/_in\d?$/, '')), ...body]);
+  await importTable(page, 'w-metric.csv', table);
+  await page.getByTestId('check-unit').selectOption('mm');
+  check((await page.getByTestId('map-unit-8').inputValue()) === 'mm4', 'the Ix column without a unit takes the table unit, mm⁴');
+  await page.getByTestId('check-tolerance').fill('1.5%');
+  await page.getByTestId('check-tolerance-extra').fill('A=1%');
+  const r = await runCheck(page);
+  check(r.checked === 7 && r.flagged === 0, `the metric W rows pass, got ${JSON.stringify(r)}`);
+  const head = await page.getByTestId('check-rows').locator('thead').innerText();
+  check(/Ix \[mm⁴\]/.test(head), `report columns in mm⁴, got "${head}"`);
+  // Rechecked as inches, the designations are read as AISC labels: the area in "in²" (really mm²)
+  // gives a nominal weight 645 times the label's, so every row is flagged.
+  await page.getByTestId('check-unit').selectOption('in');
+  const wrong = await runCheck(page);
+  check(wrong.flagged === 7, `read as inches every row is flagged by its label weight, got ${JSON.stringify(wrong)}`);
+}
