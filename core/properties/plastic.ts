@@ -122,7 +122,8 @@ function checkPieces(pieces: readonly WeightedRegion[], axialForce: number): voi
 /**
  * The ring moved to the local origin, with its integrals there. The last copy of each ring is
  * kept (weakly, so it goes with the ring): the four axes of sectionProperties share one origin,
- * and a million-vertex ring is then copied once instead of four times.
+ * and a million-vertex ring is then copied once instead of four times. Keyed by the coordinate
+ * array: core never writes into a ring's arrays once made (every transform builds new ones).
  */
 const localCopies = new WeakMap<Float64Array, { ox: number; oy: number; xy: Float64Array; raw: ReturnType<typeof ringIntegrals> }>();
 function localCopy(ring: Ring, ox: number, oy: number): { xy: Float64Array; raw: ReturnType<typeof ringIntegrals> } {
