@@ -190,9 +190,20 @@ export function CheckView({ host, onClose }: Props): ReactElement {
     setRememberNote('The remembered mapping is forgotten; the columns are read afresh.');
   };
 
+  const stemOf = (name: string | undefined): string => (name ?? 'table').replace(/\.(csv|txt)$/i, '').replace(/[^\w.-]+/g, '-') || 'table';
+
+  /** The mapping as `sectionsmith check --save-map` writes it, for `--mapping FILE` on the command line. */
+  const saveMapping = async (m: ColumnMapping): Promise<void> => {
+    const file = { suggestedName: `${stemOf(table?.name)}-mapping.json`, mimeType: 'application/json', text: `${JSON.stringify(m, null, 2)}\n` };
+    try {
+      if (await host.exportFile(file)) setRememberNote(`Saved ${file.suggestedName}; use it with sectionsmith check --mapping ${file.suggestedName}.`);
+    } catch (err) {
+      setRememberNote(`The mapping was not saved: ${err instanceof Error ? err.message : String(err)}`);
+    }
+  };
+
   const exportReport = async (result: TableCheck): Promise<void> => {
-    const stem = (table?.name ?? 'table').replace(/\.(csv|txt)$/i, '').replace(/[^\w.-]+/g, '-') || 'table';
-    const file = { suggestedName: `${stem}-check.csv`, mimeType: 'text/csv', text: tableCheckCsv(result) };
+    const file = { suggestedName: `${stemOf(table?.name)}-check.csv`, mimeType: 'text/csv', text: tableCheckCsv(result) };
     try {
       if (await host.exportFile(file)) setExportNote(`Exported ${file.suggestedName}`);
     } catch (err) {
@@ -308,6 +319,9 @@ export function CheckView({ host, onClose }: Props): ReactElement {
               </button>
               <button type="button" data-testid="check-forget" disabled={remembered === null} onClick={() => void forget()}>
                 Forget the remembered mapping
+              </button>
+              <button type="button" data-testid="check-save-mapping" disabled={!mapping.ok} title="The same JSON as sectionsmith check --save-map; read it back with --mapping FILE" onClick={() => mapping.ok && void saveMapping(mapping.mapping)}>
+                Save the mapping (JSON)…
               </button>
               {rememberNote && (
                 <span className="muted small" data-testid="check-remember-note">

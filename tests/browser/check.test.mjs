@@ -3,7 +3,8 @@
 // (AISC, Nov 2017; consistent with the Steel Construction Manual, 15th ed.). Tolerances are those of
 // tests/check/table.test.ts for the same reasons (SOURCES.md caveats: 3 significant figures, fillet
 // r = kdes − tf; S and C toes sharp; MC flange slope not published; L radii not published).
-import { readFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import Papa from 'papaparse';
@@ -122,7 +123,7 @@ export async function exportedReportHasOneLinePerRowWithStatusAndTheCaution({ pa
   check(/licensed engineer/.test(w.caution), 'caution in every report line');
 }
 
-export async function aColumnCorrectedByDropdownIsUsedAndRememberedForTheSameHeaders({ page, baseUrl }) {
+export async function aColumnCorrectedByDropdownIsUsedRememberedAndSavedForTheCommandLine({ page, baseUrl, artifactsDir }) {
   await openCheck(page, baseUrl);
   // W rows with the depth column renamed to a header no detection knows.
   const rows = cells();
@@ -140,6 +141,15 @@ export async function aColumnCorrectedByDropdownIsUsedAndRememberedForTheSameHea
   const after = await runCheck(page);
   check(after.checked === 7 && after.flagged === 0, `with the corrected column all 7 W rows pass, got ${JSON.stringify(after)}`);
   check((await page.getByTestId('check-stale').count()) === 0, 'a fresh report is not marked out of date');
+  // The mapping saved as JSON is the command line's --mapping file: the same table passes there too.
+  const saved = await downloadText(page, artifactsDir, () => page.getByTestId('check-save-mapping').click());
+  check(saved.name === 'w-renamed-mapping.json', `mapping file name, got ${saved.name}`);
+  const depth = JSON.parse(saved.text).columns.find((c) => c.header === 'Overall depth');
+  check(depth?.role === 'dimension' && depth.symbol === 'd' && depth.unit === 'in', `saved mapping reads "Overall depth" as d in inches, got ${JSON.stringify(depth)}`);
+  const csv = path.join(artifactsDir, 'w-renamed.csv');
+  writeFileSync(csv, table);
+  const cli = spawnSync('node', [path.join(here, '..', '..', 'cli', 'sectionsmith.mjs'), 'check', csv, '--mapping', saved.file, '--tolerance', '1.5%', '--tolerance', 'A=1%'], { encoding: 'utf8' });
+  check(cli.status === 0 && /7 rows checked, 0 flagged/.test(cli.stdout), `sectionsmith check --mapping with the saved file: exit ${cli.status}, ${cli.stdout.split('\n')[0]} ${cli.stderr}`);
   await page.getByTestId('check-tolerance').fill('2%');
   await page.getByTestId('check-stale').waitFor();
   // A new visit (same browser storage): the correction comes back for the same headers.
