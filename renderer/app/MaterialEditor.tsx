@@ -13,6 +13,7 @@ import {
   blankDraft,
   DENSITY_UNITS,
   draftFromMaterial,
+  draftFromStored,
   draftInDensityUnit,
   draftInStressUnit,
   FIELD_LABELS,
@@ -212,7 +213,14 @@ export function MaterialEditor({ editor, doc }: { editor: Editor; doc: SectionDo
     const { draft, origin } = draftFromMaterial(m, densityUnit, name);
     setForm({ editingId, draft, origin, errors: {}, tried: false, title });
   };
-  const change = (f: FormState): void => {
+  /** An entry whose stored fields do not pass: the form opens with what can be read and every problem named. */
+  const repair = (raw: SectionDocument['materials'][number]): void => {
+    setDeleting(null);
+    const { draft, origin } = draftFromStored(raw, doc);
+    const r = materialFromDraft(draft, origin, raw.id, doc);
+    setForm({ editingId: raw.id, draft, origin, errors: r.ok ? {} : r.errors, tried: true, title: `Repair "${raw.name}" (its stored values do not pass)` });
+  };
+    const change = (f: FormState): void => {
     if (!f.tried) return setForm(f);
     const r = materialFromDraft(f.draft, f.origin, f.editingId, doc);
     setForm({ ...f, errors: r.ok ? {} : r.errors });
@@ -248,13 +256,13 @@ export function MaterialEditor({ editor, doc }: { editor: Editor; doc: SectionDo
               <span className="material-name" title={raw.id}>
                 {raw.name}
                 <span className="muted small">
-                  {m ? ` E ${m.E} ${m.stressUnit}` : ' (invalid fields)'}
+                  {m ? ` E ${m.E} ${m.stressUnit}` : ' its stored values do not pass the checks; Repair shows which'}
                   {uses.length > 0 ? ` · ${uses.join(', ')}` : ''}
                 </span>
               </span>
               <span className="row-actions">
-                <button type="button" data-testid={`material-edit-${raw.id}`} disabled={m === null} onClick={() => m && open(m, raw.id, `Edit "${raw.name}"`)}>
-                  Edit
+                <button type="button" data-testid={`material-edit-${raw.id}`} onClick={() => (m ? open(m, raw.id, `Edit "${raw.name}"`) : repair(raw))}>
+                  {m ? 'Edit' : 'Repair'}
                 </button>
                 <button type="button" data-testid={`material-duplicate-${raw.id}`} disabled={m === null} onClick={() => m && open(m, null, `New material from "${raw.name}"`, `${raw.name} (copy)`)}>
                   Duplicate

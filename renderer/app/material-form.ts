@@ -19,10 +19,12 @@ import {
   builtInMaterial,
   densityToKgPerM3,
   kgPerM3To,
+  MATERIAL_KINDS,
   MaterialSchema,
   parseQuantity,
   pascalsTo,
   QuantityError,
+  STRENGTH_BASES,
   stressToPascals,
   STRESS_UNITS,
   type DensityUnit,
@@ -347,4 +349,31 @@ export function draftInDensityUnit(d: MaterialDraft, unit: DensityUnit): Materia
   const r = d.text.density.trim() === '' ? '' : readPlain(d.text.density, FIELD_LABELS.density);
   const density = typeof r === 'number' ? converted(kgPerM3To(densityToKgPerM3(r, d.densityUnit), unit)) : d.text.density;
   return { ...d, densityUnit: unit, text: { ...d.text, density } };
+}
+
+/**
+ * A draft from a stored entry as it is, for repairing one that does not pass the schema (e.g. a
+ * file edited by hand): the fields that have the right type are filled, the rest left blank for
+ * the form to name. A valid entry gives the same as draftFromMaterial.
+ */
+export function draftFromStored(raw: MaterialRef, doc: SectionDocument): { draft: MaterialDraft; origin: DraftOrigin | null } {
+  const valid = v.safeParse(MaterialSchema, raw);
+  const blank = blankDraft(doc);
+  if (valid.success) return draftFromMaterial(valid.output, blank.densityUnit);
+  const pick = <T extends string>(value: unknown, options: readonly T[], fallback: T): T => (typeof value === 'string' && (options as readonly string[]).includes(value) ? (value as T) : fallback);
+  const stressUnit = pick(raw.stressUnit, STRESS_UNITS, blank.stressUnit);
+  const text = { ...blank.text };
+  for (const f of NUMBER_FIELDS) {
+    const x = raw[f];
+    if (typeof x === 'number' && Number.isFinite(x)) text[f] = f === 'density' ? numberText(kgPerM3To(x, blank.densityUnit)) : numberText(x);
+    else if (typeof x === 'string') text[f] = x;
+  }
+  const draft: MaterialDraft = {
+    ...blank, name: raw.name, stressUnit, text,
+    kind: pick(raw.kind, MATERIAL_KINDS, blank.kind),
+    strengthBasis: pick(raw.strengthBasis, STRENGTH_BASES, blank.strengthBasis),
+    note: typeof raw.note === 'string' ? raw.note : '',
+    fromMemory: raw.fromMemory === true,
+  };
+  return { draft, origin: null };
 }

@@ -183,3 +183,24 @@ export async function aDocumentUsingLibraryMaterialsAndAChosenERefSavesAndReopen
   near('EIx after reopening', await resultValue(page, 'EIx'), EI, 0);
   near('n of the steel after reopening (E_ref = steel)', await pieceN(page, 1), 1, 0);
 }
+
+export async function aFileWithABrokenMaterialSaysSoAndTheRepairFormNamesTheMissingFieldThenTheResultsAppear({ page, baseUrl }) {
+  await openApp(page, baseUrl);
+  const file = {
+    format: 'sectionsmith-section', version: 2, name: 'trailer frame rail', unit: 'mm', defaultMaterial: 'rail-steel',
+    // Hand-edited entry: fy missing. E = 200 000 MPa, ν = 0.3 for structural steel (common practice, from memory).
+    materials: [{ id: 'rail-steel', name: 'Rail steel', kind: 'steel', stressUnit: 'MPa', E: 200000, nu: 0.3, density: 7850, strengthBasis: 'yield' }],
+    sections: [{ id: 's1', name: 'rail', parts: [{ id: 'p1', name: 'web', type: 'rectangle', operation: 'add', material: null, visible: true, placement: { x: 0, y: 0, rotationDeg: 0, mirror: false }, width: 10, height: 150 }] }],
+  };
+  await page.getByTestId('open-document').setInputFiles({ name: 'rail.section.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(file)) });
+  await page.getByTestId('materials-issues').waitFor();
+  const issues = await page.getByTestId('materials-issues').innerText();
+  check(/"rail-steel"/.test(issues) && /fy/.test(issues), `the panel names the material and the field, got "${issues}"`);
+  await page.getByTestId('material-edit-rail-steel').click();
+  check(/enter a value/.test(await page.getByTestId('mf-error-fy').innerText()), 'the repair form names fy at once');
+  await page.getByTestId('mf-fy').fill('350');
+  await page.getByTestId('mf-save').click();
+  await page.getByTestId('result-EIx').waitFor();
+  // EIx = E·b·h³/12 = 2e11 Pa × 10·150³/12 mm⁴ × 1e-12 (identity, exact arithmetic).
+  near('EIx after the repair', await resultValue(page, 'EIx'), 2e11 * ((10 * 150 ** 3) / 12) * 1e-12, 1e-12);
+}

@@ -4,6 +4,7 @@ import { builtInMaterial } from '../../core/materials/library.ts';
 import {
   blankDraft,
   draftFromMaterial,
+  draftFromStored,
   draftInDensityUnit,
   draftInStressUnit,
   materialFromDraft,
@@ -215,5 +216,19 @@ describe('material form: how stored numbers read', () => {
 
   it('the same density shown in lb/ft³ reads 490', () => {
     expect(draftFromMaterial(builtInMaterial('astm-a36')!, 'lb/ft3').draft.text.density).toBe('490');
+  });
+});
+
+describe('material form: repairing a stored entry that does not pass', () => {
+  it('a hand-edited entry (E written as text, fy missing) opens with what reads, names fy, and saves under its own id once fy is typed', () => {
+    const raw = { id: 'deck-alloy', name: 'Deck alloy', kind: 'aluminium', stressUnit: 'ksi', E: '10100', G: 3800, density: 2712.6 };
+    const d = { ...doc('in'), materials: [raw] } as SectionDocument;
+    const { draft, origin } = draftFromStored(raw, d);
+    expect([draft.text.E, draft.text.G, draft.kind, draft.stressUnit]).toEqual(['10100', '3800', 'aluminium', 'ksi']);
+    const first = materialFromDraft(draft, origin, 'deck-alloy', d);
+    expect(first.ok).toBe(false);
+    if (!first.ok) expect(Object.keys(first.errors)).toEqual(['fy']);
+    const fixed = materialFromDraft({ ...draft, text: { ...draft.text, fy: '35' } }, origin, 'deck-alloy', d);
+    expect(fixed.ok && [fixed.material.id, fixed.material.E, fixed.material.fy]).toEqual(['deck-alloy', 10100, 35]);
   });
 });
