@@ -2,10 +2,20 @@
  * The headless editor (STYLE.md §8): document, selection, history and the active tool state.
  * React subscribes to it and renders; canvas handlers translate events into these calls.
  * All coordinates here are section coordinates (y up) in the document unit.
+ *
+ * The editor holds the whole file (every section, or alternative) and edits one of them, the
+ * active section: `state.doc` is that section's one-section view (core/document/sections.ts),
+ * which the tools, panels and results use; each change to it is written back into the file.
+ * Adding, duplicating, renaming, deleting and reordering sections are undo steps like any
+ * edit. Switching the active section changes nothing in the file, so it is no step and leaves
+ * the file saved; undo and redo go back to the section where the step was made.
  */
-import type { Part, SectionDocument } from '../../core/document/types.ts';
+import {
+  fileFromSection, mapSectionViews, sectionById, sectionNameProblem, sectionView, uniqueSectionId, uniqueSectionName, withSectionView,
+} from '../../core/document/sections.ts';
+import type { Part, SectionDocument, SectionFile } from '../../core/document/types.ts';
 import { documentOutlines, outlineBox, outlineHit, type PartOutline, type ShapeRingResolver, type Vec } from './geometry.ts';
-import { emptyHistory, isDirty, markSaved, pushStep, redoStep, undoStep, type History } from './history.ts';
+import { emptyHistory, isDirty, markSaved, pushStep, redoStep, undoStep, type History, type Snapshot } from './history.ts';
 import { snapPoint, snapTargets, type SnapResult, type SnapSettings } from './snapping.ts';
 import {
   alignParts, deleteParts, duplicateParts, mirrorParts, reorderPart, rotateParts, translateParts, uniquePartId, type AlignEdge,
@@ -23,7 +33,12 @@ export interface OpenFile {
 }
 
 export interface EditorState {
+  /** The active section's one-section view (what tools, panels and results use). */
   readonly doc: SectionDocument;
+  /** The whole file: what is saved and written for recovery. */
+  readonly sectionFile: SectionFile;
+  /** Id of the section being edited. */
+  readonly activeSection: string;
   readonly selection: readonly string[];
   readonly toolId: ToolId;
   readonly tool: ToolState;
@@ -59,8 +74,29 @@ function initialTool(id: ToolId): ToolState {
   }
 }
 
+/** A section command that could not be done, and why (nothing changed). */
+export type SectionCommandResult = { readonly ok: true; readonly id: string } | { readonly ok: false; readonly message: string };
+
+function asFile(doc: SectionDocument | SectionFile): SectionFile {
+  return 'sections' in doc ? doc : fileFromSection(doc);
+}
+
+function snapshotOf(file: SectionFile, active: string): Snapshot {
+  return { file, active, view: sectionView(file, active) };
+}
+
+/** The first section of a file (or of a one-section document, keeping that document as its view when it matches). */
+function firstSnapshot(doc: SectionDocument | SectionFile): Snapshot {
+  const file = asFile(doc);
+  const first = file.sections[0] as { id: string; name: string };
+  return !('sections' in doc) && doc.name === first.name ? { file, active: first.id, view: doc } : snapshotOf(file, first.id);
+}
+
 export class Editor {
   private doc: SectionDocument;
+  /** The file as of the last step, undo, redo, load or switch; previews are written onto it. */
+  private committed: Snapshot;
+  private sectionFile: SectionFile;
   private selection: readonly string[] = [];
   private history: History = emptyHistory();
   private toolId: ToolId = 'select';
@@ -76,8 +112,11 @@ export class Editor {
   private state: EditorState;
   private readonly options: EditorOptions;
 
-  constructor(doc: SectionDocument, options: EditorOptions = {}) {
-    this.doc = doc;
+  /** A one-section document is taken as a file with that one section. */
+  constructor(doc: SectionDocument | SectionFile, options: EditorOptions = {}) {
+    this.committed = firstSnapshot(doc);
+    this.doc = this.committed.view;
+    this.sectionFile = this.committed.file;
     this.options = options;
     this.state = this.buildState();
   }
@@ -96,6 +135,8 @@ export class Editor {
     const undone = this.history.undone;
     return {
       doc: this.doc,
+      sectionFile: this.sectionFile,
+      activeSection: this.committed.active,
       selection: this.selection,
       toolId: this.toolId,
       tool: this.tool,
@@ -239,18 +280,41 @@ export class Editor {
 
   // ---- history ------------------------------------------------------------------------------
 
+  /** Shows a view of the active section (a preview, or a step's result), written onto the committed file. */
   private setDoc(doc: SectionDocument): void {
     if (doc === this.doc) return;
     this.doc = doc;
+    this.sectionFile = doc === this.committed.view ? this.committed.file : withSectionView(this.committed.file, this.committed.active, doc);
     this.revision++;
   }
 
+  /** Makes a snapshot the current state (undo, redo, load, switch). */
+  private restoreSnapshot(s: Snapshot): void {
+    this.committed = s;
+    this.sectionFile = s.file;
+    if (s.view !== this.doc) {
+      this.doc = s.view;
+      this.revision++;
+    }
+  }
+
   private commitStep(label: string, before: SectionDocument, after: SectionDocument, selectionAfter?: readonly string[]): void {
-    const selBefore = this.selection;
-    const sel = selectionAfter ? [...selectionAfter] : this.selection.filter((id) => after.parts.some((p) => p.id === id));
-    this.history = pushStep(this.history, { label, before, after, selectionBefore: selBefore, selectionAfter: sel });
-    this.setDoc(after);
-    this.selection = sel;
+    const base = this.committed;
+    const from: Snapshot = before === base.view ? base : { file: withSectionView(base.file, base.active, before), active: base.active, view: before };
+    const to: Snapshot = { file: withSectionView(base.file, base.active, after), active: base.active, view: after };
+    this.pushSnapshots(label, from, to, selectionAfter ? [...selectionAfter] : this.selection.filter((id) => after.parts.some((p) => p.id === id)));
+  }
+
+  private pushSnapshots(label: string, from: Snapshot, to: Snapshot, selectionAfter: readonly string[]): void {
+    this.history = pushStep(this.history, { label, before: from, after: to, selectionBefore: this.selection, selectionAfter });
+    this.restoreSnapshot(to);
+    this.selection = selectionAfter;
+  }
+
+  /** Ends a gesture and a live edit, so a whole-file change starts from a settled state. */
+  private settle(): void {
+    if (this.state.gesture) this.tool.key?.(this.context(), 'Escape');
+    if (this.liveSnapshot) this.commitLive('Change dimension');
   }
 
   /** One command = one undo step. No step when nothing changed. */
@@ -272,7 +336,7 @@ export class Editor {
     const r = undoStep(this.history);
     if (!r) return;
     this.history = r.history;
-    this.setDoc(r.step.before);
+    this.restoreSnapshot(r.step.before);
     this.selection = r.step.selectionBefore;
     this.tool = initialTool(this.toolId);
     this.emit();
@@ -283,16 +347,19 @@ export class Editor {
     const r = redoStep(this.history);
     if (!r) return;
     this.history = r.history;
-    this.setDoc(r.step.after);
+    this.restoreSnapshot(r.step.after);
     this.selection = r.step.selectionAfter;
     this.tool = initialTool(this.toolId);
     this.emit();
   }
 
-  /** Replace everything (new or opened file): history starts afresh and counts as saved. */
-  load(doc: SectionDocument, file: OpenFile | null, dirty = false): void {
+  /**
+   * Replace everything (new or opened file; a one-section document counts as a file with that
+   * section): the first section is active, history starts afresh and counts as saved.
+   */
+  load(doc: SectionDocument | SectionFile, file: OpenFile | null, dirty = false): void {
     this.liveSnapshot = null;
-    this.setDoc(doc);
+    this.restoreSnapshot(firstSnapshot(doc));
     this.revision++;
     this.history = dirty ? { done: [], undone: [], savedAt: null } : emptyHistory();
     this.selection = [];
@@ -410,8 +477,108 @@ export class Editor {
     this.emit();
   }
 
-  /** A whole-document change as one step (e.g. a unit conversion). */
+  /** A change to the active section's view as one step (its parts, or the shared materials). */
   replaceDocument(label: string, fn: (doc: SectionDocument) => SectionDocument): void {
     this.run(label, (doc) => ({ doc: fn(doc) }));
+  }
+
+  // ---- sections (alternatives) --------------------------------------------------------------
+
+  /**
+   * A change to the whole file as one step: `fn` returns the new file and the section to edit
+   * next, or null for no change. Selection is kept only if the same section stays active.
+   */
+  replaceFile(label: string, fn: (file: SectionFile, active: string) => { file: SectionFile; active: string } | null): void {
+    this.settle();
+    const base = this.committed;
+    const out = fn(base.file, base.active);
+    if (out === null || (out.file === base.file && out.active === base.active)) {
+      this.emit();
+      return;
+    }
+    const sameView = out.active === base.active && out.file.unit === base.file.unit && out.file.materials === base.file.materials && out.file.defaultMaterial === base.file.defaultMaterial && out.file.referenceModulus === base.file.referenceModulus && sectionById(out.file, out.active) === sectionById(base.file, base.active);
+    const to: Snapshot = sameView ? { file: out.file, active: out.active, view: base.view } : snapshotOf(out.file, out.active);
+    const selection = out.active === base.active ? this.selection.filter((id) => to.view.parts.some((p) => p.id === id)) : [];
+    this.pushSnapshots(label, base, to, selection);
+    if (out.active !== base.active) this.tool = initialTool(this.toolId);
+    this.emit();
+  }
+
+  /** Edit another section. Not an undo step: the file does not change. */
+  switchSection(id: string): void {
+    sectionById(this.committed.file, id);
+    if (id === this.committed.active) return;
+    this.settle();
+    this.restoreSnapshot(snapshotOf(this.committed.file, id));
+    this.selection = [];
+    this.tool = initialTool(this.toolId);
+    this.emit();
+  }
+
+  /**
+   * A new section right after the active one, made active: empty, or a copy of the active
+   * section's parts (`duplicate`). Named `name`, or "Alternative N" / "NAME (copy)", made unique.
+   */
+  addSection(options: { duplicate?: boolean; name?: string } = {}): SectionCommandResult {
+    if (options.name !== undefined) {
+      const problem = sectionNameProblem(this.committed.file, options.name);
+      if (problem) return { ok: false, message: problem };
+    }
+    let id = '';
+    this.replaceFile(options.duplicate ? 'Duplicate section' : 'Add section', (file, active) => {
+      const current = sectionById(file, active);
+      id = uniqueSectionId(file);
+      const name = options.name?.trim() ?? uniqueSectionName(file, options.duplicate ? `${current.name} (copy)` : `Alternative ${file.sections.length + 1}`);
+      const at = file.sections.indexOf(current) + 1;
+      const added = { id, name, parts: options.duplicate ? current.parts : [] };
+      return { file: { ...file, sections: [...file.sections.slice(0, at), added, ...file.sections.slice(at)] }, active: id };
+    });
+    return { ok: true, id };
+  }
+
+  /** Renames a section (trimmed); refused, with the reason, when blank or taken. */
+  renameSection(id: string, name: string): SectionCommandResult {
+    const s = sectionById(this.committed.file, id);
+    const problem = sectionNameProblem(this.committed.file, name, id);
+    if (problem) return { ok: false, message: problem };
+    const next = name.trim();
+    if (next !== s.name) {
+      this.replaceFile(`Rename section to ${next}`, (file, active) => ({ file: { ...file, sections: file.sections.map((x) => (x.id === id ? { ...x, name: next } : x)) }, active }));
+    }
+    return { ok: true, id };
+  }
+
+  /** Deletes a section (undoable); the last one cannot go. The neighbour becomes active if it was. */
+  deleteSection(id: string): SectionCommandResult {
+    const file = this.committed.file;
+    const s = sectionById(file, id);
+    if (file.sections.length === 1) return { ok: false, message: `"${s.name}" is the only section; a document keeps at least one` };
+    this.replaceFile(`Delete section ${s.name}`, (f, active) => {
+      const at = f.sections.findIndex((x) => x.id === id);
+      const rest = f.sections.filter((x) => x.id !== id);
+      return { file: { ...f, sections: rest }, active: active === id ? (rest[Math.min(at, rest.length - 1)] as { id: string }).id : active };
+    });
+    return { ok: true, id: this.committed.active };
+  }
+
+  /** Moves a section one place earlier (-1) or later (+1) in the file; the first is the default one. */
+  moveSection(id: string, direction: -1 | 1): void {
+    sectionById(this.committed.file, id);
+    this.replaceFile('Reorder sections', (f, active) => {
+      const i = f.sections.findIndex((x) => x.id === id);
+      const j = i + direction;
+      if (j < 0 || j >= f.sections.length) return null;
+      const order = [...f.sections];
+      [order[i], order[j]] = [order[j] as SectionFile['sections'][number], order[i] as SectionFile['sections'][number]];
+      return { file: { ...f, sections: order }, active };
+    });
+  }
+
+  /**
+   * The same change applied to every section as one step (e.g. converting the document unit,
+   * which is shared): `fn` maps each section's view; unit and materials must come back alike.
+   */
+  replaceAllSections(label: string, fn: (doc: SectionDocument) => SectionDocument): void {
+    this.replaceFile(label, (file, active) => ({ file: mapSectionViews(file, fn), active }));
   }
 }

@@ -1,15 +1,23 @@
 /**
- * Undo history as reversible steps. Documents are immutable, so a step holds the document
- * before and after one gesture or command (shared structure keeps this cheap) plus the ids
- * selected on each side. Derived results are never stored here (STYLE.md §10).
+ * Undo history as reversible steps. Documents are immutable, so a step holds the whole file
+ * before and after one gesture or command (shared structure keeps this cheap), which section
+ * was being edited on each side with its one-section view (kept, so an undo gives back the very
+ * object results were cached on), plus the ids selected on each side. Derived results are never stored here (STYLE.md §10).
  * A mark records the step count at a moment (e.g. the last save) to tell whether work is unsaved.
  */
-import type { SectionDocument } from '../../core/document/types.ts';
+import type { SectionDocument, SectionFile } from '../../core/document/types.ts';
+
+/** The whole file, the section being edited, and that section's view (sectionView of the two). */
+export interface Snapshot {
+  readonly file: SectionFile;
+  readonly active: string;
+  readonly view: SectionDocument;
+}
 
 export interface Step {
   readonly label: string;
-  readonly before: SectionDocument;
-  readonly after: SectionDocument;
+  readonly before: Snapshot;
+  readonly after: Snapshot;
   readonly selectionBefore: readonly string[];
   readonly selectionAfter: readonly string[];
 }
