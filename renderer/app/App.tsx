@@ -3,7 +3,7 @@
  * It wires the headless editor to the host (files, title, recovery) and to core (results).
  */
 import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState, useSyncExternalStore, type ReactElement } from 'react';
-import { newDocument, serialiseDocument, type SectionDocument } from '../../core/document/index.ts';
+import { allSectionViews, newSectionFile, serialiseDocument, type SectionDocument, type SectionFile } from '../../core/document/index.ts';
 import { getPartType } from '../../core/parts/index.ts';
 import { propertiesCsv, sectionSvg } from '../../core/export/index.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
@@ -26,6 +26,7 @@ import { MemberPanel } from './MemberPanel.tsx';
 import { StressPanel } from './StressPanel.tsx';
 import { CheckView } from './CheckView.tsx';
 import { CompareView } from './CompareView.tsx';
+import { SectionsBar } from './SectionsBar.tsx';
 import { SectionReport } from './ReportView.tsx';
 import type { MemberCase } from './report-input.ts';
 import { computeStress, type ForceTexts } from './stress.ts';
@@ -60,9 +61,9 @@ const isLengthParam = (shape: string, key: string): boolean => {
   return spec === undefined || spec.quantity === undefined || spec.quantity === 'length';
 };
 
-function exampleDoc(): SectionDocument | null {
+function exampleDoc(): SectionFile | null {
   const r = documentFromText(exampleText, EXAMPLE_NAME, 'mm');
-  return r.ok ? r.doc : null;
+  return r.ok ? r.file : null;
 }
 
 interface Banner {
@@ -77,7 +78,7 @@ export function App(): ReactElement {
   if (!editorRef.current) {
     const holder: { ed: Editor | null } = { ed: null };
     const resolver = shapeOutlineResolver(() => holder.ed?.getState().doc.unit ?? 'mm');
-    holder.ed = new Editor(newDocument('mm'), { resolveShape: resolver });
+    holder.ed = new Editor(newSectionFile('mm'), { resolveShape: resolver });
     editorRef.current = holder.ed;
   }
   const editor = editorRef.current;
@@ -85,6 +86,11 @@ export function App(): ReactElement {
   const compute = useMemo(() => createResultsCache(), []);
   const results = compute(state.doc);
   const outlines = editor.outlines(state.doc);
+  // Every section of the file as { name, doc } for the compare view; the active one is the editor's own view.
+  const sectionViews = useMemo(
+    () => allSectionViews(state.sectionFile).map((v, i) => (state.sectionFile.sections[i]?.id === state.activeSection ? { name: v.name, doc: state.doc } : v)),
+    [state.sectionFile, state.activeSection, state.doc],
+  );
 
   const [size, setSize] = useState({ width: 0, height: 0 });
   const [view, setView] = useState<View>({ scale: 0.5, ox: 400, oy: 300 });
@@ -129,7 +135,7 @@ export function App(): ReactElement {
   useEffect(() => () => torsionClient.cancel(), [torsionClient]);
 
   // Window title: document name and an unsaved marker.
-  const docName = state.file?.name ?? state.doc.name;
+  const docName = state.file?.name ?? state.sectionFile.name;
   useEffect(() => {
     host.setTitle(`${state.dirty ? '• ' : ''}${docName} — Sectionsmith`);
     host.setUnsaved?.(state.dirty);
@@ -145,13 +151,13 @@ export function App(): ReactElement {
     if (!state.dirty && !wasDirty.current) return undefined;
     const t = window.setTimeout(() => {
       wasDirty.current = state.dirty;
-      void host.writeRecovery(state.dirty ? serialiseDocument(state.doc) : null);
+      void host.writeRecovery(state.dirty ? serialiseDocument(state.sectionFile) : null);
     }, RECOVERY_DELAY_MS);
     return () => window.clearTimeout(t);
-  }, [host, state.doc, state.dirty, recovery]);
+  }, [host, state.sectionFile, state.dirty, recovery]);
 
   const loadDoc = useCallback(
-    (doc: SectionDocument, file: { name: string; handle: string | null } | null, dirty = false) => {
+    (doc: SectionDocument | SectionFile, file: { name: string; handle: string | null } | null, dirty = false) => {
       editor.load(doc, file, dirty);
       setPendingFit(true);
     },
@@ -170,7 +176,7 @@ export function App(): ReactElement {
         setBanner({ kind: 'error', title: `Could not open ${name}. The current document is unchanged.`, lines: r.errors });
         return;
       }
-      loadDoc(r.doc, { name, handle: r.note?.startsWith('GeoJSON') ? null : handle });
+      loadDoc(r.file, { name, handle: r.note?.startsWith('GeoJSON') ? null : handle });
       setBanner(r.note ? { kind: 'info', title: `Opened ${name}`, lines: [r.note] } : null);
     },
     [editor, loadDoc],
@@ -199,9 +205,9 @@ export function App(): ReactElement {
   const save = useCallback(
     async (as: boolean) => {
       const st = editor.getState();
-      const text = serialiseDocument(st.doc);
+      const text = serialiseDocument(st.sectionFile);
       try {
-        const suggested = st.file?.name ?? `${st.doc.name.replace(/[^\w.-]+/g, '-') || 'section'}.section.json`;
+        const suggested = st.file?.name ?? `${st.sectionFile.name.replace(/[^\w.-]+/g, '-') || 'section'}.section.json`;
         const r = !as && st.file?.handle ? await host.save(st.file.handle, text) : await host.saveAs(suggested, text);
         if (!r) return;
         editor.markSaved({ name: r.name, handle: r.handle });
@@ -242,7 +248,7 @@ export function App(): ReactElement {
     async (action: MenuAction | HostCommand) => {
       switch (action) {
         case 'new':
-          if (await confirmDiscard()) loadDoc(newDocument(editor.getState().doc.unit), null);
+          if (await confirmDiscard()) loadDoc(newSectionFile(editor.getState().doc.unit), null);
           return;
         case 'open': {
           if (!(await confirmDiscard())) return;
@@ -345,7 +351,7 @@ export function App(): ReactElement {
   const changeUnit = (unit: LengthUnit): void => {
     const from = state.doc.unit;
     if (unit === from) return;
-    editor.replaceDocument(`Document unit ${from} → ${unit}`, (doc) => ({ ...scaleDocumentLengths(doc, (v) => convertLength(v, from, unit), isLengthParam), unit }));
+    editor.replaceAllSections(`Document unit ${from} → ${unit}`, (doc) => ({ ...scaleDocumentLengths(doc, (v) => convertLength(v, from, unit), isLengthParam), unit }));
     setView((v) => ({ ...v, scale: v.scale / convertLength(1, from, unit) }));
   };
 
@@ -403,7 +409,7 @@ export function App(): ReactElement {
               data-testid="recovery-restore"
               onClick={() => {
                 const r = documentFromText(recovery, 'recovered work', state.doc.unit);
-                if (r.ok) loadDoc(r.doc, null, true);
+                if (r.ok) loadDoc(r.file, null, true);
                 else setBanner({ kind: 'error', title: 'The recovered work could not be read.', lines: r.errors });
                 setRecovery(null);
               }}
@@ -438,6 +444,7 @@ export function App(): ReactElement {
           <EntryPanel editor={editor} state={state} />
         </aside>
         <main className="drawing">
+          <SectionsBar editor={editor} state={state} />
           <Canvas
             editor={editor}
             state={state}
@@ -516,7 +523,7 @@ export function App(): ReactElement {
           <MemberPanel doc={state.doc} valid={!!results.properties} onCase={setMemberCase} />
         </aside>
       </div>
-      {shown === 'compare' && <CompareView sections={[{ name: state.doc.name, doc: state.doc }]} fileName={docName} display={display} sig={sig} onClose={() => setShown(null)} />}
+      {shown === 'compare' && <CompareView sections={sectionViews} fileName={docName} display={display} sig={sig} onClose={() => setShown(null)} />}
       {shown === 'check-table' && <CheckView host={host} onClose={() => setShown(null)} />}
       {shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} display={display} sig={sig} torsion={torsion} member={memberCase} onClose={() => setShown(null)} />}
       {asking && (

@@ -2,13 +2,15 @@
  * Reading opened text as a document: a Sectionsmith document (core/document) or a GeoJSON
  * shape (core/geojson), whose coordinates are taken in the current document unit, one outline
  * part per polygon (holes kept as its holes). Every problem comes back as plain sentences.
+ * `file` is the whole file (every section); `doc` is its first section's view, for callers that
+ * take one section (allSectionViews(file) gives them all).
  */
-import { parseDocument, parseJson, newDocument, type SectionDocument, type PolygonPart } from '../../core/document/index.ts';
+import { fileFromSection, parseDocument, parseJson, newDocument, type SectionDocument, type SectionFile, type PolygonPart } from '../../core/document/index.ts';
 import { isGeoJson, regionFromGeoJson } from '../../core/geojson.ts';
 import type { Ring } from '../../core/geometry/types.ts';
 import type { LengthUnit } from '../../core/units/index.ts';
 
-export type OpenResult = { readonly ok: true; readonly doc: SectionDocument; readonly note?: string } | { readonly ok: false; readonly errors: readonly string[] };
+export type OpenResult = { readonly ok: true; readonly file: SectionFile; readonly doc: SectionDocument; readonly note?: string } | { readonly ok: false; readonly errors: readonly string[] };
 
 function points(ring: Ring): [number, number][] {
   const out: [number, number][] = [];
@@ -36,9 +38,10 @@ export function documentFromText(text: string, fileName: string, unit: LengthUni
       outer: points(poly.outer),
       holes: poly.holes.map(points),
     }));
-    return { ok: true, doc: { ...newDocument(unit, stem(fileName)), parts }, note: `GeoJSON coordinates read in ${unit}, the document unit.` };
+    const doc: SectionDocument = { ...newDocument(unit, stem(fileName)), parts };
+    return { ok: true, file: fileFromSection(doc), doc, note: `GeoJSON coordinates read in ${unit}, the document unit.` };
   }
   const parsed = parseDocument(text, fileName);
   if (!parsed.ok) return { ok: false, errors: parsed.errors.map((e) => (e.line !== undefined ? `${e.message}` : e.message)) };
-  return { ok: true, doc: parsed.document, ...(parsed.migratedFrom !== null ? { note: `Read from document version ${parsed.migratedFrom}; it will be saved in the current version.` } : {}) };
+  return { ok: true, file: parsed.file, doc: parsed.document, ...(parsed.migratedFrom !== null ? { note: `Read from document version ${parsed.migratedFrom}; it will be saved in the current version.` } : {}) };
 }
