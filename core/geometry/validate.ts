@@ -264,17 +264,21 @@ function collectSegments(rings: readonly CleanRing[]): Segments {
     x: new Float64Array(total), y: new Float64Array(total), ringOf: new Uint32Array(total), local: new Uint32Array(total),
     vertex: new Uint32Array(total), ringStart: new Uint32Array(rings.length), ringLength: Uint32Array.from(counts),
   };
+  // Plain locals in the loop: a million-vertex ring goes through it on every edit.
+  const { x, y, ringOf, local, vertex } = s;
   let k = 0;
   rings.forEach((r, ri) => {
     const flat = flats[ri] ?? null;
     const xy = flat?.xy ?? r.ring.xy;
+    const original = r.original;
+    const count = counts[ri]!;
     s.ringStart[ri] = k;
-    for (let v = 0; v < (counts[ri] ?? 0); v++, k++) {
-      s.x[k] = xy[2 * v] ?? 0;
-      s.y[k] = xy[2 * v + 1] ?? 0;
-      s.ringOf[k] = ri;
-      s.local[k] = v;
-      s.vertex[k] = r.original[flat === null ? v : (flat.segment[v] ?? 0)] ?? 0;
+    for (let v = 0; v < count; v++, k++) {
+      x[k] = xy[2 * v]!;
+      y[k] = xy[2 * v + 1]!;
+      ringOf[k] = ri;
+      local[k] = v;
+      vertex[k] = original[flat === null ? v : flat.segment[v]!]!;
     }
   });
   return s;
@@ -317,8 +321,13 @@ function contactDiagnostics(rings: readonly CleanRing[], ctx: ValidationContext)
   const seen = new Set<string>();
   if (rings.length === 0) return { diagnostics, crossed, touched };
   const s = collectSegments(rings);
+  // Segment k ends at vertex k + 1, except each ring's last, which closes on the ring's first.
   const ends = new Uint32Array(s.x.length);
-  for (let k = 0; k < ends.length; k++) ends[k] = segmentEnd(s, k);
+  for (let k = 0; k < ends.length; k++) ends[k] = k + 1;
+  for (let ri = 0; ri < s.ringStart.length; ri++) {
+    const start = s.ringStart[ri]!, length = s.ringLength[ri]!;
+    if (length > 0) ends[start + length - 1] = start;
+  }
   /** Records contact c between segments a and b; false once enough diagnostics are gathered. */
   const consider = (a: number, b: number, c: Contact): boolean => {
     if (c === CONTACT_NONE) return true;
