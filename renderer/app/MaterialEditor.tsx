@@ -35,6 +35,10 @@ const KIND_NAMES: Readonly<Record<(typeof MATERIAL_KINDS)[number], string>> = {
 const BASIS_NAMES: Readonly<Record<(typeof STRENGTH_BASES)[number], string>> = {
   yield: 'yield strength (metals)', 'reference-bending': 'reference bending value (wood)', tensile: 'tensile strength (plastics)',
 };
+/** Which strength fy usually is for a kind (common practice): yield for metals, the NDS reference bending value for wood, tensile for plastics. */
+const KIND_BASIS: Partial<Record<(typeof MATERIAL_KINDS)[number], (typeof STRENGTH_BASES)[number]>> = {
+  steel: 'yield', aluminium: 'yield', 'sawn-lumber': 'reference-bending', 'engineered-wood': 'reference-bending', plastic: 'tensile',
+};
 const DENSITY_NAMES: Readonly<Record<(typeof DENSITY_UNITS)[number], string>> = { 'kg/m3': 'kg/m³', 'lb/ft3': 'lb/ft³' };
 
 interface FormState {
@@ -114,7 +118,15 @@ function MaterialForm({ form, onChange, onSave, onCancel }: { form: FormState; o
       <div className="mf-row">
         <label className="field">
           <span>kind</span>
-          <select data-testid="mf-kind" value={d.kind} onChange={(e) => set({ ...d, kind: e.target.value as MaterialDraft['kind'] })}>
+          <select
+            data-testid="mf-kind"
+            value={d.kind}
+            onChange={(e) => {
+              const kind = e.target.value as MaterialDraft['kind'];
+              // The usual strength for the kind; the user may still choose another below.
+              set({ ...d, kind, strengthBasis: KIND_BASIS[kind] ?? d.strengthBasis });
+            }}
+          >
             {MATERIAL_KINDS.map((k) => (
               <option key={k} value={k}>
                 {KIND_NAMES[k]}
