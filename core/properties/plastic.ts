@@ -357,22 +357,26 @@ interface Side {
 function upperSideStraight(xy: Float64Array, f: Frame, d: number): [number, number, number] {
   const n = xy.length >> 1;
   const { nx, ny, tx, ty } = f;
+  // Accumulators stay plain locals (no closure over them), so they are never boxed on the heap.
   let a = 0, qs = 0, qt = 0;
-  const piece = (ta: number, sa: number, tb: number, sb: number): void => {
-    const ds = sb - sa;
-    a += (ta + tb) * ds;
-    qs += (2 * ta * sa + ta * sb + tb * sa + 2 * tb * sb) * ds;
-    qt += (ta * ta + ta * tb + tb * tb) * ds;
-  };
   const px = xy[2 * n - 2]!, py = xy[2 * n - 1]!;
   let sp = nx * px + ny * py, tp = tx * px + ty * py;
   for (let i = 0; i < n; i++) {
     const x = xy[2 * i]!, y = xy[2 * i + 1]!;
     const sq = nx * x + ny * y, tq = tx * x + ty * y;
-    if (sp >= d) {
-      if (sq >= d) piece(tp, sp, tq, sq);
-      else piece(tp, sp, tp + ((d - sp) / (sq - sp)) * (tq - tp), d);
-    } else if (sq >= d) piece(tp + ((d - sp) / (sq - sp)) * (tq - tp), d, tq, sq);
+    // The part of the edge with s ≥ d, from (ta, sa) to (tb, sb).
+    let ta = tp, sa = sp, tb = tq, sb = sq;
+    const inP = sp >= d, inQ = sq >= d;
+    if (inP !== inQ) {
+      const tc = tp + ((d - sp) / (sq - sp)) * (tq - tp);
+      if (inP) { tb = tc; sb = d; } else { ta = tc; sa = d; }
+    }
+    if (inP || inQ) {
+      const ds = sb - sa;
+      a += (ta + tb) * ds;
+      qs += (2 * ta * sa + ta * sb + tb * sa + 2 * tb * sb) * ds;
+      qt += (ta * ta + ta * tb + tb * tb) * ds;
+    }
     sp = sq; tp = tq;
   }
   return [a / 2, qs / 6, qt / 6];
