@@ -525,7 +525,7 @@ export function App(): ReactElement {
       </div>
       {shown === 'compare' && <CompareView sections={sectionViews} fileName={docName} display={display} sig={sig} onClose={() => setShown(null)} />}
       {shown === 'check-table' && <CheckView host={host} onClose={() => setShown(null)} />}
-      {shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} display={display} sig={sig} torsion={torsion} member={memberCase} onClose={() => setShown(null)} />}
+      {shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} fileTitle={state.sectionFile.name} display={display} sig={sig} torsion={torsion} member={memberCase} onClose={() => setShown(null)} />}
       {asking && (
         <div className="modal-back">
           <div className="modal" role="dialog" aria-modal="true" data-testid="confirm-discard">

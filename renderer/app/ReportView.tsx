@@ -129,14 +129,16 @@ interface SectionReportProps {
   readonly sig: number;
   readonly torsion: TorsionState;
   readonly member: MemberCase | null;
+  /** The file's own name (a file of several sections), shown before the section's. */
+  readonly fileTitle?: string;
   readonly onClose: () => void;
 }
 
 /** The report of the section now open; torsion only when solved for this very document. */
-export function SectionReport({ doc, fileName, display, sig, torsion, member, onClose }: SectionReportProps): ReactElement {
+export function SectionReport({ doc, fileName, display, sig, torsion, member, fileTitle = '', onClose }: SectionReportProps): ReactElement {
   const solved = torsion.kind === 'done' && torsion.doc === doc ? torsion.result : null;
   const units = useStable(display, sameDisplay);
-  const built = useMemo(() => sectionReportInput({ doc, display: units, sig, torsion: solved, member, date: today() }), [doc, units, sig, solved, member]);
+  const built = useMemo(() => sectionReportInput({ doc, display: units, sig, torsion: solved, member, date: today(), fileTitle }), [doc, units, sig, solved, member, fileTitle]);
   if (!built.ok) {
     return (
       <div className="overlay" role="dialog" aria-modal="true" aria-label="Report" data-testid="report-view">

@@ -36,6 +36,8 @@ export interface SectionReportOptions {
   readonly torsion: TorsionResult | null;
   readonly member: MemberCase | null;
   readonly date?: string;
+  /** The file's own name, put before the section's when they differ. */
+  readonly fileTitle?: string;
 }
 
 export type SectionReport = { readonly ok: true; readonly input: ReportInput } | { readonly ok: false; readonly errors: readonly string[] };
@@ -75,12 +77,13 @@ function shownValue(row: ResultRow, p: SectionProperties, unit: LengthUnit, disp
 /** The results panel's groups as report tables (three tables, so none is longer than a page). */
 export function propertyTables(p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): ReportTable[] {
   const columns = ['symbol', 'value', 'unit', 'meaning'];
+  const textColumns = [3];
   const rows = (titles: readonly string[]): string[][] =>
     RESULT_GROUPS.filter((g) => titles.includes(g.title)).flatMap((g) => g.rows.map((row) => [row.symbol, ...shownValue(row, p, unit, display, sig), `${g.title.toLowerCase()}: ${row.label}`]));
   return [
-    { title: 'Area, centroid, second moments and radii of gyration', columns, rows: rows(['Area and centroid', 'Second moments about the centroid', 'Principal axes', 'Radii of gyration']) },
-    { title: 'Elastic and plastic moduli', columns, rows: rows(['Elastic section moduli', 'Plastic']) },
-    { title: 'Extents', columns, rows: rows(['Extents']) },
+    { title: 'Area, centroid, second moments and radii of gyration', columns, rows: rows(['Area and centroid', 'Second moments about the centroid', 'Principal axes', 'Radii of gyration']), textColumns },
+    { title: 'Elastic and plastic moduli', columns, rows: rows(['Elastic section moduli', 'Plastic']), textColumns },
+    { title: 'Extents', columns, rows: rows(['Extents']), textColumns },
   ];
 }
 
@@ -89,6 +92,7 @@ export function torsionTable(t: TorsionResult, unit: LengthUnit, display: Displa
   return {
     title: 'Torsion (finite elements)',
     columns: ['symbol', 'value', 'unit', 'meaning'],
+    textColumns: [3],
     rows: [
       row('J', t.J, 'inertia', 'Saint-Venant torsion constant'),
       row('Cw', t.Cw, 'warping', 'warping constant'),
@@ -144,6 +148,13 @@ export function memberLines(doc: SectionDocument, member: MemberCase | null): st
   return lines;
 }
 
+/** "File — section" when the file names itself apart from the section, else the section's name. */
+export function reportTitle(fileTitle: string, sectionName: string): string {
+  const f = fileTitle.trim(), s = sectionName.trim();
+  if (f === '' || f === s) return s || 'Untitled section';
+  return s === '' ? f : `${f} — ${s}`;
+}
+
 /** The ReportInput of one section, or the geometry problems that prevent it. */
 export function sectionReportInput(o: SectionReportOptions): SectionReport {
   const section = sectionFromDocument(o.doc);
@@ -154,7 +165,7 @@ export function sectionReportInput(o: SectionReportOptions): SectionReport {
   return {
     ok: true,
     input: {
-      title: o.doc.name.trim() || 'Untitled section',
+      title: reportTitle(o.fileTitle ?? '', o.doc.name),
       drawings: [sectionSvg({ name: o.doc.name, unit: o.doc.unit, section, display: o.display })],
       tables,
       materials: materialLines(o.doc),
