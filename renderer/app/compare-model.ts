@@ -222,7 +222,7 @@ export function comparisonReportInput(m: Extract<CompareModel, { ok: true }>, si
     { title: `Properties (ratio to "${c.baseline}" in brackets)`, columns: head(geometric), rows: body(geometric) },
     { title: 'Efficiency, stiffness, weight and deflection', columns: head(efficiency), rows: body(efficiency) },
   ];
-  if (m.targetsSet) tables.push({ title: 'Targets', columns: ['alternative', 'meets the targets', 'why not'], rows: m.verdicts.map((v) => [v.name, v.passes ? 'yes' : 'no', v.reasons.join('; ')]) });
+  if (m.targetsSet) tables.push({ title: 'Targets', columns: ['alternative', 'meets the targets', 'why not'], textColumns: [1, 2], rows: m.verdicts.map((v) => [v.name, v.passes ? 'yes' : 'no', v.reasons.join('; ')]) });
   const d = m.columns.find((k) => k.key === 'deflection')!;
   const checks = c.beam === null ? [] : [
     `Shared beam: simply supported, span ${formatSig(c.beam.span, 4)} ${c.unit}, uniform load ${formatSig(c.beam.load / 1000, 4)} kN/m, self-weight not included; deflection 5wL⁴/(384 EI) at midspan.`,
