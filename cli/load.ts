@@ -2,8 +2,10 @@
  * Reading a section file for the commands: a Sectionsmith document or a GeoJSON area, into
  * section properties. Every problem becomes a message that names the file and the place
  * (line/column for JSON syntax, the JSON path for structure, part/ring/vertex for geometry).
+ * A document may hold several sections (alternatives): the first is read unless one is named
+ * (--section NAME); an unknown name is an error that lists the names the file has.
  */
-import { documentFromJson, parseJson } from '../core/document/index.ts';
+import { documentFromJson, findSection, parseJson, sectionView, type SectionDocument } from '../core/document/index.ts';
 import type { Diagnostic, Region } from '../core/geometry/types.ts';
 import { normaliseRegion, validateRegion } from '../core/geometry/index.ts';
 import { geoJsonPathOf, isGeoJson, regionFromGeoJson } from '../core/geojson.ts';
@@ -15,7 +17,13 @@ import type { CliIo } from './command.ts';
 
 export interface LoadedSection {
   readonly kind: 'document' | 'geojson';
+  /** The section's name for a document (the file name for GeoJSON). */
   readonly name: string;
+  /** Documents: the chosen section's one-section view, the document's own name, and which section of how many. */
+  readonly doc?: SectionDocument;
+  readonly documentName?: string;
+  readonly sectionIndex?: number;
+  readonly sectionCount?: number;
   readonly unit: LengthUnit;
   readonly region: Region;
   readonly properties: SectionProperties;
@@ -26,18 +34,31 @@ export interface LoadedSection {
 
 export type LoadResult = { readonly ok: true; readonly section: LoadedSection } | { readonly ok: false; readonly messages: readonly string[] };
 
-/** The JSON path of a diagnostic inside a document part (vertex paths only for polygon parts). */
-function partPath(composed: ComposedPart, d: Diagnostic): string {
-  const base = `parts[${composed.index}]`;
+/** The JSON path of a diagnostic inside a document part (vertex paths only for polygon parts); `list` is the parts' path in the file. */
+function partPath(list: string, composed: ComposedPart, d: Diagnostic): string {
+  const base = `${list}[${composed.index}]`;
   if (composed.part.type !== 'polygon' || d.ring === undefined) return base;
   const ring = d.ring < 0 ? `${base}.outer` : `${base}.holes[${d.ring}]`;
   return d.vertex === undefined ? ring : `${ring}[${d.vertex}]`;
 }
 
-function fromDocument(file: string, value: unknown): LoadResult {
+/** How a person names the sections: "A", "B", "C". */
+export function sectionNames(names: readonly string[]): string {
+  return names.map((n) => JSON.stringify(n)).join(', ');
+}
+
+function fromDocument(file: string, value: unknown, sectionName: string | undefined): LoadResult {
   const parsed = documentFromJson(value);
   if (!parsed.ok) return { ok: false, messages: parsed.errors.map((e) => `${file}: ${e.message}`) };
-  const doc = parsed.document;
+  const whole = parsed.file;
+  const chosen = sectionName === undefined ? whole.sections[0] : findSection(whole, sectionName);
+  if (!chosen) {
+    return { ok: false, messages: [`${file}: --section: no section named ${JSON.stringify(sectionName)}; the sections are ${sectionNames(whole.sections.map((s) => s.name))}`] };
+  }
+  const index = whole.sections.indexOf(chosen);
+  const doc = sectionView(whole, chosen.id);
+  // Paths as in the user's file: a file read from the one-section layout has its parts at the top.
+  const list = parsed.migratedFrom !== null && parsed.migratedFrom < 2 ? 'parts' : `sections[${index}].parts`;
   const result = sectionFromDocument(doc);
   if (result.properties === null) {
     const messages: string[] = [];
@@ -45,7 +66,7 @@ function fromDocument(file: string, value: unknown): LoadResult {
     for (const composed of result.parts) {
       for (const d of composed.diagnostics) {
         perPart.add(d);
-        messages.push(`${file}: ${partPath(composed, d)}: ${d.message}`);
+        messages.push(`${file}: ${partPath(list, composed, d)}: ${d.message}`);
       }
     }
     for (const d of result.diagnostics) if (!perPart.has(d)) messages.push(`${file}: ${d.message}`);
@@ -53,7 +74,10 @@ function fromDocument(file: string, value: unknown): LoadResult {
   }
   return {
     ok: true,
-    section: { kind: 'document', name: doc.name, unit: doc.unit, region: result.region, properties: result.properties, parts: result.parts.length, hiddenParts: result.hiddenParts },
+    section: {
+      kind: 'document', name: doc.name, doc, documentName: whole.name, sectionIndex: index, sectionCount: whole.sections.length,
+      unit: doc.unit, region: result.region, properties: result.properties, parts: result.parts.length, hiddenParts: result.hiddenParts,
+    },
   };
 }
 
@@ -110,11 +134,12 @@ function readSectionFile(file: string, io: CliIo, geoJsonUnit: LengthUnit | unde
   return { kind: 'document', value: json.value };
 }
 
-/** Reads FILE as a document or as GeoJSON (which needs `geoJsonUnit`). */
-export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined): LoadResult {
+/** Reads FILE as a document (its first section, or the one named `sectionName`) or as GeoJSON (which needs `geoJsonUnit`). */
+export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined, sectionName?: string): LoadResult {
   const read = readSectionFile(file, io, geoJsonUnit);
   if ('ok' in read) return read;
-  if (read.kind === 'document') return fromDocument(file, read.value);
+  if (read.kind === 'document') return fromDocument(file, read.value, sectionName);
+  if (sectionName !== undefined) return { ok: false, messages: [`${file}: --section: a GeoJSON file has no named sections; --section applies to Sectionsmith documents`] };
   return fromGeoJson(file, read);
 }
 
@@ -128,6 +153,7 @@ export function loadSectionArgument(
   positionals: readonly string[],
   unitFlag: string | undefined,
   io: CliIo,
+  sectionFlag?: string | boolean,
 ): { readonly file: string; readonly unitFlag: LengthUnit | undefined; readonly section: LoadedSection } | null {
   if (positionals.length !== 1) {
     io.err(`sectionsmith ${command.name}: expected one FILE, got ${positionals.length === 0 ? 'none' : positionals.join(' ')}\nusage: sectionsmith ${command.usage}\n`);
@@ -138,7 +164,11 @@ export function loadSectionArgument(
     io.err(`sectionsmith ${command.name}: --unit: expected in, ft, mm, cm or m, got ${JSON.stringify(unitFlag)}\n`);
     return null;
   }
-  const loaded = loadSection(file, io, unitFlag);
+  if (sectionFlag !== undefined && (typeof sectionFlag !== 'string' || sectionFlag.trim() === '')) {
+    io.err(`sectionsmith ${command.name}: --section: expected the name of a section, got ${typeof sectionFlag === 'string' ? JSON.stringify(sectionFlag) : 'nothing'}\n`);
+    return null;
+  }
+  const loaded = loadSection(file, io, unitFlag, sectionFlag);
   if (!loaded.ok) {
     io.err(`${loaded.messages.join('\n')}\n`);
     return null;

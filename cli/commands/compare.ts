@@ -1,12 +1,15 @@
 /**
  * `sectionsmith compare FILE [FILE…] [--baseline NAME] [--sort COL] [--span L --load W]
- * [--min-ix X] [--limit N] [--unit U] [--csv OUT] [--json]`: alternatives side by side, one
- * document file each (the document format holds one section; alternatives are separate files).
+ * [--min-ix X] [--limit N] [--unit U] [--csv OUT] [--json]`: alternatives side by side. Every
+ * section of every FILE is one alternative, in file order: one document holding several
+ * sections compares them; several one-section files compare as before. An alternative is
+ * named by its section's name; names that occur in more than one file are given the file's
+ * name in front ("a.json: Deeper web") so each stays distinct.
  */
 import { writeFileSync } from 'node:fs';
 import { reportHtml } from '../../core/report/index.ts';
 import { COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, comparisonSvg, columnUnit, lightestMeeting, sortAlternatives, type CompareColumn, type Comparison, type Targets } from '../../core/compare/index.ts';
-import { parseDocument, type SectionDocument } from '../../core/document/index.ts';
+import { allSectionViews, parseDocument, type SectionDocument } from '../../core/document/index.ts';
 import { formatSig, isLengthUnit } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagValues } from '../command.ts';
 
@@ -43,7 +46,7 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
   if (flags.unit !== undefined && !isLengthUnit(flags.unit)) return fail(`--unit: expected in, ft, mm, cm or m, got ${JSON.stringify(flags.unit)}`);
   const sortBy = (flags.sort ?? 'A') as CompareColumn;
   if (!COMPARE_COLUMNS.includes(sortBy)) return fail(`--sort: unknown column "${String(flags.sort)}"; columns: ${COMPARE_COLUMNS.join(', ')}`);
-  const docs: SectionDocument[] = [];
+  const found: { file: string; name: string; doc: SectionDocument }[] = [];
   for (const file of positionals) {
     let t: string;
     try {
@@ -53,8 +56,13 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
     }
     const parsed = parseDocument(t, file);
     if (!parsed.ok) return fail(parsed.errors.map((e) => e.message).join('\n'));
-    docs.push(parsed.document);
+    for (const v of allSectionViews(parsed.file)) found.push({ file, ...v });
   }
+  const count = new Map<string, number>();
+  for (const f of found) count.set(f.name, (count.get(f.name) ?? 0) + 1);
+  const docs: SectionDocument[] = found.map((f) => ((count.get(f.name) ?? 0) > 1 ? { ...f.doc, name: `${f.file}: ${f.name}` } : f.doc));
+  const named = new Set(docs.map((d) => d.name));
+  if (named.size < docs.length) return fail(`two sections in the same file share a name after all: ${docs.map((d) => JSON.stringify(d.name)).join(', ')}`);
   try {
     const span = positive('span', flags.span);
     const load = positive('load', flags.load);
@@ -94,16 +102,17 @@ export const compareCommand: Command = {
   summary: 'alternative sections side by side, ratios to a baseline, lightest meeting a target',
   usage: 'compare FILE [FILE…] [--baseline NAME] [--sort COL] [--span L --load W] [--min-ix X] [--limit N] [--csv OUT] [--json]',
   description: [
-    'Each FILE is a Sectionsmith document holding one alternative (its "name" names it). The',
-    'table lists A, Ix, Iy, Sx (smaller fibre), Zx, Ix/A, Sx/A, Zx/A and, for documents with',
-    'materials, EIx (N·m²), weight (N/m) and, with --span (in the unit) and --load (N/m), the',
-    'midspan deflection (m) of a simply supported beam; each with its ratio to --baseline',
-    '(default: the first file). --sort COL orders the rows. --min-ix X and --limit N (deflection',
+    'Each FILE is a Sectionsmith document; each of its sections is one alternative, named by the',
+    'section\'s name (one file with several sections compares them; a name found in more than',
+    'one file gets "FILE: " in front). The table lists A, Ix, Iy, Sx (smaller fibre), Zx, Ix/A,',
+    'Sx/A, Zx/A and, for documents with materials, EIx (N·m²), weight (N/m) and, with --span',
+    '(in the unit) and --load (N/m), the midspan deflection (m) of a simply supported beam; each',
+    'with its ratio to --baseline (default: the first alternative). --sort COL orders the rows. --min-ix X and --limit N (deflection',
     '≤ span/N) pick the lightest alternative meeting them (by weight when all have one, else A).',
     '--csv OUT writes the table as CSV; --svg OUT the outlines at one scale; --report OUT.html a printable report.',
   ].join('\n'),
   flags: [
-    { name: 'baseline', type: 'string', value: 'NAME', description: 'the alternative the ratios refer to (default: the first)' },
+    { name: 'baseline', type: 'string', value: 'NAME', description: 'the alternative (section name) the ratios refer to (default: the first)' },
     { name: 'sort', type: 'string', value: 'COL', description: `sort column: ${COMPARE_COLUMNS.join(', ')} (default A)` },
     { name: 'unit', type: 'string', value: 'U', description: 'length unit of the table (default: the first document\'s)' },
     { name: 'span', type: 'string', value: 'L', description: 'shared simply supported span, in the unit' },

@@ -9,7 +9,6 @@
  * Output: lengths in the document unit, forces in N or lbf, moments in force × document unit,
  * stresses in MPa or psi (the same system), EI in force × unit². Computation runs in SI.
  */
-import { documentFromJson, parseJson } from '../../core/document/index.ts';
 import { compositeProperties, type MaterialPiece } from '../../core/materials/composite.ts';
 import { materialPiecesFromDocument } from '../../core/materials/document.ts';
 import { documentReferenceModulus } from '../../core/materials/reference.ts';
@@ -36,6 +35,7 @@ export const MEMBER_FLAGS: readonly FlagSpec[] = [
   { name: 'self-weight', type: 'boolean', description: 'add the section\'s own weight (from the material densities) to the uniform load' },
   { name: 'limit', type: 'string', value: 'N', description: 'deflection limit span/N, e.g. 360, 240, 180, 120 (common practice); a cantilever uses 2 × its length' },
   { name: 'unit', type: 'string', value: 'U', description: 'GeoJSON only: the length unit of its coordinates, in|ft|mm|cm|m' },
+  { name: 'section', type: 'string', value: 'NAME', description: 'documents with several sections (alternatives): the one to check (default: the first)' },
   { name: 'json', type: 'boolean', description: 'print one JSON object instead of the text report' },
 ];
 
@@ -85,7 +85,7 @@ interface Pieces {
   readonly from: 'document materials' | '--E';
 }
 
-function piecesFor(section: LoadedSection, text: string | undefined, flags: FlagValues, units: OutputUnits): Pieces | string[] {
+function piecesFor(section: LoadedSection, flags: FlagValues, units: OutputUnits): Pieces | string[] {
   const eText = stringFlag(flags, 'E');
   if (eText !== undefined) {
     const e = parseQuantity(eText, STRESS_UNITS, units.stress, '--E');
@@ -96,11 +96,8 @@ function piecesFor(section: LoadedSection, text: string | undefined, flags: Flag
     const material: MaterialSI = { id: '--E', name: `E = ${eText}`, kind: 'other', E, G: E / 2.6, density: rho === undefined ? NaN : densityKgPerM3(rho, units), fy: NaN, strengthBasis: 'yield' };
     return { pieces: [{ region: section.region, material, label: 'section' }], from: '--E' };
   }
-  if (section.kind !== 'document' || text === undefined) return ['the shape has no materials: give the modulus with --E (e.g. --E 200GPa or --E 29000ksi)'];
-  const json = parseJson(text);
-  const parsed = json.ok ? documentFromJson(json.value) : null;
-  if (parsed === null || !parsed.ok) return ['the document could not be read again for its materials'];
-  const doc = parsed.document;
+  const doc = section.doc;
+  if (doc === undefined) return ['the shape has no materials: give the modulus with --E (e.g. --E 200GPa or --E 29000ksi)'];
   if (doc.materials.length === 0 && doc.defaultMaterial === null && doc.parts.every((p) => p.material === null)) {
     return ['the document has no materials: assign materials to its parts, or give the modulus with --E'];
   }
@@ -222,12 +219,12 @@ function reportText(file: string, r: MemberReport): string {
 }
 
 function runMember(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
-  const loaded = loadSectionArgument(memberCommand, positionals, stringFlag(flags, 'unit'), io);
+  const loaded = loadSectionArgument(memberCommand, positionals, stringFlag(flags, 'unit'), io, flags.section);
   if (!loaded) return EXIT_BAD_INPUT;
   const { file, section } = loaded;
   const units = outputUnits(section.unit);
   try {
-    const pieces = piecesFor(section, section.kind === 'document' ? io.readFile(file) : undefined, flags, units);
+    const pieces = piecesFor(section, flags, units);
     if (Array.isArray(pieces)) {
       io.err(pieces.map((p) => `${file}: ${p}`).join('\n') + '\n');
       return EXIT_BAD_INPUT;
@@ -297,11 +294,8 @@ export function materialPropsResults(file: string, section: LoadedSection, flags
   const erefText = stringFlag(flags, 'eref');
   const units = outputUnits(reportUnit);
   const noMaterials = (why: string): MaterialPropsResults => (erefText === undefined ? none : { json: {}, rows: [], errors: [`${file}: --eref: ${why}`] });
-  if (section.kind !== 'document') return noMaterials('GeoJSON has no materials');
-  const json = parseJson(io.readFile(file));
-  const parsed = json.ok ? documentFromJson(json.value) : null;
-  if (parsed === null || !parsed.ok) return none;
-  const doc = parsed.document;
+  const doc = section.doc;
+  if (doc === undefined) return noMaterials('GeoJSON has no materials');
   if (doc.parts.every((p) => p.material === null) && doc.defaultMaterial === null) return noMaterials('the document has no materials assigned');
   const found = materialPiecesFromDocument(doc);
   const problems = [...found.issues, ...found.diagnostics.map((d) => d.message)];

@@ -8,7 +8,6 @@
  * Extra flags (e.g. a torsion option) go in PROPS_FLAGS and add their rows and keys in
  * `extraResults`; nothing else needs to change.
  */
-import { documentFromJson, parseJson } from '../../core/document/index.ts';
 import type { SectionProperties } from '../../core/properties/types.ts';
 import { MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type TorsionResult } from '../../core/torsion/index.ts';
 import { convertLength, defaultDisplaySet, formatSig, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
@@ -20,6 +19,7 @@ export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'json', type: 'boolean', description: 'print one JSON object (keys below) instead of the table' },
   { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m: for GeoJSON the unit of its coordinates (required); for a document the unit to report in (default: its own)' },
   { name: 'eref', type: 'string', value: 'VALUE', description: 'documents with materials: reference modulus for the transformed section, e.g. 200GPa or 29000ksi (default: the document\'s referenceModulus, else the first part\'s E)' },
+  { name: 'section', type: 'string', value: 'NAME', description: 'documents with several sections (alternatives): the one to report (default: the first)' },
   { name: 'torsion', type: 'boolean', description: 'add finite-element torsion: J, Cw, shear centre xs, ys, meshElements, jRelativeError (one material only)' },
 ];
 
@@ -82,10 +82,8 @@ function extraResults(file: string, section: LoadedSection, flags: FlagValues, i
 
 /** --torsion: core/torsion on the section's region; refused when visible parts differ in material (one G only). */
 function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: LengthUnit): ExtraResults {
-  if (section.kind === 'document') {
-    const json = parseJson(io.readFile(file));
-    const parsed = json.ok ? documentFromJson(json.value) : null;
-    const used = new Set(parsed?.ok ? parsed.document.parts.filter((p) => p.visible && p.operation === 'add').map((p) => p.material ?? '(default)') : []);
+  if (section.doc !== undefined) {
+    const used = new Set(section.doc.parts.filter((p) => p.visible && p.operation === 'add').map((p) => p.material ?? '(default)'));
     if (used.size > 1) return { json: {}, rows: [], errors: [`${file}: --torsion: the finite-element torsion handles one material, but the parts use ${[...used].join(', ')}`] };
   }
   let r: TorsionResult;
@@ -116,7 +114,8 @@ function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: L
 function describeInput(s: LoadedSection): string {
   if (s.kind === 'geojson') return `GeoJSON, ${s.region.length} polygon${s.region.length === 1 ? '' : 's'}, coordinates read as ${s.unit}`;
   const hidden = s.hiddenParts > 0 ? `; ${s.hiddenParts} hidden part${s.hiddenParts === 1 ? '' : 's'} left out` : '';
-  return `Sectionsmith document "${s.name}", ${s.parts} part${s.parts === 1 ? '' : 's'}${hidden}, unit ${s.unit}`;
+  const which = s.sectionCount !== undefined && s.sectionCount > 1 ? `, section "${s.name}" (${(s.sectionIndex ?? 0) + 1} of ${s.sectionCount})` : '';
+  return `Sectionsmith document "${s.documentName ?? s.name}"${which}, ${s.parts} part${s.parts === 1 ? '' : 's'}${hidden}, unit ${s.unit}`;
 }
 
 function table(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResults): string {
@@ -153,7 +152,7 @@ function json(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResu
     unit,
     caution: CAUTION,
     convention: 'Ixy = +∫XY dA about the centroid; angles in degrees counter-clockwise from +x; lengths in "unit", areas unit², moduli unit³, second moments unit⁴',
-    ...(s.kind === 'document' ? { parts: s.parts, hiddenParts: s.hiddenParts } : {}),
+    ...(s.kind === 'document' ? { section: s.name, parts: s.parts, hiddenParts: s.hiddenParts } : {}),
     ...propertiesInUnit(s.properties, s.unit, unit),
     ...extra.json,
   };
@@ -162,7 +161,7 @@ function json(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResu
 }
 
 function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
-  const loaded = loadSectionArgument(propsCommand, positionals, typeof flags.unit === 'string' ? flags.unit : undefined, io);
+  const loaded = loadSectionArgument(propsCommand, positionals, typeof flags.unit === 'string' ? flags.unit : undefined, io, flags.section);
   if (!loaded) return EXIT_BAD_INPUT;
   const { file, unitFlag, section } = loaded;
   const unit = unitFlag ?? section.unit;
@@ -178,7 +177,7 @@ function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo):
 export const propsCommand: Command = {
   name: 'props',
   summary: 'section properties of a Sectionsmith document or a GeoJSON area',
-  usage: 'props FILE [--json] [--unit U] [--eref VALUE] [--torsion]',
+  usage: 'props FILE [--json] [--unit U] [--section NAME] [--eref VALUE] [--torsion]',
   description: [
     'FILE is a Sectionsmith document (.json, "format": "sectionsmith-section") or a GeoJSON',
     'Polygon, MultiPolygon, Feature or FeatureCollection (RFC 7946) whose coordinates are lengths',
@@ -193,7 +192,10 @@ export const propsCommand: Command = {
     'property in plain powers of "unit": area, cx, cy, Ix, Iy, Ixy, Ip, I1, I2, thetaDeg, isotropic,',
     'rx, ry, r1, r2, xMin, xMax, yMin, yMax, SxTop, SxBottom, SyLeft, SyRight, S1Plus, S1Minus,',
     'S2Plus, S2Minus, Zx, Zy, Z1, Z2, pnaY, pnaX, shapeFactorX, shapeFactorY (documents add',
-    '"parts" and "hiddenParts").',
+    '"section", "parts" and "hiddenParts").',
+    '',
+    'A document may hold several sections (alternatives); the first is reported unless',
+    '--section NAME names another.',
     '',
     'A document whose parts have materials adds the E-weighted (transformed) section: EA (N, or',
     'lbf for in/ft), EIx, EIy, EIxy, EI1, EI2 (force·unit²), thetaEIDeg, cxE, cyE, eRef (MPa or psi),',
