@@ -17,6 +17,7 @@ import type { InvokeChannel, HostCommand, SendChannel } from './channels.ts';
 import { guarded } from './ipc-guard.ts';
 import { documentPathFromArgv } from './launch-file.ts';
 import { menuTemplate } from './menu.ts';
+import { printReportToPdf } from './print-pdf.ts';
 import { checkedDocumentText, MAX_TEXT_BYTES, type PayloadOf } from './payloads.ts';
 import { readRecentFiles, withRecent, writeRecentFiles, type RecentFile } from './recent-files.ts';
 import { createRecoveryStore } from './recovery.ts';
@@ -149,6 +150,20 @@ function registerHandlers(): void {
     if (choice.canceled || !choice.filePath) return false;
     await saveAtomically(choice.filePath, file.text, { keepBackup: false });
     return true;
+  });
+  handle('report:print-pdf', async (html, suggestedName) => {
+    const owner = window;
+    if (!owner) return false;
+    return printReportToPdf(html, suggestedName, {
+      chooseTarget: async (name) => {
+        const choice = await dialog.showSaveDialog(owner, { title: 'Save the report as PDF', defaultPath: path.join(defaultFolder(), name), filters: [{ name: 'PDF document', extensions: ['pdf'] }] });
+        return choice.canceled || !choice.filePath ? null : choice.filePath;
+      },
+      createWindow: (options) => new BrowserWindow(options),
+      save: (target, data) => saveAtomically(target, data, { keepBackup: false }),
+      fs,
+      tempRoot: app.getPath('temp'),
+    });
   });
   handle('dialog:confirm-discard', async (documentName) => (window ? confirmDiscard(window, documentName) : false));
   handle('recent:list', async () => recent);

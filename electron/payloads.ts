@@ -32,6 +32,13 @@ const shortText = v.pipe(v.string('text'), v.maxLength(500, 'text of at most 500
 
 export const EXPORT_MIME_TYPES = ['image/svg+xml', 'text/csv', 'text/html', 'application/json', 'text/plain'] as const;
 
+/** A report of core/report: a whole HTML document, and never a script (the PDF window runs none either). */
+const reportHtml = v.pipe(
+  text,
+  v.startsWith('<!DOCTYPE html>', 'an HTML report starting with <!DOCTYPE html>'),
+  v.check((html) => !/<script/i.test(html), 'an HTML report without scripts'),
+);
+
 const exportFile = v.strictObject({
   suggestedName: fileName,
   mimeType: v.picklist(EXPORT_MIME_TYPES, `one of ${EXPORT_MIME_TYPES.join(', ')}`),
@@ -46,6 +53,7 @@ export const PAYLOADS = {
   'document:save': v.strictTuple([handle, text]),
   'document:save-as': v.strictTuple([fileName, text]),
   'export:save': v.strictTuple([exportFile]),
+  'report:print-pdf': v.strictTuple([reportHtml, fileName]),
   'dialog:confirm-discard': v.strictTuple([shortText]),
   'recent:list': v.strictTuple([]),
   'recovery:write': v.strictTuple([v.nullable(text)]),

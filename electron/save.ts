@@ -56,7 +56,8 @@ export function tempPathFor(target: string, pid: number): string {
   return path.join(path.dirname(target), `.${path.basename(target)}.${pid}${TEMP_SUFFIX}`);
 }
 
-export async function saveAtomically(target: string, text: string, options: SaveOptions = {}): Promise<SaveOutcome> {
+/** `text` is written as UTF-8; bytes (a PDF) are written as they are. */
+export async function saveAtomically(target: string, text: string | Uint8Array, options: SaveOptions = {}): Promise<SaveOutcome> {
   const fs = options.fs ?? nodeFs;
   if (!path.isAbsolute(target)) throw new SaveError(`Could not save "${target}": the path is not absolute.`, undefined);
   const temp = tempPathFor(target, process.pid);
@@ -83,10 +84,10 @@ export async function saveAtomically(target: string, text: string, options: Save
   }
 }
 
-async function writeFlushed(fs: SaveFs, file: string, text: string): Promise<number> {
+async function writeFlushed(fs: SaveFs, file: string, text: string | Uint8Array): Promise<number> {
   const handle = await fs.open(file, 'w', 0o644);
   try {
-    const data = Buffer.from(text, 'utf8');
+    const data = typeof text === 'string' ? Buffer.from(text, 'utf8') : text;
     await handle.writeFile(data);
     // Flush before rename: otherwise a power cut can leave the renamed file empty.
     await handle.sync();
