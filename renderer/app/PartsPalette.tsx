@@ -2,7 +2,8 @@
  * Standard parts: a palette of part types (core/parts) and a catalogue search (core/catalogue),
  * and the parameter panel of a selected standard part: its dimensions by trade symbol, changed
  * live, until the user converts it to an outline. Dimensions are in the document unit; the
- * catalogue and the part defaults are in inches and are converted through core/units.
+ * catalogue and the part defaults are in inches and are converted through core/units
+ * (catalogueParamsInUnit, shared with the assemblies of ./AssemblyPicker.tsx, shown below).
  */
 import { useMemo, useState, type ReactElement } from 'react';
 import type { Part, PolygonPart, SectionDocument, ShapePart } from '../../core/document/types.ts';
@@ -10,26 +11,14 @@ import { searchCatalogue, type CatalogueEntry, type Family } from '../../core/ca
 import { defaultParams, getPartType, partTypes } from '../../core/parts/index.ts';
 import type { ParamSpec } from '../../core/parts/index.ts';
 import { localRegion } from '../../core/section/index.ts';
-import { convertLength, formatSig, type LengthUnit } from '../../core/units/index.ts';
+import { formatSig, type LengthUnit } from '../../core/units/index.ts';
 import type { Editor, EditorState } from '../editor/editor.ts';
 import { uniquePartId } from '../editor/transforms.ts';
+import { AssemblyPicker } from './AssemblyPicker.tsx';
+import { catalogueParamsInUnit as paramsInUnit } from './assembly-model.ts';
 import { parseNumber } from './numbers.ts';
 
 const FAMILIES: readonly Family[] = ['W', 'S', 'HP', 'C', 'MC', 'L', '2L', 'WT', 'HSS', 'Pipe', 'lumber'];
-
-const isLength = (spec: ParamSpec | undefined): boolean => spec === undefined || spec.quantity === undefined || spec.quantity === 'length';
-
-/** Parameters in inches (defaults, catalogue) → the document unit, lengths only. */
-function paramsInUnit(shape: string, params: Readonly<Record<string, number>>, unit: LengthUnit): Record<string, number> {
-  const type = getPartType(shape);
-  const out: Record<string, number> = {};
-  for (const [k, v] of Object.entries(params)) {
-    const spec = type?.params.find((p) => p.key === k);
-    // Rounded to 12 figures so 0.44 in shows as 11.176 mm, not 11.176000000000002.
-    out[k] = isLength(spec) ? Number(convertLength(v, 'in', unit).toPrecision(12)) : v;
-  }
-  return out;
-}
 
 function shapePart(doc: SectionDocument, id: string, shape: string, params: Record<string, number>, name: string, designation?: string): ShapePart {
   return {
@@ -77,6 +66,7 @@ export function PartsPalette({ editor, state }: { editor: Editor; state: EditorS
   };
 
   return (
+    <>
     <details className="palette">
       <summary>Standard parts and catalogue</summary>
       <div className="grid4">
@@ -125,6 +115,8 @@ export function PartsPalette({ editor, state }: { editor: Editor; state: EditorS
       )}
       <p className="muted small">Catalogue dimensions as published (AISC Shapes Database v15.0; NDS Supplement dressed lumber); properties are always computed from the geometry.</p>
     </details>
+    <AssemblyPicker editor={editor} state={state} />
+    </>
   );
 }
 
