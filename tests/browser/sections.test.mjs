@@ -18,7 +18,7 @@ async function areaBecomes(page, want) {
 
 export async function theExampleHoldsThreeAlternativesAndEachTabShowsItsOwnArea({ page, baseUrl, artifactsDir }) {
   await openApp(page, baseUrl);
-  same('tabs of the example', await tabNames(page), ['Webs 800, flanges 20/25', 'Thicker flanges 30/35', 'Deeper webs 900']);
+  same('tabs of the example', await tabNames(page), ['Base girder', 'Thicker flanges 30/35', 'Deeper webs 900']);
   // Flanges 700 × 20 and 520 × 25, two webs 12 × 800, a stiffener 12 × 120.
   near('A of the first alternative', await resultValue(page, 'area'), 700 * 20 + 2 * 12 * 800 + 520 * 25 + 12 * 120);
   await page.getByTestId('section-tab-1').click();
@@ -74,11 +74,11 @@ export async function deletingAnAlternativeAsksFirstAndUndoBringsItBack({ page, 
   same('tabs after answering keep', (await tabNames(page)).length, 3);
   await page.getByTestId('section-delete').click();
   await page.getByTestId('section-delete-yes').click();
-  same('tabs after deleting', await tabNames(page), ['Webs 800, flanges 20/25', 'Thicker flanges 30/35']);
+  same('tabs after deleting', await tabNames(page), ['Base girder', 'Thicker flanges 30/35']);
   same('active after deleting the last tab', await activeTab(page), 'Thicker flanges 30/35');
   check((await page.title()).includes('•'), 'deleting an alternative should mark the file unsaved');
   await page.getByTestId('undo').click();
-  same('tabs after undo', await tabNames(page), ['Webs 800, flanges 20/25', 'Thicker flanges 30/35', 'Deeper webs 900']);
+  same('tabs after undo', await tabNames(page), ['Base girder', 'Thicker flanges 30/35', 'Deeper webs 900']);
   same('active after undo', await activeTab(page), 'Deeper webs 900');
   await areaBecomes(page, 700 * 20 + 2 * 12 * 900 + 520 * 25 + 12 * 120);
   // Down to one section, Delete is refused.
