@@ -29,7 +29,8 @@ export function comparisonSvg(docs: readonly SectionDocument[], unit: LengthUnit
   // Arcs may bulge past the vertices: leave 10 % room around the largest vertex box.
   const span = Math.max(...items.map((i) => Math.max(i.xMax - i.xMin, i.yMax - i.yMin))) * 1.1;
   const scale = (CELL - 20) / span;
-  const width = items.length * CELL + (items.length + 1) * GAP;
+  // At least wide enough for the scale note and the caution on one line each.
+  const width = Math.max(items.length * CELL + (items.length + 1) * GAP, 640);
   const height = TOP + CELL + 90;
   const shapes = items.map((it, k) => {
     const cx = GAP + k * (CELL + GAP) + CELL / 2;

@@ -10,6 +10,7 @@
  */
 import { useEffect, useMemo, useState, type ReactElement } from 'react';
 import { comparisonSvg } from '../../core/compare/index.ts';
+import { allSectionViews } from '../../core/document/index.ts';
 import type { DisplaySet, LengthUnit } from '../../core/units/index.ts';
 import { getHost } from '../host/index.ts';
 import { comparisonFiles, comparisonReportInput, compareModel, DEFAULT_INPUTS, nextSort, shownNumber, shownRatio, type CompareEntry, type CompareInputs } from './compare-model.ts';
@@ -55,7 +56,10 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
       if (!f) return;
       const r = documentFromText(f.text, f.name, unit);
       if (!r.ok) return setStatus({ kind: 'error', title: `${f.name} was not added.`, lines: r.errors });
-      setAdded((a) => [...a, { name: r.doc.name.trim() || fileStem(f.name), doc: r.doc }]);
+      // Every section of the added file; names carry the file's name when it holds several.
+      const views = allSectionViews(r.file);
+      const named = views.map((v) => ({ name: views.length === 1 ? v.name.trim() || fileStem(f.name) : `${r.file.name.trim() || fileStem(f.name)}: ${v.name}`, doc: v.doc }));
+      setAdded((a) => [...a, ...named]);
       setStatus({ kind: 'info', title: `Added ${f.name}.`, lines: r.note ? [r.note] : [] });
     } catch (err) {
       setStatus({ kind: 'error', title: 'No file was added.', lines: [err instanceof Error ? err.message : String(err)] });

@@ -125,15 +125,20 @@ function verdictsFor(c: Comparison, columns: readonly ColumnInfo[], minIx: numbe
   const col = (k: CompareColumn): ColumnInfo => columns.find((x) => x.key === k)!;
   const ix = col('Ix'), d = col('deflection');
   const f = (v: number): string => formatSig(v, 4);
+  // A typed target reads as typed: 100, not 100.0.
+  const t = (v: number): string => {
+    const text = formatSig(v, 4);
+    return text.includes('.') && !text.includes('e') ? text.replace(/\.?0+$/, '') : text;
+  };
   return c.alternatives.map((a) => {
     const reasons: string[] = [];
-    if (minIx !== null && !((a.values.Ix ?? 0) >= minIx)) reasons.push(`Ix ${f(ix.toShown(a.values.Ix ?? 0))} ${ix.unit} is below the ${f(ix.toShown(minIx))} ${ix.unit} asked for`);
+    if (minIx !== null && !((a.values.Ix ?? 0) >= minIx)) reasons.push(`Ix ${f(ix.toShown(a.values.Ix ?? 0))} ${ix.unit} is below the ${t(ix.toShown(minIx))} ${ix.unit} asked for`);
     if (ratio !== null) {
       if (c.beam === null) reasons.push('no deflection: type the shared span and load');
       else if (a.values.deflection === null) reasons.push(`no deflection: ${a.notes.join('; ') || 'no materials'}`);
       else {
         const allowed = convertLength(c.beam.span, c.unit, 'm') / ratio;
-        if (a.values.deflection > allowed) reasons.push(`deflection ${f(d.toShown(a.values.deflection))} ${d.unit} exceeds span/${f(ratio)} = ${f(d.toShown(allowed))} ${d.unit}`);
+        if (a.values.deflection > allowed) reasons.push(`deflection ${f(d.toShown(a.values.deflection))} ${d.unit} exceeds span/${t(ratio)} = ${f(d.toShown(allowed))} ${d.unit}`);
       }
     }
     return { name: a.name, passes: reasons.length === 0, reasons };
