@@ -440,7 +440,7 @@ export function App(): ReactElement {
             ))}
           </div>
           <PartsPanel editor={editor} state={state} />
-          <PartsPalette editor={editor} state={state} />
+          <PartsPalette editor={editor} state={state} onPlaced={fit} />
           <EntryPanel editor={editor} state={state} />
         </aside>
         <main className="drawing">

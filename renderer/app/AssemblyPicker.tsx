@@ -91,7 +91,8 @@ function Field({ field, text, error, unit, onText }: { field: AssemblyField; tex
   );
 }
 
-export function AssemblyPicker({ editor, state }: { editor: Editor; state: EditorState }): ReactElement {
+/** `onPlaced` runs after the pieces are placed (the app fits the view to the section). */
+export function AssemblyPicker({ editor, state, onPlaced }: { editor: Editor; state: EditorState; onPlaced?: () => void }): ReactElement {
   const doc = state.doc;
   const unit = doc.unit;
   const [kind, setKind] = useState<AssemblyId>('plate-girder');
@@ -128,6 +129,7 @@ export function AssemblyPicker({ editor, state }: { editor: Editor; state: Edito
     const ids = placeAssemblyStep(editor, `Place ${spec.label.toLowerCase()}`, built.pieces, materials);
     setAttempted(false);
     setPlacedNote(`Placed ${ids.length} parts, selected together (one undo step).`);
+    onPlaced?.();
   };
 
   return (

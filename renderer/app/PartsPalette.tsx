@@ -49,7 +49,7 @@ export function polygonsOfShape(part: ShapePart, unit: LengthUnit, doc: SectionD
   });
 }
 
-export function PartsPalette({ editor, state }: { editor: Editor; state: EditorState }): ReactElement {
+export function PartsPalette({ editor, state, onPlaced }: { editor: Editor; state: EditorState; onPlaced?: () => void }): ReactElement {
   const unit = state.doc.unit;
   const [typeId, setTypeId] = useState('i-shape');
   const [text, setText] = useState('');
@@ -115,7 +115,7 @@ export function PartsPalette({ editor, state }: { editor: Editor; state: EditorS
       )}
       <p className="muted small">Catalogue dimensions as published (AISC Shapes Database v15.0; NDS Supplement dressed lumber); properties are always computed from the geometry.</p>
     </details>
-    <AssemblyPicker editor={editor} state={state} />
+    <AssemblyPicker editor={editor} state={state} {...(onPlaced ? { onPlaced } : {})} />
     </>
   );
 }
