@@ -96,5 +96,30 @@ export async function aFlitchBeamInADocumentWithMaterialsGetsLumberAndSteelAndSh
   const m = 1e-3;
   const ei = 1.6e6 * PA_PER_PSI * 2 * (b * m * (d * m) ** 3) / 12 + 29e6 * PA_PER_PSI * (12 * m * (d * m) ** 3) / 12;
   near('EIx = E_wood·I_plies + E_steel·I_plate (N·m²)', await resultValue(page, 'EIx'), ei, 1e-9);
+  await page.getByTestId('result-EIx').scrollIntoViewIfNeeded();
   await page.screenshot({ path: path.join(artifactsDir, 'flitch-placed.png') });
+}
+
+export async function aCoverPlatedW14X90WithFlangeHolesChangesTheAreaByThePlateLessTheHoleStrips({ page, baseUrl, artifactsDir }) {
+  await openApp(page, baseUrl);
+  await newSection(page);
+  await page.getByTestId('document-unit').selectOption('in');
+  await openAssemblies(page, 'cover-plated-i');
+  // The W14X90 on its own first (plates and holes cleared).
+  await fill(page, { shape: 'W14X90', topB: '', topT: '', bottomB: '', bottomT: '', holeD: '' });
+  await page.getByTestId('assembly-place').click();
+  await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length === 1);
+  const alone = await resultValue(page, 'area');
+  await page.getByTestId('undo').click();
+  await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length === 0);
+  // A 16 × 3/4 in top plate; two 15/16 in holes per flange at the published W14X90 gauge WGi = 5 1/2 in
+  // (AISC v15.0), through the flange (tf = 0.71 in) and, on top, the plate as well.
+  await fill(page, { topB: 16, topT: '3/4', holeD: '15/16', holeColumns: 2, holeGauge: '' });
+  await page.getByTestId('assembly-place').click();
+  await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length === 6);
+  const dh = 15 / 16;
+  const change = 16 * 0.75 - 2 * dh * (0.71 + 0.75) - 2 * dh * 0.71;
+  const area = await resultValue(page, 'area');
+  near('ΔA = b·t − Σ hole strips (exact arithmetic)', area - alone, change, 1e-9);
+  await page.screenshot({ path: path.join(artifactsDir, 'cover-plated-placed.png') });
 }
