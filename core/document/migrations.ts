@@ -80,6 +80,7 @@ function upFrom1(doc: Version1): unknown {
     unit: doc.unit,
     materials: doc.materials,
     defaultMaterial: doc.defaultMaterial,
+    ...(doc.referenceModulus !== undefined ? { referenceModulus: doc.referenceModulus } : {}),
     sections: [{ id: FIRST_SECTION_ID, name: doc.name.trim() === '' ? 'Section 1' : doc.name, parts: doc.parts }],
   };
 }

@@ -107,6 +107,8 @@ export const version1Schema = v.strictObject({
   parts: v.array(part, 'an array of parts'),
   materials: v.array(material, 'an array of materials'),
   defaultMaterial: v.nullable(text('a material id (string) or null')),
+  // Written by development builds between the materials editor and version 2; carried over as it is.
+  referenceModulus: v.optional(referenceModulus),
 }, 'a Sectionsmith document object');
 
 const section = v.strictObject({

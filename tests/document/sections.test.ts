@@ -71,6 +71,13 @@ describe('version 1 → 2 migration', () => {
     expect(r.document).toEqual(v1);
   });
 
+  it('a reference modulus in a version 1 file (development builds wrote one) moves to the top of version 2 unchanged', () => {
+    const r = documentFromJson({ format: 'sectionsmith-section', version: 1, name: 'flitch', unit: 'in', parts: [], materials: [{ id: 'a36', name: 'A36' }], defaultMaterial: null, referenceModulus: { material: 'a36' } });
+    expect(r.ok && r.file.referenceModulus).toEqual({ material: 'a36' });
+    const bad = documentFromJson({ format: 'sectionsmith-section', version: 1, name: 'flitch', unit: 'in', parts: [], materials: [], defaultMaterial: null, referenceModulus: { material: 'a36' } });
+    expect(bad.ok ? [] : bad.errors.map((e) => e.message)).toEqual(['referenceModulus.material: expected the id of an entry in materials, got "a36"']);
+  });
+
   it('a version 1 file with a blank name gets a section called "Section 1" (section names may not be blank)', () => {
     const r = documentFromJson({ format: 'sectionsmith-section', version: 1, name: ' ', unit: 'mm', parts: [], materials: [], defaultMaterial: null });
     expect(r.ok && [r.file.name, r.file.sections[0]?.name]).toEqual([' ', 'Section 1']);
