@@ -85,3 +85,23 @@ export async function deletingAnAlternativeAsksFirstAndUndoBringsItBack({ page, 
   await newSection(page);
   check(await page.getByTestId('section-delete').isDisabled(), 'Delete should be disabled when the document has one section');
 }
+
+export async function unsavedAlternativesComeBackWholeFromRecovery({ page, baseUrl, context }) {
+  await openApp(page, baseUrl);
+  await page.getByTestId('section-tab-1').click();
+  await page.getByTestId('section-add').click();
+  same('tabs after adding', await tabNames(page), ['Base girder', 'Thicker flanges 30/35', 'Alternative 4', 'Deeper webs 900']);
+  await typePlate(page, { b: 100, h: 200 });
+  await areaBecomes(page, 100 * 200);
+  // The recovery text (written shortly after the change) holds every section.
+  await page.waitForFunction(() => (localStorage.getItem('sectionsmith.recovery') ?? '').includes('Alternative 4'), null, { timeout: 10_000 });
+  const next = await context.newPage();
+  await next.goto(baseUrl);
+  await next.getByTestId('recovery-offer').waitFor({ timeout: 15_000 });
+  await next.getByTestId('recovery-restore').click();
+  await next.waitForFunction(() => document.querySelectorAll('[data-testid^="section-tab-"]').length === 4);
+  same('tabs after restoring', await tabNames(next), ['Base girder', 'Thicker flanges 30/35', 'Alternative 4', 'Deeper webs 900']);
+  check((await next.title()).includes('•'), 'restored work is unsaved');
+  await next.getByTestId('section-tab-2').click();
+  await areaBecomes(next, 100 * 200);
+}
