@@ -5,6 +5,7 @@
 // 6894.757293168 Pa (exact from the definitions of the pound-force and the inch).
 import { check, downloadText, menuItem, openApp, withoutFilePickers } from './harness.mjs';
 import { newSection, rel, typePlate } from './editor-support.mjs';
+import { printedPages } from './pdf-pages.mjs';
 
 const near = (what, got, want, tol) => check(rel(got, want) <= tol, `${what}: expected ${want} (±${tol} relative), got ${got}`);
 
@@ -101,4 +102,21 @@ export async function comparisonExportsCsvAndSvgWithTheCautionAndPrintsAReport({
   check(text.includes('Deep plate 50 x 400'), 'the comparison report lists the alternatives');
   await page.getByTestId('report-close').click();
   await page.getByTestId('compare-view').waitFor();
+}
+
+export async function comparisonReportPrintsWithBothTablesWholeAndTheCaution({ page, baseUrl, artifactsDir, context }) {
+  await twoPlates(page, baseUrl);
+  await page.getByTestId('compare-span').fill('6000');
+  await page.getByTestId('compare-load').fill('2');
+  await page.getByTestId('compare-ratio').fill('360');
+  await page.getByTestId('compare-report').click();
+  await page.waitForFunction(() => document.querySelector('[data-testid="report-frame"]')?.contentDocument?.querySelector('h1') != null);
+  const html = await page.evaluate(() => `<!DOCTYPE html>\n${document.querySelector('[data-testid="report-frame"]').contentDocument.documentElement.outerHTML}`);
+  const { pages } = await printedPages(context, html, artifactsDir, 'comparison');
+  const flat = (t) => t.normalize('NFKC').replace(/\s+/g, '');
+  check(pages.length <= 3, `comparison report: expected at most 3 pages, got ${pages.length}`);
+  check(flat(pages.at(-1).text).includes(flat('verify with a licensed engineer and the local building code, which govern.')), 'caution on the last page');
+  for (const title of ['Properties (ratio to', 'Efficiency, stiffness, weight and deflection', 'Targets']) {
+    check(pages.some((p) => flat(p.text).includes(flat(title))), `comparison report has "${title}"`);
+  }
 }

@@ -2,6 +2,9 @@
 // plate: A = b·h, Ix = b·h³/12, Sx = b·h²/6 (Gere & Timoshenko, Mechanics of Materials, §12.3,
 // §5.4); Zx = b·h²/4 (common practice). Paper sizes: A4 is 210 × 297 mm (ISO 216), US Letter
 // 8.5 × 11 in; 1 pt = 1/72 in and 1 in = 25.4 mm exactly.
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { ROOT } from '../../electron/build.mjs';
 import { check, menuItem, openApp } from './harness.mjs';
 import { newSection, typePlate } from './editor-support.mjs';
 import { printedPages, reportFrameHtml } from './pdf-pages.mjs';
@@ -88,7 +91,42 @@ export async function letterPaperGivesUsLetterPagesAndPrintReachesTheReportFrame
   });
   await page.getByTestId('report-print').click();
   const printed = await page.evaluate(() => window.__printedTitle);
-  // The example file's name, then its first section's (assets/examples/footbridge-box-girder.section.json).
-  check(printed === 'Footbridge box girder (24 m span) — Webs 800, flanges 20/25', `print() ran on the report frame: expected the example's title, got ${JSON.stringify(printed)}`);
+  // The example file's name, then its first section's, as the example file holds them.
+  const example = JSON.parse(readFileSync(path.join(ROOT, 'assets', 'examples', 'footbridge-box-girder.section.json'), 'utf8'));
+  const title = `${example.name} — ${example.sections[0].name}`;
+  check(printed === title, `print() ran on the report frame: expected ${JSON.stringify(title)}, got ${JSON.stringify(printed)}`);
   check((await page.getByTestId('report-save-pdf').count()) === 0, 'the browser build offers no PDF button (its host has no printToPdf)');
+}
+
+// A steel plate opened from a file (E = 29,000 ksi, ν = 0.3, 7850 kg/m³: common practice for
+// structural steel), 100 × 200 mm, 6 m simply supported under 2 kN/m: δ = 5·w·L⁴/(384·E·I)
+// (Roark, Table 8.1 case 2e), M = w·L²/8 = 9 kN·m (statics); 1 psi = 6894.757293168 Pa exactly.
+const STEEL_PLATE = JSON.stringify({
+  format: 'sectionsmith-section', version: 1, name: 'Mezzanine edge plate', unit: 'mm', defaultMaterial: 'a992',
+  materials: [{ id: 'a992', name: 'ASTM A992 steel', kind: 'steel', stressUnit: 'ksi', E: 29000, nu: 0.3, density: 7850, fy: 50, strengthBasis: 'yield' }],
+  parts: [{ id: 'p', name: 'plate', type: 'rectangle', operation: 'add', material: null, visible: true, placement: { x: 0, y: 0, rotationDeg: 0, mirror: false }, width: 100, height: 200 }],
+});
+
+export async function reportCarriesTheMaterialAndTheMemberPanelsCaseWithClosedFormDeflectionAndMoment({ page, baseUrl, artifactsDir, context }) {
+  await openApp(page, baseUrl);
+  await page.getByTestId('open-document').setInputFiles({ name: 'edge-plate.section.json', mimeType: 'application/json', buffer: Buffer.from(STEEL_PLATE) });
+  await page.waitForFunction(() => Math.abs(Number(document.querySelector('[data-testid="result-area"]')?.getAttribute('data-value')) - 20000) < 1e-6);
+  await page.getByTestId('member-panel').locator('summary').click();
+  await page.getByTestId('member-span').fill('6000');
+  await page.getByTestId('member-point').fill('0');
+  await page.getByTestId('member-uniform').fill('2');
+  await page.getByTestId('member-limit').fill('360');
+  await page.getByTestId('result-deflectionMax').waitFor();
+  await menuItem(page, 'File', 'print-report');
+  const html = await reportFrameHtml(page);
+  const E = 29000e3 * 6894.757293168;
+  const I = (100 * 200 ** 3) / 12 / 1e12;
+  const delta = ((5 * 2000 * 6 ** 4) / (384 * E * I)) * 1000; // mm
+  const got = Number(/Largest deflection ([\d.]+) mm/.exec(html)?.[1]);
+  check(Math.abs(got - delta) / delta < 5e-4, `report deflection: expected ${delta.toPrecision(4)} mm (4 figures), got ${got}`);
+  check(html.includes('Largest bending moment 9.000 kN·m'), 'report moment wL²/8 = 9 kN·m');
+  check(html.includes('Within the common-practice limit L/360'), 'report names the L/360 verdict');
+  check(/plate: ASTM A992 steel; E = 199900 MPa/.test(html), 'report lists the material with E = 29000 ksi = 199900 MPa (4 figures)');
+  const { pages } = await printedPages(context, html, artifactsDir, 'steel-plate');
+  check(pages.length <= 3, `steel plate report: expected at most 3 pages, got ${pages.length}`);
 }
