@@ -505,7 +505,7 @@ export function App(): ReactElement {
             <p className="muted small">Changing the document unit converts every length exactly, so the section stays the same physical size. The display unit changes only how results read.</p>
           </div>
           <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={sig} torsion={torsion} current={state.doc} />
-          <MaterialsPanel editor={editor} doc={state.doc} valid={!!results.properties} />
+          <MaterialsPanel editor={editor} doc={state.doc} valid={!!results.properties} display={display} />
           <StressPanel
             doc={state.doc}
             texts={forces}

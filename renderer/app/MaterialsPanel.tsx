@@ -24,7 +24,7 @@ import {
   type StressUnit,
 } from '../../core/materials/index.ts';
 import { CAUTION } from '../../core/member/index.ts';
-import { formatSig } from '../../core/units/index.ts';
+import { formatSig, toDisplay, type DisplaySet } from '../../core/units/index.ts';
 import type { Editor } from '../editor/editor.ts';
 import { MaterialEditor } from './MaterialEditor.tsx';
 import { imperialUnit, withDefaultMaterial, withMaterialStored } from './material-form.ts';
@@ -194,7 +194,7 @@ function PlasticAtAngle({ pieces, unit, moment, toMoment }: { pieces: readonly M
   );
 }
 
-export function MaterialsPanel({ editor, doc: current, valid }: { editor: Editor; doc: SectionDocument; valid: boolean }): ReactElement {
+export function MaterialsPanel({ editor, doc: current, valid, display }: { editor: Editor; doc: SectionDocument; valid: boolean; display?: DisplaySet }): ReactElement {
   // A step behind a drag, so splitting by material never slows the drawing.
   const doc = useDeferredValue(current);
   const [showWidths, setShowWidths] = useState(false);
@@ -206,6 +206,9 @@ export function MaterialsPanel({ editor, doc: current, valid }: { editor: Editor
     ? { force: 'kip', EI: 'kip·in²', moment: 'kip·ft', f: (n: number) => n / N_PER_KIP, ei: (v: number) => v / M_PER_IN ** 2 / N_PER_KIP, m: (v: number) => v / M_PER_FT / N_PER_KIP, E: (pa: number) => pascalsTo(pa, 'ksi'), Eunit: 'ksi' }
     : { force: 'kN', EI: 'kN·m²', moment: 'kN·m', f: (n: number) => n / 1000, ei: (v: number) => v / 1000, m: (v: number) => v / 1000, E: (pa: number) => pascalsTo(pa, 'MPa'), Eunit: 'MPa' };
   const u = doc.unit;
+  // Lengths, areas and second moments read in the display unit the results panel uses (data-value keeps the document unit).
+  const inDisplay = (v: number, q: 'length' | 'area' | 'inertia'): number => (display ? toDisplay(v, u, display[q]) : v);
+  const unitOf = (q: 'length' | 'area' | 'inertia'): string => (display ? display[q].label : q === 'length' ? u : q === 'area' ? `${u}²` : `${u}⁴`);
   const refNote = c === null ? '' : c.eRefFrom === 'first piece' ? 'of the first part' : doc.referenceModulus && 'material' in doc.referenceModulus ? 'chosen material' : 'typed';
   return (
     <section className="materials" aria-label="Materials" data-testid="materials-panel">
@@ -245,11 +248,11 @@ export function MaterialsPanel({ editor, doc: current, valid }: { editor: Editor
               <Row k="EI2" symbol="EI2" value={composite.c.EI2} shown={k.ei(composite.c.EI2)} unit={k.EI} label="minor principal bending stiffness" />
               <Row k="thetaEIDeg" symbol="θE" value={composite.c.thetaDeg} shown={composite.c.thetaDeg} unit="°" label="angle of the EI1 axis, CCW from +x" />
               <Row k="massPerLength" symbol="m" value={composite.c.massPerLength} shown={inch ? composite.c.weightPerLengthLbPerFt : composite.c.massPerLength} unit={inch ? 'lb/ft' : 'kg/m'} label="mass (weight) per length" />
-              <Row k="cxE" symbol="x̄E" value={composite.c.cx} shown={composite.c.cx} unit={u} label="E-weighted centroid x" />
-              <Row k="cyE" symbol="ȳE" value={composite.c.cy} shown={composite.c.cy} unit={u} label="E-weighted centroid y" />
-              <Row k="transformedArea" symbol="A_tr" value={composite.c.transformedArea} shown={composite.c.transformedArea} unit={`${u}²`} label="transformed area EA / E_ref" />
-              <Row k="transformedIx" symbol="Ix,tr" value={composite.c.transformedIx} shown={composite.c.transformedIx} unit={`${u}⁴`} label="transformed Ix = EIx / E_ref" />
-              <Row k="transformedIy" symbol="Iy,tr" value={composite.c.transformedIy} shown={composite.c.transformedIy} unit={`${u}⁴`} label="transformed Iy = EIy / E_ref" />
+              <Row k="cxE" symbol="x̄E" value={composite.c.cx} shown={inDisplay(composite.c.cx, 'length')} unit={unitOf('length')} label="E-weighted centroid x" />
+              <Row k="cyE" symbol="ȳE" value={composite.c.cy} shown={inDisplay(composite.c.cy, 'length')} unit={unitOf('length')} label="E-weighted centroid y" />
+              <Row k="transformedArea" symbol="A_tr" value={composite.c.transformedArea} shown={inDisplay(composite.c.transformedArea, 'area')} unit={unitOf('area')} label="transformed area EA / E_ref" />
+              <Row k="transformedIx" symbol="Ix,tr" value={composite.c.transformedIx} shown={inDisplay(composite.c.transformedIx, 'inertia')} unit={unitOf('inertia')} label="transformed Ix = EIx / E_ref" />
+              <Row k="transformedIy" symbol="Iy,tr" value={composite.c.transformedIy} shown={inDisplay(composite.c.transformedIy, 'inertia')} unit={unitOf('inertia')} label="transformed Iy = EIy / E_ref" />
               {composite.mp && Number.isFinite(composite.mp.x) && (
                 <>
                   <Row k="MpxMaterials" symbol="Mp,x" value={composite.mp.x} shown={k.m(composite.mp.x)} unit={k.moment} label="plastic moment about x, yield forces balanced per material" />
