@@ -60,7 +60,8 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
       const views = allSectionViews(r.file);
       const named = views.map((v) => ({ name: views.length === 1 ? v.name.trim() || fileStem(f.name) : `${r.file.name.trim() || fileStem(f.name)}: ${v.name}`, doc: v.doc }));
       setAdded((a) => [...a, ...named]);
-      setStatus({ kind: 'info', title: `Added ${f.name}.`, lines: r.note ? [r.note] : [] });
+      // The note of an older file version speaks of saving, which adding to a comparison never does.
+      setStatus({ kind: 'info', title: `Added ${f.name} (${named.length} section${named.length === 1 ? '' : 's'}).`, lines: r.note?.startsWith('GeoJSON') ? [r.note] : [] });
     } catch (err) {
       setStatus({ kind: 'error', title: 'No file was added.', lines: [err instanceof Error ? err.message : String(err)] });
     }

@@ -57,7 +57,7 @@ export async function twoPlatesShowClosedFormValuesRatiosToAClickedBaselineAndSo
   check((await page.locator('[data-testid="compare-drawing"] svg path').count()) === 2, 'both outlines are drawn');
 }
 
-export async function sharedSpanGivesTheClosedFormDeflectionAndTargetsPickTheLightestPassingWithReasons({ page, baseUrl }) {
+export async function sharedSpanGivesTheClosedFormDeflectionAndTargetsPickTheLightestPassingWithReasons({ page, baseUrl, artifactsDir }) {
   await twoPlates(page, baseUrl);
   const typed = (await order(page)).find((n) => n !== 'Deep plate 50 x 400');
   await page.getByTestId('compare-span').fill('6000');
@@ -77,6 +77,7 @@ export async function sharedSpanGivesTheClosedFormDeflectionAndTargetsPickTheLig
   const why = await page.locator(`[data-testid="compare-fails"][data-name="${typed}"]`).innerText();
   check(/Ix 66\.67 10⁶ mm⁴ is below the 100 10⁶ mm⁴/.test(why), `reason for the typed plate names its Ix (b·h³/12 = 66.67·10⁶ mm⁴): got "${why}"`);
   check(/no deflection/.test(why), `reason names the missing deflection: got "${why}"`);
+  await page.screenshot({ path: `${artifactsDir}/compare-targets.png` });
   // Tighter: Ix ≥ 300·10⁶ mm⁴ excludes both (deep plate Ix = 266.7·10⁶ mm⁴).
   await page.getByTestId('compare-min-ix').fill('300');
   await page.waitForFunction(() => /No alternative meets/.test(document.querySelector('[data-testid="compare-lightest"]')?.textContent ?? ''));
