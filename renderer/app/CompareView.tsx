@@ -18,6 +18,7 @@ import { documentFromText } from './files.ts';
 import { fileStem } from './report-input.ts';
 import { ReportView, sameDisplay, today, useStable } from './ReportView.tsx';
 import './overlays.css';
+import { CAUTION } from '../../core/member/check.ts';
 
 interface Props {
   /** The open document's sections, in order. */
@@ -104,7 +105,7 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
         </button>
       </header>
       <p className="caution overlay-caution" data-testid="compare-caution">
-        Preliminary results. Verify with a licensed engineer and the local building code, which govern.
+        {CAUTION}
       </p>
       {status && (
         <div className={status.kind === 'error' ? 'error overlay-note' : 'overlay-note'} role={status.kind === 'error' ? 'alert' : 'status'} data-testid="compare-status">

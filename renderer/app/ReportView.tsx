@@ -12,6 +12,7 @@ import { getHost } from '../host/index.ts';
 import { fileStem, PAPER_SIZES, sectionReportInput, withPaperSize, type MemberCase, type PaperSize } from './report-input.ts';
 import type { TorsionState } from './torsion-client.ts';
 import './overlays.css';
+import { CAUTION } from '../../core/member/check.ts';
 
 /**
  * The previous value while `same(previous, next)` holds: the App makes a new display set and
@@ -102,7 +103,7 @@ export function ReportView({ input, stem, notes = [], onClose }: ReportViewProps
         </button>
       </header>
       <p className="caution overlay-caution" data-testid="report-caution">
-        Preliminary results. Verify with a licensed engineer and the local building code, which govern.
+        {CAUTION}
       </p>
       {notes.map((n) => (
         <p key={n} className="muted overlay-note" data-testid="report-note">

@@ -7,6 +7,7 @@ import type { Results } from './results.ts';
 import type { TorsionState } from './torsion-client.ts';
 import type { SectionDocument } from '../../core/document/types.ts';
 import { RESULT_GROUPS, type ResultRow } from './result-rows.ts';
+import { CAUTION } from '../../core/member/check.ts';
 
 interface Props {
   readonly results: Results;
@@ -107,7 +108,7 @@ export function ResultsPanel({ results, unit, display, sig, torsion, current }: 
       </header>
       {/* First under the heading, so it is read before any number. */}
       <p className="caution" data-testid="caution">
-        Preliminary results. Verify with a licensed engineer and the local building code, which govern.
+        {CAUTION}
       </p>
       {results.diagnostics.length > 0 && (
         <div className="diagnostics" role="alert" data-testid="diagnostics">
