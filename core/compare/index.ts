@@ -55,6 +55,11 @@ function valuesOf(doc: SectionDocument, unit: LengthUnit, beam: SharedBeam | nul
   const A = L(p.area, 2), Ix = L(p.Ix, 4), Sx = L(Math.min(p.SxTop, p.SxBottom), 3), Zx = L(p.Zx, 3);
   const values: Record<CompareColumn, number | null> = { A, Ix, Iy: L(p.Iy, 4), Sx, Zx, IxPerA: Ix / A, SxPerA: Sx / A, ZxPerA: Zx / A, EIx: null, weight: null, deflection: null };
   const notes: string[] = [];
+  if (doc.defaultMaterial === null && doc.parts.every((part) => part.operation !== 'add' || part.material === null)) {
+    // One line instead of one per part when the section has no materials at all.
+    notes.push('no EI, weight or deflection: no materials assigned (choose a default material, or one for each part)');
+    return { values, notes };
+  }
   const pieces = materialPiecesFromDocument(doc);
   if (pieces.issues.length > 0 || pieces.pieces.length === 0) {
     notes.push(`no EI, weight or deflection: ${pieces.issues.join('; ') || 'no material pieces'}`);

@@ -26,6 +26,8 @@ describe('compare alternatives', () => {
     // (20·150³) / (10·300³) = 0.25 exactly.
     expect(shallow.ratios.Ix).toBeCloseTo(0.25, 12);
     expect(shallow.notes.join(' ')).toContain('no material');
+    // No materials anywhere: one note for the section, not one per part.
+    expect(shallow.notes).toEqual(['no EI, weight or deflection: no materials assigned (choose a default material, or one for each part)']);
     expect(sortAlternatives(c, 'Ix').map((a) => a.name)).toEqual(['shallow', 'deep']);
   });
 
