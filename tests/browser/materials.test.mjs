@@ -122,6 +122,10 @@ export async function aLibraryMaterialDuplicatedAndEditedKeepsItsOtherValuesAndD
 export async function eRefCanBeAMaterialOrATypedValueAndChangesNButNotEI({ page, baseUrl }) {
   await openApp(page, baseUrl);
   await flitchBeam(page);
+  // Wait for the panel (a step behind edits) to show both pieces: EIx = E_t·100·200³/12 + E_s·10·200³/12
+  // (transformed-section identity; E in Pa from psi, I in m⁴ from mm⁴), then use it as the reference.
+  const EIwant = ((1.6e6 * PA_PER_PSI * 100 + 29e6 * PA_PER_PSI * 10) * 200 ** 3) / 12 / 1e12;
+  await page.waitForFunction((want) => Math.abs(Number(document.querySelector('[data-testid="result-EIx"]')?.getAttribute('data-value')) / want - 1) < 1e-12, EIwant);
   const EI0 = await resultValue(page, 'EIx');
   // Default E_ref: the first part's (timber, 1 600 000 psi), so n_steel = 29 000 000 / 1 600 000 = 18.125 (exact).
   near('n of the steel, E_ref = timber', await pieceN(page, 1), 18.125, 1e-14);
