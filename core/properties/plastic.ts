@@ -26,7 +26,7 @@
  * Sums are taken about one local origin for all pieces (bounding-box centre, §1.3).
  */
 import type { Degrees, Region, Ring } from '../geometry/types.ts';
-import { arcFromBulge, arcPointOffset, isStraight, sweepOffsetOfAngle, type ArcGeometry } from './arc.ts';
+import { arcFromBulge, arcPointOffset, isStraight, ringProjectionRange, sweepOffsetOfAngle, type ArcGeometry } from './arc.ts';
 import { ringIntegrals, vertexBoxCentre } from './integrals.ts';
 
 export interface WeightedRegion {
@@ -562,17 +562,11 @@ function upperAreaAndWidth(rings: readonly LocalRing[], f: Frame, d: number): [n
   return [area, width];
 }
 
-/** Smallest and largest vertex projection s (straight-edged rings). */
+/** Smallest and largest vertex projection s (straight-edged rings), by the same scan the extreme fibres use. */
 function projectionRange(rings: readonly LocalRing[], f: Frame): [number, number] {
-  let lo = Infinity, hi = -Infinity;
-  for (const { xy } of rings) {
-    for (let i = 0; i < xy.length; i += 2) {
-      const v = f.nx * xy[i]! + f.ny * xy[i + 1]!;
-      if (v < lo) lo = v;
-      if (v > hi) hi = v;
-    }
-  }
-  return [lo, hi];
+  const out: [number, number] = [Infinity, -Infinity];
+  for (const { xy } of rings) ringProjectionRange(xy, undefined, 0, 0, f.nx, f.ny, out);
+  return out;
 }
 
 /** The largest vertex projection below x (or at x, when `orAt`); −Infinity when none. */
