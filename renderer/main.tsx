@@ -1,7 +1,7 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { App } from './app/App.tsx';
-import './app/styles.css';
+import { App } from './app/shell/App.tsx';
+import './app/shell/styles.css';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');

@@ -4,7 +4,7 @@
  * (quoting, formula defusing); numbers at full precision.
  */
 import { csvNumberCell, csvTextCell } from '../export/csv.ts';
-import { COMPARE_COLUMNS, type CompareColumn, type Comparison } from './index.ts';
+import { COMPARE_COLUMNS, type CompareColumn, type Comparison } from './compare.ts';
 
 export function columnUnit(column: CompareColumn, unit: string): string {
   switch (column) {

@@ -8,7 +8,7 @@ import { escapeXml, ringPathData } from '../export/svg.ts';
 import { regionFromDocument } from '../section/index.ts';
 import { convertLength, formatSig } from '../units/index.ts';
 import type { LengthUnit } from '../units/types.ts';
-import { CAUTION, CompareError } from './index.ts';
+import { CAUTION, CompareError } from './compare.ts';
 
 const CELL = 260;
 const GAP = 30;

@@ -13,7 +13,7 @@
  * composed) or whether a `shape` names a registered part type (core/section reports that).
  */
 import * as v from 'valibot';
-import { STRESS_UNITS } from '../materials/quantities.ts';
+import { STRESS_UNITS } from '../units/types.ts';
 import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type MaterialRef, type Part, type SectionFile } from './types.ts';
 
 export interface DocumentIssue {

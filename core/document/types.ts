@@ -14,8 +14,7 @@
  *                    tools) takes this shape; core/document/sections.ts makes it from a file
  *                    (sectionView) and writes an edited one back (withSectionView).
  */
-import type { StressUnit } from '../materials/quantities.ts';
-import type { LengthUnit } from '../units/types.ts';
+import type { LengthUnit, StressUnit } from '../units/types.ts';
 
 export const DOCUMENT_FORMAT = 'sectionsmith-section';
 /** The version files are written in (SectionFile). */

@@ -9,12 +9,10 @@
  * Standard gravity g_n = 9.80665 m/s² (exact, by definition) turns mass per length into weight.
  */
 
-export type ForceUnit = 'N' | 'kN' | 'lbf' | 'kip';
-export type StressUnit = 'Pa' | 'kPa' | 'MPa' | 'GPa' | 'psi' | 'ksi';
-export type DensityUnit = 'kg/m3' | 'lb/ft3';
+import { FORCE_UNITS, STRESS_UNITS, type DensityUnit, type ForceUnit, type StressUnit } from '../units/types.ts';
 
-export const FORCE_UNITS: readonly ForceUnit[] = ['N', 'kN', 'lbf', 'kip'];
-export const STRESS_UNITS: readonly StressUnit[] = ['Pa', 'kPa', 'MPa', 'GPa', 'psi', 'ksi'];
+// The unit names live in core/units/types.ts, a leaf the document types can import without a cycle.
+export { FORCE_UNITS, STRESS_UNITS, type DensityUnit, type ForceUnit, type StressUnit };
 
 export const STANDARD_GRAVITY = 9.80665;
 const NEWTONS_PER_LBF = 4.4482216152605;

@@ -21,11 +21,9 @@ import {
   alignParts, deleteParts, duplicateParts, mirrorParts, reorderPart, rotateParts, translateParts, uniquePartId, type AlignEdge,
 } from './transforms.ts';
 import type { PointerInput, SnapOptions, ToolContext, ToolId, ToolState } from './tools/tool.ts';
-import { selectIdle } from './tools/select-idle.ts';
-import { polygonPlacing, polygonPartFrom } from './tools/polygon-placing.ts';
-import { shapeIdle } from './tools/shape-idle.ts';
+import { polygonPartFrom } from './tools/polygon-placing.ts';
 import { circlePart, rectanglePart } from './tools/shape-dragging.ts';
-import { vertexIdle } from './tools/vertex-idle.ts';
+import { enterState, TOOL_ENTRY } from './tools/table.ts';
 
 export interface OpenFile {
   readonly name: string;
@@ -60,20 +58,6 @@ export interface EditorOptions {
   readonly resolveShape?: ShapeRingResolver;
 }
 
-function initialTool(id: ToolId): ToolState {
-  switch (id) {
-    case 'select':
-      return selectIdle();
-    case 'polygon':
-      return polygonPlacing([], null, []);
-    case 'rectangle':
-    case 'circle':
-      return shapeIdle(id);
-    case 'vertex':
-      return vertexIdle(null);
-  }
-}
-
 /** A section command that could not be done, and why (nothing changed). */
 export type SectionCommandResult = { readonly ok: true; readonly id: string } | { readonly ok: false; readonly message: string };
 
@@ -100,7 +84,7 @@ export class Editor {
   private selection: readonly string[] = [];
   private history: History = emptyHistory();
   private toolId: ToolId = 'select';
-  private tool: ToolState = selectIdle();
+  private tool: ToolState;
   private revision = 0;
   private file: OpenFile | null = null;
   private snap: SnapSettings = { grid: 10, gridOn: true, objectsOn: true, radius: 1 };
@@ -118,6 +102,7 @@ export class Editor {
     this.doc = this.committed.view;
     this.sectionFile = this.committed.file;
     this.options = options;
+    this.tool = TOOL_ENTRY.select(this.context());
     this.state = this.buildState();
   }
 
@@ -236,6 +221,7 @@ export class Editor {
         this.selection = [...selection];
       },
       newPartId: (doc) => uniquePartId(doc),
+      enter: (id, ...args) => enterState(this.context(), id, ...args),
     };
   }
 
@@ -248,7 +234,7 @@ export class Editor {
   setTool(id: ToolId): void {
     if (this.state.gesture) this.tool.key?.(this.context(), 'Escape');
     this.toolId = id;
-    this.tool = initialTool(id);
+    this.tool = TOOL_ENTRY[id](this.context());
     this.emit();
   }
 
@@ -338,7 +324,7 @@ export class Editor {
     this.history = r.history;
     this.restoreSnapshot(r.step.before);
     this.selection = r.step.selectionBefore;
-    this.tool = initialTool(this.toolId);
+    this.tool = TOOL_ENTRY[this.toolId](this.context());
     this.emit();
   }
 
@@ -349,7 +335,7 @@ export class Editor {
     this.history = r.history;
     this.restoreSnapshot(r.step.after);
     this.selection = r.step.selectionAfter;
-    this.tool = initialTool(this.toolId);
+    this.tool = TOOL_ENTRY[this.toolId](this.context());
     this.emit();
   }
 
@@ -364,7 +350,7 @@ export class Editor {
     this.history = dirty ? { done: [], undone: [], savedAt: null } : emptyHistory();
     this.selection = [];
     this.file = file;
-    this.tool = initialTool(this.toolId);
+    this.tool = TOOL_ENTRY[this.toolId](this.context());
     this.emit();
   }
 
@@ -500,7 +486,7 @@ export class Editor {
     const to: Snapshot = sameView ? { file: out.file, active: out.active, view: base.view } : snapshotOf(out.file, out.active);
     const selection = out.active === base.active ? this.selection.filter((id) => to.view.parts.some((p) => p.id === id)) : [];
     this.pushSnapshots(label, base, to, selection);
-    if (out.active !== base.active) this.tool = initialTool(this.toolId);
+    if (out.active !== base.active) this.tool = TOOL_ENTRY[this.toolId](this.context());
     this.emit();
   }
 
@@ -511,7 +497,7 @@ export class Editor {
     this.settle();
     this.restoreSnapshot(snapshotOf(this.committed.file, id));
     this.selection = [];
-    this.tool = initialTool(this.toolId);
+    this.tool = TOOL_ENTRY[this.toolId](this.context());
     this.emit();
   }
 

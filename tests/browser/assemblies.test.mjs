@@ -1,4 +1,4 @@
-// Browser tests of the palette's assemblies (renderer/app/AssemblyPicker.tsx): placing a plate
+// Browser tests of the palette's assemblies (renderer/app/parts/AssemblyPicker.tsx): placing a plate
 // girder and a flitch beam, and refusing bad input. References: plate areas b·t; the doubly
 // symmetric I, Ix = [B·D³ − (B − tw)·h³]/12 (Gere & Timoshenko, Mechanics of Materials, §12.5;
 // common practice); transformed section EI = Σ E_i·I_i about a common centroid (Gere & Timoshenko,

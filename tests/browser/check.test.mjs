@@ -1,4 +1,4 @@
-// Browser tests of the table-check view (renderer/app/CheckView.tsx) through the app's own menu.
+// Browser tests of the table-check view (renderer/app/check/CheckView.tsx) through the app's own menu.
 // Reference: the published AISC Shapes Database v15.0 subset copied in tests/fixtures/aisc-v15-subset.csv
 // (AISC, Nov 2017; consistent with the Steel Construction Manual, 15th ed.). Tolerances are those of
 // tests/check/table.test.ts for the same reasons (SOURCES.md caveats: 3 significant figures, fillet

@@ -1,4 +1,4 @@
-// Browser tests of the materials editor (renderer/app/MaterialEditor.tsx, MaterialsPanel.tsx):
+// Browser tests of the materials editor (renderer/app/materials/MaterialEditor.tsx, MaterialsPanel.tsx):
 // adding, editing, duplicating and deleting a document's own materials, the reference modulus
 // E_ref, transformed widths, and saving a document whose materials came from the library.
 // References: EI = Σ E_i·I_i about the E-weighted centroid and n_i = E_i / E_ref (Gere &

@@ -1,4 +1,4 @@
-// Browser tests of the alternatives strip (renderer/app/SectionsBar.tsx): several sections in one
+// Browser tests of the alternatives strip (renderer/app/sections/SectionsBar.tsx): several sections in one
 // document, switched, added, copied, renamed, deleted and undone, saved and reopened with every
 // section. Areas are sums of rectangles b·h; the centroid is ȳ = Σ A·y / Σ A (first moments;
 // Gere & Timoshenko, Mechanics of Materials, §12.2).

@@ -1,11 +1,11 @@
 /**
- * The pure logic of the table-check view (renderer/app/check-model.ts): the key a mapping is
+ * The pure logic of the table-check view (renderer/app/check/check-model.ts): the key a mapping is
  * remembered under, reading it back, and the dropdown choices as target texts that core/check
  * reads back to the same role (a round-trip identity).
  */
 import { describe, expect, it } from 'vitest';
 import { mapColumns, roleFromTarget } from '../../core/check/index.ts';
-import { fnv1a, mappingKey, powerOf, readRemembered, rememberedText, symbolOf, targetChoices, targetText, unitChoices, unitTextOf, viewMessage } from '../../renderer/app/check-model.ts';
+import { fnv1a, mappingKey, powerOf, readRemembered, rememberedText, symbolOf, targetChoices, targetText, unitChoices, unitTextOf, viewMessage } from '../../renderer/app/check/check-model.ts';
 
 describe('the remembered-mapping key', () => {
   it('FNV-1a 32-bit gives the published test vectors: "" → 811c9dc5, "a" → e40c292c, "foobar" → bf9cf968 (Fowler–Noll–Vo reference test suite, from memory)', () => {

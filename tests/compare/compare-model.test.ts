@@ -1,5 +1,5 @@
 /**
- * The compare view's model (renderer/app/compare-model.ts) on plates, by exact arithmetic
+ * The compare view's model (renderer/app/compare/compare-model.ts) on plates, by exact arithmetic
  * (A = b·h, Ix = b·h³/12; Gere & Timoshenko, Mechanics of Materials, §12.3), exact unit factors
  * (1 in = 25.4 mm, 1 kip = 4448.2216152605 N, 1 ft = 0.3048 m, 1 lbf = 4.4482216152605 N) and the
  * midspan deflection 5·w·L⁴/(384·E·I) (Roark, Table 8.1 case 2e), E = 29,000 ksi for A992 steel
@@ -8,7 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import type { SectionDocument } from '../../core/document/index.ts';
 import { defaultDisplaySet, type LengthUnit } from '../../core/units/index.ts';
-import { compareModel, comparisonReportInput, DEFAULT_INPUTS, nextSort, uniqueNames } from '../../renderer/app/compare-model.ts';
+import { compareModel, comparisonReportInput, DEFAULT_INPUTS, nextSort, uniqueNames } from '../../renderer/app/compare/compare-model.ts';
 
 function plate(name: string, b: number, h: number, material: string | null, unit: LengthUnit = 'mm'): { name: string; doc: SectionDocument } {
   return {

@@ -1,5 +1,5 @@
 /**
- * The palette's assemblies (renderer/app/assembly-model.ts): form → pieces → document parts.
+ * The palette's assemblies (renderer/app/parts/assembly-model.ts): form → pieces → document parts.
  * References: plate areas b·t and the parallel-axis theorem, I = Σ (b·t³/12 + b·t·d²), with the
  * doubly symmetric I closed form Ix = [B·D³ − (B − tw)·h³]/12 (Gere & Timoshenko, Mechanics of
  * Materials, §12.5; common practice); first moments for the centroid; W14X90 dimensions from the
@@ -16,7 +16,7 @@ import { compositeProperties, materialPiecesFromDocument } from '../../core/mate
 import { sectionFromDocument } from '../../core/section/index.ts';
 import {
   ASSEMBLIES, assemblySpec, buildAssembly, catalogueParamsInUnit, defaultRoleMaterial, defaultTexts, placeAssembly, placeAssemblyStep, type AssemblyId,
-} from '../../renderer/app/assembly-model.ts';
+} from '../../renderer/app/parts/assembly-model.ts';
 import { editorWith, emptyDoc } from './helpers.ts';
 
 const rel = (got: number, want: number): number => Math.abs(got / want - 1);

@@ -1,5 +1,5 @@
 /**
- * The editor's stress view (renderer/app/stress.ts): typed forces with units, and the numbers it
+ * The editor's stress view (renderer/app/stress/stress.ts): typed forces with units, and the numbers it
  * shows. Closed forms: flexure formula σ = M·c/I and axial σ = N/A (Gere & Timoshenko, Mechanics of
  * Materials, §5.5 and §1.2); kern of a circle, radius d/8 (common practice; Roark, kern of a solid
  * circle). Unit factors are exact by definition (1 ft = 12 in).
@@ -8,7 +8,7 @@ import { describe, expect, it } from 'vitest';
 import type { Part, SectionDocument } from '../../core/document/types.ts';
 import { builtInMaterial, materialInSI } from '../../core/materials/index.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
-import { computeStress, stressUnits, toStressUnit, type ForceTexts } from '../../renderer/app/stress.ts';
+import { computeStress, stressUnits, toStressUnit, type ForceTexts } from '../../renderer/app/stress/stress.ts';
 import { emptyDoc } from './helpers.ts';
 
 const common = { placement: { x: 0, y: 0, rotationDeg: 0, mirror: false }, operation: 'add', material: null, visible: true } as const;

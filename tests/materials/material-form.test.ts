@@ -14,7 +14,7 @@ import {
   withMaterial,
   withPartMaterial,
   type MaterialDraft,
-} from '../../renderer/app/material-form.ts';
+} from '../../renderer/app/materials/material-form.ts';
 
 // Exact unit definitions: 1 lbf = 4.4482216152605 N, 1 in = 0.0254 m, 1 lb = 0.45359237 kg, 1 ft = 0.3048 m.
 const PA_PER_PSI = 4.4482216152605 / 0.0254 ** 2;

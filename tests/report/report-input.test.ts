@@ -1,5 +1,5 @@
 /**
- * The editor's report input (renderer/app/report-input.ts), checked by exact arithmetic on a
+ * The editor's report input (renderer/app/report/report-input.ts), checked by exact arithmetic on a
  * 100 × 200 mm plate (A = b·h, Ix = b·h³/12, Sx = b·h²/6; Gere & Timoshenko, Mechanics of
  * Materials, §12.3 and §5.4) and the midspan deflection of a simply supported beam under a
  * uniform load, 5·w·L⁴/(384·E·I) (Roark, Table 8.1 case 2e), with E = 29,000 ksi for A992 steel
@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import type { SectionDocument } from '../../core/document/index.ts';
 import { reportHtml } from '../../core/report/index.ts';
 import { defaultDisplaySet } from '../../core/units/index.ts';
-import { fileStem, materialLines, memberLines, reportTitle, sectionReportInput, withPaperSize } from '../../renderer/app/report-input.ts';
+import { fileStem, materialLines, memberLines, reportTitle, sectionReportInput, withPaperSize } from '../../renderer/app/report/report-input.ts';
 
 function plate(b: number, h: number, material: string | null, name = 'Mezzanine flitch plate'): SectionDocument {
   return {

@@ -1,7 +1,6 @@
 /** Select tool, waiting: a press on a part selects it (Shift adds) and may start a move. */
 import { translateParts, deleteParts } from '../transforms.ts';
 import type { ToolContext, ToolState, PointerInput } from './tool.ts';
-import { selectMoving } from './select-moving.ts';
 
 export function selectIdle(): ToolState {
   return {
@@ -17,7 +16,7 @@ export function selectIdle(): ToolState {
         return this;
       }
       if (!ctx.selection.includes(hit)) ctx.select([hit]);
-      return selectMoving(ctx, e.p);
+      return ctx.enter('select.moving', e.p);
     },
     key(ctx: ToolContext, key: string): ToolState {
       if ((key === 'Delete' || key === 'Backspace') && ctx.selection.length > 0) {

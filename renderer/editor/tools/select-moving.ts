@@ -8,7 +8,6 @@ import type { Vec } from '../geometry.ts';
 import { translateParts } from '../transforms.ts';
 import type { Guide } from '../snapping.ts';
 import type { ToolContext, ToolState, PointerInput } from './tool.ts';
-import { selectIdle } from './select-idle.ts';
 
 function nearestAnchor(ctx: ToolContext, p: Vec): Vec {
   let best: Vec = p;
@@ -46,12 +45,12 @@ export function selectMoving(ctx: ToolContext, start: Vec): ToolState {
     up(c: ToolContext): ToolState {
       if (moved && c.doc !== snapshot) c.commit(selection.length === 1 ? 'Move part' : 'Move parts', snapshot, c.doc);
       else c.restore(snapshot, selection);
-      return selectIdle();
+      return c.enter('select.idle');
     },
     key(c: ToolContext, key: string): ToolState {
       if (key !== 'Escape') return this;
       c.restore(snapshot, selection);
-      return selectIdle();
+      return c.enter('select.idle');
     },
   });
   return moving([], false);

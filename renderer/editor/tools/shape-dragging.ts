@@ -7,7 +7,6 @@ import type { CirclePart, RectanglePart, SectionDocument } from '../../../core/d
 import type { Vec } from '../geometry.ts';
 import type { Guide } from '../snapping.ts';
 import type { ToolContext, ToolState, PointerInput } from './tool.ts';
-import { shapeIdle } from './shape-idle.ts';
 
 export function rectanglePart(doc: SectionDocument, id: string, x: number, y: number, width: number, height: number): RectanglePart {
   return {
@@ -58,10 +57,10 @@ export function shapeDragging(kind: 'rectangle' | 'circle', start: Vec, current:
         const part = circlePart(before, id, start[0], start[1], 2 * radius);
         ctx.commit('Draw round', before, { ...before, parts: [...before.parts, part] }, [id]);
       }
-      return shapeIdle(kind);
+      return ctx.enter('shape.idle', kind);
     },
-    key(_ctx: ToolContext, key: string): ToolState {
-      return key === 'Escape' ? shapeIdle(kind) : this;
+    key(ctx: ToolContext, key: string): ToolState {
+      return key === 'Escape' ? ctx.enter('shape.idle', kind) : this;
     },
   };
 }

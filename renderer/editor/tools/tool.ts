@@ -38,6 +38,22 @@ export type Draft =
   | { readonly kind: 'rectangle'; readonly a: Vec; readonly b: Vec }
   | { readonly kind: 'circle'; readonly centre: Vec; readonly radius: number };
 
+/**
+ * Every tool state by id, with the arguments it starts from. A state moves to another through
+ * `ctx.enter(id, ...args)`, which looks the state up in the tool table (tools/table.ts), so the
+ * state files never import each other.
+ */
+export interface ToolStates {
+  'select.idle': [];
+  'select.moving': [start: Vec];
+  'shape.idle': [kind: 'rectangle' | 'circle'];
+  'shape.dragging': [kind: 'rectangle' | 'circle', start: Vec, current: Vec, guides: readonly Guide[]];
+  'polygon.placing': [points: readonly Vec[], cursor: Vec | null, guides: readonly Guide[]];
+  'vertex.idle': [chosen: VertexRef | null];
+  'vertex.dragging': [snapshot: SectionDocument, working: SectionDocument, ref: VertexRef, startAt: Vec, pressAt: Vec, label: string];
+}
+export type ToolStateId = keyof ToolStates;
+
 export interface ToolContext {
   readonly doc: SectionDocument;
   readonly selection: readonly string[];
@@ -59,6 +75,8 @@ export interface ToolContext {
   /** Put back a document exactly, outside history (Escape). */
   restore(doc: SectionDocument, selection: readonly string[]): void;
   newPartId(doc: SectionDocument): string;
+  /** The tool state `id`, made from the tool table with `args` (how one state moves to another). */
+  enter<K extends ToolStateId>(id: K, ...args: ToolStates[K]): ToolState;
 }
 
 export interface ToolState {

@@ -9,7 +9,6 @@ import type { Vec } from '../geometry.ts';
 import type { Guide } from '../snapping.ts';
 import type { ToolContext, ToolState, PointerInput, VertexRef } from './tool.ts';
 import { moveVertex } from './vertex-edit.ts';
-import { vertexIdle } from './vertex-idle.ts';
 
 function replacePart(doc: SectionDocument, part: Part): SectionDocument {
   return { ...doc, parts: doc.parts.map((p) => (p.id === part.id ? part : p)) };
@@ -31,12 +30,12 @@ export function vertexDragging(snapshot: SectionDocument, working: SectionDocume
     up(ctx: ToolContext): ToolState {
       if (changed || label === 'Insert vertex') ctx.commit(label, snapshot, ctx.doc, selection);
       else ctx.restore(snapshot, selection);
-      return vertexIdle(ref);
+      return ctx.enter('vertex.idle', ref);
     },
     key(ctx: ToolContext, key: string): ToolState {
       if (key !== 'Escape') return this;
       ctx.restore(snapshot, selection);
-      return vertexIdle(null);
+      return ctx.enter('vertex.idle', null);
     },
   });
   return state([], false);

@@ -6,7 +6,6 @@
 import type { Part, SectionDocument } from '../../../core/document/types.ts';
 import type { ToolContext, ToolState, PointerInput, VertexRef } from './tool.ts';
 import { asEditablePolygon, insertVertex, pickVertex, removeVertex } from './vertex-edit.ts';
-import { vertexDragging } from './vertex-dragging.ts';
 
 function replacePart(doc: SectionDocument, part: Part): SectionDocument {
   return { ...doc, parts: doc.parts.map((p) => (p.id === part.id ? part : p)) };
@@ -22,27 +21,27 @@ export function vertexIdle(chosen: VertexRef | null): ToolState {
       if (!pick) {
         const hit = ctx.hitPart(e.p);
         ctx.select(hit ? [hit] : []);
-        return vertexIdle(null);
+        return ctx.enter('vertex.idle', null);
       }
       const snapshot = ctx.doc;
       const part = snapshot.parts.find((p) => p.id === pick.ref.partId);
       const poly = part ? asEditablePolygon(part) : null;
       if (!poly) return this;
-      if (pick.kind === 'vertex') return vertexDragging(snapshot, replacePart(snapshot, poly), pick.ref, pick.at, e.p, 'Move vertex');
+      if (pick.kind === 'vertex') return ctx.enter('vertex.dragging', snapshot, replacePart(snapshot, poly), pick.ref, pick.at, e.p, 'Move vertex');
       const inserted = insertVertex(poly, pick.ref.ring, pick.ref.index, pick.at);
       const ref = { ...pick.ref, index: pick.ref.index + 1 };
       const working = replacePart(snapshot, inserted);
       ctx.preview(working);
-      return vertexDragging(snapshot, working, ref, pick.at, e.p, 'Insert vertex');
+      return ctx.enter('vertex.dragging', snapshot, working, ref, pick.at, e.p, 'Insert vertex');
     },
     key(ctx: ToolContext, key: string): ToolState {
-      if (key === 'Escape') return vertexIdle(null);
+      if (key === 'Escape') return ctx.enter('vertex.idle', null);
       if ((key !== 'Delete' && key !== 'Backspace') || !chosen) return this;
       const part = ctx.doc.parts.find((p) => p.id === chosen.partId);
       const poly = part ? asEditablePolygon(part) : null;
       const removed = poly ? removeVertex(poly, chosen) : null;
       if (removed) ctx.commit('Delete vertex', ctx.doc, replacePart(ctx.doc, removed));
-      return vertexIdle(null);
+      return ctx.enter('vertex.idle', null);
     },
   };
 }

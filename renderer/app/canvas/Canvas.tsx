@@ -1,0 +1,557 @@
+/**
+ * The drawing. Konva handlers only translate pointer events into editor calls (STYLE.md §8);
+ * layers are separate (§11): grid and rulers, document shapes, results overlay, interaction overlay.
+ */
+import { useEffect, useRef, useState, type ReactElement } from 'react';
+import { Stage, Layer, Line, Circle, Shape, Text, Group, Rect, Label, Tag } from 'react-konva';
+import type Konva from 'konva';
+import type { Editor, EditorState } from '../../editor/editor.ts';
+import type { PartOutline, Vec } from '../../editor/geometry.ts';
+import { asEditablePolygon, ringOf } from '../../editor/tools/vertex-edit.ts';
+import { toWorld } from '../../editor/geometry.ts';
+import type { Diagnostic } from '../../../core/geometry/types.ts';
+import type { SectionProperties } from '../../../core/properties/types.ts';
+import { COLOURS } from './palette.ts';
+import { gridStep, toScreen, toSection, zoomAt, type View } from './view.ts';
+import { formatSig } from '../../../core/units/index.ts';
+import { arcOfSegment, ringVertexCount } from '../../../core/geometry/ring.ts';
+import type { Region } from '../../../core/geometry/types.ts';
+import { stressAt } from '../../../core/stress/index.ts';
+import { pascalsTo } from '../../../core/materials/index.ts';
+import { stressColour, type StressView } from '../stress/stress.ts';
+
+export interface Overlays {
+  readonly centroid: boolean;
+  readonly axes: boolean;
+  readonly principal: boolean;
+  readonly pna: boolean;
+  readonly fibres: boolean;
+  readonly dimensions: boolean;
+  /** Colour map of the normal stress, extremes and neutral axis (needs forces in the stress panel). */
+  readonly stress: boolean;
+  readonly kern: boolean;
+}
+
+interface Props {
+  readonly editor: Editor;
+  readonly state: EditorState;
+  readonly outlines: readonly PartOutline[];
+  readonly properties: SectionProperties | null;
+  /** Shear centre (section coordinates) from the finished torsion solve of this very document, if any. */
+  readonly shearCentre?: readonly [number, number] | null;
+  readonly diagnostics: readonly Diagnostic[];
+  /** Stresses of the current document under the stress panel's forces, when computed. */
+  readonly stress?: StressView | null;
+  readonly overlays: Overlays;
+  readonly view: View;
+  readonly onView: (v: View) => void;
+  readonly onSize: (w: number, h: number) => void;
+  readonly onCursor: (p: Vec | null) => void;
+}
+
+const RULER = 22;
+/** Ruler numbers without float noise or trailing zeros: 0.30000000000000004 → 0.3. */
+const tick = (v: number): string => String(Number(v.toPrecision(10)));
+const PICK_PIXELS = 7;
+
+function flat(v: View, pts: readonly Vec[]): number[] {
+  const out: number[] = [];
+  for (const p of pts) {
+    const s = toScreen(v, p);
+    out.push(s[0], s[1]);
+  }
+  return out;
+}
+
+function GridAndRulers({ view, width, height, unit }: { view: View; width: number; height: number; unit: string }): ReactElement {
+  const step = gridStep(view.scale);
+  const major = step * 5;
+  return (
+    <Shape
+      listening={false}
+      sceneFunc={(ctx) => {
+        const [x0, y1] = toSection(view, [0, 0]);
+        const [x1, y0] = toSection(view, [width, height]);
+        const line = (ax: number, ay: number, bx: number, by: number, colour: string): void => {
+          ctx.beginPath();
+          ctx.moveTo(ax, ay);
+          ctx.lineTo(bx, by);
+          ctx.strokeStyle = colour;
+          ctx.lineWidth = 1;
+          ctx.stroke();
+        };
+        for (let k = Math.ceil(x0 / step); k * step <= x1; k++) {
+          const sx = Math.round(view.ox + k * step * view.scale) + 0.5;
+          line(sx, 0, sx, height, k === 0 ? COLOURS.axis : k % 5 === 0 ? COLOURS.gridMajor : COLOURS.gridMinor);
+        }
+        for (let k = Math.ceil(y0 / step); k * step <= y1; k++) {
+          const sy = Math.round(view.oy - k * step * view.scale) + 0.5;
+          line(0, sy, width, sy, k === 0 ? COLOURS.axis : k % 5 === 0 ? COLOURS.gridMajor : COLOURS.gridMinor);
+        }
+        // Rulers along the top and left, labelled at major lines in the document unit.
+        ctx.fillStyle = COLOURS.rulerBack;
+        ctx.fillRect(0, 0, width, RULER);
+        ctx.fillRect(0, 0, RULER, height);
+        ctx.fillStyle = COLOURS.rulerText;
+        ctx.font = '10px system-ui, sans-serif';
+        for (let k = Math.ceil(x0 / major); k * major <= x1; k++) {
+          const sx = view.ox + k * major * view.scale;
+          if (sx < RULER + 4) continue;
+          line(sx, RULER - 6, sx, RULER, COLOURS.rulerText);
+          ctx.fillText(tick(k * major), sx + 2, 12);
+        }
+        for (let k = Math.ceil(y0 / major); k * major <= y1; k++) {
+          const sy = view.oy - k * major * view.scale;
+          if (sy < RULER + 4) continue;
+          line(RULER - 6, sy, RULER, sy, COLOURS.rulerText);
+          ctx.save();
+          ctx.translate(12, sy - 2);
+          ctx.rotate(-Math.PI / 2);
+          ctx.fillText(tick(k * major), 0, 0);
+          ctx.restore();
+        }
+        ctx.fillStyle = COLOURS.rulerBack;
+        ctx.fillRect(0, 0, RULER, RULER);
+        ctx.fillStyle = COLOURS.rulerText;
+        ctx.fillText(unit, 3, 14);
+      }}
+    />
+  );
+}
+
+function PartShape({ o, view, subtract, selected }: { o: PartOutline; view: View; subtract: boolean; selected: boolean }): ReactElement {
+  const fill = subtract ? COLOURS.holeFill : selected ? COLOURS.partFillSelected : COLOURS.partFill;
+  const stroke = selected ? COLOURS.selection : subtract ? COLOURS.holeStroke : COLOURS.partStroke;
+  const dash = subtract ? [6, 4] : undefined;
+  const width = selected ? 2 : 1.2;
+  if (o.circle) {
+    const c = toScreen(view, [o.circle.cx, o.circle.cy]);
+    return <Circle x={c[0]} y={c[1]} radius={o.circle.r * view.scale} fill={fill} stroke={stroke} strokeWidth={width} dash={dash} listening={false} />;
+  }
+  return (
+    <Shape
+      listening={false}
+      fill={fill}
+      stroke={stroke}
+      strokeWidth={width}
+      dash={dash}
+      fillRule="evenodd"
+      sceneFunc={(ctx, shape) => {
+        ctx.beginPath();
+        for (const r of o.rings) {
+          r.points.forEach((p, i) => {
+            const s = toScreen(view, p);
+            if (i === 0) ctx.moveTo(s[0], s[1]);
+            else ctx.lineTo(s[0], s[1]);
+          });
+          ctx.closePath();
+        }
+        ctx.fillStrokeShape(shape);
+      }}
+    />
+  );
+}
+
+function ResultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: SectionProperties; view: View; overlays: Overlays; width: number; height: number; shearCentre: readonly [number, number] | null }): ReactElement {
+  const c = toScreen(view, [p.cx, p.cy]);
+  const far = Math.hypot(width, height);
+  const items: ReactElement[] = [];
+  if (overlays.axes) {
+    items.push(<Line key="ax" points={[c[0] - far, c[1], c[0] + far, c[1]]} stroke={COLOURS.centroid} strokeWidth={1} dash={[10, 4, 2, 4]} />);
+    items.push(<Line key="ay" points={[c[0], c[1] - far, c[0], c[1] + far]} stroke={COLOURS.centroid} strokeWidth={1} dash={[10, 4, 2, 4]} />);
+    items.push(<Text key="axl" x={c[0] + 8} y={c[1] + 4} text="x" fontSize={12} fontStyle="italic" fill={COLOURS.centroid} />);
+  }
+  if (overlays.principal && !p.isotropic) {
+    // Screen y is down: a CCW section angle θ draws as −θ on screen.
+    const a = (-p.thetaDeg * Math.PI) / 180;
+    const d1: Vec = [Math.cos(a), Math.sin(a)];
+    const len = Math.min(width, height) * 0.45;
+    items.push(<Line key="p1" points={[c[0] - d1[0] * len, c[1] - d1[1] * len, c[0] + d1[0] * len, c[1] + d1[1] * len]} stroke={COLOURS.principal} strokeWidth={1.4} />);
+    items.push(<Line key="p2" points={[c[0] + d1[1] * len * 0.6, c[1] - d1[0] * len * 0.6, c[0] - d1[1] * len * 0.6, c[1] + d1[0] * len * 0.6]} stroke={COLOURS.principal} strokeWidth={1} dash={[6, 4]} />);
+    items.push(<Text key="p1l" x={Math.min(width - 130, c[0] + d1[0] * len + 4)} y={c[1] + d1[1] * len - 16} text={`axis 1, θ = ${formatSig(Math.abs(p.thetaDeg) < 1e-9 ? 0 : p.thetaDeg, 4)}°`} fontSize={12} fill={COLOURS.principal} />);
+  }
+  if (overlays.pna) {
+    const y = toScreen(view, [0, p.pnaY])[1];
+    const x = toScreen(view, [p.pnaX, 0])[0];
+    items.push(<Line key="pnax" points={[0, y, width, y]} stroke={COLOURS.pna} strokeWidth={1} dash={[3, 3]} />);
+    items.push(<Line key="pnay" points={[x, 0, x, height]} stroke={COLOURS.pna} strokeWidth={1} dash={[3, 3]} />);
+    items.push(<Text key="pnal" x={30} y={y + 3} text="plastic neutral axis (x)" fontSize={11} fill={COLOURS.pna} />);
+  }
+  if (overlays.fibres) {
+    const top = toScreen(view, [p.cx, p.yMax]);
+    const bottom = toScreen(view, [p.cx, p.yMin]);
+    const xo = c[0] + 14;
+    items.push(<Line key="ft" points={[xo, top[1], xo, c[1]]} stroke={COLOURS.dimension} strokeWidth={1} pointerLength={5} />);
+    items.push(<Line key="fb" points={[xo + 8, c[1], xo + 8, bottom[1]]} stroke={COLOURS.dimension} strokeWidth={1} />);
+    items.push(<Text key="ftl" x={xo + 4} y={(top[1] + c[1]) / 2 - 6} text={`c top ${formatSig(p.yMax - p.cy, 4)}`} fontSize={11} fill={COLOURS.dimension} />);
+    items.push(<Text key="fbl" x={xo + 12} y={(bottom[1] + c[1]) / 2 - 6} text={`c bottom ${formatSig(p.cy - p.yMin, 4)}`} fontSize={11} fill={COLOURS.dimension} />);
+  }
+  if (overlays.dimensions) {
+    const a = toScreen(view, [p.xMin, p.yMin]);
+    const b = toScreen(view, [p.xMax, p.yMax]);
+    const yb = a[1] + 26;
+    const xl = a[0] - 26;
+    items.push(<Line key="dw" points={[a[0], yb, b[0], yb]} stroke={COLOURS.dimension} strokeWidth={1} />);
+    items.push(<Line key="dwa" points={[a[0], a[1] + 4, a[0], yb + 4]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
+    items.push(<Line key="dwb" points={[b[0], a[1] + 4, b[0], yb + 4]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
+    items.push(<Text key="dwl" x={(a[0] + b[0]) / 2 - 30} y={yb + 4} text={tick(Number((p.xMax - p.xMin).toPrecision(6)))} fontSize={11} fill={COLOURS.dimension} />);
+    items.push(<Line key="dh" points={[xl, a[1], xl, b[1]]} stroke={COLOURS.dimension} strokeWidth={1} />);
+    items.push(<Line key="dha" points={[a[0] - 4, a[1], xl - 4, a[1]]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
+    items.push(<Line key="dhb" points={[a[0] - 4, b[1], xl - 4, b[1]]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
+    items.push(<Text key="dhl" x={xl - 16} y={(a[1] + b[1]) / 2 + 24} rotation={-90} text={tick(Number((p.yMax - p.yMin).toPrecision(6)))} fontSize={11} fill={COLOURS.dimension} />);
+  }
+  if (overlays.centroid) {
+    items.push(
+      <Group key="c" x={c[0]} y={c[1]}>
+        <Circle radius={7} stroke={COLOURS.centroid} strokeWidth={1.5} />
+        <Line points={[-11, 0, 11, 0]} stroke={COLOURS.centroid} strokeWidth={1.5} />
+        <Line points={[0, -11, 0, 11]} stroke={COLOURS.centroid} strokeWidth={1.5} />
+      </Group>,
+    );
+  }
+  if (overlays.centroid && shearCentre) {
+    // Shear centre (Trefftz, finite elements): a small diamond, labelled, distinct from the centroid's circle.
+    const s = toScreen(view, shearCentre);
+    items.push(
+      <Group key="sc" x={s[0]} y={s[1]}>
+        <Line points={[0, -8, 8, 0, 0, 8, -8, 0]} closed stroke={COLOURS.centroid} strokeWidth={1.5} />
+        <Text x={9} y={-16} text="shear centre" fontSize={11} fill={COLOURS.centroid} />
+      </Group>,
+    );
+  }
+  return <>{items}</>;
+}
+
+/** Traces a region (arcs exact) on a canvas context in screen coordinates; holes by the even–odd rule. */
+function traceRegion(ctx: { moveTo: (x: number, y: number) => void; lineTo: (x: number, y: number) => void; arc: (x: number, y: number, r: number, a0: number, a1: number, ccw: boolean) => void; closePath: () => void }, view: View, region: Region): void {
+  for (const polygon of region) {
+    for (const ring of [polygon.outer, ...polygon.holes]) {
+      const n = ringVertexCount(ring);
+      for (let i = 0; i < n; i++) {
+        const s = toScreen(view, [ring.xy[2 * i] ?? 0, ring.xy[2 * i + 1] ?? 0]);
+        if (i === 0) ctx.moveTo(s[0], s[1]);
+        const arc = arcOfSegment(ring, i);
+        if (arc) {
+          // Screen y is down: section angle t draws at −t, and a CCW sweep runs anticlockwise on screen.
+          const c = toScreen(view, [arc.cx, arc.cy]);
+          ctx.arc(c[0], c[1], arc.r * view.scale, -arc.t0, -(arc.t0 + arc.sweep), arc.sweep > 0);
+        } else {
+          const j = i + 1 === n ? 0 : i + 1;
+          const e = toScreen(view, [ring.xy[2 * j] ?? 0, ring.xy[2 * j + 1] ?? 0]);
+          ctx.lineTo(e[0], e[1]);
+        }
+      }
+      ctx.closePath();
+    }
+  }
+}
+
+/** The stress map (an exact linear gradient per piece), the extremes, the neutral axis, and the kern. */
+function StressOverlay({ sv, view, overlays, width, height }: { sv: StressView; view: View; overlays: Overlays; width: number; height: number }): ReactElement {
+  const items: ReactElement[] = [];
+  if (overlays.stress) {
+    const { plane } = sv;
+    const g = Math.hypot(plane.kx, plane.ky);
+    const dir: Vec = g > 0 ? [plane.kx / g, plane.ky / g] : [1, 0];
+    sv.pieces.forEach((piece, k) => {
+      items.push(
+        <Shape
+          key={`sm${k}`}
+          listening={false}
+          sceneFunc={(ctx) => {
+            const c = ctx._context;
+            // The field is linear: a gradient along its direction, with stops at the colour-scale knots, is exact.
+            const d0 = plane.cx * dir[0] + plane.cy * dir[1];
+            const along = (a: number): Vec => [plane.cx + dir[0] * (a - d0), plane.cy + dir[1] * (a - d0)];
+            const ex: number[] = [];
+            for (const p of piece.region) for (let i = 0; i < ringVertexCount(p.outer); i++) ex.push((p.outer.xy[2 * i] ?? 0) * dir[0] + (p.outer.xy[2 * i + 1] ?? 0) * dir[1]);
+            // Padded, since arcs may bulge past the vertices; the stops sample the exact field.
+            const lo = Math.min(...ex), hi = Math.max(...ex);
+            const pad = 0.5 * (hi - lo) + 1e-9;
+            const a0 = lo - pad, a1 = hi + pad;
+            const p0 = toScreen(view, along(a0));
+            const p1 = toScreen(view, along(a1));
+            const grad = c.createLinearGradient(p0[0], p0[1], p1[0], p1[1]);
+            const steps = 32;
+            for (let i = 0; i <= steps; i++) {
+              const [x, y] = along(a0 + ((a1 - a0) * i) / steps);
+              grad.addColorStop(i / steps, stressColour(stressAt(plane, piece.E, x, y), sv.scale));
+            }
+            c.beginPath();
+            traceRegion(c, view, piece.region);
+            c.fillStyle = grad;
+            c.fill('evenodd');
+            c.strokeStyle = COLOURS.partStroke;
+            c.lineWidth = 1;
+            c.stroke();
+          }}
+        />,
+      );
+    });
+    if (sv.axis.segment) {
+      const [a, b] = sv.axis.segment.map((q) => toScreen(view, q)) as [Vec, Vec];
+      items.push(<Line key="na" points={[a[0], a[1], b[0], b[1]]} stroke={COLOURS.neutralAxis} strokeWidth={1.6} dash={[12, 5]} />);
+      // Labelled on the visible part of the line, toward its right end.
+      const [l, r] = a[0] <= b[0] ? [a, b] : [b, a];
+      const t = (Math.min(r[0], width - 110) - l[0]) / (r[0] - l[0] || 1);
+      const lx = l[0] + Math.max(0, Math.min(1, t)) * (r[0] - l[0]);
+      const ly = l[1] + Math.max(0, Math.min(1, t)) * (r[1] - l[1]);
+      items.push(
+        <Label key="nal" x={Math.max(4, Math.min(width - 100, lx + 6))} y={Math.max(4, Math.min(height - 24, ly - 22))}>
+          <Tag fill={COLOURS.paper} opacity={0.85} cornerRadius={2} />
+          <Text text="neutral axis" fontSize={11} fill={COLOURS.neutralAxis} padding={2} />
+        </Label>,
+      );
+    }
+    for (const [key, p, label] of [['max', sv.maxAt, 'σmax'], ['min', sv.minAt, 'σmin']] as const) {
+      const s = toScreen(view, p);
+      items.push(
+        <Group key={`x${key}`} x={s[0]} y={s[1]}>
+          <Circle radius={6} stroke={COLOURS.stressMark} strokeWidth={2} fill={COLOURS.handle} />
+          <Circle radius={2} fill={COLOURS.stressMark} />
+          <Label x={s[0] > width - 170 ? -150 : 9} y={key === 'max' ? -20 : 6}>
+            <Tag fill={COLOURS.paper} opacity={0.85} cornerRadius={2} />
+            <Text text={`${label} ${sv.labels[key]}`} fontSize={12} fontStyle="bold" fill={COLOURS.stressMark} padding={2} />
+          </Label>
+        </Group>,
+      );
+    }
+  }
+  if (overlays.stress) {
+    // Legend: the symmetric scale ±|σ|max, compression left, in the panel's stress unit.
+    const w = 180, x0 = RULER + 14, y0 = height - 52;
+    const half = formatSig(pascalsTo(sv.scale, sv.unit), 3);
+    const stops: (string | number)[] = [];
+    for (let i = 0; i <= 8; i++) stops.push(i / 8, stressColour(((i - 4) / 4) * sv.scale, sv.scale));
+    items.push(
+      <Group key="legend" x={x0} y={y0}>
+        <Rect x={-6} y={-18} width={w + 12} height={50} fill={COLOURS.paper} opacity={0.9} cornerRadius={3} stroke={COLOURS.gridMajor} />
+        <Text x={0} y={-14} text={`normal stress σ (${sv.unit})`} fontSize={11} fill={COLOURS.dimension} />
+        <Rect x={0} y={0} width={w} height={10} fillLinearGradientStartPoint={{ x: 0, y: 0 }} fillLinearGradientEndPoint={{ x: w, y: 0 }} fillLinearGradientColorStops={stops} stroke={COLOURS.dimension} strokeWidth={0.5} />
+        <Text x={0} y={14} text={`−${half}`} fontSize={10} fill={COLOURS.dimension} />
+        <Text x={w / 2 - 3} y={14} text="0" fontSize={10} fill={COLOURS.dimension} />
+        <Text x={w - 60} y={14} width={60} align="right" text={`+${half}`} fontSize={10} fill={COLOURS.dimension} />
+      </Group>,
+    );
+  }
+  if (overlays.kern && sv.kern.length >= 3) {
+    items.push(<Line key="kern" points={flat(view, sv.kern)} closed stroke={COLOURS.kern} strokeWidth={1.8} fill="rgba(44,138,122,0.12)" />);
+    const top = sv.kern.reduce((a, b) => (b[1] > a[1] ? b : a));
+    const s = toScreen(view, top);
+    items.push(<Text key="kernl" x={s[0] + 6} y={s[1] - 16} text="kern" fontSize={11} fontStyle="italic" fill={COLOURS.kern} />);
+  }
+  return <>{items}</>;
+}
+
+function InteractionOverlay({ state, outlines, view }: { state: EditorState; outlines: readonly PartOutline[]; view: View }): ReactElement {
+  const items: ReactElement[] = [];
+  const tool = state.tool;
+  if (state.toolId === 'vertex') {
+    for (const part of state.doc.parts) {
+      if (!state.selection.includes(part.id)) continue;
+      const poly = asEditablePolygon(part);
+      if (!poly) continue;
+      for (const ring of [-1, ...poly.holes.map((_, i) => i)]) {
+        ringOf(poly, ring).forEach((q, index) => {
+          const s = toScreen(view, toWorld(poly.placement, q));
+          const chosen = tool.chosenVertex && tool.chosenVertex.partId === part.id && tool.chosenVertex.ring === ring && tool.chosenVertex.index === index;
+          items.push(<Rect key={`h${part.id}-${ring}-${index}`} x={s[0] - 4} y={s[1] - 4} width={8} height={8} fill={chosen ? COLOURS.selection : COLOURS.handle} stroke={COLOURS.selection} strokeWidth={1.2} />);
+        });
+      }
+    }
+  } else {
+    for (const o of outlines) {
+      if (!state.selection.includes(o.partId) || o.circle) continue;
+      // Standard parts: their outline points are chords of arcs, not corners worth marking.
+      if (state.doc.parts.find((p) => p.id === o.partId)?.type === 'shape') continue;
+      for (const v of o.vertices) {
+        const s = toScreen(view, v);
+        items.push(<Rect key={`s${o.partId}-${s[0]}-${s[1]}`} x={s[0] - 2.5} y={s[1] - 2.5} width={5} height={5} fill={COLOURS.selection} listening={false} />);
+      }
+    }
+  }
+  const d = tool.draft;
+  if (d?.kind === 'rectangle') {
+    const a = toScreen(view, d.a);
+    const b = toScreen(view, d.b);
+    items.push(<Rect key="dr" x={Math.min(a[0], b[0])} y={Math.min(a[1], b[1])} width={Math.abs(b[0] - a[0])} height={Math.abs(b[1] - a[1])} stroke={COLOURS.draft} dash={[5, 3]} strokeWidth={1.5} />);
+    items.push(<Text key="drt" x={Math.max(a[0], b[0]) + 6} y={Math.max(a[1], b[1]) + 4} text={`${formatSig(Math.abs(d.b[0] - d.a[0]), 5)} × ${formatSig(Math.abs(d.b[1] - d.a[1]), 5)}`} fontSize={12} fill={COLOURS.draft} />);
+  } else if (d?.kind === 'circle') {
+    const c = toScreen(view, d.centre);
+    items.push(<Circle key="dc" x={c[0]} y={c[1]} radius={d.radius * view.scale} stroke={COLOURS.draft} dash={[5, 3]} strokeWidth={1.5} />);
+    items.push(<Text key="dct" x={c[0] + d.radius * view.scale + 6} y={c[1]} text={`⌀ ${formatSig(2 * d.radius, 5)}`} fontSize={12} fill={COLOURS.draft} />);
+  } else if (d?.kind === 'polygon' && d.points.length > 0) {
+    const pts = d.cursor ? [...d.points, d.cursor] : d.points;
+    items.push(<Line key="dp" points={flat(view, pts)} stroke={COLOURS.draft} strokeWidth={1.5} dash={[5, 3]} />);
+    d.points.forEach((p, i) => {
+      const s = toScreen(view, p);
+      items.push(<Circle key={`dpv${i}`} x={s[0]} y={s[1]} radius={i === 0 ? 6 : 3.5} stroke={COLOURS.draft} fill={i === 0 && d.closing ? COLOURS.draft : COLOURS.handle} />);
+    });
+  }
+  for (const [i, g] of (tool.guides ?? []).entries()) {
+    if (g.kind === 'point') {
+      const s = toScreen(view, g.at);
+      items.push(<Circle key={`g${i}`} x={s[0]} y={s[1]} radius={6} stroke={COLOURS.guide} strokeWidth={2} />);
+      items.push(<Text key={`gt${i}`} x={s[0] + 8} y={s[1] - 18} text={g.target} fontSize={11} fill={COLOURS.guide} />);
+    } else if (g.kind === 'vertical') {
+      const x = toScreen(view, [g.x, 0])[0];
+      items.push(<Line key={`g${i}`} points={[x, 0, x, 5000]} stroke={COLOURS.guide} strokeWidth={1} dash={[4, 4]} />);
+    } else {
+      const y = toScreen(view, [0, g.y])[1];
+      items.push(<Line key={`g${i}`} points={[0, y, 8000, y]} stroke={COLOURS.guide} strokeWidth={1} dash={[4, 4]} />);
+    }
+  }
+  return <>{items}</>;
+}
+
+function DiagnosticMarks({ diagnostics, view }: { diagnostics: readonly Diagnostic[]; view: View }): ReactElement {
+  return (
+    <>
+      {diagnostics.map((d, i) => {
+        if (!d.at) return null;
+        const s = toScreen(view, d.at);
+        return (
+          <Group key={i} x={s[0]} y={s[1]}>
+            <Circle radius={10} stroke={COLOURS.diagnostic} strokeWidth={2.5} />
+            <Text x={12} y={-20} text={`${i + 1}`} fontSize={13} fontStyle="bold" fill={COLOURS.diagnostic} />
+          </Group>
+        );
+      })}
+    </>
+  );
+}
+
+export function Canvas(props: Props): ReactElement {
+  const { editor, state, outlines, view, onView, overlays } = props;
+  const host = useRef<HTMLDivElement>(null);
+  const [size, setSize] = useState({ width: 800, height: 600 });
+  const pan = useRef<{ start: Vec; view: View } | null>(null);
+  const dragging = useRef(false);
+  const viewRef = useRef(view);
+  viewRef.current = view;
+  const { onSize } = props;
+
+  useEffect(() => {
+    const el = host.current;
+    if (!el) return undefined;
+    const ro = new ResizeObserver(() => {
+      const w = el.clientWidth;
+      const h = el.clientHeight;
+      setSize({ width: w, height: h });
+      onSize(w, h);
+    });
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, [onSize]);
+
+  useEffect(() => {
+    editor.setPickRadius(PICK_PIXELS / view.scale);
+    editor.setSnapSettings({ grid: gridStep(view.scale) });
+  }, [editor, view.scale]);
+
+  const pointer = (e: Konva.KonvaEventObject<MouseEvent>): { screen: Vec; p: Vec } | null => {
+    const pos = e.target.getStage()?.getPointerPosition();
+    if (!pos) return null;
+    return { screen: [pos.x, pos.y], p: toSection(view, [pos.x, pos.y]) };
+  };
+
+  const input = (e: MouseEvent, p: Vec) => ({ p, alt: e.altKey, shift: e.shiftKey });
+
+  const selected = new Set(state.selection);
+  const order = state.doc.parts.map((part, i) => ({ part, o: outlines[i] })).filter((x) => x.part.visible && x.o);
+  const adds = order.filter((x) => x.part.operation === 'add');
+  const subs = order.filter((x) => x.part.operation === 'subtract');
+
+  return (
+    <div
+      ref={host}
+      className="canvas-host"
+      data-testid="canvas"
+      tabIndex={0}
+      data-view={JSON.stringify(view)}
+      data-tool-state={state.tool.name}
+    >
+      <Stage
+        width={size.width}
+        height={size.height}
+        onMouseDown={(e) => {
+          const q = pointer(e);
+          if (!q) return;
+          if (e.evt.button === 1 || e.evt.button === 2 || (e.evt.button === 0 && e.evt.ctrlKey)) {
+            pan.current = { start: q.screen, view };
+          } else if (e.evt.button === 0) {
+            host.current?.focus();
+            editor.pointerDown(input(e.evt, q.p));
+          } else {
+            return;
+          }
+          // Follow the gesture on the window, so a drag that leaves the canvas still moves and ends.
+          const rect = host.current?.getBoundingClientRect();
+          const at = (ev: MouseEvent): { screen: Vec; p: Vec } => {
+            const screen: Vec = [ev.clientX - (rect?.left ?? 0), ev.clientY - (rect?.top ?? 0)];
+            return { screen, p: toSection(viewRef.current, screen) };
+          };
+          const move = (ev: MouseEvent): void => {
+            const m = at(ev);
+            props.onCursor(m.p);
+            if (pan.current) {
+              const s0 = pan.current;
+              onView({ ...s0.view, ox: s0.view.ox + m.screen[0] - s0.start[0], oy: s0.view.oy + m.screen[1] - s0.start[1] });
+            } else {
+              editor.pointerMove(input(ev, m.p));
+            }
+          };
+          const up = (ev: MouseEvent): void => {
+            window.removeEventListener('mousemove', move);
+            window.removeEventListener('mouseup', up);
+            dragging.current = false;
+            if (pan.current) pan.current = null;
+            else editor.pointerUp(input(ev, at(ev).p));
+          };
+          dragging.current = true;
+          window.addEventListener('mousemove', move);
+          window.addEventListener('mouseup', up);
+        }}
+        onMouseMove={(e) => {
+          if (dragging.current) return;
+          const q = pointer(e);
+          if (!q) return;
+          props.onCursor(q.p);
+          editor.pointerMove(input(e.evt, q.p));
+        }}
+        onMouseLeave={() => props.onCursor(null)}
+        onContextMenu={(e) => e.evt.preventDefault()}
+        onWheel={(e) => {
+          e.evt.preventDefault();
+          const q = pointer(e);
+          if (!q) return;
+          onView(zoomAt(view, Math.exp(-e.evt.deltaY * 0.0015), q.screen));
+        }}
+      >
+        <Layer listening={false}>
+          <GridAndRulers view={view} width={size.width} height={size.height} unit={state.doc.unit} />
+        </Layer>
+        <Layer listening={false}>
+          {adds.map((x) => (
+            <PartShape key={x.part.id} o={x.o as PartOutline} view={view} subtract={false} selected={selected.has(x.part.id)} />
+          ))}
+          {subs.map((x) => (
+            <PartShape key={x.part.id} o={x.o as PartOutline} view={view} subtract selected={selected.has(x.part.id)} />
+          ))}
+        </Layer>
+        {props.stress && (overlays.stress || overlays.kern) && (
+          <Layer listening={false}>
+            <StressOverlay sv={props.stress} view={view} overlays={overlays} width={size.width} height={size.height} />
+          </Layer>
+        )}
+        <Layer listening={false}>
+          {props.properties && <ResultsOverlay p={props.properties} view={view} overlays={overlays} width={size.width} height={size.height} shearCentre={props.shearCentre ?? null} />}
+          <DiagnosticMarks diagnostics={props.diagnostics} view={view} />
+        </Layer>
+        <Layer listening={false}>
+          <InteractionOverlay state={state} outlines={outlines} view={view} />
+        </Layer>
+      </Stage>
+    </div>
+  );
+}

@@ -1,0 +1,193 @@
+/**
+ * What goes into the printable report of the section now open (core/report's ReportInput):
+ * the annotated drawing from core/export, the properties in the chosen display units and
+ * figures, the torsion constants when the finite-element solve of this very document is done
+ * (with its mesh size and error estimate for the method notes), the materials of the parts,
+ * and the member check of the member panel's load case, recomputed for this document.
+ *
+ * Units: the document's length unit in; tables in the display set given. Forces and stresses
+ * follow the member panel: kN, kN/m, kN·m and MPa for metric documents; kip, kip/ft, kip·ft and
+ * ksi for inch and foot documents (exact factors in core/materials/quantities.ts).
+ * Pure: no DOM, no clock (the caller passes the date).
+ */
+import type { SectionDocument } from '../../../core/document/types.ts';
+import { PROPERTY_ROWS, sectionSvg } from '../../../core/export/index.ts';
+import { displayedValue } from '../../../core/export/rows.ts';
+import { materialPiecesFromDocument, newtonsTo, pascalsTo, type ForceUnit, type StressUnit } from '../../../core/materials/index.ts';
+import { LIMIT_CAUTION, sectionMemberCheck, type SectionMemberInput, type Support } from '../../../core/member/index.ts';
+import type { SectionProperties } from '../../../core/properties/types.ts';
+import type { ReportInput, ReportTable } from '../../../core/report/index.ts';
+import { sectionFromDocument } from '../../../core/section/index.ts';
+import type { TorsionResult } from '../../../core/torsion/types.ts';
+import { convertLength, formatSig, toDisplay, type DisplaySet, type LengthUnit } from '../../../core/units/index.ts';
+import { RESULT_GROUPS, type ResultRow } from '../results/result-rows.ts';
+
+/** The member panel's load case: span and positions in `unit`, forces in N, line loads in N/m. */
+export interface MemberCase {
+  readonly unit: LengthUnit;
+  readonly input: SectionMemberInput;
+}
+
+export interface SectionReportOptions {
+  readonly doc: SectionDocument;
+  readonly display: DisplaySet;
+  readonly sig: number;
+  /** The torsion result, only when it was computed for `doc` itself. */
+  readonly torsion: TorsionResult | null;
+  readonly member: MemberCase | null;
+  readonly date?: string;
+  /** The file's own name, put before the section's when they differ. */
+  readonly fileTitle?: string;
+}
+
+export type SectionReport = { readonly ok: true; readonly input: ReportInput } | { readonly ok: false; readonly errors: readonly string[] };
+
+/** Units of forces for the member lines: the member panel's choice for the document unit. */
+export interface ForceUnits {
+  readonly force: ForceUnit;
+  readonly line: string;
+  readonly moment: string;
+  readonly stress: StressUnit;
+  readonly length: LengthUnit;
+  /** N/m → line unit, N·m → moment unit. */
+  readonly perLine: number;
+  readonly perMoment: number;
+}
+
+export function forceUnitsFor(unit: LengthUnit): ForceUnits {
+  const inch = unit === 'in' || unit === 'ft';
+  // 1 kip = 4448.2216152605 N and 1 ft = 0.3048 m, exact by definition.
+  return inch
+    ? { force: 'kip', line: 'kip/ft', moment: 'kip·ft', stress: 'ksi', length: 'in', perLine: 0.3048 / 4448.2216152605, perMoment: 1 / (4448.2216152605 * 0.3048) }
+    : { force: 'kN', line: 'kN/m', moment: 'kN·m', stress: 'MPa', length: 'mm', perLine: 1 / 1000, perMoment: 1 / 1000 };
+}
+
+const SUPPORT_WORDS: Readonly<Record<Support, string>> = { simple: 'simply supported', cantilever: 'cantilever fixed at the left end', fixed: 'fixed at both ends', propped: 'propped cantilever' };
+
+function shownValue(row: ResultRow, p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): [string, string] {
+  const propertyRow = PROPERTY_ROWS.find((r) => r.key === row.key);
+  const raw = p[row.key];
+  const value = propertyRow ? displayedValue(propertyRow, p) : typeof raw === 'number' ? raw : NaN;
+  if (row.quantity === 'angle') return [formatSig(value, sig), 'deg'];
+  if (row.quantity === 'ratio') return [formatSig(value, sig), '–'];
+  const d = display[row.quantity];
+  return [formatSig(toDisplay(value, unit, d), sig), d.label];
+}
+
+/** The results panel's groups as report tables (three tables, so none is longer than a page). */
+export function propertyTables(p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): ReportTable[] {
+  const columns = ['symbol', 'value', 'unit', 'meaning'];
+  const textColumns = [3];
+  const rows = (titles: readonly string[]): string[][] =>
+    RESULT_GROUPS.filter((g) => titles.includes(g.title)).flatMap((g) => g.rows.map((row) => [row.symbol, ...shownValue(row, p, unit, display, sig), `${g.title.toLowerCase()}: ${row.label}`]));
+  return [
+    { title: 'Area, centroid, second moments and radii of gyration', columns, rows: rows(['Area and centroid', 'Second moments about the centroid', 'Principal axes', 'Radii of gyration']), textColumns },
+    { title: 'Elastic and plastic moduli', columns, rows: rows(['Elastic section moduli', 'Plastic']), textColumns },
+    { title: 'Extents', columns, rows: rows(['Extents']), textColumns },
+  ];
+}
+
+export function torsionTable(t: TorsionResult, unit: LengthUnit, display: DisplaySet, sig: number): ReportTable {
+  const row = (symbol: string, value: number, q: 'inertia' | 'warping' | 'length', meaning: string): string[] => [symbol, formatSig(toDisplay(value, unit, display[q]), sig), display[q].label, meaning];
+  return {
+    title: 'Torsion (finite elements)',
+    columns: ['symbol', 'value', 'unit', 'meaning'],
+    textColumns: [3],
+    rows: [
+      row('J', t.J, 'inertia', 'Saint-Venant torsion constant'),
+      row('Cw', t.Cw, 'warping', 'warping constant'),
+      row('xs', t.xs, 'length', 'shear centre x'),
+      row('ys', t.ys, 'length', 'shear centre y'),
+    ],
+  };
+}
+
+const noMaterialAssigned = (doc: SectionDocument): boolean => doc.defaultMaterial === null && doc.parts.every((p) => p.material === null);
+
+/** One line per material piece (E, density, strength), then the composite stiffness and weight; [] when no part has a material. */
+export function materialLines(doc: SectionDocument): string[] {
+  if (noMaterialAssigned(doc)) return [];
+  const found = materialPiecesFromDocument(doc);
+  if (found.issues.length > 0 || found.pieces.length === 0) return [`Materials are incomplete, so no stiffness or weight is reported: ${found.issues.join('; ') || 'no material pieces'}.`];
+  const u = forceUnitsFor(doc.unit);
+  const s = (pa: number): string => `${formatSig(pascalsTo(pa, u.stress), 4)} ${u.stress}`;
+  return found.pieces.map((piece, i) => {
+    const m = piece.material;
+    const strength = Number.isFinite(m.fy) ? `, ${m.strengthBasis === 'yield' ? 'fy' : m.strengthBasis === 'tensile' ? 'tensile strength' : 'reference Fb'} = ${s(m.fy)}` : '';
+    return `${piece.label ?? `piece ${i + 1}`}: ${m.name}; E = ${s(m.E)}, G = ${s(m.G)}, density ${formatSig(m.density, 4)} kg/m³${strength}`;
+  });
+}
+
+/** The member panel's case recomputed for `doc`: loads, deflection against the limit, moment, stresses; [] without a case. */
+export function memberLines(doc: SectionDocument, member: MemberCase | null): string[] {
+  if (member === null) return [];
+  const found = materialPiecesFromDocument(doc);
+  if (found.issues.length > 0 || found.pieces.length === 0) return [`The member check needs a material for every part: ${found.issues.join('; ') || 'no material pieces'}.`];
+  const L = (v: number): number => convertLength(v, member.unit, doc.unit);
+  const input: SectionMemberInput = { ...member.input, span: L(member.input.span), points: member.input.points.map((p) => ({ P: p.P, a: L(p.a) })) };
+  const r = sectionMemberCheck(found.pieces, doc.unit, input);
+  if (!r.ok) return [`The member check could not run: ${r.issues.join('; ')}.`];
+  const u = forceUnitsFor(doc.unit);
+  const g = (v: number, n = 4): string => formatSig(v, n);
+  const len = (metres: number): string => `${g(convertLength(metres, 'm', u.length))} ${u.length}`;
+  const docLen = (v: number): string => `${g(v)} ${doc.unit}`;
+  const loads = [
+    ...input.points.map((p) => `point load ${g(newtonsTo(p.P, u.force))} ${u.force} at ${docLen(p.a)} from the left end`),
+    `uniform load ${g(input.uniform * u.perLine)} ${u.line}`,
+    input.selfWeight ? `self-weight ${g((r.selfWeight ?? 0) * u.perLine)} ${u.line} included` : 'self-weight not included',
+  ];
+  const res = r.result;
+  const lines = [
+    `Beam ${SUPPORT_WORDS[input.support]}, span ${docLen(input.span)}; ${loads.join('; ')}.`,
+    `Largest deflection ${len(Math.abs(res.deflectionMax))} at ${len(res.deflectionAt)}; span / deflection = ${g(res.spanOverDeflection)}.`,
+    ...(res.limit ? [`${res.limit.passes ? 'Within' : 'Exceeds'} the common-practice limit L/${res.limit.ratio} (allowed ${len(res.limit.allowed)}).`] : []),
+    `Largest bending moment ${g(Math.abs(res.momentMax) * u.perMoment)} ${u.moment} at ${len(res.momentAt)}.`,
+    ...res.stresses.map((s) => `Bending stress in ${s.name}: tension ${g(pascalsTo(s.maxTension, u.stress), 3)} ${u.stress}, compression ${g(pascalsTo(-s.maxCompression, u.stress), 3)} ${u.stress}${s.strengthRatio !== undefined ? ` (${g(100 * s.strengthRatio, 3)} % of the ${s.strengthLabel})` : ''}.`),
+    LIMIT_CAUTION,
+  ];
+  return lines;
+}
+
+/** "File — section" when the file names itself apart from the section, else the section's name. */
+export function reportTitle(fileTitle: string, sectionName: string): string {
+  const f = fileTitle.trim(), s = sectionName.trim();
+  if (f === '' || f === s) return s || 'Untitled section';
+  return s === '' ? f : `${f} — ${s}`;
+}
+
+/** The ReportInput of one section, or the geometry problems that prevent it. */
+export function sectionReportInput(o: SectionReportOptions): SectionReport {
+  const section = sectionFromDocument(o.doc);
+  const p = section.properties;
+  if (p === null) return { ok: false, errors: section.diagnostics.length > 0 ? section.diagnostics.map((d) => d.message) : ['the section has no area: draw or open a section first'] };
+  const tables = propertyTables(p, o.doc.unit, o.display, o.sig);
+  if (o.torsion) tables.splice(2, 0, torsionTable(o.torsion, o.doc.unit, o.display, o.sig));
+  return {
+    ok: true,
+    input: {
+      title: reportTitle(o.fileTitle ?? '', o.doc.name),
+      drawings: [sectionSvg({ name: o.doc.name, unit: o.doc.unit, section, display: o.display })],
+      tables,
+      materials: materialLines(o.doc),
+      memberChecks: memberLines(o.doc, o.member),
+      torsion: o.torsion ? { meshElements: o.torsion.meshElements, jRelativeError: o.torsion.jRelativeError } : null,
+      ...(o.date !== undefined ? { date: o.date } : {}),
+    },
+  };
+}
+
+export const PAPER_SIZES = ['A4', 'Letter'] as const;
+export type PaperSize = (typeof PAPER_SIZES)[number];
+
+/** The report HTML with its page size fixed (a later @page rule wins over core/report's `size: auto`). */
+export function withPaperSize(html: string, paper: PaperSize): string {
+  const rule = `<style>@page { size: ${paper === 'A4' ? 'A4' : 'letter'}; }</style>`;
+  const at = html.indexOf('</head>');
+  if (at < 0) throw new Error('the report HTML has no </head>');
+  return `${html.slice(0, at)}${rule}${html.slice(at)}`;
+}
+
+/** A file name stem from a document or file name ("footbridge-box-girder.section.json" → "footbridge-box-girder"). */
+export function fileStem(name: string): string {
+  return name.replace(/\.(section\.json|geojson|json)$/i, '').replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '') || 'section';
+}

@@ -1,0 +1,161 @@
+/** Every section property with its symbol, value and unit; stale values marked; diagnostics in words; the caution. */
+import type { ReactElement } from 'react';
+import type { LengthUnit } from '../../../core/units/index.ts';
+import { formatSig, toDisplay, type DisplaySet } from '../../../core/units/index.ts';
+import type { SectionProperties } from '../../../core/properties/types.ts';
+import type { Results } from './results.ts';
+import type { TorsionState } from './torsion-client.ts';
+import type { SectionDocument } from '../../../core/document/types.ts';
+import { RESULT_GROUPS, type ResultRow } from './result-rows.ts';
+import { CAUTION } from '../../../core/member/check.ts';
+
+interface Props {
+  readonly results: Results;
+  readonly unit: LengthUnit;
+  readonly display: DisplaySet;
+  readonly sig: number;
+  readonly torsion: TorsionState;
+  /** The document now shown: a torsion result for another one is stale. */
+  readonly current: SectionDocument;
+}
+
+function TorsionRows({ t, current, unit, display, sig }: { t: TorsionState; current: SectionDocument; unit: LengthUnit; display: DisplaySet; sig: number }): ReactElement {
+  const rows: [string, string, string, number, 'inertia' | 'warping' | 'length'][] = t.kind === 'done'
+    ? [
+        ['J', 'J', 'Saint-Venant torsion constant', t.result.J, 'inertia'],
+        ['Cw', 'Cw', 'warping constant', t.result.Cw, 'warping'],
+        ['xs', 'xs', 'shear centre x', t.result.xs, 'length'],
+        ['ys', 'ys', 'shear centre y', t.result.ys, 'length'],
+      ]
+    : [];
+  const stale = t.kind === 'done' && t.doc !== current;
+  return (
+    <table data-testid="torsion" data-state={t.kind}>
+      <caption>Torsion (finite elements, in the background)</caption>
+      <tbody>
+        {t.kind === 'running' && (
+          <tr>
+            <td colSpan={4}>
+              <progress max={1} value={t.fraction} data-testid="torsion-progress" /> solving… {Math.round(t.fraction * 100)} %
+            </td>
+          </tr>
+        )}
+        {t.kind === 'idle' && (
+          <tr>
+            <td colSpan={4} className="muted">waiting for the drawing to settle</td>
+          </tr>
+        )}
+        {t.kind === 'failed' && (
+          <tr>
+            <td colSpan={4} className="error">not computed: {t.message}</td>
+          </tr>
+        )}
+        {rows.map(([key, symbol, label, value, q]) => {
+          const d = display[q];
+          return (
+            <tr key={key} title={label} className={stale ? 'stale' : ''}>
+              <th scope="row">{symbol}</th>
+              <td className="value" data-testid={`result-${key}`} data-value={String(value)}>
+                {formatSig(toDisplay(value, unit, d), sig)}
+              </td>
+              <td className="unit">{d.label}</td>
+              <td className="label">{label}</td>
+            </tr>
+          );
+        })}
+        {t.kind === 'done' && (
+          <tr>
+            <td colSpan={4} className="muted small" data-testid="torsion-info">
+              {t.result.meshElements} elements, estimated error of J {formatSig(100 * t.result.jRelativeError, 2)} %, {Math.round(t.millis)} ms
+            </td>
+          </tr>
+        )}
+      </tbody>
+    </table>
+  );
+}
+
+/**
+ * Round-off residue (a centroid at 1e-14 mm on a symmetric section) reads as 0 on screen: a value
+ * is shown as 0 when it is below 1e-9 of the section's own size in that dimension. The data-value
+ * attribute keeps the full number.
+ */
+function cleaned(row: ResultRow, value: number, p: SectionProperties): number {
+  const size = Math.max(p.xMax - p.xMin, p.yMax - p.yMin);
+  const scale: Record<ResultRow['quantity'], number> = {
+    length: size, area: p.area, modulus: size ** 3, inertia: p.Ip, warping: size ** 6, angle: 90, ratio: 1,
+  };
+  return Math.abs(value) < 1e-9 * scale[row.quantity] ? 0 : value;
+}
+
+function shown(row: ResultRow, value: number, unit: LengthUnit, display: DisplaySet, sig: number): { text: string; unit: string } {
+  if (row.quantity === 'angle') return { text: formatSig(value, sig), unit: '°' };
+  if (row.quantity === 'ratio') return { text: formatSig(value, sig), unit: '' };
+  const d = display[row.quantity];
+  return { text: formatSig(toDisplay(value, unit, d), sig), unit: d.label };
+}
+
+export function ResultsPanel({ results, unit, display, sig, torsion, current }: Props): ReactElement {
+  const p = results.properties ?? results.stale;
+  const stale = !results.properties && !!results.stale;
+  return (
+    <section className="results" aria-label="Section properties" data-testid="results-panel" data-stale={stale ? 'true' : 'false'}>
+      <header className="results-head">
+        <h2>Section properties</h2>
+        <span className="muted" data-testid="recompute-ms" data-value={results.millis}>
+          {formatSig(results.millis, 2)} ms
+        </span>
+      </header>
+      {/* First under the heading, so it is read before any number. */}
+      <p className="caution" data-testid="caution">
+        {CAUTION}
+      </p>
+      {results.diagnostics.length > 0 && (
+        <div className="diagnostics" role="alert" data-testid="diagnostics">
+          <strong>{results.properties ? 'Note' : 'The geometry needs attention'}</strong>
+          <ol>
+            {results.diagnostics.map((d, i) => (
+              <li key={i} data-testid="diagnostic">
+                {d.message}
+              </li>
+            ))}
+          </ol>
+        </div>
+      )}
+      {stale && <p className="stale-note" data-testid="stale-note">Showing the last valid results: they no longer match the drawing.</p>}
+      {results.hiddenParts > 0 && (
+        <p className="muted">
+          {results.hiddenParts} hidden part{results.hiddenParts === 1 ? ' is' : 's are'} left out of these numbers.
+        </p>
+      )}
+      {!p && results.diagnostics.length === 0 && <p className="muted">Draw or open a section to see its properties.</p>}
+      {p && (
+        <div className={stale ? 'result-table stale' : 'result-table'}>
+          {RESULT_GROUPS.map((g) => (
+            <table key={g.title}>
+              <caption>{g.title}</caption>
+              <tbody>
+                {g.rows.map((row) => {
+                  const value = p[row.key];
+                  if (typeof value !== 'number') return null;
+                  const s = shown(row, cleaned(row, value, p), unit, display, sig);
+                  return (
+                    <tr key={row.key} title={row.label}>
+                      <th scope="row">{row.symbol}</th>
+                      <td className="value" data-testid={`result-${row.key}`} data-value={String(value)}>
+                        {s.text}
+                      </td>
+                      <td className="unit">{s.unit}</td>
+                      <td className="label">{row.label}</td>
+                    </tr>
+                  );
+                })}
+              </tbody>
+            </table>
+          ))}
+          {results.properties && <TorsionRows t={torsion} current={current} unit={unit} display={display} sig={sig} />}
+        </div>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,180 @@
+/**
+ * The stress view's numbers: typed forces read with their units, the strain plane from core/stress,
+ * extremes with their points, the neutral axis, the kern, and the colour scale of the map.
+ *
+ * Stiffness: with materials, the E-weighted section of core/materials (E in Pa, lengths in the
+ * document unit); without, the geometric section with E = 1 Pa, so stresses do not depend on E.
+ * Forces go to Pa·unit² (N) and Pa·unit³ (moments) so every stress comes out in Pa.
+ * Sign convention (METHODS §9.1): N > 0 tension; Mx > 0 tension at +Y; My > 0 tension at +X.
+ */
+import type { SectionDocument } from '../../../core/document/types.ts';
+import type { Point, Region } from '../../../core/geometry/types.ts';
+import { compositeProperties, materialPiecesFromDocument, parseQuantity, pascalsTo, forceToNewtons, FORCE_UNITS, QuantityError, type ForceUnit, type StressUnit } from '../../../core/materials/index.ts';
+import type { SectionProperties } from '../../../core/properties/types.ts';
+import { regionFromDocument } from '../../../core/section/index.ts';
+import { averageShear, kern, neutralAxis, strainPlane, stressExtremes, type NeutralAxis, type SectionStiffness, type StrainPlane } from '../../../core/stress/index.ts';
+import { convertLength, formatSig } from '../../../core/units/index.ts';
+
+export type MomentUnit = 'N·mm' | 'N·m' | 'kN·m' | 'kN·mm' | 'lbf·in' | 'lbf·ft' | 'kip·in' | 'kip·ft';
+export const MOMENT_UNITS: readonly MomentUnit[] = ['N·mm', 'N·m', 'kN·m', 'kN·mm', 'lbf·in', 'lbf·ft', 'kip·in', 'kip·ft'];
+const MOMENT_FORCE: Readonly<Record<MomentUnit, [ForceUnit, 'mm' | 'm' | 'in' | 'ft']>> = {
+  'N·mm': ['N', 'mm'], 'N·m': ['N', 'm'], 'kN·m': ['kN', 'm'], 'kN·mm': ['kN', 'mm'],
+  'lbf·in': ['lbf', 'in'], 'lbf·ft': ['lbf', 'ft'], 'kip·in': ['kip', 'in'], 'kip·ft': ['kip', 'ft'],
+};
+
+/** Units shown and assumed for bare numbers: kN, kN·m, MPa for metric documents; kip, kip·ft, ksi for inch and foot ones. */
+export function stressUnits(doc: SectionDocument): { force: ForceUnit; moment: MomentUnit; stress: StressUnit } {
+  const inch = doc.unit === 'in' || doc.unit === 'ft';
+  return inch ? { force: 'kip', moment: 'kip·ft', stress: 'ksi' } : { force: 'kN', moment: 'kN·m', stress: 'MPa' };
+}
+
+export interface ForceTexts {
+  readonly N: string;
+  readonly Mx: string;
+  readonly My: string;
+  readonly Vx: string;
+  readonly Vy: string;
+}
+
+export interface StressPiece {
+  readonly region: Region;
+  readonly E: number;
+  readonly label: string;
+}
+
+export interface StressView {
+  readonly plane: StrainPlane;
+  readonly pieces: readonly StressPiece[];
+  /** Largest and smallest stress over the section (Pa) and where. */
+  readonly max: number;
+  readonly maxAt: Point;
+  readonly min: number;
+  readonly minAt: Point;
+  /** Largest |σ| (Pa), the half-range of the colour scale. */
+  readonly scale: number;
+  readonly axis: NeutralAxis;
+  readonly kern: readonly Point[];
+  readonly tauX: number;
+  readonly tauY: number;
+  readonly withMaterials: boolean;
+  /** Per piece (one per part with a material): its own largest and smallest stress (Pa). */
+  readonly perPiece: readonly { readonly label: string; readonly max: number; readonly min: number }[];
+  /** The stress unit of the panel and legend. */
+  readonly unit: StressUnit;
+  /** The extremes as shown on the canvas, e.g. "104.0 MPa". */
+  readonly labels: { readonly max: string; readonly min: string };
+}
+
+/** "−12.5 kN·m" or a bare number in the default unit → the SI value (N or N·m); throws QuantityError naming the input. */
+function readForce(text: string, unit: ForceUnit, what: string): number {
+  if (text.trim() === '') return 0;
+  const q = parseQuantity(text.replace('−', '-'), FORCE_UNITS, unit, what);
+  return forceToNewtons(q.value, q.unit);
+}
+
+function readMoment(text: string, unit: MomentUnit, what: string): number {
+  if (text.trim() === '') return 0;
+  // Also accepted: kNm, kN*m, kN.m for kN·m (and likewise for the others).
+  const t = text.replace('−', '-').replace(/(N|kN|lbf|kip)\s*[*.·]?\s*(mm|m|in|ft)\s*$/, '$1·$2');
+  const q = parseQuantity(t, MOMENT_UNITS, unit, what);
+  const [force, length] = MOMENT_FORCE[q.unit];
+  return forceToNewtons(q.value, force) * convertLength(1, length, 'm');
+}
+
+export type StressOutcome = { readonly ok: true; readonly view: StressView } | { readonly ok: false; readonly message: string };
+
+export function computeStress(doc: SectionDocument, properties: SectionProperties | null, texts: ForceTexts): StressOutcome {
+  try {
+    return stressOf(doc, properties, texts);
+  } catch (err) {
+    // A failed invariant in core is a bug or a degenerate section; say which rather than show nothing.
+    return { ok: false, message: `The stresses could not be computed: ${err instanceof Error ? err.message : String(err)}` };
+  }
+}
+
+function stressOf(doc: SectionDocument, properties: SectionProperties | null, texts: ForceTexts): StressOutcome {
+  if (!properties) return { ok: false, message: 'The section needs valid geometry first.' };
+  const u = stressUnits(doc);
+  let N: number, Mx: number, My: number, Vx: number, Vy: number;
+  try {
+    N = readForce(texts.N, u.force, 'N');
+    Mx = readMoment(texts.Mx, u.moment, 'Mx');
+    My = readMoment(texts.My, u.moment, 'My');
+    Vx = readForce(texts.Vx, u.force, 'Vx');
+    Vy = readForce(texts.Vy, u.force, 'Vy');
+  } catch (err) {
+    if (err instanceof QuantityError) return { ok: false, message: err.message };
+    throw err;
+  }
+  let stiffness: SectionStiffness;
+  let pieces: StressPiece[];
+  let withMaterials = false;
+  const anyMaterial = doc.defaultMaterial !== null || doc.parts.some((p) => p.material !== undefined && p.material !== null);
+  if (anyMaterial) {
+    const mp = materialPiecesFromDocument(doc);
+    if (mp.issues.length > 0 || mp.diagnostics.length > 0 || mp.pieces.length === 0) {
+      return { ok: false, message: `Materials: ${[...mp.issues, ...mp.diagnostics.map((d) => d.message)].join('; ') || 'no piece with a material'}` };
+    }
+    stiffness = compositeProperties(mp.pieces, doc.unit).stiffness;
+    pieces = mp.pieces.map((p) => ({ region: p.region, E: p.material.E, label: p.label ?? p.material.id }));
+    withMaterials = true;
+  } else {
+    const p = properties;
+    stiffness = { EA: p.area, cx: p.cx, cy: p.cy, EIx: p.Ix, EIy: p.Iy, EIxy: p.Ixy };
+    pieces = [{ region: regionFromDocument(doc).region, E: 1, label: 'section' }];
+  }
+  // N in Pa·unit², M in Pa·unit³: then E·ε is in Pa.
+  const m2 = convertLength(1, doc.unit, 'm', 2), m3 = convertLength(1, doc.unit, 'm', 3);
+  const plane = strainPlane(stiffness, { N: N / m2, Mx: Mx / m3, My: My / m3 });
+  let best: { max: number; maxAt: Point; min: number; minAt: Point } | null = null;
+  const perPiece: { label: string; max: number; min: number }[] = [];
+  for (const piece of pieces) {
+    const e = stressExtremes(plane, piece.E, piece.region);
+    perPiece.push({ label: piece.label, max: e.max, min: e.min });
+    if (!best) best = { ...e };
+    else {
+      if (e.max > best.max) Object.assign(best, { max: e.max, maxAt: e.maxAt });
+      if (e.min < best.min) Object.assign(best, { min: e.min, minAt: e.minAt });
+    }
+  }
+  if (!best) return { ok: false, message: 'The section has no material to carry stress.' };
+  const box = { minX: properties.xMin, minY: properties.yMin, maxX: properties.xMax, maxY: properties.yMax };
+  const pad = 0.15 * Math.max(box.maxX - box.minX, box.maxY - box.minY);
+  const axis = neutralAxis(plane, { minX: box.minX - pad, minY: box.minY - pad, maxX: box.maxX + pad, maxY: box.maxY + pad });
+  const k = kern(pieces.flatMap((p) => p.region), stiffness);
+  // Average shear V/A over the whole (geometric) area, a nominal value.
+  const shear = averageShear({ N, Mx, My, Vx, Vy }, properties.area * m2);
+  return {
+    ok: true,
+    view: { plane, pieces, perPiece, unit: u.stress, ...best, labels: { max: `${formatSig(pascalsTo(best.max, u.stress), 4)} ${u.stress}`, min: `${formatSig(pascalsTo(best.min, u.stress), 4)} ${u.stress}` }, scale: Math.max(Math.abs(best.max), Math.abs(best.min)), axis, kern: k.vertices, tauX: shear.tauX, tauY: shear.tauY, withMaterials },
+  };
+}
+
+export const toStressUnit = (pa: number, unit: StressUnit): number => pascalsTo(pa, unit);
+
+/** The map's palette, our own: deep slate blue (compression) through the paper colour to a burnt red-orange (tension). */
+const STOPS: readonly [number, [number, number, number]][] = [
+  [-1, [38, 70, 120]],
+  [-0.5, [122, 152, 190]],
+  [0, [246, 243, 236]],
+  [0.5, [232, 160, 112]],
+  [1, [178, 58, 32]],
+];
+
+/** Colour of a stress value on the symmetric scale ±`scale` (clamped). */
+export function stressColour(value: number, scale: number): string {
+  const t = scale > 0 ? Math.max(-1, Math.min(1, value / scale)) : 0;
+  for (let i = 1; i < STOPS.length; i++) {
+    const [t1, c1] = STOPS[i] as [number, [number, number, number]];
+    const [t0, c0] = STOPS[i - 1] as [number, [number, number, number]];
+    if (t <= t1) {
+      const f = (t - t0) / (t1 - t0);
+      const c = c0.map((v, j) => Math.round(v + f * ((c1[j] ?? 0) - v)));
+      return `rgb(${c[0]},${c[1]},${c[2]})`;
+    }
+  }
+  return 'rgb(178,58,32)';
+}
+
+/** CSS gradient of the whole scale, compression at the left. */
+export const LEGEND_GRADIENT = `linear-gradient(to right, ${STOPS.map(([t]) => `${stressColour(t, 1)} ${((t + 1) * 50).toFixed(0)}%`).join(', ')})`;
