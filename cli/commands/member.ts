@@ -19,9 +19,10 @@ import {
 import type { MaterialSI } from '../../core/materials/schema.ts';
 import { SUPPORTS, type Support } from '../../core/member/beam.ts';
 import { CAUTION as MEMBER_CAUTION, type MemberResult } from '../../core/member/check.ts';
+import { COMMON_LIVE_RATIO, COMMON_TOTAL_RATIO, DEFLECTION_LIMIT_MEANING, STRESS_FACTOR_MEANING, type Criterion, type StressLimits } from '../../core/member/verdict.ts';
 import { sectionMemberCheck } from '../../core/member/section-member.ts';
 import { convertLength, formatSig, isLengthUnit, LENGTH_UNITS, type LengthUnit } from '../../core/units/index.ts';
-import { EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
+import { EXIT_BAD_INPUT, EXIT_FLAGGED, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
 import { loadSectionArgument, type LoadedSection } from '../load.ts';
 
 export const MEMBER_FLAGS: readonly FlagSpec[] = [
@@ -33,7 +34,14 @@ export const MEMBER_FLAGS: readonly FlagSpec[] = [
   { name: 'E', type: 'string', value: 'VALUE', description: 'modulus for a single-material shape; Pa, kPa, MPa, GPa, psi, ksi (default MPa metric, psi in/ft)' },
   { name: 'density', type: 'string', value: 'RHO', description: 'with --E and --self-weight: density, kg/m3 or lb/ft3 (default kg/m3 metric, lb/ft3 in/ft)' },
   { name: 'self-weight', type: 'boolean', description: 'add the section\'s own weight (from the material densities) to the uniform load' },
-  { name: 'limit', type: 'string', value: 'N', description: 'deflection limit span/N, e.g. 360, 240, 180, 120 (common practice); a cantilever uses 2 × its length' },
+  { name: 'live', type: 'string', value: 'W', description: 'live uniform load, downward, added to --uniform for the total (same units as --uniform)' },
+  { name: 'live-point', type: 'string', value: 'P', description: 'live point load, downward (same units as --point)' },
+  { name: 'live-at', type: 'string', value: 'A', description: 'position of the live point load, document unit; default midspan (cantilever: the free end)' },
+  { name: 'limit', type: 'string', value: 'N', description: 'deflection limit under total load, span/N (default 240: IBC Table 1604.3, common practice); a cantilever uses 2 × its length' },
+  { name: 'live-limit', type: 'string', value: 'N', description: 'deflection limit under live load, span/N (default 360: IBC Table 1604.3, common practice); checked when a live load is given' },
+  { name: 'stress-factor', type: 'string', value: 'F', description: 'stress limit = F × the material\'s strength basis (fy; reference Fb for wood); default 1 = the strength itself, no safety factor' },
+  { name: 'allowable', type: 'string', value: '[MAT=]S', description: 'typed allowable bending stress (e.g. 24ksi), for every material or for material id MAT; wins over --stress-factor', multiple: true },
+  { name: 'shear-allowable', type: 'string', value: '[MAT=]S', description: 'typed allowable shear stress, for every material or for material id MAT (default for steel: F × 0.6 fy)', multiple: true },
   { name: 'unit', type: 'string', value: 'U', description: 'GeoJSON only: the length unit of its coordinates, in|ft|mm|cm|m' },
   { name: 'section', type: 'string', value: 'NAME', description: 'documents with several sections (alternatives): the one to check (default: the first)' },
   { name: 'json', type: 'boolean', description: 'print one JSON object instead of the text report' },
@@ -117,32 +125,71 @@ interface MemberReport {
   readonly pieces: readonly MaterialPiece[];
 }
 
-function runCheck(section: LoadedSection, pieces: Pieces, flags: FlagValues, units: OutputUnits): MemberReport {
+function ratioFlag(flags: FlagValues, name: string, fallback: number): number {
+  const text = stringFlag(flags, name);
+  if (text === undefined) return fallback;
+  const value = Number(text);
+  if (!(text.trim() !== '' && Number.isFinite(value) && value > 0)) throw new UsageError(`--${name}: expected a positive ratio such as ${fallback}, got ${JSON.stringify(text)}`);
+  return value;
+}
+
+/** `--allowable 24ksi` (every material) or `--allowable a992=24ksi` (one material id) → Pa per material id. */
+function allowables(flag: string, values: readonly string[], pieces: readonly MaterialPiece[], units: OutputUnits): Map<string, number> | undefined {
+  if (values.length === 0) return undefined;
+  const ids = [...new Set(pieces.map((p) => p.material.id))];
+  const out = new Map<string, number>();
+  for (const item of values) {
+    const eq = item.lastIndexOf('=');
+    const id = eq < 0 ? null : item.slice(0, eq).trim();
+    const q = parseQuantity(eq < 0 ? item : item.slice(eq + 1), STRESS_UNITS, units.stress, `--${flag}`);
+    const pa = stressToPascals(q.value, q.unit);
+    if (!(pa > 0)) throw new UsageError(`--${flag} ${item}: the stress must be positive`);
+    if (id !== null && !ids.includes(id)) throw new UsageError(`--${flag} ${item}: no material "${id}" in the section; its materials: ${ids.join(', ')}`);
+    for (const target of id === null ? ids : [id]) out.set(target, pa);
+  }
+  return out;
+}
+
+function stressLimitsOf(flags: FlagValues, lists: FlagLists, pieces: readonly MaterialPiece[], units: OutputUnits): StressLimits {
+  const factorText = stringFlag(flags, 'stress-factor');
+  const factor = factorText === undefined ? undefined : Number(factorText);
+  if (factor !== undefined && !(factorText!.trim() !== '' && Number.isFinite(factor) && factor > 0)) throw new UsageError(`--stress-factor: expected a positive number such as 0.6, got ${JSON.stringify(factorText)}`);
+  const allowable = allowables('allowable', lists.allowable ?? [], pieces, units);
+  const shearAllowable = allowables('shear-allowable', lists['shear-allowable'] ?? [], pieces, units);
+  return { ...(factor !== undefined ? { factor } : {}), ...(allowable !== undefined ? { allowable } : {}), ...(shearAllowable !== undefined ? { shearAllowable } : {}) };
+}
+
+function pointLoad(flags: FlagValues, force: string, atFlag: string, span: number, support: string, units: OutputUnits): { P: number; a: number }[] {
+  const text = stringFlag(flags, force);
+  const at = lengthFlag(flags, atFlag);
+  if (at !== undefined && text === undefined) throw new UsageError(`--${atFlag} needs --${force}`);
+  if (at !== undefined && (at < 0 || at > span)) throw new UsageError(`--${atFlag}: ${at} is outside the span 0…${span} (document unit)`);
+  if (text === undefined) return [];
+  const p = parseQuantity(text, FORCE_UNITS, units.force, `--${force}`);
+  return [{ P: forceToNewtons(p.value, p.unit), a: at ?? (support === 'cantilever' ? span : span / 2) }];
+}
+
+function runCheck(section: LoadedSection, pieces: Pieces, flags: FlagValues, units: OutputUnits, lists: FlagLists): MemberReport {
   const u = section.unit;
   const span = lengthFlag(flags, 'span');
   if (span === undefined) throw new UsageError('--span is required (a length in the document unit)');
   const support = stringFlag(flags, 'support');
   if (support === undefined || !(SUPPORTS as readonly string[]).includes(support)) throw new UsageError(`--support: expected ${SUPPORTS.join(', ')}, got ${JSON.stringify(support ?? '')}`);
-  const pointText = stringFlag(flags, 'point');
-  const at = lengthFlag(flags, 'at');
-  if (at !== undefined && pointText === undefined) throw new UsageError('--at needs --point');
   if (!(span > 0)) throw new UsageError(`--span: expected a positive length, got ${span}`);
-  if (at !== undefined && (at < 0 || at > span)) throw new UsageError(`--at: ${at} is outside the span 0…${span} (document unit)`);
-  const points = [];
-  if (pointText !== undefined) {
-    const p = parseQuantity(pointText, FORCE_UNITS, units.force, '--point');
-    const a = at ?? (support === 'cantilever' ? span : span / 2);
-    points.push({ P: forceToNewtons(p.value, p.unit), a });
-  }
+  const points = pointLoad(flags, 'point', 'at', span, support, units);
   const uniformText = stringFlag(flags, 'uniform');
   const uniform = uniformText === undefined ? 0 : lineLoadNPerM(uniformText, units);
-  const limitText = stringFlag(flags, 'limit');
-  const limitRatio = limitText === undefined ? undefined : Number(limitText);
-  if (limitRatio !== undefined && !(Number.isFinite(limitRatio) && limitRatio > 0)) throw new UsageError(`--limit: expected a positive ratio such as 360, got ${JSON.stringify(limitText)}`);
+  const livePoints = pointLoad(flags, 'live-point', 'live-at', span, support, units);
+  const liveText = stringFlag(flags, 'live');
+  const liveUniform = liveText === undefined ? 0 : lineLoadNPerM(liveText, units);
+  const limitRatio = ratioFlag(flags, 'limit', COMMON_TOTAL_RATIO);
+  const liveLimitRatio = ratioFlag(flags, 'live-limit', COMMON_LIVE_RATIO);
   const selfWeight = flags['self-weight'] === true;
   if (selfWeight && pieces.pieces.some((p) => !Number.isFinite(p.material.density))) throw new UsageError('--self-weight with --E needs --density');
+  const stressLimits = stressLimitsOf(flags, lists, pieces.pieces, units);
   const checked = sectionMemberCheck(pieces.pieces, u, {
-    span, support: support as Support, points, uniform, selfWeight, samples: 100, ...(limitRatio !== undefined ? { limitRatio } : {}),
+    span, support: support as Support, points, uniform, selfWeight, samples: 100, limitRatio, liveLimitRatio, stressLimits,
+    ...(liveText !== undefined || livePoints.length > 0 ? { live: { uniform: liveUniform, points: livePoints } } : {}),
   });
   if (!checked.ok) throw new UsageError(checked.issues.join('; '));
   return {
@@ -163,6 +210,23 @@ function converters(units: OutputUnits) {
     stress: (pa: number): number => pascalsTo(pa, units.stress),
     EI: (nm2: number): number => force(nm2) * convertLength(1, 'm', units.length, 2),
   };
+}
+
+type Converters = ReturnType<typeof converters>;
+
+/** A criterion's demand and limit in the output units (length for deflections, stress for stresses). */
+function criterionJson(c: Criterion, k: Converters): Record<string, unknown> {
+  const to = (v: number | undefined): number | undefined => (v === undefined ? undefined : c.kind.startsWith('deflection') ? k.len(v) : k.stress(v));
+  return { criterion: c.label, kind: c.kind, status: c.status, demand: to(c.demand), limit: to(c.limit), ratio: c.ratio, limitBasis: c.limitBasis, ...(c.reason !== undefined ? { reason: c.reason } : {}) };
+}
+
+function criterionLine(c: Criterion, k: Converters, units: OutputUnits): string {
+  const g = (v: number): string => formatSig(v, 4);
+  const unit = c.kind.startsWith('deflection') ? units.length : units.stress;
+  const to = (v: number): number => (c.kind.startsWith('deflection') ? k.len(v) : k.stress(v));
+  if (c.status === 'not checked') return `  NOT CHECKED  ${c.label}: ${c.reason ?? ''}`;
+  const ratio = c.ratio === undefined ? '-' : `${formatSig(c.ratio * 100, 3)} %`;
+  return `  ${c.status === 'pass' ? 'pass       ' : 'FAIL       '}  ${c.label}: ${g(to(c.demand ?? NaN))} ${unit} of ${g(to(c.limit ?? NaN))} ${unit} (${c.limitBasis}) = ${ratio}`;
 }
 
 function reportJson(file: string, r: MemberReport): Record<string, unknown> {
@@ -196,6 +260,16 @@ function reportJson(file: string, r: MemberReport): Record<string, unknown> {
       ...(s.strengthRatio !== undefined ? { strengthRatio: s.strengthRatio, strengthRatioOf: s.strengthLabel } : {}),
     })),
     ...(res.limit !== undefined ? { limit: { ratio: res.limit.ratio, limitLength: k.len(res.limit.limitLength), allowed: k.len(res.limit.allowed), passes: res.limit.passes, verdict: res.limit.verdict } } : {}),
+    ...(res.liveDeflectionMax !== undefined ? { liveDeflectionMax: k.len(res.liveDeflectionMax) } : {}),
+    shearMax: { value: k.force(res.shearMax.value), at: k.len(res.shearMax.at) },
+    verdict: {
+      passes: res.verdict.passes,
+      summary: res.verdict.summary,
+      governing: res.verdict.governing?.label ?? null,
+      criteria: res.verdict.criteria.map((c) => criterionJson(c, k)),
+      deflectionLimits: DEFLECTION_LIMIT_MEANING,
+      stressLimits: STRESS_FACTOR_MEANING,
+    },
     deflectionSearch: res.deflectionSolve,
     cautions: res.cautions,
   };
@@ -213,12 +287,15 @@ function reportText(file: string, r: MemberReport): string {
     `  uniform load total   ${g(k.lineLoad(res.uniformTotal))} ${f}/${l}${r.selfWeight !== undefined ? ` (self-weight ${g(k.lineLoad(r.selfWeight))} included)` : ''}`,
     ...res.stresses.map((st) => `  ${st.name}: tension ${g(k.stress(st.maxTension))} ${s}, compression ${g(k.stress(st.maxCompression))} ${s}${st.strengthRatio !== undefined ? `, ${g(st.strengthRatio)} × its ${st.strengthLabel ?? 'strength'}` : ''}`),
   ];
-  if (res.limit !== undefined) lines.push(`  deflection limit     span/${res.limit.ratio} = ${g(k.len(res.limit.allowed))} ${l}: ${res.limit.verdict.toUpperCase()}`);
+  if (res.liveDeflectionMax !== undefined) lines.push(`  live-load deflection ${g(k.len(res.liveDeflectionMax))} ${l}`);
+  lines.push(`  maximum shear        ${g(k.force(Math.abs(res.shearMax.value)))} ${f} at x = ${g(k.len(res.shearMax.at))} ${l}`);
+  lines.push('', `verdict: ${res.verdict.summary}`, ...res.verdict.criteria.map((c) => criterionLine(c, k, r.units)));
+  lines.push('', `Deflection limits: ${DEFLECTION_LIMIT_MEANING}.`, `Stress limits: ${STRESS_FACTOR_MEANING}`);
   lines.push('', ...res.cautions.map((c) => `CAUTION: ${c}`), '');
   return lines.join('\n');
 }
 
-function runMember(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
+function runMember(positionals: readonly string[], flags: FlagValues, io: CliIo, lists: FlagLists = {}): number {
   const loaded = loadSectionArgument(memberCommand, positionals, stringFlag(flags, 'unit'), io, flags.section);
   if (!loaded) return EXIT_BAD_INPUT;
   const { file, section } = loaded;
@@ -229,9 +306,10 @@ function runMember(positionals: readonly string[], flags: FlagValues, io: CliIo)
       io.err(pieces.map((p) => `${file}: ${p}`).join('\n') + '\n');
       return EXIT_BAD_INPUT;
     }
-    const report = runCheck(section, pieces, flags, units);
+    const report = runCheck(section, pieces, flags, units, lists);
     io.out(flags.json === true ? `${JSON.stringify(reportJson(file, report), (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n` : reportText(file, report));
-    return EXIT_OK;
+    // A criterion over its limit is a result that needs attention, as a flagged row is for `check`.
+    return report.result.verdict.passes ? EXIT_OK : EXIT_FLAGGED;
   } catch (err) {
     if (err instanceof UsageError || err instanceof QuantityError) {
       io.err(`sectionsmith member: ${err.message}\n`);
@@ -244,7 +322,7 @@ function runMember(positionals: readonly string[], flags: FlagValues, io: CliIo)
 export const memberCommand: Command = {
   name: 'member',
   summary: 'beam check: maximum deflection and moment, bending stress per material, a deflection limit',
-  usage: 'member FILE --span L --support simple|cantilever|fixed|propped [--point P [--at A]] [--uniform W] [--E VALUE] [--self-weight] [--limit N] [--json]',
+  usage: 'member FILE --span L --support simple|cantilever|fixed|propped [--point P [--at A]] [--uniform W] [--live W] [--live-point P [--live-at A]] [--E VALUE] [--self-weight] [--limit N] [--live-limit N] [--stress-factor F] [--allowable [MAT=]S …] [--shear-allowable [MAT=]S …] [--json]',
   description: [
     'The section in FILE (a Sectionsmith document, or GeoJSON with --unit) as a prismatic beam bent',
     'about its x axis by downward loads. Supports: simple (pin and roller), cantilever (fixed at the',
@@ -261,8 +339,19 @@ export const memberCommand: Command = {
     'With --json: file, caution, units, convention, support, span, stiffnessFrom, EI, deflectionMax,',
     'deflectionAt, spanOverDeflection, momentMax, momentAt, momentSagging, momentHogging,',
     'reactionLeft, momentLeft, uniformTotal, selfWeight (with --self-weight), stresses (per',
-    'material), limit (with --limit: ratio, limitLength, allowed, passes, verdict), deflectionSearch',
-    'and cautions.',
+    'material), limit (ratio, limitLength, allowed, passes, verdict), liveDeflectionMax, shearMax,',
+    'verdict (passes, summary, governing, criteria with demand, limit, ratio, limitBasis, status),',
+    'deflectionSearch and cautions.',
+    '',
+    'The verdict judges every criterion and names the governing one, with its use ratio (demand /',
+    'limit): deflection under the total load (--uniform, --point, --live…, self-weight) against',
+    'span/--limit (default 240), deflection under the live load alone against span/--live-limit',
+    '(default 360; "not checked" without a live load), bending stress in each material against',
+    '--stress-factor × its strength basis (fy; the reference Fb for wood; default factor 1, the',
+    'strength itself with no safety factor) or a typed --allowable, and the shear stress',
+    'V·Q/(I·t) at the neutral axis against --shear-allowable or, for steel, factor × 0.6 fy.',
+    'Exit code 1 when any criterion is over its limit, 0 when all pass; a criterion that cannot',
+    'be judged (no strength known) is printed as NOT CHECKED.',
     '',
     'Deflection limits such as span/360, /240, /180, /120 are offered as common practice (IBC Table',
     '1604.3 ratios), not as code compliance; for a cantilever the limit uses twice its length.',

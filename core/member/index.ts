@@ -2,3 +2,5 @@
 export * from './beam.ts';
 export * from './check.ts';
 export * from './section-member.ts';
+export * from './shear.ts';
+export * from './verdict.ts';

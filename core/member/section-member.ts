@@ -12,13 +12,21 @@ import { compositeProperties, type CompositeProperties, type MaterialPiece } fro
 import type { StrengthBasis } from '../materials/schema.ts';
 import { convertLength, type LengthUnit } from '../units/index.ts';
 import type { Support } from './beam.ts';
-import { memberCheck, memberInputIssues, type MemberInput, type MemberResult } from './check.ts';
+import { memberCheck, memberInputIssues, type MemberInput, type MemberResult, type ShearCut } from './check.ts';
+import { neutralAxisShear } from './shear.ts';
+import type { StressLimits } from './verdict.ts';
 
 const STRENGTH_LABEL: Readonly<Record<StrengthBasis, string>> = {
   yield: 'yield strength fy',
   'reference-bending': 'reference Fb before the NDS adjustment factors (not an allowable stress)',
   tensile: 'tensile strength',
 };
+
+/** Q_E and Σ E·t at the E-weighted neutral axis, converted to SI (Pa·m³, Pa·m). */
+function shearCutSI(pieces: readonly MaterialPiece[], unit: LengthUnit, cy: number): ShearCut {
+  const cut = neutralAxisShear(pieces, cy);
+  return { QE: cut.QE * convertLength(1, unit, 'm', 3), Et: cut.Et * convertLength(1, unit, 'm'), cut: cut.cut.map((c) => ({ materialId: c.materialId, E: c.E })) };
+}
 
 export interface SectionMemberInput {
   /** Span in the document unit. */
@@ -29,7 +37,14 @@ export interface SectionMemberInput {
   /** Uniform load in N/m, downward positive. */
   readonly uniform: number;
   readonly selfWeight: boolean;
+  /** Deflection limit under total load, span/ratio. */
   readonly limitRatio?: number;
+  /** Live load (part of the total): P in N, a in the document unit; uniform in N/m. */
+  readonly live?: { readonly uniform: number; readonly points: readonly { readonly P: number; readonly a: number }[] };
+  /** Deflection limit under live load alone, span/ratio. */
+  readonly liveLimitRatio?: number;
+  /** Stress limits: factor × strength basis, or typed allowables (Pa) per material id. */
+  readonly stressLimits?: StressLimits;
   readonly eRef?: number;
   readonly samples?: number;
 }
@@ -45,6 +60,9 @@ export function sectionMemberCheck(pieces: readonly MaterialPiece[], unit: Lengt
   input.points.forEach((p, i) => {
     if (!(Number.isFinite(p.a) && p.a >= 0 && p.a <= input.span)) issues.push(`point load ${i + 1}: position ${p.a} ${unit} is outside the span 0…${input.span} ${unit}`);
   });
+  input.live?.points.forEach((p, i) => {
+    if (!(Number.isFinite(p.a) && p.a >= 0 && p.a <= input.span)) issues.push(`live point load ${i + 1}: position ${p.a} ${unit} is outside the span 0…${input.span} ${unit}`);
+  });
   if (issues.length > 0) return { ok: false, issues };
   const composite = compositeProperties(pieces, unit, input.eRef);
   let selfWeight: number | undefined;
@@ -58,8 +76,15 @@ export function sectionMemberCheck(pieces: readonly MaterialPiece[], unit: Lengt
     EIx: composite.EIx, EIy: composite.EIy, EIxy: composite.EIxy, yE: m(composite.cy),
     materials: composite.pieces.map((p, i) => {
       const mat = pieces[i]!.material;
-      return { id: p.materialId, name: `${p.label} (${mat.name})`, E: mat.E, yTop: m(p.yTop), yBottom: m(p.yBottom), ...(Number.isFinite(mat.fy) ? { strength: mat.fy, strengthLabel: STRENGTH_LABEL[mat.strengthBasis] } : {}) };
+      return {
+        id: p.materialId, name: `${p.label} (${mat.name})`, materialId: mat.id, materialName: mat.name, E: mat.E, yTop: m(p.yTop), yBottom: m(p.yBottom),
+        ...(Number.isFinite(mat.fy) ? { strength: mat.fy, strengthLabel: STRENGTH_LABEL[mat.strengthBasis], strengthBasis: mat.strengthBasis } : {}),
+      };
     }),
+    neutralAxisShear: shearCutSI(pieces, unit, composite.cy),
+    ...(input.live !== undefined ? { live: { uniform: input.live.uniform, points: input.live.points.map((p) => ({ P: p.P, a: m(p.a) })) } } : {}),
+    ...(input.liveLimitRatio !== undefined ? { liveLimitRatio: input.liveLimitRatio } : {}),
+    ...(input.stressLimits !== undefined ? { stressLimits: input.stressLimits } : {}),
     ...(selfWeight !== undefined ? { selfWeight } : {}),
     ...(input.limitRatio !== undefined ? { limitRatio: input.limitRatio } : {}),
     ...(input.samples !== undefined ? { samples: input.samples } : {}),
