@@ -11,6 +11,7 @@ import { compareCommand } from './commands/compare.ts';
 import { memberCommand } from './commands/member.ts';
 import { partCommand } from './commands/part.ts';
 import { propsCommand } from './commands/props.ts';
+import { BadInputError, terminalText } from './output.ts';
 
 /** Every subcommand, in the order help lists them. */
 export const COMMANDS: readonly Command[] = [
@@ -92,11 +93,19 @@ async function runCommand(command: Command, args: readonly string[], io: CliIo):
     io.out(commandHelp(command));
     return EXIT_OK;
   }
-  return command.run(parsed.positionals, parsed.flags, io, parsed.lists);
+  try {
+    return await command.run(parsed.positionals, parsed.flags, io, parsed.lists);
+  } catch (err) {
+    if (!(err instanceof BadInputError)) throw err;
+    io.err(`sectionsmith ${command.name}: ${err.message}\n`);
+    return EXIT_BAD_INPUT;
+  }
 }
 
 /** Runs the command line; returns the exit code. Never throws. */
-export async function runCli(argv: readonly string[], io: CliIo): Promise<number> {
+export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<number> {
+  // Names and labels come from user files: no control character reaches the terminal.
+  const io: CliIo = { ...rawIo, out: (text) => rawIo.out(terminalText(text)), err: (text) => rawIo.err(terminalText(text)) };
   const [first, ...rest] = argv;
   try {
     if (first === undefined) {

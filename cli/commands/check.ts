@@ -5,7 +5,7 @@
  * Exit codes: 0 every row passes; 1 some rows are flagged; 2 bad input or usage; 3 an internal
  * error (cli/command.ts), never 1, so a crash cannot read as "flagged".
  */
-import { writeFileSync } from 'node:fs';
+import { writeOutputFile } from '../output.ts';
 import { checkTable, familyOf, MappingError, parseTolerances, readStoredMapping, TableInputError, tableCheckCsv, TABLE_FAMILIES, type ColumnMapping, type TableCheck } from '../../core/check/index.ts';
 import { isLengthUnit } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_FLAGGED, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagValues } from '../command.ts';
@@ -122,8 +122,8 @@ function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo, 
     throw err;
   }
   try {
-    if (typeof flags.out === 'string') writeFileSync(flags.out, tableCheckCsv(result), 'utf8');
-    if (typeof flags['save-map'] === 'string') writeFileSync(flags['save-map'], `${JSON.stringify(result.mapping, null, 2)}\n`, 'utf8');
+    if (typeof flags.out === 'string') writeOutputFile('out', flags.out, tableCheckCsv(result));
+    if (typeof flags['save-map'] === 'string') writeOutputFile('save-map', flags['save-map'], `${JSON.stringify(result.mapping, null, 2)}\n`);
   } catch (err) {
     return fail(`cannot write: ${err instanceof Error ? err.message : String(err)}`);
   }

@@ -6,7 +6,7 @@
  * named by its section's name; names that occur in more than one file are given the file's
  * name in front ("a.json: Deeper web") so each stays distinct.
  */
-import { writeFileSync } from 'node:fs';
+import { writeOutputFile } from '../output.ts';
 import { reportHtml } from '../../core/report/index.ts';
 import { COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, comparisonSvg, columnUnit, lightestMeeting, sortAlternatives, type CompareColumn, type Comparison, type Targets } from '../../core/compare/index.ts';
 import { allSectionViews, parseDocument, type SectionDocument } from '../../core/document/index.ts';
@@ -76,16 +76,16 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
     const ratio = positive('limit', flags.limit);
     const targets: Targets = { ...(minIx !== undefined ? { minIx } : {}), ...(ratio !== undefined ? { deflectionRatio: ratio } : {}) };
     const pick = minIx !== undefined || ratio !== undefined ? lightestMeeting(c, targets) : null;
-    if (typeof flags.csv === 'string') writeFileSync(flags.csv, comparisonCsv(c), 'utf8');
+    if (typeof flags.csv === 'string') writeOutputFile('csv', flags.csv, comparisonCsv(c));
     if (typeof flags.svg === 'string' || typeof flags.report === 'string') {
       const svg = comparisonSvg(docs, c.unit);
-      if (typeof flags.svg === 'string') writeFileSync(flags.svg, svg, 'utf8');
+      if (typeof flags.svg === 'string') writeOutputFile('svg', flags.svg, svg);
       if (typeof flags.report === 'string') {
         const g = (v: number | null): string => (v === null ? '-' : formatSig(v, 4));
         const rows = sortAlternatives(c, sortBy).map((a) => [a.name, ...COMPARE_COLUMNS.map((k) => `${g(a.values[k])}${a.ratios[k] === null ? '' : ` (${formatSig(a.ratios[k], 3)}×)`}`)]);
         const checks = c.beam === null ? [] : c.alternatives.map((a) => `${a.name}: midspan deflection ${g(a.values.deflection)} m, simply supported span ${c.beam!.span} ${c.unit}, uniform ${c.beam!.load} N/m`);
         const materials = docs.map((d) => `${d.name}: ${d.defaultMaterial ?? 'no default material'}${d.materials.length > 0 ? `; ${d.materials.map((m) => m.name).join(', ')}` : ''}`);
-        writeFileSync(flags.report, reportHtml({ title: `Comparison of ${c.alternatives.length} alternatives`, drawings: [svg], tables: [{ title: `Properties (ratios to "${c.baseline}")`, columns: ['alternative', ...COMPARE_COLUMNS.map((k) => `${k} [${columnUnit(k, c.unit)}]`)], rows }], materials, memberChecks: checks }), 'utf8');
+        writeOutputFile('report', flags.report, reportHtml({ title: `Comparison of ${c.alternatives.length} alternatives`, drawings: [svg], tables: [{ title: `Properties (ratios to "${c.baseline}")`, columns: ['alternative', ...COMPARE_COLUMNS.map((k) => `${k} [${columnUnit(k, c.unit)}]`)], rows }], materials, memberChecks: checks }));
       }
     }
     if (flags.json === true) io.out(`${JSON.stringify({ ...c, alternatives: sortAlternatives(c, sortBy), pick: pick === null ? null : { name: pick.choice?.name ?? null, by: pick.by, failing: pick.failing } }, null, 2)}\n`);

@@ -98,7 +98,7 @@ function piecesFor(section: LoadedSection, flags: FlagValues, units: OutputUnits
   if (eText !== undefined) {
     const e = parseQuantity(eText, STRESS_UNITS, units.stress, '--E');
     const E = stressToPascals(e.value, e.unit);
-    if (!(E > 0)) throw new UsageError(`--E: the modulus must be positive, got ${eText}`);
+    if (!(E > 0 && Number.isFinite(E))) throw new UsageError(`--E: the modulus must be positive and finite in pascals, got ${eText}`);
     const rho = stringFlag(flags, 'density');
     // No strength is known for a bare modulus: first yield and strength ratios are not reported.
     const material: MaterialSI = { id: '--E', name: `E = ${eText}`, kind: 'other', E, G: E / 2.6, density: rho === undefined ? NaN : densityKgPerM3(rho, units), fy: NaN, strengthBasis: 'yield' };

@@ -49,13 +49,14 @@ function parseTypeRequest(positionals: readonly string[], unit: LengthUnit): Par
   if (shape === undefined) return { ok: false, message: `expected a part TYPE (${partTypes().map((t) => t.id).join(', ')}) or --designation NAME` };
   const type = getPartType(shape);
   if (type === undefined) return { ok: false, message: `no part type "${shape}"; types: ${partTypes().map((t) => t.id).join(', ')}` };
-  const params: Record<string, number> = {};
+  // Keys are user text: a null-prototype object, so "constructor=5" is an unknown dimension, not "given twice".
+  const params: Record<string, number> = Object.create(null) as Record<string, number>;
   for (const pair of pairs) {
-    const m = /^([A-Za-z][A-Za-z0-9]*)=(.+)$/.exec(pair);
+    const m = /^([A-Za-z_][A-Za-z0-9_]*)=(.+)$/.exec(pair);
     if (m === null) return { ok: false, message: `"${pair}" is not key=value (e.g. d=14 or t=3/4)` };
     const value = parseDimension(m[2]!);
     if (!Number.isFinite(value)) return { ok: false, message: `${m[1]}=${m[2]}: not a number (write 0.75, 3/4 or 1-1/2)` };
-    if (m[1]! in params) return { ok: false, message: `${m[1]} is given twice` };
+    if (Object.hasOwn(params, m[1]!)) return { ok: false, message: `${m[1]} is given twice` };
     params[m[1]!] = value;
   }
   return { ok: true, request: { shape, params, unit } };

@@ -122,7 +122,9 @@ export function jsonSyntaxError(text: string): { offset: number; message: string
 }
 
 /** JSON.parse that reports where the syntax is wrong (line and column) instead of throwing. */
-export function parseJson(text: string): JsonResult {
+export function parseJson(input: string): JsonResult {
+  // A UTF-8 byte-order mark (which some Windows editors write) is not part of the JSON (RFC 8259 §8.1 lets a parser ignore it).
+  const text = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   try {
     return { ok: true, value: JSON.parse(text) as unknown };
   } catch (err) {

@@ -30,7 +30,8 @@ const FINITE = 'a finite number';
 const finite = (what = FINITE) => v.pipe(v.number(what), v.finite(what));
 const positive = (what: string) => v.pipe(v.number(what), v.finite(what), v.gtValue(0, what));
 const text = (what = 'a string') => v.string(what);
-const point = v.tuple([finite(), finite()], 'a point [x, y] of two finite numbers');
+// strictTuple: [100, 0, 100, 50] (a missing "],[") or a 3-D point is an error, never read as [100, 0].
+const point = v.strictTuple([finite(), finite()], 'a point [x, y] of exactly two finite numbers');
 const ring = v.array(point, 'an array of points [x, y]');
 const bulges = v.array(finite('a finite bulge (tan of a quarter of the arc sweep)'), 'an array of bulges, one per segment');
 

@@ -6,7 +6,7 @@
  * plain powers of the document unit at full precision (the shortest text that reads back as the
  * same double), the same numbers as `sectionsmith props --json`.
  *
- * Escaping: a cell with a comma, quote, CR or LF is quoted and its quotes doubled. Text cells
+ * Escaping: a cell with a comma, semicolon, tab, quote, CR or LF is quoted and its quotes doubled. Text cells
  * that a spreadsheet would run as a formula (starting with = + - @, tab or CR; OWASP "CSV
  * injection", common practice) get a leading apostrophe. Number cells are never altered (a
  * negative number is not a formula). Lines end with CRLF, as RFC 4180 says.
@@ -28,7 +28,9 @@ export interface CsvInput {
 /** A text cell: formula-like text defused, then RFC 4180 quoting. */
 export function csvTextCell(text: string): string {
   const defused = /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
-  return /[",\r\n]/.test(defused) ? `"${defused.replaceAll('"', '""')}"` : defused;
+  // Quoted also when it holds a semicolon or a tab: spreadsheets in locales whose list separator
+  // is ";" split there, and "x;=1+1;y" would become a formula cell.
+  return /[",;\t\r\n]/.test(defused) ? `"${defused.replaceAll('"', '""')}"` : defused;
 }
 
 /** A number cell at full precision; non-finite values are written as text a reader cannot mistake. */

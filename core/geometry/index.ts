@@ -7,7 +7,7 @@ export * from './types.ts';
 export { ringFromPoints, ringVertexCount, ringSignedArea, reverseRing, arcOfSegment, arcFromBulge, arcSegmentArea, segmentBulge } from './ring.ts';
 export type { ArcGeometry } from './ring.ts';
 export { normaliseRegion, normalisePolygon, normaliseRing } from './normalise.ts';
-export { validateRegion, isRegionValid, MAX_COORDINATE, ZERO_AREA_RATIO, FLATTEN_RATIO, MAX_CONTACT_DIAGNOSTICS } from './validate.ts';
+export { validateRegion, isRegionValid, MAX_COORDINATE, MIN_EXTENT, ZERO_AREA_RATIO, FLATTEN_RATIO, MAX_CONTACT_DIAGNOSTICS } from './validate.ts';
 export type { ValidationContext } from './validate.ts';
 export { unionRegions, differenceRegions, intersectRegions, BooleanError, DEFAULT_SAGITTA_RATIO } from './boolean.ts';
 export type { BooleanNames, BooleanOperation, BooleanOptions } from './boolean.ts';

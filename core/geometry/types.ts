@@ -47,6 +47,7 @@ export type DiagnosticCode =
   | 'overlap'
   | 'non-finite'
   | 'too-large'
+  | 'too-small'
   | 'bad-bulge'
   | 'boolean-failed'
   | 'bad-parameter'

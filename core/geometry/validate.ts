@@ -8,6 +8,9 @@
  *                or a non-zero bulge sits on a zero-length segment;
  *   too-large    |coordinate| > MAX_COORDINATE = 1e9 in any unit (1000 km in mm): beyond that a
  *                double keeps too few digits for second moments (METHODS.md §1.3);
+ *   (arcs are checked too: the ring's exact box, arcs included, must lie within ±MAX_COORDINATE,
+ *   since a huge bulge between two near points draws a huge arc);
+ *   too-small    the larger side of the ring's box is below MIN_EXTENT = 1e-9 in any unit;
  *   too-few-points  fewer than 3 distinct vertices — except that 2 distinct vertices joined by
  *                at least one arc (a circle, a D shape) are a proper ring;
  *   zero-area    |signed area| ≤ ZERO_AREA_RATIO (1e-12) × (larger side of the ring's box)²;
@@ -47,6 +50,14 @@ import { contactPoint, leftTurn, pointInRing, segmentContact, CONTACT_CROSS, CON
 import { sweepPairs } from './sweep.ts';
 
 export const MAX_COORDINATE = 1e9;
+/**
+ * The smallest ring a section may hold, as the larger side of its box, in any unit: below it the
+ * fourth powers in second moments head for underflow (a 1e-100 plate gave I = 0 and null shape
+ * factors), so such a ring is refused rather than computed to a silent 0.
+ */
+export const MIN_EXTENT = 1e-9;
+/** The largest |bulge| (tan of a quarter of the sweep): 1e12 is a full circle but for 4e-12 rad. */
+export const MAX_BULGE = 1e12;
 export const ZERO_AREA_RATIO = 1e-12;
 export const FLATTEN_RATIO = 1e-6;
 export const MAX_CONTACT_DIAGNOSTICS = 50;
@@ -128,6 +139,8 @@ function bulgeProblem(ring: Ring, bulge: Float64Array, ctx: ValidationContext, p
     if (!Number.isFinite(b)) return makeDiagnostic('bad-bulge', `the bulge of the segment from vertex ${i} is not a finite number (${b})`, ctx, place, i, vertexAt(ring, i));
     const [x0, y0] = vertexAt(ring, i), [x1, y1] = vertexAt(ring, (i + 1) % n);
     if (x0 === x1 && y0 === y1) return makeDiagnostic('bad-bulge', `the segment from vertex ${i} has zero length but a bulge of ${b}`, ctx, place, i, [x0, y0]);
+    // radius = chord·(1 + b²)/(4|b|): past this the radius itself overflows and no extent can be found.
+    if (!(Math.abs(b) <= MAX_BULGE)) return makeDiagnostic('bad-bulge', `the bulge of the segment from vertex ${i} is ${b}, beyond ±${MAX_BULGE}: its arc's radius overflows (a bulge of 1 is a half circle)`, ctx, place, i, [x0, y0]);
   }
   return null;
 }
@@ -190,6 +203,15 @@ function cleanRing(ring: Ring, place: Place): CleanRing {
   return { place, ring: clean, original, bounds: ringBounds(clean) };
 }
 
+/** Index of the vertex that starts the segment with the largest |bulge| (0 for a straight ring). */
+function largestBulge(ring: Ring): number {
+  const bulge = ring.bulge;
+  if (bulge === undefined) return 0;
+  let at = 0;
+  for (let i = 1; i < bulge.length; i++) if (Math.abs(bulge[i]!) > Math.abs(bulge[at]!)) at = i;
+  return at;
+}
+
 function shapeProblem(c: CleanRing, ctx: ValidationContext): Diagnostic | null {
   const n = c.original.length;
   const hasArcs = c.ring.bulge !== undefined;
@@ -197,7 +219,15 @@ function shapeProblem(c: CleanRing, ctx: ValidationContext): Diagnostic | null {
     return makeDiagnostic('too-few-points', `it has ${n} distinct point${n === 1 ? '' : 's'}; a ring needs at least 3 (or 2 joined by an arc)`, ctx, c.place, 0, n > 0 ? vertexAt(c.ring, 0) : undefined);
   }
   const b = c.bounds;
+  const reach = Math.max(Math.abs(b.minX), Math.abs(b.maxX), Math.abs(b.minY), Math.abs(b.maxY));
+  // `!(≤)` so that a NaN reach (an arc whose radius overflowed) is refused too.
+  if (!(reach <= MAX_COORDINATE)) {
+    return makeDiagnostic('too-large', `its arcs (bulges) reach ${fmt(reach)} from the origin, beyond ±${MAX_COORDINATE}, too far for reliable section properties`, ctx, c.place, largestBulge(c.ring), vertexAt(c.ring, largestBulge(c.ring)));
+  }
   const size = Math.max(b.maxX - b.minX, b.maxY - b.minY);
+  if (size < MIN_EXTENT) {
+    return makeDiagnostic('too-small', `it is ${fmt(size)} across, below the smallest size of ${MIN_EXTENT} (any unit): its second moments would underflow`, ctx, c.place, 0, vertexAt(c.ring, 0));
+  }
   if (Math.abs(ringSignedArea(c.ring)) <= ZERO_AREA_RATIO * size * size) {
     return makeDiagnostic('zero-area', 'it encloses no area (all its points lie on one line or it folds back on itself)', ctx, c.place, 0, vertexAt(c.ring, 0));
   }

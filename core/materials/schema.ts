@@ -74,11 +74,20 @@ export interface MaterialIssue {
   readonly message: string;
 }
 
+const toPa = (value: number, unit: StressUnit): number => stressToPascals(value, unit);
+const STRESS_FIELDS = ['E', 'G', 'fy', 'fu', 'Emin', 'Fb'] as const;
+
 /** Validates unknown input as a Material; the message names the material and the field. */
 export function validateMaterial(input: unknown, index = -1): { material?: Material; issues: MaterialIssue[] } {
   const result = v.safeParse(MaterialSchema, input);
-  if (result.success) return { material: result.output, issues: [] };
   const id = typeof input === 'object' && input !== null && 'id' in input ? String((input as { id: unknown }).id) : undefined;
+  if (result.success) {
+    // Finite as typed but not in pascals (1e308 GPa): refused here, where the field can be named.
+    const m = result.output;
+    const overflow = STRESS_FIELDS.find((f) => m[f] !== undefined && !Number.isFinite(toPa(m[f], m.stressUnit)));
+    if (overflow === undefined) return { material: m, issues: [] };
+    return { issues: [{ index, ...(id !== undefined ? { id } : {}), message: `material "${m.id}" field ${overflow}: ${m[overflow]} ${m.stressUnit} is too large (it overflows when converted to pascals)` }] };
+  }
   const issues = result.issues.map((issue) => {
     const path = issue.path?.map((p) => String(p.key)).join('.') ?? '';
     const where = `material ${id !== undefined ? `"${id}"` : index >= 0 ? `#${index}` : ''}`.trim();
@@ -87,7 +96,6 @@ export function validateMaterial(input: unknown, index = -1): { material?: Mater
   return { issues };
 }
 
-const toPa = (value: number, unit: StressUnit): number => stressToPascals(value, unit);
 
 /** Converts a validated material to SI; G = E / (2(1 + ν)) when only ν is given (isotropic elasticity). */
 export function materialInSI(m: Material): MaterialSI {

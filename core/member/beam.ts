@@ -62,10 +62,22 @@ export function beamCaseIssues(b: BeamCase): string[] {
     if (!Number.isFinite(p.P)) issues.push(`point load ${i + 1}: force must be a finite number, got ${p.P}`);
     if (!(Number.isFinite(p.a) && p.a >= 0 && p.a <= b.span)) issues.push(`point load ${i + 1}: position ${p.a} is outside the span 0…${b.span}`);
   });
+  if (issues.length === 0 && !loadTermsFinite(b)) {
+    issues.push(`span ${b.span} with these loads is beyond what the arithmetic can hold (w·L⁴ or P·L³ overflows, so every result would be NaN); check the span's and the loads' units`);
+  }
   return issues;
 }
 
 const pos = (x: number): number => (x > 0 ? x : 0);
+
+/** Whether the largest terms of the solution (w·L⁴, P·L³, and L⁴ itself) are finite doubles. */
+function loadTermsFinite(b: BeamCase): boolean {
+  const L = b.span;
+  const L3 = L * L * L;
+  let total = L3 * L * Math.max(1, Math.abs(b.uniform));
+  for (const p of b.points) total += Math.abs(p.P) * L3;
+  return Number.isFinite(total);
+}
 
 /** Load terms at x: Σ P⟨x−a⟩ⁿ/n! + w xⁿ⁺²/(n+2)! for the deflection (n = 3) down to shear (n = 0). */
 function loadTerm(b: BeamCase, x: number, order: 0 | 1 | 2 | 3): number {

@@ -6,11 +6,19 @@
  *   rule the part type states, e.g. "2t"); every value must be a finite number at or above its
  *   minimum; symbols the part type does not know are reported, never ignored (a misspelt "bf"
  *   silently replaced by a default would be a wrong answer).
+ * Limits: a length lies within [MIN_EXTENT, MAX_COORDINATE] = [1e-9, 1e9] in any unit, or is an
+ *   optional 0 (beyond them a double keeps too few digits for second moments, or they underflow:
+ *   METHODS.md §1.3); a count is at most MAX_COUNT, so a 400-byte file cannot ask for a million
+ *   plies and hang every command (cost grows with the count).
  */
 import type { Diagnostic } from '../geometry/types.ts';
+import { MAX_COORDINATE, MIN_EXTENT } from '../geometry/validate.ts';
 import type { ParamSpec } from './registry-types.ts';
 
 export type Values = Readonly<Record<string, number>>;
+
+/** The largest count a part parameter may take (plies, laminations, rows of holes). */
+export const MAX_COUNT = 200;
 
 export interface ReadParams {
   readonly values: Record<string, number>;
@@ -62,9 +70,23 @@ export function readParams(partType: string, specs: readonly ParamSpec[], params
       diagnostics.push(badParameter(partType, `${spec.key} = ${formatNumber(given)} must be a whole number`));
       continue;
     }
+    const limit = limitProblem(spec, given);
+    if (limit !== null) {
+      diagnostics.push(badParameter(partType, limit));
+      continue;
+    }
     values[spec.key] = given;
   }
   return { values, diagnostics };
+}
+
+/** What is out of range for this kind of parameter, or null (ratios have their own rules in each part type). */
+function limitProblem(spec: ParamSpec, given: number): string | null {
+  if (spec.quantity === 'count') return given > MAX_COUNT ? `${spec.key} = ${formatNumber(given)} is more than the limit: at most ${MAX_COUNT}` : null;
+  if (spec.quantity === 'ratio') return null;
+  if (given > MAX_COORDINATE) return `${spec.key} = ${formatNumber(given)} is too large: dimensions are limited to ${MAX_COORDINATE.toExponential()} (any unit)`;
+  if (given > 0 && given < MIN_EXTENT) return `${spec.key} = ${formatNumber(given)} is too small: dimensions must be at least ${MIN_EXTENT.toExponential()} (any unit), or second moments underflow`;
+  return null;
 }
 
 /** Adds a diagnostic when `condition` holds; returns whether it did. */

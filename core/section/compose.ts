@@ -28,7 +28,7 @@
  */
 import type { Part, SectionDocument } from '../document/types.ts';
 import type { Diagnostic, Polygon, Region, Ring } from '../geometry/types.ts';
-import { BooleanError, MAX_COORDINATE, arcContainsAngle, arcOfSegment, differenceRegions, normaliseRegion, transformRegion, unionRegions, validateRegion } from '../geometry/index.ts';
+import { BooleanError, MAX_COORDINATE, MIN_EXTENT, arcContainsAngle, arcOfSegment, differenceRegions, normaliseRegion, transformRegion, unionRegions, validateRegion } from '../geometry/index.ts';
 import { shapeRegion } from '../parts/index.ts';
 import { sectionProperties } from '../properties/index.ts';
 import type { SectionProperties } from '../properties/types.ts';
@@ -134,6 +134,11 @@ export function placedPart(part: Part, index: number, unit: LengthUnit): { regio
 function placedByConstruction(placed: Region, part: Part, label: string): { region: Region; diagnostics: readonly Diagnostic[] } {
   const box = regionBox(placed);
   const reach = Math.max(Math.abs(box.minX), Math.abs(box.maxX), Math.abs(box.minY), Math.abs(box.maxY));
+  const size = Math.max(box.maxX - box.minX, box.maxY - box.minY);
+  if (size < MIN_EXTENT) {
+    const message = `Part "${label}": it is ${size} across, below the smallest size of ${MIN_EXTENT} (any unit): its second moments would underflow.`;
+    return { region: [], diagnostics: [{ code: 'too-small', part: label, message, at: [part.placement.x, part.placement.y] }] };
+  }
   if (reach <= MAX_COORDINATE) return { region: normaliseRegion(placed), diagnostics: [] };
   const message = `Part "${label}": it reaches ${reach} from the origin, beyond the limit of ${MAX_COORDINATE} (too few digits would remain for second moments).`;
   return { region: [], diagnostics: [{ code: 'too-large', part: label, message, at: [part.placement.x, part.placement.y] }] };
