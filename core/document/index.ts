@@ -9,5 +9,5 @@ export { migrateToCurrent, MIGRATIONS, OLDEST_READABLE_VERSION, FIRST_SECTION_ID
 export { parseDocument, parseJson, documentFromJson, jsonSyntaxError, serialiseDocument, newDocument, type ParseResult, type JsonResult } from './io.ts';
 export {
   allSectionViews, fileFromSection, findSection, firstSectionView, mapSectionViews, newSectionFile, sectionById, sectionNameProblem, sectionView,
-  uniqueSectionId, uniqueSectionName, withSectionView,
+  uniqueSectionId, uniqueSectionName, withSectionView, jointsOfParts,
 } from './sections.ts';

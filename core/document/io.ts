@@ -11,7 +11,7 @@ import type { LengthUnit } from '../units/types.ts';
 import { migrateToCurrent } from './migrations.ts';
 import { validateDocument, type DocumentIssue } from './schema.ts';
 import { fileFromSection, firstSectionView } from './sections.ts';
-import { DOCUMENT_FORMAT, SECTION_VIEW_VERSION, type MaterialRef, type Part, type SectionDocument, type SectionFile } from './types.ts';
+import { DOCUMENT_FORMAT, SECTION_VIEW_VERSION, type JointSetting, type MaterialRef, type Part, type SectionDocument, type SectionFile } from './types.ts';
 
 /**
  * `file` is the whole file (every section); `document` is the view of its first section, for
@@ -165,7 +165,10 @@ export function newDocument(unit: LengthUnit, name = 'Untitled section'): Sectio
 }
 
 function orderedPart(p: Part): Record<string, unknown> {
-  const head = { id: p.id, name: p.name, type: p.type, operation: p.operation, material: p.material, visible: p.visible, placement: { x: p.placement.x, y: p.placement.y, rotationDeg: p.placement.rotationDeg, mirror: p.placement.mirror } };
+  const head = {
+    id: p.id, name: p.name, type: p.type, operation: p.operation, ...(p.cutoutRole !== undefined ? { cutoutRole: p.cutoutRole } : {}),
+    material: p.material, visible: p.visible, placement: { x: p.placement.x, y: p.placement.y, rotationDeg: p.placement.rotationDeg, mirror: p.placement.mirror },
+  };
   switch (p.type) {
     case 'rectangle':
       return { ...head, width: p.width, height: p.height };
@@ -178,6 +181,12 @@ function orderedPart(p: Part): Record<string, unknown> {
       return { ...head, shape: p.shape, params, ...(p.designation !== undefined ? { designation: p.designation } : {}) };
     }
   }
+}
+
+function orderedJoint(j: JointSetting): Record<string, unknown> {
+  const k = j.kind;
+  const kind = k.type === 'welded' ? { type: k.type, weld: k.weld } : k.type === 'fastened' ? { type: k.type, fastener: k.fastener, rows: k.rows, ...(k.pitch !== undefined ? { pitch: k.pitch } : {}) } : { type: k.type };
+  return { parts: [j.parts[0], j.parts[1]], kind };
 }
 
 function orderedMaterial(m: MaterialRef): Record<string, unknown> {
@@ -200,7 +209,7 @@ export function serialiseDocument(input: SectionFile | SectionDocument): string 
     defaultMaterial: doc.defaultMaterial,
     ...(ref !== undefined ? { referenceModulus: 'material' in ref ? { material: ref.material } : { value: ref.value, unit: ref.unit } } : {}),
     materials: doc.materials.map(orderedMaterial),
-    sections: doc.sections.map((s) => ({ id: s.id, name: s.name, parts: s.parts.map(orderedPart) })),
+    sections: doc.sections.map((s) => ({ id: s.id, name: s.name, parts: s.parts.map(orderedPart), ...(s.joints !== undefined && s.joints.length > 0 ? { joints: s.joints.map(orderedJoint) } : {}) })),
   };
   // Arrays holding only numbers go on one line. JSON.stringify never puts a raw newline inside a
   // string, so the leading "[\n" anchors the pattern to structure, never to text in a name.

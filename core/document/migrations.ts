@@ -13,14 +13,20 @@
  *      top, the parts move into `sections: [{ id, name, parts }]` (core/document/types.ts).
  *      A version 1 file becomes one section with id "s1", named after the document
  *      ("Section 1" when the document's name is blank).
+ *   3  a cut-out (subtract part) has a role, `cutoutRole`: "fastener-hole" (a net-section
+ *      deduction only) or "void" (missing along the member); a section may hold `joints`, the
+ *      kinds the user gave the joints between its parts. Every cut-out of a version 2 file meant
+ *      material missing along the member (that is how every property used it), so each one
+ *      becomes a "void", written out; a version 2 file has no joints, so every joint starts at
+ *      its default kind.
  *
- * A file newer than this build is rejected with "document is version 7; this build reads up to 2"
+ * A file newer than this build is rejected with "document is version 7; this build reads up to 3"
  * rather than guessed at. Each `up` receives a value already checked against its own version's
  * schema (and `check`, for rules across fields), so it can be written plainly.
  */
 import * as v from 'valibot';
 import { DOCUMENT_FORMAT, DOCUMENT_VERSION } from './types.ts';
-import { describeValue, issuesOf, version1Issues, version1Schema, type DocumentIssue } from './schema.ts';
+import { describeValue, issuesOf, version1Issues, version1Schema, version2Issues, version2Schema, type DocumentIssue } from './schema.ts';
 
 const finite = v.pipe(v.number('a finite number'), v.finite('a finite number'));
 const point = v.tuple([finite, finite], 'a point [x, y] of two finite numbers');
@@ -85,6 +91,17 @@ function upFrom1(doc: Version1): unknown {
   };
 }
 
+type Version2 = v.InferOutput<typeof version2Schema>;
+
+/** Version 2 → 3: every cut-out is read as a void, as version 2 computed it. */
+function upFrom2(doc: Version2): unknown {
+  return {
+    ...doc,
+    version: 3,
+    sections: doc.sections.map((s) => ({ ...s, parts: s.parts.map((p) => (p.operation === 'subtract' ? { ...p, cutoutRole: 'void' } : p)) })),
+  };
+}
+
 export interface Migration {
   /** The version this step reads; it produces version `from + 1`. */
   readonly from: number;
@@ -98,6 +115,7 @@ export interface Migration {
 export const MIGRATIONS: readonly Migration[] = [
   { from: 0, schema: version0, up: upFrom0 as (doc: never) => unknown },
   { from: 1, schema: version1Schema, check: version1Issues as (doc: never) => readonly DocumentIssue[], up: upFrom1 as (doc: never) => unknown },
+  { from: 2, schema: version2Schema, check: version2Issues as (doc: never) => readonly DocumentIssue[], up: upFrom2 as (doc: never) => unknown },
 ];
 
 export const OLDEST_READABLE_VERSION = DOCUMENT_VERSION - MIGRATIONS.length;

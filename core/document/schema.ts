@@ -1,8 +1,10 @@
 /**
  * Validation of the current document format (version DOCUMENT_VERSION, a SectionFile) with
  * valibot, plus the checks that span several fields (unique section ids and names, unique part
- * ids within a section, bulge counts, material references). The version 1 layout (one section,
- * parts at the top) is kept here too, for its migration.
+ * ids within a section, bulge counts, material references, cut-out roles on subtract parts only,
+ * joints naming two parts of their own section once). The version 1 layout (one section, parts
+ * at the top) and the version 2 layout (sections, no cut-out roles or joints) are kept here too,
+ * for their migrations.
  *
  * Every problem becomes a DocumentIssue with a JSON path in the user's file
  * (`sections[1].parts[2].placement.rotationDeg`) and an "expected …, got …" sentence. Unknown keys are
@@ -14,7 +16,7 @@
  */
 import * as v from 'valibot';
 import { STRESS_UNITS } from '../units/types.ts';
-import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type MaterialRef, type Part, type SectionFile } from './types.ts';
+import { CUTOUT_ROLES, DOCUMENT_FORMAT, DOCUMENT_VERSION, type JointSetting, type MaterialRef, type Part, type SectionFile } from './types.ts';
 
 export interface DocumentIssue {
   /** JSON path in the file, e.g. 'parts[2].placement.rotationDeg'; '' for the whole file. */
@@ -54,36 +56,62 @@ const common = {
   visible: v.boolean('true or false'),
 };
 
-const polygonPart = v.strictObject({
-  ...common,
-  type: v.literal('polygon'),
-  outer: ring,
-  outerBulges: v.optional(bulges),
-  holes: v.array(ring, 'an array of rings'),
-  holeBulges: v.optional(v.array(bulges, 'an array of bulge arrays, one per hole')),
-}, 'a part object');
-const rectanglePart = v.strictObject({
-  ...common,
-  type: v.literal('rectangle'),
-  width: positive('a positive finite number'),
-  height: positive('a positive finite number'),
-}, 'a part object');
-const circlePart = v.strictObject({
-  ...common,
-  type: v.literal('circle'),
-  diameter: positive('a positive finite number'),
-}, 'a part object');
-const shapePart = v.strictObject({
-  ...common,
-  type: v.literal('shape'),
-  shape: v.pipe(text('a part type name'), v.minLength(1, 'a part type name')),
-  params: v.record(v.string(), finite(), 'an object of dimensions { symbol: number }'),
-  designation: v.optional(text()),
-}, 'a part object');
+/** Version 3 adds a cut-out's role (subtract parts only; checked across fields). */
+const roleField = { cutoutRole: v.optional(v.picklist(CUTOUT_ROLES, `a cut-out role: ${CUTOUT_ROLES.map((r) => `"${r}"`).join(' or ')}`)) };
 
 export const PART_TYPES = ['polygon', 'rectangle', 'circle', 'shape'] as const;
 
-const part = v.variant('type', [polygonPart, rectanglePart, circlePart, shapePart], `a part object with "type" one of ${PART_TYPES.map((t) => `"${t}"`).join(', ')}`);
+/** The part object of a format version: versions 1 and 2 have no cutoutRole. */
+function partSchema(withRole: boolean) {
+  const base = withRole ? { ...common, ...roleField } : common;
+  const polygonPart = v.strictObject({
+    ...base,
+    type: v.literal('polygon'),
+    outer: ring,
+    outerBulges: v.optional(bulges),
+    holes: v.array(ring, 'an array of rings'),
+    holeBulges: v.optional(v.array(bulges, 'an array of bulge arrays, one per hole')),
+  }, 'a part object');
+  const rectanglePart = v.strictObject({
+    ...base,
+    type: v.literal('rectangle'),
+    width: positive('a positive finite number'),
+    height: positive('a positive finite number'),
+  }, 'a part object');
+  const circlePart = v.strictObject({
+    ...base,
+    type: v.literal('circle'),
+    diameter: positive('a positive finite number'),
+  }, 'a part object');
+  const shapePart = v.strictObject({
+    ...base,
+    type: v.literal('shape'),
+    shape: v.pipe(text('a part type name'), v.minLength(1, 'a part type name')),
+    params: v.record(v.string(), finite(), 'an object of dimensions { symbol: number }'),
+    designation: v.optional(text()),
+  }, 'a part object');
+  return v.variant('type', [polygonPart, rectanglePart, circlePart, shapePart], `a part object with "type" one of ${PART_TYPES.map((t) => `"${t}"`).join(', ')}`);
+}
+
+const partV2 = partSchema(false);
+const part = partSchema(true);
+
+const jointKind = v.variant('type', [
+  v.strictObject({ type: v.literal('welded'), weld: v.picklist(['fillet-one-side', 'fillet-both-sides', 'groove'], '"fillet-one-side", "fillet-both-sides" or "groove"') }, 'a welded joint { type, weld }'),
+  v.strictObject({
+    type: v.literal('fastened'),
+    fastener: v.picklist(['bolt', 'nail', 'screw'], '"bolt", "nail" or "screw"'),
+    rows: v.pipe(v.number('a whole number of rows, at least 1'), v.integer('a whole number of rows, at least 1'), v.minValue(1, 'a whole number of rows, at least 1')),
+    pitch: v.optional(positive('a positive finite pitch (document unit)')),
+  }, 'a fastened joint { type, fastener, rows, pitch? }'),
+  v.strictObject({ type: v.literal('glued') }, 'a glued joint { type }'),
+  v.strictObject({ type: v.literal('not-connected') }, 'a joint { type: "not-connected" }'),
+], 'a joint kind with "type" one of "welded", "fastened", "glued", "not-connected"');
+
+const jointSetting = v.strictObject({
+  parts: v.tuple([v.pipe(text('a part id'), v.minLength(1, 'a part id')), v.pipe(text('a part id'), v.minLength(1, 'a part id'))], 'two part ids [a, b]'),
+  kind: jointKind,
+}, 'a joint object { parts: [a, b], kind }');
 
 const material = v.looseObject({ id: v.pipe(text('a non-empty string'), v.minLength(1, 'a non-empty string')), name: text() }, 'a material object { id, name, … }');
 
@@ -105,18 +133,37 @@ export const version1Schema = v.strictObject({
   version: v.literal(1, '1'),
   name: text(),
   unit,
-  parts: v.array(part, 'an array of parts'),
+  parts: v.array(partV2, 'an array of parts'),
   materials: v.array(material, 'an array of materials'),
   defaultMaterial: v.nullable(text('a material id (string) or null')),
   // Written by development builds between the materials editor and version 2; carried over as it is.
   referenceModulus: v.optional(referenceModulus),
 }, 'a Sectionsmith document object');
 
+const sectionV2 = v.strictObject({
+  id: nonBlank('a non-empty string'),
+  name: nonBlank('a non-empty name (not only spaces)'),
+  parts: v.array(partV2, 'an array of parts'),
+}, 'a section object { id, name, parts }');
+
+/** Version 2: several sections, cut-outs without a role (read only through its migration). */
+export const version2Schema = v.strictObject({
+  format: v.literal(DOCUMENT_FORMAT, `"${DOCUMENT_FORMAT}"`),
+  version: v.literal(2, '2'),
+  name: text(),
+  unit,
+  materials: v.array(material, 'an array of materials'),
+  defaultMaterial: v.nullable(text('a material id (string) or null')),
+  referenceModulus: v.optional(referenceModulus),
+  sections: v.pipe(v.array(sectionV2, 'an array of sections'), v.minLength(1, 'at least one section')),
+}, 'a Sectionsmith document object');
+
 const section = v.strictObject({
   id: nonBlank('a non-empty string'),
   name: nonBlank('a non-empty name (not only spaces)'),
   parts: v.array(part, 'an array of parts'),
-}, 'a section object { id, name, parts }');
+  joints: v.optional(v.array(jointSetting, 'an array of joints')),
+}, 'a section object { id, name, parts, joints? }');
 
 export const documentSchema = v.strictObject({
   format: v.literal(DOCUMENT_FORMAT, `"${DOCUMENT_FORMAT}"`),
@@ -192,6 +239,7 @@ function partListIssues(parts: readonly Part[], at: string, materialIds: Readonl
     if (partIds.has(p.id)) issues.push({ path: `${here}.id`, message: `${here}.id: expected a unique id, got ${JSON.stringify(p.id)} again` });
     partIds.add(p.id);
     if (p.material !== null && !materialIds.has(p.material)) issues.push({ path: `${here}.material`, message: `${here}.material: expected the id of an entry in materials or null, got ${JSON.stringify(p.material)}` });
+    if (p.cutoutRole !== undefined && p.operation !== 'subtract') issues.push({ path: `${here}.cutoutRole`, message: `${here}.cutoutRole: a cut-out role belongs to a subtract part, but this part adds material (remove the key or make the part subtract)` });
     if (p.type !== 'polygon') return;
     if (p.outerBulges && p.outerBulges.length !== p.outer.length) {
       issues.push({ path: `${here}.outerBulges`, message: `${here}.outerBulges: expected ${p.outer.length} bulges (one per segment of outer), got ${p.outerBulges.length}` });
@@ -207,6 +255,31 @@ function partListIssues(parts: readonly Part[], at: string, materialIds: Readonl
       }
     }
   });
+}
+
+/** Joints name two different parts of their own section, and each pair once; `at` is the section's path. */
+function jointIssues(joints: readonly JointSetting[], parts: readonly Part[], at: string, issues: DocumentIssue[]): void {
+  const ids = new Set(parts.map((p) => p.id));
+  const pairs = new Map<string, number>();
+  joints.forEach((j, k) => {
+    const here = `${at}.joints[${k}]`;
+    j.parts.forEach((id, s) => {
+      if (!ids.has(id)) issues.push({ path: `${here}.parts[${s}]`, message: `${here}.parts[${s}]: expected the id of a part of this section, got ${JSON.stringify(id)}` });
+    });
+    if (j.parts[0] === j.parts[1]) issues.push({ path: `${here}.parts`, message: `${here}.parts: expected two different parts, got ${JSON.stringify(j.parts[0])} twice` });
+    const key = [...j.parts].sort().join('\u0000');
+    const earlier = pairs.get(key);
+    if (earlier !== undefined) issues.push({ path: `${here}.parts`, message: `${here}.parts: the joint between ${JSON.stringify(j.parts[0])} and ${JSON.stringify(j.parts[1])} is already given at ${at}.joints[${earlier}]` });
+    else pairs.set(key, k);
+  });
+}
+
+/** Cross-field problems of a version 2 document (paths as in that file). */
+export function version2Issues(doc: { readonly sections: readonly { readonly parts: readonly Part[] }[]; readonly materials: readonly MaterialRef[]; readonly defaultMaterial: string | null }): DocumentIssue[] {
+  const issues: DocumentIssue[] = [];
+  const ids = materialIssues(doc.materials, doc.defaultMaterial, issues);
+  doc.sections.forEach((s, k) => partListIssues(s.parts, `sections[${k}].parts`, ids, issues));
+  return issues;
 }
 
 /** Cross-field problems of a version 1 document (paths as in that file: parts[2]…). */
@@ -236,6 +309,7 @@ function crossFieldIssues(doc: SectionFile): DocumentIssue[] {
     if (earlier !== undefined) issues.push({ path: `${at}.name`, message: `${at}.name: expected a name no other section has, got ${JSON.stringify(s.name)}, already the name of sections[${earlier}]` });
     else sectionNames.set(key, k);
     partListIssues(s.parts, `${at}.parts`, materialIds, issues);
+    if (s.joints !== undefined) jointIssues(s.joints, s.parts, at, issues);
   });
   return issues;
 }

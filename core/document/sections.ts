@@ -1,8 +1,8 @@
 /**
  * Sections (alternatives) of a file and the one-section view the computing code takes.
  *
- * A SectionFile (version 2) holds document-wide fields (name, unit, materials, default
- * material) and one or more sections, each with its own parts. Everything that computes or
+ * A SectionFile (version 3) holds document-wide fields (name, unit, materials, default
+ * material) and one or more sections, each with its own parts and joint kinds. Everything that computes or
  * edits a single section (core/section, core/materials, core/member, core/export, the editor's
  * tools) takes a SectionDocument: `sectionView` makes one from a section, `withSectionView`
  * writes an edited one back. Both are pure and share structure (a view's `parts` is the
@@ -14,13 +14,15 @@
  *   - the unit is document-wide: a view cannot change it (convert the whole file instead);
  *   - materials are document-wide: a view's materials become the file's, and a part in another
  *     section whose material was removed through the view falls back to the default (null), as
- *     it would in the section being edited.
+ *     it would in the section being edited;
+ *   - a joint kind names two parts of its own section: when a view comes back without one of
+ *     them (the part was deleted), that joint's setting goes with it.
  * Asking for a section id that is not in the file is a bug and throws (core/invariant.ts);
  * names typed by people are looked up with `findSection`, which returns null.
  */
 import { invariant } from '../invariant.ts';
 import type { LengthUnit } from '../units/types.ts';
-import { DOCUMENT_FORMAT, DOCUMENT_VERSION, SECTION_VIEW_VERSION, type Part, type Section, type SectionDocument, type SectionFile } from './types.ts';
+import { DOCUMENT_FORMAT, DOCUMENT_VERSION, SECTION_VIEW_VERSION, type JointSetting, type Part, type Section, type SectionDocument, type SectionFile } from './types.ts';
 
 /** The section with this id; throws if there is none (a caller's bug). */
 export function sectionById(file: SectionFile, sectionId: string): Section {
@@ -33,7 +35,24 @@ export function sectionById(file: SectionFile, sectionId: string): Section {
 export function sectionView(file: SectionFile, sectionId: string): SectionDocument {
   const s = sectionById(file, sectionId);
   const ref = file.referenceModulus;
-  return { format: DOCUMENT_FORMAT, version: SECTION_VIEW_VERSION, name: s.name, unit: file.unit, parts: s.parts, materials: file.materials, defaultMaterial: file.defaultMaterial, ...(ref !== undefined ? { referenceModulus: ref } : {}) };
+  return {
+    format: DOCUMENT_FORMAT, version: SECTION_VIEW_VERSION, name: s.name, unit: file.unit, parts: s.parts, materials: file.materials, defaultMaterial: file.defaultMaterial,
+    ...(ref !== undefined ? { referenceModulus: ref } : {}), ...(s.joints !== undefined ? { joints: s.joints } : {}),
+  };
+}
+
+/** The joint settings that still name two parts of `parts` (a deleted part takes its joints with it). */
+export function jointsOfParts(joints: readonly JointSetting[] | undefined, parts: readonly Part[]): readonly JointSetting[] | undefined {
+  if (joints === undefined) return undefined;
+  const ids = new Set(parts.map((p) => p.id));
+  const kept = joints.filter((j) => ids.has(j.parts[0]) && ids.has(j.parts[1]));
+  return kept.length === joints.length ? joints : kept;
+}
+
+/** A section object from its parts, name and joints (joints left out when there are none to keep). */
+function sectionOf(id: string, name: string, parts: readonly Part[], joints: readonly JointSetting[] | undefined): Section {
+  const kept = jointsOfParts(joints, parts);
+  return kept !== undefined && kept.length > 0 ? { id, name, parts, joints: kept } : { id, name, parts };
 }
 
 /** The view of the first section (what a command reads when no section is named). */
@@ -73,7 +92,7 @@ export function withSectionView(file: SectionFile, sectionId: string, view: Sect
   const s = sectionById(file, sectionId);
   invariant(view.unit === file.unit, `a section view cannot change the document unit (${file.unit} → ${view.unit}); convert the whole file`);
   const materialsChanged = view.materials !== file.materials || view.defaultMaterial !== file.defaultMaterial || view.referenceModulus !== file.referenceModulus;
-  if (view.parts === s.parts && view.name === s.name && !materialsChanged) return file;
+  if (view.parts === s.parts && view.name === s.name && view.joints === s.joints && !materialsChanged) return file;
   if (view.name !== s.name) {
     const problem = sectionNameProblem(file, view.name, sectionId);
     invariant(problem === null, `renaming section "${s.name}": ${problem ?? ''}`);
@@ -87,7 +106,7 @@ export function withSectionView(file: SectionFile, sectionId: string, view: Sect
     materials: view.materials,
     defaultMaterial: view.defaultMaterial,
     ...(view.referenceModulus !== undefined ? { referenceModulus: view.referenceModulus } : {}),
-    sections: file.sections.map((x) => (x.id === sectionId ? { id: x.id, name: view.name, parts: view.parts } : materialsChanged ? { ...x, parts: keepMaterial(x.parts) } : x)),
+    sections: file.sections.map((x) => (x.id === sectionId ? sectionOf(x.id, view.name, view.parts, view.joints) : materialsChanged ? { ...x, parts: keepMaterial(x.parts) } : x)),
   };
 }
 
@@ -98,7 +117,7 @@ export function fileFromSection(doc: SectionDocument, sectionId = 's1'): Section
   return {
     format: DOCUMENT_FORMAT, version: DOCUMENT_VERSION, name: doc.name, unit: doc.unit, materials: doc.materials, defaultMaterial: doc.defaultMaterial,
     ...(ref !== undefined ? { referenceModulus: ref } : {}),
-    sections: [{ id: sectionId, name, parts: doc.parts }],
+    sections: [sectionOf(sectionId, name, doc.parts, doc.joints)],
   };
 }
 
@@ -131,5 +150,5 @@ export function mapSectionViews(file: SectionFile, fn: (view: SectionDocument) =
   invariant(first, `"${file.name}" has no sections`);
   for (const v of views) invariant(v.unit === first.unit && v.materials === first.materials && v.defaultMaterial === first.defaultMaterial && v.referenceModulus === first.referenceModulus, 'mapSectionViews: every section must come back with the same unit and materials');
   const { referenceModulus: _old, ...rest } = file;
-  return { ...rest, ...(first.referenceModulus !== undefined ? { referenceModulus: first.referenceModulus } : {}), unit: first.unit, materials: first.materials, defaultMaterial: first.defaultMaterial, sections: file.sections.map((s, i) => ({ id: s.id, name: (views[i] as SectionDocument).name, parts: (views[i] as SectionDocument).parts })) };
+  return { ...rest, ...(first.referenceModulus !== undefined ? { referenceModulus: first.referenceModulus } : {}), unit: first.unit, materials: first.materials, defaultMaterial: first.defaultMaterial, sections: file.sections.map((s, i) => { const view = views[i] as SectionDocument; return sectionOf(s.id, view.name, view.parts, view.joints); }) };
 }

@@ -5,9 +5,9 @@
  * migrations.ts); this file is the type contract the rest of the code builds on.
  *
  * Two shapes:
- *   SectionFile      what a file holds (version 2): document-wide name, unit, materials and
+ *   SectionFile      what a file holds (version 3): document-wide name, unit, materials and
  *                    default material, and one or more named sections (alternatives), each
- *                    with its own parts.
+ *                    with its own parts and the kinds the user gave its joints.
  *   SectionDocument  one section seen on its own, with the document-wide fields beside its
  *                    parts: exactly the layout of a version 1 file. Everything that computes
  *                    (core/section, core/materials, core/member, core/export, the editor's
@@ -18,7 +18,7 @@ import type { LengthUnit, StressUnit } from '../units/types.ts';
 
 export const DOCUMENT_FORMAT = 'sectionsmith-section';
 /** The version files are written in (SectionFile). */
-export const DOCUMENT_VERSION = 2;
+export const DOCUMENT_VERSION = 3;
 /** A one-section view (SectionDocument) has the layout of this version: the last one-section format. */
 export const SECTION_VIEW_VERSION = 1;
 
@@ -34,6 +34,18 @@ export interface Placement {
 
 export type Operation = 'add' | 'subtract';
 
+/**
+ * What a cut-out (a subtract part) is, which decides where it counts:
+ *   'fastener-hole'  a bolt, rivet or pin hole through the plies: it exists only at the
+ *                    fastener, so it is a net-section deduction and nothing else (stiffness,
+ *                    deflection, torsion and plastic moduli use the gross section);
+ *   'void'           material missing along the whole member (the inside of a box, a cored
+ *                    slot, a lightening hole running along the member): every property sees it.
+ * A subtract part without a role is a void (what every cut-out meant before version 3).
+ */
+export type CutoutRole = 'fastener-hole' | 'void';
+export const CUTOUT_ROLES: readonly CutoutRole[] = ['fastener-hole', 'void'];
+
 interface PartCommon {
   readonly id: string;
   readonly name: string;
@@ -42,6 +54,8 @@ interface PartCommon {
   /** Material id from SectionDocument.materials; null = the document default. */
   readonly material: string | null;
   readonly visible: boolean;
+  /** Subtract parts only: what the cut-out is (absent = 'void'). */
+  readonly cutoutRole?: CutoutRole;
 }
 
 /** Vertices in local coordinates; optional bulges per segment (see core/geometry/types.ts). */
@@ -97,6 +111,29 @@ export type ReferenceModulus =
   | { readonly value: number; readonly unit: StressUnit };
 
 /**
+ * How two parts that touch along a line are joined. The engine finds the joints (contact
+ * segments between part outlines, core/joints); the file keeps only the kind the user chose for
+ * a pair of parts, never the computed segments. A pair with no entry takes the default: welded
+ * (fillet both sides) between two metal parts, not connected otherwise (core/joints says which).
+ *   welded      fillet weld on one side or on both sides of the joint line, or a groove weld;
+ *   fastened    bolts, nails or screws in `rows` rows along the member (pitch is computed, or
+ *               the user's own `pitch` in the document unit is checked);
+ *   glued       an adhesive line along the whole joint;
+ *   not connected  the parts only touch: they do not share shear, and torsion treats them apart.
+ */
+export type JointKind =
+  | { readonly type: 'welded'; readonly weld: 'fillet-one-side' | 'fillet-both-sides' | 'groove' }
+  | { readonly type: 'fastened'; readonly fastener: 'bolt' | 'nail' | 'screw'; readonly rows: number; readonly pitch?: number }
+  | { readonly type: 'glued' }
+  | { readonly type: 'not-connected' };
+
+/** The kind a user gave the joint between two parts (part ids of the same section, either order). */
+export interface JointSetting {
+  readonly parts: readonly [string, string];
+  readonly kind: JointKind;
+}
+
+/**
  * One section (alternative) on its own: its parts with the document's unit and materials.
  * As a view of a SectionFile, `name` is the section's name.
  */
@@ -110,6 +147,8 @@ export interface SectionDocument {
   readonly defaultMaterial: string | null;
   /** Optional (added with the materials editor); old files without it load unchanged. */
   readonly referenceModulus?: ReferenceModulus;
+  /** The section's joint kinds (version 3); absent = every joint takes its default kind. */
+  readonly joints?: readonly JointSetting[];
 }
 
 /** One named alternative in a file: its own parts; unit and materials are the file's. */
@@ -119,6 +158,8 @@ export interface Section {
   /** Unique in the file, not empty or blank: how people and `--section NAME` refer to it. */
   readonly name: string;
   readonly parts: readonly Part[];
+  /** Kinds the user gave this section's joints (see JointSetting); absent = all defaults. */
+  readonly joints?: readonly JointSetting[];
 }
 
 /** What a file holds (version DOCUMENT_VERSION). */

@@ -18,9 +18,9 @@ const plate = {
   id: 'p1', name: 'web', type: 'rectangle', operation: 'add', material: null, visible: true,
   placement: { x: 0, y: 0, rotationDeg: 0, mirror: false }, width: 10, height: 300,
 };
-/** A version 2 file whose one section holds `parts`. */
+/** A current-version file whose one section holds `parts`. */
 const withParts = (parts: unknown[], extra: Record<string, unknown> = {}): string =>
-  JSON.stringify({ format: 'sectionsmith-section', version: 2, name: 'Mezzanine flitch beam', unit: 'mm', materials: [], defaultMaterial: null, sections: [{ id: 's1', name: 'Mezzanine flitch beam', parts }], ...extra });
+  JSON.stringify({ format: 'sectionsmith-section', version: DOCUMENT_VERSION, name: 'Mezzanine flitch beam', unit: 'mm', materials: [], defaultMaterial: null, sections: [{ id: 's1', name: 'Mezzanine flitch beam', parts }], ...extra });
 
 function messages(text: string): string[] {
   const r = parseDocument(text, 'beam.json');
@@ -116,7 +116,7 @@ describe('versions', () => {
     MIGRATIONS.forEach((m, k) => expect(m.from).toBe(OLDEST_READABLE_VERSION + k));
   });
 
-  it('version 0 (pre-release layout) migrates to the version 1 document written out by hand', () => {
+  it('version 0 (pre-release layout) migrates to the version 1 document written out by hand (through 3: its cut-out is a void)', () => {
     const v0 = {
       format: 'sectionsmith-section', version: 0, name: 'Footbridge box girder', units: 'mm',
       parts: [
@@ -129,7 +129,7 @@ describe('versions', () => {
       format: 'sectionsmith-section', version: 1, name: 'Footbridge box girder', unit: 'mm', materials: [], defaultMaterial: null,
       parts: [
         { id: 'p1', name: 'deck plate', type: 'rectangle', operation: 'add', material: null, visible: true, placement: { x: 0, y: 300, rotationDeg: 0, mirror: false }, width: 800, height: 12 },
-        { id: 'p2', name: 'circle 2', type: 'circle', operation: 'subtract', material: null, visible: true, placement: { x: 100, y: 150, rotationDeg: 0, mirror: false }, diameter: 22 },
+        { id: 'p2', name: 'circle 2', type: 'circle', operation: 'subtract', cutoutRole: 'void', material: null, visible: true, placement: { x: 100, y: 150, rotationDeg: 0, mirror: false }, diameter: 22 },
         { id: 'p3', name: 'gusset', type: 'polygon', operation: 'add', material: null, visible: true, placement: { x: 5, y: 6, rotationDeg: 90, mirror: true }, outer: [[0, 0], [50, 0], [0, 40]], holes: [] },
       ],
     };
@@ -173,7 +173,7 @@ describe('serialisation', () => {
 
   it('keys come in a fixed order, with 2-space indentation and points on one line', () => {
     const text = serialiseDocument(doc);
-    expect(text.startsWith('{\n  "format": "sectionsmith-section",\n  "version": 2,\n  "name": "Trailer frame",\n  "unit": "in",')).toBe(true);
+    expect(text.startsWith('{\n  "format": "sectionsmith-section",\n  "version": 3,\n  "name": "Trailer frame",\n  "unit": "in",')).toBe(true);
     expect(text).toContain('"sections": [\n    {\n      "id": "s1",\n      "name": "Trailer frame",\n      "parts": [');
     expect(text).toContain('"outer": [\n            [0, 0],\n            [2, 0],\n            [2, 1]\n          ],');
     expect(text).toContain('"outerBulges": [0, 0.5, 0]');

@@ -1,5 +1,5 @@
-// core/document version 2: several named sections (alternatives) in one file. The migration from
-// version 1, the rules on sections (at least one, unique ids and names, names not blank) with
+// core/document versions 2 and 3: several named sections (alternatives) in one file. The migration
+// from version 1, the rules on sections (at least one, unique ids and names, names not blank) with
 // their paths, and the one-section views (core/document/sections.ts). Expected values are the
 // format's own rules (core/document/types.ts, migrations.ts), written out by hand.
 import { describe, expect, it } from 'vitest';
@@ -32,7 +32,7 @@ const plate = (id: string, width: number, height: number, y = 0, material: strin
 
 /** A footbridge girder file with two alternatives: thicker flanges, deeper web. */
 const girder: SectionFile = {
-  format: 'sectionsmith-section', version: 2, name: 'Footbridge box girder', unit: 'mm',
+  format: 'sectionsmith-section', version: 3, name: 'Footbridge box girder', unit: 'mm',
   materials: [{ id: 's355', name: 'S355 steel' }, { id: 'oak', name: 'oak' }], defaultMaterial: 's355',
   sections: [
     { id: 's1', name: 'Thicker flanges', parts: [plate('top', 700, 30, 415), plate('web', 12, 800), plate('bottom', 520, 35, -417.5, 'oak')] },
@@ -45,14 +45,15 @@ function messages(value: unknown): string[] {
   return r.ok ? [] : r.errors.map((e) => e.message);
 }
 
+/** A current-version file (the section rules came with version 2 and hold in version 3). */
 const v2 = (sections: unknown, extra: Record<string, unknown> = {}) => ({
-  format: 'sectionsmith-section', version: 2, name: 'Trailer frame', unit: 'in', materials: [], defaultMaterial: null, sections, ...extra,
+  format: 'sectionsmith-section', version: DOCUMENT_VERSION, name: 'Trailer frame', unit: 'in', materials: [], defaultMaterial: null, sections, ...extra,
 });
 
 describe('version 1 → 2 migration', () => {
-  it('the current version is 2, and the last migration reads version 1', () => {
-    expect(DOCUMENT_VERSION).toBe(2);
-    expect(MIGRATIONS[MIGRATIONS.length - 1]?.from).toBe(1);
+  it('the current version is 3, and the migrations read versions 0, 1 and 2', () => {
+    expect(DOCUMENT_VERSION).toBe(3);
+    expect(MIGRATIONS.map((m) => m.from)).toEqual([0, 1, 2]);
   });
 
   it('a version 1 file becomes one section "s1" named after the document, holding its parts; the rest stays at the top', () => {
@@ -62,8 +63,9 @@ describe('version 1 → 2 migration', () => {
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.migratedFrom).toBe(1);
+    // Through 2 to 3: no cut-outs here, so version 3 adds nothing.
     expect(r.file).toEqual({
-      format: 'sectionsmith-section', version: 2, name: 'Mezzanine flitch beam', unit: 'in',
+      format: 'sectionsmith-section', version: 3, name: 'Mezzanine flitch beam', unit: 'in',
       materials: [{ id: 'df', name: 'Douglas fir' }], defaultMaterial: 'df',
       sections: [{ id: 's1', name: 'Mezzanine flitch beam', parts }],
     });
@@ -101,11 +103,11 @@ describe('version 1 → 2 migration', () => {
   });
 
   it('a newer file is still refused, naming both versions', () => {
-    expect(messages({ ...girder, version: 3 })).toEqual(['document is version 3; this build reads up to 2. Open it with a newer Sectionsmith.']);
+    expect(messages({ ...girder, version: 4 })).toEqual(['document is version 4; this build reads up to 3. Open it with a newer Sectionsmith.']);
   });
 });
 
-describe('version 2 rules on sections, with paths', () => {
+describe('rules on sections (since version 2), with paths', () => {
   it('the two-alternative girder file is valid and reads back unchanged', () => {
     const r = parseDocument(serialiseDocument(girder), 'girder.section.json');
     expect(r.ok && r.file).toEqual(girder);
@@ -117,7 +119,7 @@ describe('version 2 rules on sections, with paths', () => {
     expect(messages(without)).toEqual(['sections: expected the key "sections" in the document, got nothing (the key is missing)']);
   });
 
-  it('parts at the top of a version 2 file are an unknown key (they belong in a section)', () => {
+  it('parts at the top of a version 2 or 3 file are an unknown key (they belong in a section)', () => {
     expect(messages(v2([{ id: 's1', name: 'a', parts: [] }], { parts: [] }))).toEqual(['parts: unexpected key "parts" in the document; check its spelling against the format']);
   });
 

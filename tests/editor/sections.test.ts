@@ -154,7 +154,7 @@ describe('renaming, deleting, reordering', () => {
 describe('the whole file', () => {
   it('a file with two sections loads with the first active, saves with both, and reads back the same', () => {
     const file: SectionFile = {
-      format: 'sectionsmith-section', version: 2, name: 'Footbridge girder', unit: 'mm', materials: [], defaultMaterial: null,
+      format: 'sectionsmith-section', version: 3, name: 'Footbridge girder', unit: 'mm', materials: [], defaultMaterial: null,
       sections: [
         { id: 's1', name: 'Thicker flanges', parts: [] },
         { id: 's2', name: 'Deeper web', parts: [] },

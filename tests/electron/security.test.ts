@@ -142,12 +142,12 @@ describe('payload validation', () => {
   });
 
   it('document text written to disk must pass core/document validation, and the refusal says what is wrong', () => {
-    const good = JSON.stringify({ format: 'sectionsmith-section', version: 2, name: 'n', unit: 'mm', materials: [], defaultMaterial: null, sections: [{ id: 's1', name: 'n', parts: [] }] });
+    const good = JSON.stringify({ format: 'sectionsmith-section', version: 3, name: 'n', unit: 'mm', materials: [], defaultMaterial: null, sections: [{ id: 's1', name: 'n', parts: [] }] });
     expect(checkedDocumentText(good)).toBe(good);
     expect(() => checkedDocumentText('{"format": ')).toThrow(/document:save: the text is not JSON/);
-    expect(() => checkedDocumentText(JSON.stringify({ format: 'sectionsmith-section', version: 2, name: 'n', unit: 'furlong', materials: [], defaultMaterial: null, sections: [{ id: 's1', name: 'n', parts: [] }] }))).toThrow(/unit: expected a length unit/);
+    expect(() => checkedDocumentText(JSON.stringify({ format: 'sectionsmith-section', version: 3, name: 'n', unit: 'furlong', materials: [], defaultMaterial: null, sections: [{ id: 's1', name: 'n', parts: [] }] }))).toThrow(/unit: expected a length unit/);
     // An older layout is read (and migrated) on opening, but never written.
-    expect(() => checkedDocumentText(JSON.stringify({ format: 'sectionsmith-section', version: 1, name: 'n', unit: 'mm', parts: [], materials: [], defaultMaterial: null }))).toThrow(/version: expected 2, got 1/);
+    expect(() => checkedDocumentText(JSON.stringify({ format: 'sectionsmith-section', version: 1, name: 'n', unit: 'mm', parts: [], materials: [], defaultMaterial: null }))).toThrow(/version: expected 3, got 1/);
   });
 });
 
