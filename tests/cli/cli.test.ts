@@ -160,6 +160,6 @@ describe('the real launcher as a process', () => {
     expect(help.code).toBe(0);
     expect(help.stdout).toMatch(/usage: sectionsmith props FILE/);
     expect(broken.code).toBe(2);
-    expect(broken.stderr).toBe(`${bad}: document is version 7; this build reads up to 2. Open it with a newer Sectionsmith.\n`);
+    expect(broken.stderr).toBe(`${bad}: document is version 7; this build reads up to 3. Open it with a newer Sectionsmith.\n`);
   });
 });
