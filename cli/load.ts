@@ -13,7 +13,8 @@ import { sectionProperties } from '../core/properties/index.ts';
 import type { SectionProperties } from '../core/properties/types.ts';
 import { type ComposedPart, sectionFromDocument } from '../core/section/index.ts';
 import { isLengthUnit, type LengthUnit } from '../core/units/index.ts';
-import type { CliIo } from './command.ts';
+import { documentFromDxf, importDxf, looksLikeDxf } from '../core/dxf/index.ts';
+import type { CliIo, FlagLists, FlagSpec, FlagValues } from './command.ts';
 
 export interface LoadedSection {
   readonly kind: 'document' | 'geojson';
@@ -30,6 +31,69 @@ export interface LoadedSection {
   /** Parts used / left out (documents only; 0 for GeoJSON). */
   readonly parts: number;
   readonly hiddenParts: number;
+  /** A DXF drawing read as a document: what the import says (unit, gaps closed, approximations, ignored entities). */
+  readonly importNotes?: readonly string[];
+}
+
+/** How to read a DXF drawing (flags --layer, --parts, --chord, --join). */
+export interface DxfReadOptions {
+  readonly layers?: readonly string[];
+  readonly grouping?: 'parts' | 'one';
+  readonly chordTolerance?: number;
+  readonly joinTolerance?: number;
+}
+
+/** The flags of every command that reads a section FILE, for DXF drawings. */
+export const DXF_INPUT_FLAGS: readonly FlagSpec[] = [
+  { name: 'layer', type: 'string', value: 'NAME', multiple: true, description: 'DXF input: read only this layer (default: every layer with geometry)' },
+  { name: 'parts', type: 'string', value: 'each|one', description: 'DXF input: one part per outer loop (each, default), or loops that touch united into one part (one)' },
+  { name: 'chord', type: 'string', value: 'TOL', description: 'DXF input: chord tolerance for ELLIPSE and SPLINE, in drawing units (default 1e-4 of each curve\'s size)' },
+  { name: 'join', type: 'string', value: 'TOL', description: 'DXF input: largest gap closed between line and arc ends, in drawing units (default 1e-6 of the drawing\'s diagonal)' },
+];
+
+/** The DXF reading options from the flags, or a message naming the bad flag. */
+export function dxfReadOptions(flags: FlagValues, lists: FlagLists | undefined): DxfReadOptions | string {
+  const tolerance = (name: string): number | undefined | string => {
+    const v = flags[name];
+    if (v === undefined) return undefined;
+    const n = typeof v === 'string' ? Number(v) : Number.NaN;
+    return Number.isFinite(n) && n > 0 ? n : `--${name}: expected a positive length in drawing units, got ${JSON.stringify(v)}`;
+  };
+  const chord = tolerance('chord');
+  const join = tolerance('join');
+  if (typeof chord === 'string') return chord;
+  if (typeof join === 'string') return join;
+  const parts = flags.parts;
+  if (parts !== undefined && parts !== 'each' && parts !== 'one') return `--parts: expected each or one, got ${JSON.stringify(parts)}`;
+  const layers = lists?.layer ?? [];
+  return {
+    ...(layers.length > 0 ? { layers } : {}),
+    ...(parts === 'one' ? { grouping: 'one' as const } : {}),
+    ...(chord !== undefined ? { chordTolerance: chord } : {}),
+    ...(join !== undefined ? { joinTolerance: join } : {}),
+  };
+}
+
+/**
+ * A DXF drawing as a document (its unit from $INSUNITS, else `unit`), with the import's notes;
+ * every problem names the entity, its handle and layer.
+ */
+export function documentFromDxfText(file: string, text: string, unit: LengthUnit | undefined, options: DxfReadOptions): { ok: true; value: unknown; notes: readonly string[] } | LoadFailure {
+  const read = importDxf(text, { ...options, ...(unit !== undefined ? { unit } : {}) });
+  if (!read.ok) {
+    const hint = read.layers.length > 1 && options.layers === undefined && read.errors.some((e) => e.code === 'chain' || e.code === 'crossing')
+      ? [`${file}: the drawing has geometry on layers ${read.layers.map((l) => `"${l.name}" (${l.entities})`).join(', ')}; --layer NAME reads only the layers that hold the section`]
+      : [];
+    const unitHint = read.errors.some((e) => e.code === 'unit-missing') ? ' (--unit in|ft|mm|cm|m)' : '';
+    return { ok: false, messages: [...read.errors.map((e) => `${file}: ${e.message}${e.code === 'unit-missing' ? unitHint : ''}`), ...hint] };
+  }
+  const base = file.replace(/^.*[\\/]/, '').replace(/\.dxf$/i, '');
+  const made = documentFromDxf(read.value, base, options.grouping ?? 'parts');
+  const layers = read.value.layers;
+  const layerNote = options.layers === undefined && layers.length > 1
+    ? [`read every layer with geometry: ${layers.map((l) => `"${l.name}" (${l.entities})`).join(', ')}; --layer NAME reads only the ones you name`]
+    : [];
+  return { ok: true, value: made.file, notes: [...read.value.notes, ...made.notes, ...layerNote] };
 }
 
 export type LoadResult = { readonly ok: true; readonly section: LoadedSection } | { readonly ok: false; readonly messages: readonly string[] };
@@ -115,7 +179,7 @@ type LoadFailure = { readonly ok: false; readonly messages: readonly string[] };
  * JSON (for a million vertices, about 100 MB of small arrays) become garbage before any
  * computing starts, so the collector does not trace them again and again during it.
  */
-function readSectionFile(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined): GeoJsonRead | { readonly kind: 'document'; readonly value: unknown } | LoadFailure {
+function readSectionFile(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined, dxfOptions: DxfReadOptions): GeoJsonRead | { readonly kind: 'document'; readonly value: unknown; readonly notes?: readonly string[] } | LoadFailure {
   let text: string;
   try {
     text = io.readFile(file);
@@ -123,6 +187,11 @@ function readSectionFile(file: string, io: CliIo, geoJsonUnit: LengthUnit | unde
     const code = (err as { code?: string }).code;
     const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a directory' : code === 'EACCES' ? 'permission denied' : err instanceof Error ? err.message : String(err);
     return { ok: false, messages: [`${file}: cannot read the file: ${why}`] };
+  }
+  if (/\.dxf$/i.test(file) || looksLikeDxf(text)) {
+    const dxf = documentFromDxfText(file, text, geoJsonUnit, dxfOptions);
+    if (!dxf.ok) return dxf;
+    return { kind: 'document', value: dxf.value, notes: dxf.notes };
   }
   const json = parseJson(text);
   if (!json.ok) return { ok: false, messages: json.errors.map((e) => `${file}: ${e.message}`) };
@@ -135,10 +204,13 @@ function readSectionFile(file: string, io: CliIo, geoJsonUnit: LengthUnit | unde
 }
 
 /** Reads FILE as a document (its first section, or the one named `sectionName`) or as GeoJSON (which needs `geoJsonUnit`). */
-export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined, sectionName?: string): LoadResult {
-  const read = readSectionFile(file, io, geoJsonUnit);
+export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined, sectionName?: string, dxfOptions: DxfReadOptions = {}): LoadResult {
+  const read = readSectionFile(file, io, geoJsonUnit, dxfOptions);
   if ('ok' in read) return read;
-  if (read.kind === 'document') return fromDocument(file, read.value, sectionName);
+  if (read.kind === 'document') {
+    const loaded = fromDocument(file, read.value, sectionName);
+    return loaded.ok && read.notes !== undefined ? { ok: true, section: { ...loaded.section, importNotes: read.notes } } : loaded;
+  }
   if (sectionName !== undefined) return { ok: false, messages: [`${file}: --section: a GeoJSON file has no named sections; --section applies to Sectionsmith documents`] };
   return fromGeoJson(file, read);
 }
@@ -154,7 +226,12 @@ export function loadSectionArgument(
   unitFlag: string | undefined,
   io: CliIo,
   sectionFlag?: string | boolean,
+  dxfOptions: DxfReadOptions | string = {},
 ): { readonly file: string; readonly unitFlag: LengthUnit | undefined; readonly section: LoadedSection } | null {
+  if (typeof dxfOptions === 'string') {
+    io.err(`sectionsmith ${command.name}: ${dxfOptions}\n`);
+    return null;
+  }
   if (positionals.length !== 1) {
     io.err(`sectionsmith ${command.name}: expected one FILE, got ${positionals.length === 0 ? 'none' : positionals.join(' ')}\nusage: sectionsmith ${command.usage}\n`);
     return null;
@@ -168,10 +245,13 @@ export function loadSectionArgument(
     io.err(`sectionsmith ${command.name}: --section: expected the name of a section, got ${typeof sectionFlag === 'string' ? JSON.stringify(sectionFlag) : 'nothing'}\n`);
     return null;
   }
-  const loaded = loadSection(file, io, unitFlag, sectionFlag);
+  const loaded = loadSection(file, io, unitFlag, sectionFlag, dxfOptions);
   if (!loaded.ok) {
     io.err(`${loaded.messages.join('\n')}\n`);
     return null;
   }
+  // A drawing read as a section: what the import did goes to stderr, so --json output stays one object.
+  if (loaded.section.importNotes !== undefined) io.err(loaded.section.importNotes.map((n) => `${file}: ${n}\n`).join(''));
+  // A drawing with $INSUNITS carries its unit like a document: --unit then names the unit to report in.
   return { file, unitFlag, section: loaded.section };
 }

@@ -23,7 +23,7 @@ import { COMMON_LIVE_RATIO, COMMON_TOTAL_RATIO, DEFLECTION_LIMIT_MEANING, STRESS
 import { sectionMemberCheck } from '../../core/member/section-member.ts';
 import { convertLength, formatSig, isLengthUnit, LENGTH_UNITS, type LengthUnit } from '../../core/units/index.ts';
 import { EXIT_BAD_INPUT, EXIT_FLAGGED, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
-import { loadSectionArgument, type LoadedSection } from '../load.ts';
+import { DXF_INPUT_FLAGS, dxfReadOptions, loadSectionArgument, type LoadedSection } from '../load.ts';
 
 export const MEMBER_FLAGS: readonly FlagSpec[] = [
   { name: 'span', type: 'string', value: 'L', description: 'span, in the document unit (required); a cantilever\'s length' },
@@ -42,9 +42,10 @@ export const MEMBER_FLAGS: readonly FlagSpec[] = [
   { name: 'stress-factor', type: 'string', value: 'F', description: 'stress limit = F × the material\'s strength basis (fy; reference Fb for wood); default 1 = the strength itself, no safety factor' },
   { name: 'allowable', type: 'string', value: '[MAT=]S', description: 'typed allowable bending stress (e.g. 24ksi), for every material or for material id MAT; wins over --stress-factor', multiple: true },
   { name: 'shear-allowable', type: 'string', value: '[MAT=]S', description: 'typed allowable shear stress, for every material or for material id MAT (default for steel: F × 0.6 fy)', multiple: true },
-  { name: 'unit', type: 'string', value: 'U', description: 'GeoJSON only: the length unit of its coordinates, in|ft|mm|cm|m' },
+  { name: 'unit', type: 'string', value: 'U', description: 'GeoJSON, and DXF without $INSUNITS, only: the length unit of its coordinates, in|ft|mm|cm|m' },
   { name: 'section', type: 'string', value: 'NAME', description: 'documents with several sections (alternatives): the one to check (default: the first)' },
   { name: 'json', type: 'boolean', description: 'print one JSON object instead of the text report' },
+  ...DXF_INPUT_FLAGS,
 ];
 
 class UsageError extends Error {}
@@ -296,7 +297,7 @@ function reportText(file: string, r: MemberReport): string {
 }
 
 function runMember(positionals: readonly string[], flags: FlagValues, io: CliIo, lists: FlagLists = {}): number {
-  const loaded = loadSectionArgument(memberCommand, positionals, stringFlag(flags, 'unit'), io, flags.section);
+  const loaded = loadSectionArgument(memberCommand, positionals, stringFlag(flags, 'unit'), io, flags.section, dxfReadOptions(flags, lists));
   if (!loaded) return EXIT_BAD_INPUT;
   const { file, section } = loaded;
   const units = outputUnits(section.unit);

@@ -11,8 +11,10 @@
 import type { SectionProperties } from '../../core/properties/types.ts';
 import { MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type TorsionResult } from '../../core/torsion/index.ts';
 import { convertLength, defaultDisplaySet, formatSig, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
-import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
-import { loadSectionArgument, type LoadedSection } from '../load.ts';
+import { writeFileSync } from 'node:fs';
+import { cutParts, sectionDxf } from '../../core/dxf/index.ts';
+import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
+import { DXF_INPUT_FLAGS, dxfReadOptions, loadSectionArgument, type LoadedSection } from '../load.ts';
 import { materialPropsResults } from './member.ts';
 
 export const PROPS_FLAGS: readonly FlagSpec[] = [
@@ -21,6 +23,9 @@ export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'eref', type: 'string', value: 'VALUE', description: 'documents with materials: reference modulus for the transformed section, e.g. 200GPa or 29000ksi (default: the document\'s referenceModulus, else the first part\'s E)' },
   { name: 'section', type: 'string', value: 'NAME', description: 'documents with several sections (alternatives): the one to report (default: the first)' },
   { name: 'torsion', type: 'boolean', description: 'add finite-element torsion: J, Cw, shear centre xs, ys, meshElements, jRelativeError (one material only)' },
+  { name: 'dxf', type: 'string', value: 'OUT', description: 'also write the section as a DXF drawing: outline (layer SECTION), centroid, principal axes and a property table with the caution' },
+  { name: 'dxf-parts', type: 'boolean', description: 'with --dxf: also each part laid flat in its own coordinates, with its holes, on a layer PART-<name> (for cutting)' },
+  ...DXF_INPUT_FLAGS,
 ];
 
 /** The length dimension of every property (null: a pure number or an angle). */
@@ -160,8 +165,23 @@ function json(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResu
   return `${JSON.stringify(body, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;
 }
 
-function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
-  const loaded = loadSectionArgument(propsCommand, positionals, typeof flags.unit === 'string' ? flags.unit : undefined, io, flags.section);
+/** --dxf OUT: the section in its own unit, with the annotation layers; false (and a message) when it cannot be written. */
+export function writeSectionDxf(out: string, s: LoadedSection, withParts: boolean, io: CliIo, command: string): boolean {
+  const text = sectionDxf({
+    name: s.name, unit: s.unit, region: s.region, properties: s.properties, caution: CAUTION, centroid: true, axes: true, table: true,
+    ...(withParts && s.doc !== undefined ? { parts: cutParts(s.doc) } : {}),
+  });
+  try {
+    writeFileSync(out, text, 'utf8');
+  } catch (err) {
+    io.err(`sectionsmith ${command}: --dxf: cannot write ${out}: ${err instanceof Error ? err.message : String(err)}\n`);
+    return false;
+  }
+  return true;
+}
+
+function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo, lists?: FlagLists): number {
+  const loaded = loadSectionArgument(propsCommand, positionals, typeof flags.unit === 'string' ? flags.unit : undefined, io, flags.section, dxfReadOptions(flags, lists));
   if (!loaded) return EXIT_BAD_INPUT;
   const { file, unitFlag, section } = loaded;
   const unit = unitFlag ?? section.unit;
@@ -170,6 +190,7 @@ function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo):
     io.err(`${extra.errors.join('\n')}\n`);
     return EXIT_BAD_INPUT;
   }
+  if (typeof flags.dxf === 'string' && !writeSectionDxf(flags.dxf, section, flags['dxf-parts'] === true, io, 'props')) return EXIT_BAD_INPUT;
   io.out(flags.json === true ? json(file, section, unit, extra) : table(file, section, unit, extra));
   return EXIT_OK;
 }
@@ -177,12 +198,22 @@ function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo):
 export const propsCommand: Command = {
   name: 'props',
   summary: 'section properties of a Sectionsmith document or a GeoJSON area',
-  usage: 'props FILE [--json] [--unit U] [--section NAME] [--eref VALUE] [--torsion]',
+  usage: 'props FILE [--json] [--unit U] [--section NAME] [--eref VALUE] [--torsion] [--dxf OUT [--dxf-parts]] [--layer NAME …] [--parts each|one]',
   description: [
-    'FILE is a Sectionsmith document (.json, "format": "sectionsmith-section") or a GeoJSON',
+    'FILE is a Sectionsmith document (.json, "format": "sectionsmith-section"), a GeoJSON',
     'Polygon, MultiPolygon, Feature or FeatureCollection (RFC 7946) whose coordinates are lengths',
-    'in the unit given by --unit (first ring outer, the others holes). Hidden document parts are',
-    'left out, and the output says how many.',
+    'in the unit given by --unit (first ring outer, the others holes), or an ASCII DXF drawing',
+    '(R12 to 2018). Hidden document parts are left out, and the output says how many.',
+    '',
+    'A DXF is read from its closed boundaries: LWPOLYLINE and POLYLINE (bulges as exact arcs),',
+    'LINE and ARC chains (joined within --join; each gap closed is reported), CIRCLE, and ELLIPSE',
+    'and SPLINE drawn by chords within --chord; INSERTs are expanded. Loops inside loops alternate',
+    'material and hole. Its unit is $INSUNITS; a drawing without one needs --unit. TEXT, DIMENSION,',
+    'HATCH and the like are ignored and counted. What the import did goes to stderr.',
+    '',
+    '--dxf OUT writes the section as a DXF (its unit in $INSUNITS): layer SECTION (outline and',
+    'holes, arcs as bulges), CENTROID, PRINCIPAL-AXES (construction lines) and PROPERTIES (a table',
+    'with the caution); --dxf-parts adds each part laid flat for cutting, on a layer PART-<name>.',
     '',
     'The table shows each property with its symbol, value (6 significant figures) and unit;',
     'inch and foot sections in in, in², in³, in⁴; mm and m sections in mm, mm², 10³ mm³, 10⁶ mm⁴;',

@@ -227,7 +227,7 @@ export function importDxf(text: string, options: DxfImportOptions = {}): DxfImpo
   const ignored = [...curves.ignored.entries()].map(([type, count]) => ({ type, count })).sort((a, b) => b.count - a.count);
   const notes = [
     `unit: ${u.unit !== null ? `${unit}, from the file's ${u.note}` : `${unit}, as given (${u.note})`}`,
-    `joining tolerance ${fmt(joinTolerance)} ${unit}${options.joinTolerance === undefined ? ` (${JOIN_RATIO} of the drawing's diagonal)` : ''}: ${chains.gaps.length === 0 ? 'no gaps closed' : `${chains.gaps.length} gap${chains.gaps.length === 1 ? '' : 's'} closed, the largest ${fmt(chains.largestGap)} ${unit}`}`,
+    `joining tolerance ${fmt(joinTolerance)} ${unit}${options.joinTolerance === undefined ? ` (${JOIN_RATIO.toExponential(0)} of the drawing's diagonal)` : ''}: ${chains.gaps.length === 0 ? 'no gaps closed' : `${chains.gaps.length} gap${chains.gaps.length === 1 ? '' : 's'} closed, the largest ${fmt(chains.largestGap)} ${unit}`}`,
     ...chains.gaps,
     ...curves.approximations,
     ...(ignored.length > 0 ? [`ignored (not geometry): ${ignored.map((i) => `${i.count} ${i.type}`).join(', ')}`] : []),
