@@ -11,10 +11,10 @@
 import type { SectionProperties } from '../../core/properties/types.ts';
 import { MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type TorsionResult } from '../../core/torsion/index.ts';
 import { convertLength, defaultDisplaySet, formatSig, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
-import { writeFileSync } from 'node:fs';
 import { cutParts, sectionDxf } from '../../core/dxf/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
 import { DXF_INPUT_FLAGS, dxfReadOptions, loadSectionArgument, type LoadedSection } from '../load.ts';
+import { writeOutputFile } from '../output.ts';
 import { materialPropsResults } from './member.ts';
 
 export const PROPS_FLAGS: readonly FlagSpec[] = [
@@ -165,19 +165,12 @@ function json(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResu
   return `${JSON.stringify(body, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;
 }
 
-/** --dxf OUT: the section in its own unit, with the annotation layers; false (and a message) when it cannot be written. */
-export function writeSectionDxf(out: string, s: LoadedSection, withParts: boolean, io: CliIo, command: string): boolean {
-  const text = sectionDxf({
+/** --dxf OUT: the section in its own unit, with the annotation layers (a path that cannot be written is bad input, exit 2). */
+export function writeSectionDxf(out: string, s: LoadedSection, withParts: boolean): void {
+  writeOutputFile('dxf', out, sectionDxf({
     name: s.name, unit: s.unit, region: s.region, properties: s.properties, caution: CAUTION, centroid: true, axes: true, table: true,
     ...(withParts && s.doc !== undefined ? { parts: cutParts(s.doc) } : {}),
-  });
-  try {
-    writeFileSync(out, text, 'utf8');
-  } catch (err) {
-    io.err(`sectionsmith ${command}: --dxf: cannot write ${out}: ${err instanceof Error ? err.message : String(err)}\n`);
-    return false;
-  }
-  return true;
+  }));
 }
 
 function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo, lists?: FlagLists): number {
@@ -190,7 +183,7 @@ function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo, 
     io.err(`${extra.errors.join('\n')}\n`);
     return EXIT_BAD_INPUT;
   }
-  if (typeof flags.dxf === 'string' && !writeSectionDxf(flags.dxf, section, flags['dxf-parts'] === true, io, 'props')) return EXIT_BAD_INPUT;
+  if (typeof flags.dxf === 'string') writeSectionDxf(flags.dxf, section, flags['dxf-parts'] === true);
   io.out(flags.json === true ? json(file, section, unit, extra) : table(file, section, unit, extra));
   return EXIT_OK;
 }
