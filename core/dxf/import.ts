@@ -18,7 +18,7 @@
  * Errors never touch an open document: the caller gets either a whole document or messages.
  * Each message names the entity type, handle and layer (and block, when inserted) and what is wrong.
  */
-import type { PolygonPart, SectionFile } from '../document/types.ts';
+import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type PolygonPart, type SectionFile } from '../document/types.ts';
 import type { Diagnostic, Polygon, Region, Ring } from '../geometry/types.ts';
 import { pointInRing, ringBounds, ringSignedArea, unionRegions, validateRegion, BooleanError } from '../geometry/index.ts';
 import type { LengthUnit } from '../units/types.ts';
@@ -287,7 +287,7 @@ export function documentFromDxf(imported: DxfImport, name: string, grouping: 'pa
     return polygonPart(p, `dxf${i + 1}`, `${layer} ${k}`);
   });
   const file: SectionFile = {
-    format: 'sectionsmith-section', version: 2, name, unit: imported.unit, materials: [], defaultMaterial: null,
+    format: DOCUMENT_FORMAT, version: DOCUMENT_VERSION, name, unit: imported.unit, materials: [], defaultMaterial: null,
     sections: [{ id: 's1', name, parts }],
   };
   return { file, notes };
