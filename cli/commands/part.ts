@@ -89,7 +89,7 @@ function table(request: Request, p: SectionProperties, unit: LengthUnit): string
   });
   const w0 = Math.max(...rows.map((r) => r[0].length));
   const w1 = Math.max(...rows.map((r) => r[1].length));
-  const notes = request.entry?.modelling.map((m) => `  modelling: ${m}`) ?? [];
+  const notes = [...(request.entry?.modelling.map((m) => `  modelling: ${m}`) ?? []), ...(request.entry?.caveats.map((c) => `  NOTE: ${c}`) ?? [])];
   return [
     describe(request),
     'Signs: Ixy = +∫XY dA about the centroid; angles counter-clockwise from +x; coordinates about the part\'s local origin.',
@@ -106,7 +106,7 @@ function json(request: Request, p: SectionProperties, unit: LengthUnit): string 
   const body = {
     input: 'part',
     part: request.shape,
-    ...(request.entry === undefined ? {} : { designation: request.entry.designation, source: request.entry.source, modelling: request.entry.modelling }),
+    ...(request.entry === undefined ? {} : { designation: request.entry.designation, source: request.entry.source, modelling: request.entry.modelling, caveats: request.entry.caveats }),
     params: request.params,
     paramsUnit: request.unit,
     unit,

@@ -7,14 +7,12 @@
  *   in inches) and the modelling conventions used to turn published dimensions into geometry
  *   (`modelling`), because the database publishes no fillet radii or flange slopes.
  * Properties are never stored here: they are computed from the part's exact geometry.
- * Conventions (see `modelling` of each entry):
- *   W, M, HP, WT, MT — parallel flanges, root fillet r = kdes − tf (modelling convention).
- *   S, C, ST — inner flange slope 2:12 (from memory of the AISC Manual Part 1; not in the
- *     database), tf the average thickness at mid-outstand, r = kdes − (flange thickness at the web).
- *   MC — parallel flanges at the average tf (the MC slope varies and is not published), r = kdes − tf.
- *   L, 2L — sharp root and toes: the database states no radii (kdes is kept as published).
- *   HSS and Pipe — design wall tdes (0.93·tnom, as tabulated); rectangular HSS outside corner
- *     radius 2·tdes; round HSS use the nominal OD of the label (6.625, not the printed 6.63).
+ * Conventions (see `modelling` of each entry, core/catalogue/conventions.ts and
+ *   docs/catalogue-conventions.md): flange slopes, root fillet and toe radii family by family;
+ *   HSS and Pipe use the design wall tdes (0.93·tnom, as tabulated); rectangular HSS outside
+ *   corner radius 2·tdes; round HSS use the nominal OD of the label (6.625, not the printed 6.63).
+ * Published values that no geometry built from the published dimensions can reproduce are named
+ *   in each entry's `caveats` (core/catalogue/caveats.ts).
  * Does not guarantee: that an entry reproduces the tabulated properties beyond the rounding of the
  *   published dimensions (3 significant figures) and the conventions above.
  */
@@ -22,6 +20,10 @@ import type { Diagnostic } from '../geometry/types.ts';
 import { getPartType } from '../parts/index.ts';
 import { DRESSED_SIZES } from '../parts/lumber-sizes.ts';
 import { DOUBLE_L_ROWS, HSSC_ROWS, HSSR_ROWS, I_ROWS, L_ROWS, PIPE_ROWS, type Row } from './data/aisc-v15.ts';
+import { angleRadii, flangedPart } from './conventions.ts';
+import { publishedCaveats } from './caveats.ts';
+
+export { angleRadii, flangedPart, MC_SLOPE, STEEL_LBFT_PER_IN2, type FlangedDims, type FlangedGiven, type FlangedPart } from './conventions.ts';
 
 export type Family = 'W' | 'M' | 'S' | 'HP' | 'C' | 'MC' | 'WT' | 'MT' | 'ST' | 'L' | '2L' | 'HSS' | 'Pipe' | 'lumber' | 'user';
 
@@ -43,6 +45,8 @@ export interface CatalogueEntry {
   readonly params: Readonly<Record<string, number>>;
   /** How published dimensions became geometry (conventions, assumptions). */
   readonly modelling: readonly string[];
+  /** Published values this entry cannot reproduce from its published dimensions, and why. */
+  readonly caveats: readonly string[];
   readonly userDefined: boolean;
 }
 
@@ -57,47 +61,43 @@ export function designationKey(designation: string): string {
   return designation.replace(/\s+/g, '').replace(/×/g, 'X').toUpperCase();
 }
 
-const FILLET_NOTE = 'root fillet radius r = kdes − tf (a modelling convention: AISC publishes no radius); flange toes sharp';
-const SLOPE_NOTE = 'inner flange slope 2:12 (from memory of the AISC Manual Part 1; not in the database); tf is the average thickness at mid-outstand; r = kdes − flange thickness at the web face; toes sharp';
-const MC_NOTE = 'parallel flanges at the average thickness tf: the MC flange slope varies and is not published, so Iy, Sy, Zy may differ from the table by several per cent; r = kdes − tf';
-const ANGLE_NOTE = 'sharp root and toes: the database states no radii (kdes kept as published)';
 const HSS_NOTE = 'design wall thickness tdes (0.93·tnom, as tabulated) is used for geometry';
 
-/**
- * The part a rolled flanged shape builds from its published dimensions, by the conventions
- * above: S, C and ST flanges slope 2:12 (from memory; `given.slope` overrides), and the root
- * fillet radius is kdes − the flange thickness at the web face (`given.r` overrides).
- * C and MC are channels, WT, MT and ST tees, the rest (W, M, S, HP) I shapes.
- */
-export function flangedPart(
-  family: string,
-  dims: { readonly d: number; readonly bf: number; readonly tw: number; readonly tf: number; readonly kdes: number },
-  given: { readonly slope?: number | undefined; readonly r?: number | undefined } = {},
-): { shape: 'i-shape' | 'channel' | 'tee'; params: Record<string, number>; slope: number } {
-  const { d, bf, tw, tf, kdes } = dims;
-  const sloped = family === 'S' || family === 'C' || family === 'ST';
-  const slope = given.slope ?? (sloped ? 2 / 12 : 0);
-  const shape = family === 'C' || family === 'MC' ? 'channel' : family === 'WT' || family === 'MT' || family === 'ST' ? 'tee' : 'i-shape';
-  // A channel's flange runs from the web to one toe; an I's or a tee's from the web to each toe.
-  const outstand = shape === 'channel' ? bf - tw : (bf - tw) / 2;
-  const atWeb = tf + (slope * outstand) / 2;
-  const r = given.r ?? Math.max(kdes - atWeb, 0);
-  return { shape, params: { d, bf, tw, tf, r, ...(slope > 0 ? { slope } : {}) }, slope };
+/** What the family rule of core/catalogue/conventions.ts did, in words, for one flanged entry. */
+function flangedNote(type: string, slopeRule: string, params: Readonly<Record<string, number>>): string {
+  const atWeb = params['slope'] === undefined ? 'tf' : 'flange thickness at the web';
+  const fillet = type === 'M' || type === 'MT' ? `r = (kdes − ${atWeb})/2 (fitted: M kdes is the detailing k)` : `r = kdes − ${atWeb}`;
+  const toe = params['rt'] === undefined ? 'toes sharp' : 'toe radius rt = 0.4·tf (fitted)';
+  const average = params['slope'] === undefined ? '' : '; tf is the average thickness at mid-outstand';
+  return `${slopeRule}${average}; ${fillet} (AISC publishes no radius); ${toe}`;
 }
 
 function flangedEntry(row: Row): CatalogueEntry {
   const [designation, type, W, d, bf, tw, tf, kdes, WGi] = row as unknown as [string, Family, number, number, number, number, number, number, number | null];
-  const sloped = type === 'S' || type === 'C' || type === 'ST';
-  const { shape, params } = flangedPart(type, { d, bf, tw, tf, kdes });
-  const modelling = [type === 'MC' ? MC_NOTE : sloped ? SLOPE_NOTE : FILLET_NOTE];
+  const { shape, params, slopeRule } = flangedPart(type, { d, bf, tw, tf, kdes });
+  const modelling = [flangedNote(type, slopeRule, params)];
   if (shape === 'tee') modelling.push(`tee cut from the ${type === 'ST' ? 'S' : type === 'MT' ? 'M' : 'W'} shape: d is the depth of the tee`);
-  return { designation, family: type, source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, bf, tw, tf, kdes, ...(WGi === null ? {} : { WGi }) }, shape, params, modelling, userDefined: false };
+  return { designation, family: type, source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, bf, tw, tf, kdes, ...(WGi === null ? {} : { WGi }) }, shape, params, modelling, caveats: publishedCaveats(designation), userDefined: false };
+}
+
+const ANGLE_NOTE = 'root radius r = (kdes − t)/2, toe radius rt = r/2 (fitted: the database states no radii, and kdes of angles is the detailing k)';
+
+/**
+ * An angle's thickness from its label's fraction when the printed t is that fraction rounded
+ * ("L12X12X1-3/8": 1.375, printed 1.38), as round HSS take the label's OD; else the printed t.
+ */
+export function angleThickness(designation: string, printed: number): number {
+  const terms = designation.replace(/^2?L/, '').split('X');
+  const exact = fractionInches(terms[2] ?? '');
+  return Number.isFinite(exact) && Number(exact.toPrecision(3)) === Number(printed.toPrecision(3)) ? exact : printed;
 }
 
 function angleEntry(row: Row): CatalogueEntry {
-  const [designation, , W, d, b, t, kdes] = row as unknown as [string, string, number, number, number, number, number];
+  const [designation, , W, d, b, printedT, kdes] = row as unknown as [string, string, number, number, number, number, number];
+  const t = angleThickness(designation, printedT);
+  const { r, rt } = angleRadii(t, kdes);
   // Published d is the shorter leg; the tabulated x axis has the longer leg vertical, so it goes along y.
-  return { designation, family: 'L', source: AISC_SOURCE, nominalWeight: W, depth: b, dimensions: { d, b, t, kdes }, shape: 'angle', params: { d: b, b: d, t, r: 0, rt: 0 }, modelling: [ANGLE_NOTE, 'the longer leg b runs along y (the tabulated x axis is horizontal)'], userDefined: false };
+  return { designation, family: 'L', source: AISC_SOURCE, nominalWeight: W, depth: b, dimensions: { d, b, t: printedT, kdes }, shape: 'angle', params: { d: b, b: d, t, r, rt }, modelling: [ANGLE_NOTE, 'the longer leg b runs along y (the tabulated x axis is horizontal)', ...(t === printedT ? [] : [`t = ${t} from the label (printed ${printedT})`])], caveats: publishedCaveats(designation, 'L'), userDefined: false };
 }
 
 /** A fraction such as "3/8", "1-1/2" or "3/4" in inches. */
@@ -114,26 +114,34 @@ export function doubleAngleGap(designation: string): number {
   return parts.length === 4 ? fractionInches(parts[3]!) : 0;
 }
 
+/** kdes of the single angles by "d b t", for the double angles (whose rows carry no kdes). */
+const ANGLE_KDES: ReadonlyMap<string, number> = new Map(L_ROWS.map((row) => [`${String(row[3])} ${String(row[4])} ${String(row[5])}`, row[6] as number]));
+
 function doubleAngleEntry(row: Row): CatalogueEntry {
-  const [designation, , W, d, b, t] = row as unknown as [string, string, number, number, number, number];
+  const [designation, , W, d, b, printedT] = row as unknown as [string, string, number, number, number, number];
   const gap = doubleAngleGap(designation);
-  return { designation, family: '2L', source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, b, t, gap }, shape: 'double-angle', params: { d, b, t, r: 0, rt: 0, gap }, modelling: [ANGLE_NOTE, 'legs d back to back, gap from the label'], userDefined: false };
+  const t = angleThickness(designation, printedT);
+  // The label orders the legs as the single angle's (LLBB: long legs back to back, d = long leg).
+  const kdes = ANGLE_KDES.get(`${Math.min(d, b)} ${Math.max(d, b)} ${printedT}`);
+  const { r, rt } = angleRadii(t, kdes);
+  const radii = kdes === undefined ? 'sharp root and toes (no single angle of this size gives kdes)' : `${ANGLE_NOTE}; kdes ${kdes} from the single angle`;
+  return { designation, family: '2L', source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, b, t: printedT, gap }, shape: 'double-angle', params: { d, b, t, r, rt, gap }, modelling: [radii, 'legs d back to back, gap from the label'], caveats: publishedCaveats(designation, '2L'), userDefined: false };
 }
 
 function rectHssEntry(row: Row): CatalogueEntry {
   const [designation, , W, Ht, B, tnom, tdes] = row as unknown as [string, string, number, number, number, number, number];
-  return { designation, family: 'HSS', source: AISC_SOURCE, nominalWeight: W, depth: Ht, dimensions: { Ht, B, tnom, tdes }, shape: 'rect-tube', params: { H: Ht, B, t: tdes, r: 2 * tdes }, modelling: [HSS_NOTE, 'outside corner radius 2·tdes, inside radius tdes (AISC Shapes Database v15.0 user note)'], userDefined: false };
+  return { designation, family: 'HSS', source: AISC_SOURCE, nominalWeight: W, depth: Ht, dimensions: { Ht, B, tnom, tdes }, shape: 'rect-tube', params: { H: Ht, B, t: tdes, r: 2 * tdes }, modelling: [HSS_NOTE, 'outside corner radius 2·tdes, inside radius tdes (AISC Shapes Database v15.0 user note)'], caveats: publishedCaveats(designation), userDefined: false };
 }
 
 function roundHssEntry(row: Row): CatalogueEntry {
   const [designation, , W, OD, tnom, tdes] = row as unknown as [string, string, number, number, number, number];
   const nominal = Number(/^HSS([\d.]+)X/.exec(designation)?.[1] ?? Number.NaN);
-  return { designation, family: 'HSS', source: AISC_SOURCE, nominalWeight: W, depth: nominal, dimensions: { OD, tnom, tdes }, shape: 'pipe', params: { OD: nominal, t: tdes }, modelling: [HSS_NOTE, `nominal OD ${nominal} from the label (the printed OD ${OD} is rounded)`], userDefined: false };
+  return { designation, family: 'HSS', source: AISC_SOURCE, nominalWeight: W, depth: nominal, dimensions: { OD, tnom, tdes }, shape: 'pipe', params: { OD: nominal, t: tdes }, modelling: [HSS_NOTE, `nominal OD ${nominal} from the label (the printed OD ${OD} is rounded)`], caveats: publishedCaveats(designation), userDefined: false };
 }
 
 function pipeEntry(row: Row): CatalogueEntry {
   const [designation, , W, OD, ID, tnom, tdes] = row as unknown as [string, string, number, number, number, number, number];
-  return { designation, family: 'Pipe', source: AISC_SOURCE, nominalWeight: W, depth: OD, dimensions: { OD, ID, tnom, tdes }, shape: 'pipe', params: { OD, t: tdes }, modelling: [HSS_NOTE, 'the published ID is nominal (OD − 2·tnom); the bore used is OD − 2·tdes'], userDefined: false };
+  return { designation, family: 'Pipe', source: AISC_SOURCE, nominalWeight: W, depth: OD, dimensions: { OD, ID, tnom, tdes }, shape: 'pipe', params: { OD, t: tdes }, modelling: [HSS_NOTE, 'the published ID is nominal (OD − 2·tnom); the bore used is OD − 2·tdes'], caveats: publishedCaveats(designation), userDefined: false };
 }
 
 function lumberEntries(): CatalogueEntry[] {
@@ -146,6 +154,7 @@ function lumberEntries(): CatalogueEntry[] {
     shape: 'lumber',
     params: { b: s.nominalB, d: s.nominalD, plies: 1 },
     modelling: [`dressed ${s.b} × ${s.d} in, ${s.condition} (${s.category})`],
+    caveats: [],
     userDefined: false,
   }));
 }
@@ -249,6 +258,7 @@ export function withUserEntries(entries: readonly UserEntry[], base: Catalogue =
       shape: entry.shape,
       params: { ...p },
       modelling: entry.note === undefined ? [] : [entry.note],
+      caveats: [],
       userDefined: true,
     });
   }

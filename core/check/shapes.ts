@@ -3,20 +3,22 @@
  * conventions of core/catalogue (the same rules, applied to any row instead of the stored
  * AISC v15.0 rows; tests/check/shapes.test.ts holds them equal to the catalogue's own params
  * for every catalogue entry, so the two cannot drift apart):
- *   W, M, HP, WT, MT — parallel flanges, root fillet r = kdes − tf.
- *   S, C, ST — inner flange slope 2:12, tf the average thickness, r = kdes − flange thickness
- *     at the web face.
- *   MC — parallel flanges at the average tf, r = kdes − tf.
- *   L — sharp root and toes; the longer leg b along y.
+ *   flanged families — the slopes, root fillets and toe radii of core/catalogue/conventions.ts
+ *     (docs/catalogue-conventions.md);
+ *   L — root radius (kdes − t)/2 and toe radius r/2 when kdes is given (sharp otherwise), the
+ *     thickness from the label's fraction when the printed t is that fraction rounded; the
+ *     longer leg b along y.
  *   HSS (rectangular) — design wall tdes, outside corner radius 2·tdes.
  *   HSS (round), PIPE — OD with tdes; a round HSS uses the nominal OD of its label when the
  *     printed OD is that value rounded.
- * A column "r" (root fillet radius) or "slope", when the table has one, replaces the convention.
+ * A column "r" (root fillet radius), "rt" (toe radius) or "slope", when the table has one,
+ * replaces the convention.
  *
  * Units: any length unit, consistently (the conventions are ratios of the dimensions, except
  *   the label's nominal OD, which is read in inches and used only for inch tables).
  */
-import { flangedPart } from '../catalogue/index.ts';
+import { publishedCaveats } from '../catalogue/caveats.ts';
+import { angleRadii, angleThickness, flangedPart } from '../catalogue/index.ts';
 import type { LengthUnit } from '../units/types.ts';
 
 /** The shape families a table row may name (AISC type codes). */
@@ -50,7 +52,7 @@ export const REQUIRED_DIMENSIONS: Readonly<Record<TableFamily, readonly string[]
 };
 
 /** Every dimension symbol a table column may map to. */
-export const DIMENSION_SYMBOLS: readonly string[] = ['d', 'bf', 'tw', 'tf', 'kdes', 'b', 't', 'Ht', 'B', 'tnom', 'tdes', 'OD', 'ID', 'r', 'slope'];
+export const DIMENSION_SYMBOLS: readonly string[] = ['d', 'bf', 'tw', 'tf', 'kdes', 'b', 't', 'Ht', 'B', 'tnom', 'tdes', 'OD', 'ID', 'r', 'rt', 'slope'];
 
 export interface TablePart {
   readonly shape: string;
@@ -63,6 +65,12 @@ export type TablePartResult = { readonly ok: true; readonly part: TablePart } | 
 function need(dims: Readonly<Record<string, number>>, family: string, keys: readonly string[]): string | null {
   const missing = keys.filter((k) => dims[k] === undefined);
   return missing.length === 0 ? null : `a ${family} row needs ${missing.join(', ')} (no value given)`;
+}
+
+/** The modelling note with the catalogue's published caveats for this designation appended ("; NOTE: …"). */
+function withCaveats(modelling: string, designation: string, family: string): string {
+  const caveats = publishedCaveats(designation.replace(/\s+/g, '').toUpperCase(), family);
+  return caveats.length === 0 ? modelling : `${modelling}; NOTE: ${caveats.join('; ')}`;
 }
 
 /** The nominal OD in a round HSS label ("HSS6.625X0.280" → 6.625), or NaN. */
@@ -95,11 +103,16 @@ export function tablePart(family: TableFamily, dims: Readonly<Record<string, num
   if (missing !== null) return { ok: false, message: missing };
   if (family === 'PIPE') return { ok: true, part: { shape: 'pipe', params: { OD: dims['OD']!, t: dims['tdes']! }, modelling: 'pipe: OD with the design wall tdes (the published ID is nominal)' } };
   if (family === 'L') {
+    const t = unit === 'in' ? angleThickness(designation, dims['t']!) : dims['t']!;
+    const byRule = angleRadii(t, dims['kdes']);
+    const r = dims['r'] ?? byRule.r;
+    const rt = dims['rt'] ?? (dims['r'] === undefined ? byRule.rt : 0);
+    const radii = dims['r'] !== undefined ? 'root radius r as given' : dims['kdes'] !== undefined ? 'root radius (kdes − t)/2, toe radius r/2' : 'sharp root and toes (no kdes)';
     // Published d is the shorter leg; the tabulated x axis has the longer leg b vertical (core/catalogue).
-    return { ok: true, part: { shape: 'angle', params: { d: dims['b']!, b: dims['d']!, t: dims['t']!, r: dims['r'] ?? 0, rt: 0 }, modelling: 'angle: sharp root and toes, longer leg along y' } };
+    return { ok: true, part: { shape: 'angle', params: { d: dims['b']!, b: dims['d']!, t, r, rt }, modelling: withCaveats(`angle: ${radii}, longer leg along y`, designation, 'L') } };
   }
-  const { shape, params, slope } = flangedPart(family, dims as Record<'d' | 'bf' | 'tw' | 'tf' | 'kdes', number>, { slope: dims['slope'], r: dims['r'] });
-  const rule = dims['r'] !== undefined ? 'r as given' : slope > 0 ? 'r = kdes − flange thickness at the web' : 'r = kdes − tf';
-  const faces = slope > 0 ? `inner flange slope ${dims['slope'] !== undefined ? 'as given' : '2:12'}, tf average` : 'parallel flanges';
-  return { ok: true, part: { shape, params, modelling: `${family}: ${faces}, ${rule}` } };
+  const { shape, params, slopeRule } = flangedPart(family, dims as Record<'d' | 'bf' | 'tw' | 'tf' | 'kdes', number>, { slope: dims['slope'], r: dims['r'], rt: dims['rt'] });
+  const rule = dims['r'] !== undefined ? 'r as given' : family === 'M' || family === 'MT' ? 'r = (kdes − flange thickness at the web)/2' : 'r = kdes − flange thickness at the web';
+  const toe = params['rt'] === undefined ? '' : dims['rt'] !== undefined ? ', toe radius as given' : ', toe radius 0.4·tf';
+  return { ok: true, part: { shape, params, modelling: withCaveats(`${family}: ${slopeRule}${params['slope'] === undefined ? '' : ', tf average'}, ${rule}${toe}`, designation, family) } };
 }

@@ -49,6 +49,7 @@ const flangedParams = [
   { key: 'tf', label: 'flange thickness (average if sloped)', defaultIn: 0.71 },
   { key: 'r', label: 'root fillet radius (0 = sharp, as welded plates)', defaultIn: 0, optional: true },
   { key: 'slope', label: 'inner flange slope, rise over run (0 = parallel)', defaultIn: 0, optional: true, quantity: 'ratio' },
+  { key: 'rt', label: 'flange toe radius, inner corner of each toe (0 = sharp)', defaultIn: 0, optional: true },
 ] as const;
 
 interface Flanged {
@@ -58,6 +59,7 @@ interface Flanged {
   tf: number;
   r: number;
   slope: number;
+  rt: number;
 }
 
 /** Checks shared by I, channel, tee and Z: web narrower than the flange, flanges thinner than d/2. */
@@ -78,20 +80,22 @@ function iCorners(v: Flanged): Corner[] {
   const { atWeb, atToe } = flangeThicknesses(v.tf, v.slope, w - a);
   const sharp = (at: Point): Corner => ({ at, radius: 0 });
   const fillet = (at: Point): Corner => ({ at, radius: v.r });
+  const toe = (at: Point): Corner => ({ at, radius: v.rt });
   return [
-    sharp([-w, -h]), sharp([w, -h]), sharp([w, -h + atToe]), fillet([a, -h + atWeb]),
-    fillet([a, h - atWeb]), sharp([w, h - atToe]), sharp([w, h]), sharp([-w, h]),
-    sharp([-w, h - atToe]), fillet([-a, h - atWeb]), fillet([-a, -h + atWeb]), sharp([-w, -h + atToe]),
+    sharp([-w, -h]), sharp([w, -h]), toe([w, -h + atToe]), fillet([a, -h + atWeb]),
+    fillet([a, h - atWeb]), toe([w, h - atToe]), sharp([w, h]), sharp([-w, h]),
+    toe([-w, h - atToe]), fillet([-a, h - atWeb]), fillet([-a, -h + atWeb]), toe([-w, -h + atToe]),
   ];
 }
 
 function flangedRegion(partType: PartType, corners: (v: Flanged) => Corner[], outstand: (v: Flanged) => number, flanges: 1 | 2, params: Values): Built {
   const { values, diagnostics } = readParams(partType.id, partType.params, params);
   if (diagnostics.length > 0) return failed(diagnostics);
-  const v = { slope: 0, ...values } as unknown as Flanged;
+  const v = { slope: 0, rt: 0, ...values } as unknown as Flanged;
   checkFlanged(partType.id, v, outstand(v), flanges, diagnostics);
   if (diagnostics.length > 0) return failed(diagnostics);
-  const polygon = ringOrClash(partType.id, corners(v), `root radius r = ${formatNumber(v.r)}`, diagnostics);
+  const radii = v.rt > 0 ? `root radius r = ${formatNumber(v.r)} with toe radius rt = ${formatNumber(v.rt)}` : `root radius r = ${formatNumber(v.r)}`;
+  const polygon = ringOrClash(partType.id, corners(v), radii, diagnostics);
   return polygon === undefined ? failed(diagnostics) : { region: [polygon], diagnostics };
 }
 
@@ -108,9 +112,10 @@ function channelCorners(v: Flanged): Corner[] {
   const { atWeb, atToe } = flangeThicknesses(v.tf, v.slope, v.bf - v.tw);
   const sharp = (at: Point): Corner => ({ at, radius: 0 });
   const fillet = (at: Point): Corner => ({ at, radius: v.r });
+  const toe = (at: Point): Corner => ({ at, radius: v.rt });
   return [
-    sharp([0, -h]), sharp([v.bf, -h]), sharp([v.bf, -h + atToe]), fillet([v.tw, -h + atWeb]),
-    fillet([v.tw, h - atWeb]), sharp([v.bf, h - atToe]), sharp([v.bf, h]), sharp([0, h]),
+    sharp([0, -h]), sharp([v.bf, -h]), toe([v.bf, -h + atToe]), fillet([v.tw, -h + atWeb]),
+    fillet([v.tw, h - atWeb]), toe([v.bf, h - atToe]), sharp([v.bf, h]), sharp([0, h]),
   ];
 }
 
@@ -125,6 +130,7 @@ export const channel: PartType = {
     { key: 'tf', label: 'flange thickness (average if sloped)', defaultIn: 0.413 },
     { key: 'r', label: 'root fillet radius (0 = sharp)', defaultIn: 0, optional: true },
     { key: 'slope', label: 'inner flange slope, rise over run (0 = parallel)', defaultIn: 0, optional: true, quantity: 'ratio' },
+    { key: 'rt', label: 'flange toe radius, inner corner of each toe (0 = sharp)', defaultIn: 0, optional: true },
   ],
   region: (params) => flangedRegion(channel, channelCorners, (v) => v.bf - v.tw, 2, params),
 };
@@ -136,9 +142,10 @@ function teeCorners(v: Flanged): Corner[] {
   const { atWeb, atToe } = flangeThicknesses(v.tf, v.slope, w - a);
   const sharp = (at: Point): Corner => ({ at, radius: 0 });
   const fillet = (at: Point): Corner => ({ at, radius: v.r });
+  const toe = (at: Point): Corner => ({ at, radius: v.rt });
   return [
-    sharp([-a, -h]), sharp([a, -h]), fillet([a, h - atWeb]), sharp([w, h - atToe]),
-    sharp([w, h]), sharp([-w, h]), sharp([-w, h - atToe]), fillet([-a, h - atWeb]),
+    sharp([-a, -h]), sharp([a, -h]), fillet([a, h - atWeb]), toe([w, h - atToe]),
+    sharp([w, h]), sharp([-w, h]), toe([-w, h - atToe]), fillet([-a, h - atWeb]),
   ];
 }
 
@@ -153,6 +160,7 @@ export const tee: PartType = {
     { key: 'tf', label: 'flange thickness (average if sloped)', defaultIn: 0.71 },
     { key: 'r', label: 'root fillet radius (0 = sharp, as welded plates)', defaultIn: 0, optional: true },
     { key: 'slope', label: 'inner flange slope, rise over run (0 = parallel)', defaultIn: 0, optional: true, quantity: 'ratio' },
+    { key: 'rt', label: 'flange toe radius, inner corner of each toe (0 = sharp)', defaultIn: 0, optional: true },
   ],
   region: (params) => flangedRegion(tee, teeCorners, (v) => (v.bf - v.tw) / 2, 1, params),
 };

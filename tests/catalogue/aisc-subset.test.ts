@@ -1,17 +1,14 @@
 /**
- * Every shape of tests/fixtures/aisc-v15-subset.csv rebuilt from the catalogue (published
- * dimensions only) and checked against the TABULATED properties of the AISC Shapes Database
- * v15.0 (AISC, Nov 2017; consistent with the Steel Construction Manual, 15th ed.).
+ * Every shape of tests/fixtures/aisc-v15-subset.csv, and the values quoted in issue 16
+ * (tests/fixtures/aisc-v15-quoted.csv), rebuilt from the catalogue (published dimensions and the
+ * family rules of core/catalogue/conventions.ts, docs/catalogue-conventions.md) and checked
+ * against the TABULATED properties of the AISC Shapes Database v15.0 (AISC, Nov 2017; consistent
+ * with the Steel Construction Manual, 15th ed.).
  *
- * Tolerance budget (SOURCES.md caveats): AISC rounds dimensions and properties to 3 significant
- * figures, so A within 1 % and I, S, Z, r within 1.5 % (W, HP, WT, HSS, Pipe; fillet r = kdes − tf,
- * a modelling convention). Widened, and why:
- *   S, C — flange toes and their roundings are not published and are modelled sharp, which
- *     leaves the y-axis values (Iy, Sy, Zy) up to ~2.5 % high: 3 %.
- *   MC — the flange slope varies and is not published; parallel flanges at the average tf put
- *     material too far out: A, x-axis 2 %, Iy and Sy 7 %, Zy 4 %, ry 3 %.
- *   L — the database states no root or toe radii; the sharp model gives Z within 2 % and the
- *     minor principal moment within 2.5 %.
+ * Tolerance (issue 16): A within 1 %, I, S, Z, r within 1.5 % for EVERY family — no family has a
+ * widened budget. The published values that the rebuilt geometry does not reproduce are listed
+ * in NOT_REPRODUCED with the reason, and the test holds that they are still outside (so the list
+ * cannot go stale) and that docs/catalogue-conventions.md names them.
  */
 import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
@@ -42,13 +39,34 @@ const CHECKS: readonly Check[] = [
   { name: 'ry', column: 'ry_in', value: (p) => p.ry },
 ];
 
-const BASE: Readonly<Record<string, number>> = { A: 0.01, Ix: 0.015, Iy: 0.015, Sx: 0.015, Sy: 0.015, Zx: 0.015, Zy: 0.015, rx: 0.015, ry: 0.015 };
-const WIDENED: Readonly<Record<string, Readonly<Record<string, number>>>> = {
-  S: { Iy: 0.03, Sy: 0.03, Zy: 0.03 },
-  C: { Iy: 0.03, Sy: 0.03, Zy: 0.03 },
-  MC: { A: 0.02, Ix: 0.02, Sx: 0.02, Zx: 0.02, Iy: 0.07, Sy: 0.07, Zy: 0.04, ry: 0.03 },
-  L: { Zx: 0.02, Zy: 0.02 },
+const LIMITS: Readonly<Record<string, number>> = { A: 0.01, Ix: 0.015, Iy: 0.015, Sx: 0.015, Sy: 0.015, Zx: 0.015, Zy: 0.015, rx: 0.015, ry: 0.015, Iw: 0.015, Iz: 0.015 };
+
+/**
+ * Published values no rule tried reproduces, by "LABEL PROPERTY". The plastic moduli of angles
+ * come out 1.5–1.9 % above the table with every root and toe radius tried (sharp; root kdes − t
+ * or (kdes − t)/2; toe 0 to r/2), while A, I, S and r agree within 1 %: the table's angle Z
+ * follows some other model, which the database does not describe. The minor principal moment
+ * of L4X4X1/2 is 1.9 % above the table (the heel and toe radii decide it and are not published).
+ */
+const NOT_REPRODUCED: Readonly<Record<string, string>> = {
+  'L6X4X3/8 Zy': 'angle plastic modulus: table below the exact Z of every radius rule tried',
+  'L4X4X1/2 Iz': 'minor principal moment of an equal-leg angle: set by the heel and both toes, whose radii are not published',
 };
+
+const QUOTED = Papa.parse<Row>(readFileSync(new URL('../fixtures/aisc-v15-quoted.csv', import.meta.url), 'utf8'), { header: true, skipEmptyLines: true }).data;
+const DOCS = readFileSync(new URL('../../docs/catalogue-conventions.md', import.meta.url), 'utf8');
+
+/** Asserts one published value: within its limit, or listed in NOT_REPRODUCED and still outside it. */
+function expectReproduced(label: string, name: string, got: number, table: number): void {
+  const off = Math.abs(got / table - 1);
+  const listed = NOT_REPRODUCED[`${label} ${name}`];
+  const what = `${label} ${name}: computed ${got.toPrecision(5)}, table ${table} (${((got / table - 1) * 100).toFixed(2)} %)`;
+  if (listed === undefined) expect(off, what).toBeLessThanOrEqual(LIMITS[name]!);
+  else {
+    expect(off, `${what} is listed as not reproduced (${listed}) but now agrees: take it off the list`).toBeGreaterThan(LIMITS[name]!);
+    expect(DOCS, `docs/catalogue-conventions.md names ${label}`).toContain(label);
+  }
+}
 
 function rebuilt(label: string): SectionProperties {
   const part = partFromDesignation(label);
@@ -67,27 +85,32 @@ describe('AISC Shapes Database v15.0 subset rebuilt from published dimensions', 
   for (const row of ROWS) {
     const label = row['label']!;
     const type = row['shape_type']!;
-    const limits = { ...BASE, ...(WIDENED[type] ?? {}) };
-    it(`${label}: A, Ix, Iy, Sx, Sy, Zx, Zy, rx, ry within ${type in WIDENED ? 'the widened budget' : '1 % (A) and 1.5 %'} of the table`, () => {
+    it(`${label} (${type}): A within 1 %, Ix, Iy, Sx, Sy, Zx, Zy, rx, ry within 1.5 % of the table, or listed as not reproduced`, () => {
       const p = rebuilt(label);
-      for (const check of CHECKS) {
-        const table = Number(row[check.column]);
-        const got = check.value(p);
-        // AISC Shapes Database v15.0, tabulated value.
-        expect(Math.abs(got / table - 1), `${label} ${check.name}: computed ${got.toPrecision(5)}, table ${table}`).toBeLessThanOrEqual(limits[check.name]!);
-      }
+      // AISC Shapes Database v15.0, tabulated values.
+      for (const check of CHECKS) expectReproduced(label, check.name, check.value(p), Number(row[check.column]));
+    });
+  }
+
+  for (const row of QUOTED) {
+    const label = row['label']!;
+    const name = row['property']!;
+    it(`${label} ${name} as quoted in issue 16 (${row['table']}): within ${name === 'A' ? '1' : '1.5'} % or listed as not reproduced`, () => {
+      const check = CHECKS.find((c) => c.name === name)!;
+      // AISC Shapes Database v15.0, tabulated value quoted in issue 16.
+      expectReproduced(label, name, check.value(rebuilt(label)), Number(row['table']));
     });
   }
 
   for (const row of ROWS.filter((r) => r['shape_type'] === 'L')) {
     const label = row['label']!;
-    it(`${label}: principal moments within 1.5 % (major) and 2.5 % (minor), tan α within 1 %, centroid within 1 %`, () => {
+    it(`${label}: principal moments within 1.5 % or listed, tan α within 1 %, centroid within 1 %`, () => {
       const p = rebuilt(label);
       // AISC v15.0: Iw (renamed Iw_major_principal_in4) is the major principal moment, Iz the minor.
       const major = Number(row['Iw_major_principal_in4']);
       const minor = Number(row['Iz_minor_principal_in4']);
-      expect(Math.abs(p.I1 / major - 1), `I1 ${p.I1} vs ${major}`).toBeLessThanOrEqual(0.015);
-      expect(Math.abs(p.I2 / minor - 1), `I2 ${p.I2} vs ${minor}`).toBeLessThanOrEqual(0.025);
+      expectReproduced(label, 'Iw', p.I1, major);
+      expectReproduced(label, 'Iz', p.I2, minor);
       // tan α: the principal axes lean by α (< 45°) from the geometric axes (AISC v15.0 column tan_alpha).
       const tanAlpha = Number(row['tan_alpha']);
       const tanFromMinor = Math.abs(Math.tan(((p.thetaDeg + 90) * Math.PI) / 180));
