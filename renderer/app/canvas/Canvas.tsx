@@ -12,7 +12,8 @@ import { toWorld } from '../../editor/geometry.ts';
 import type { Diagnostic } from '../../../core/geometry/types.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
 import { COLOURS } from './palette.ts';
-import { gridStep, toScreen, toSection, zoomAt, type View } from './view.ts';
+import type { Overlays } from '../../controller/controller.ts';
+import { gridStep, toScreen, toSection, zoomAt, type View } from '../../controller/view.ts';
 import { formatSig } from '../../../core/units/index.ts';
 import { arcOfSegment, ringVertexCount } from '../../../core/geometry/ring.ts';
 import type { Region } from '../../../core/geometry/types.ts';
@@ -20,17 +21,7 @@ import { stressAt } from '../../../core/stress/index.ts';
 import { pascalsTo } from '../../../core/materials/index.ts';
 import { stressColour, type StressView } from '../stress/stress.ts';
 
-export interface Overlays {
-  readonly centroid: boolean;
-  readonly axes: boolean;
-  readonly principal: boolean;
-  readonly pna: boolean;
-  readonly fibres: boolean;
-  readonly dimensions: boolean;
-  /** Colour map of the normal stress, extremes and neutral axis (needs forces in the stress panel). */
-  readonly stress: boolean;
-  readonly kern: boolean;
-}
+export type { Overlays } from '../../controller/controller.ts';
 
 interface Props {
   readonly editor: Editor;

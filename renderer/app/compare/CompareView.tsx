@@ -14,7 +14,7 @@ import { allSectionViews } from '../../../core/document/index.ts';
 import type { DisplaySet, LengthUnit } from '../../../core/units/index.ts';
 import { getHost } from '../../host/index.ts';
 import { comparisonFiles, comparisonReportInput, compareModel, DEFAULT_INPUTS, nextSort, shownNumber, shownRatio, type CompareEntry, type CompareInputs } from './compare-model.ts';
-import { documentFromText } from '../shell/files.ts';
+import { documentFromText } from '../../controller/files.ts';
 import { fileStem } from '../report/report-input.ts';
 import { ReportView, sameDisplay, today, useStable } from '../report/ReportView.tsx';
 import '../shell/overlays.css';

@@ -10,7 +10,7 @@ import { reportHtml, type ReportInput } from '../../../core/report/index.ts';
 import type { DisplaySet } from '../../../core/units/index.ts';
 import { getHost } from '../../host/index.ts';
 import { fileStem, PAPER_SIZES, sectionReportInput, withPaperSize, type MemberCase, type PaperSize } from './report-input.ts';
-import type { TorsionState } from '../results/torsion-client.ts';
+import type { TorsionState } from '../../controller/torsion-client.ts';
 import '../shell/overlays.css';
 import { CAUTION } from '../../../core/member/check.ts';
 

@@ -1,6 +1,6 @@
 /** A small menu bar of our own: File, Edit, View, Help. Items name the shortcut beside them. */
 import { useEffect, useRef, useState, type ReactElement } from 'react';
-import type { Overlays } from '../canvas/Canvas.tsx';
+import type { Overlays } from '../../controller/controller.ts';
 
 export type MenuAction =
   | 'new' | 'open' | 'save' | 'save-as' | 'export-svg' | 'export-csv'

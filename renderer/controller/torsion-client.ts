@@ -2,8 +2,8 @@
  * Page side of the torsion worker: one solve at a time; a newer document terminates a running
  * solve (the result would be stale) and starts afresh. Results are derived data, never stored.
  */
-import type { SectionDocument } from '../../../core/document/types.ts';
-import type { TorsionResult } from '../../../core/torsion/types.ts';
+import type { SectionDocument } from '../../core/document/types.ts';
+import type { TorsionResult } from '../../core/torsion/types.ts';
 import type { TorsionReply } from './torsion.worker.ts';
 
 export type TorsionState =

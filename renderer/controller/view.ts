@@ -2,7 +2,7 @@
  * The canvas view: section coordinates (y up, document unit) ↔ screen pixels (y down).
  * This is the one place the y axis flips (METHODS §0): screen = (ox + x·s, oy − y·s).
  */
-import type { Box, Vec } from '../../editor/geometry.ts';
+import type { Box, Vec } from '../editor/geometry.ts';
 
 export interface View {
   /** Pixels per document unit. */

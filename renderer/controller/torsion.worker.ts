@@ -5,10 +5,10 @@
  * Messages in: { id, doc }. Out: { id, kind: 'progress', fraction } | { id, kind: 'done', result }
  * | { id, kind: 'failed', message }.
  */
-import type { SectionDocument } from '../../../core/document/types.ts';
-import { regionFromDocument } from '../../../core/section/index.ts';
-import { torsionConstants } from '../../../core/torsion/index.ts';
-import type { TorsionResult } from '../../../core/torsion/types.ts';
+import type { SectionDocument } from '../../core/document/types.ts';
+import { regionFromDocument } from '../../core/section/index.ts';
+import { torsionConstants } from '../../core/torsion/index.ts';
+import type { TorsionResult } from '../../core/torsion/types.ts';
 
 export type TorsionRequest = { readonly id: number; readonly doc: SectionDocument };
 export type TorsionReply =

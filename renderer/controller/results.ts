@@ -3,12 +3,12 @@
  * properties and diagnostics from core/section, memoised by document object, timed, and the
  * last valid properties kept so the panel can show them marked stale while the geometry is bad.
  */
-import type { SectionDocument } from '../../../core/document/types.ts';
-import type { Diagnostic } from '../../../core/geometry/types.ts';
-import type { SectionProperties } from '../../../core/properties/types.ts';
-import { localRegion, sectionFromDocument } from '../../../core/section/index.ts';
-import type { Part } from '../../../core/document/types.ts';
-import { flattenRing, type Vec } from '../../editor/geometry.ts';
+import type { SectionDocument } from '../../core/document/types.ts';
+import type { Diagnostic } from '../../core/geometry/types.ts';
+import type { SectionProperties } from '../../core/properties/types.ts';
+import { localRegion, sectionFromDocument } from '../../core/section/index.ts';
+import type { Part } from '../../core/document/types.ts';
+import { flattenRing, type Vec } from '../editor/geometry.ts';
 
 export interface Results {
   readonly properties: SectionProperties | null;

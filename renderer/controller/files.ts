@@ -5,10 +5,10 @@
  * `file` is the whole file (every section); `doc` is its first section's view, for callers that
  * take one section (allSectionViews(file) gives them all).
  */
-import { fileFromSection, parseDocument, parseJson, newDocument, type SectionDocument, type SectionFile, type PolygonPart } from '../../../core/document/index.ts';
-import { isGeoJson, regionFromGeoJson } from '../../../core/geojson.ts';
-import type { Ring } from '../../../core/geometry/types.ts';
-import type { LengthUnit } from '../../../core/units/index.ts';
+import { fileFromSection, parseDocument, parseJson, newDocument, type SectionDocument, type SectionFile, type PolygonPart } from '../../core/document/index.ts';
+import { isGeoJson, regionFromGeoJson } from '../../core/geojson.ts';
+import type { Ring } from '../../core/geometry/types.ts';
+import type { LengthUnit } from '../../core/units/index.ts';
 
 export type OpenResult = { readonly ok: true; readonly file: SectionFile; readonly doc: SectionDocument; readonly note?: string } | { readonly ok: false; readonly errors: readonly string[] };
 

@@ -1,0 +1,632 @@
+/**
+ * The application controller: plain TypeScript between the host (files, settings, recovery,
+ * window title) and the headless editor (renderer/editor). It owns the open document's file
+ * work (new, open, save, export, recovery, the example on first start), the commands by id
+ * (commands.ts) and the keyboard map (keymap.ts), the view (zoom and pan), the clipboard, and
+ * the background work (torsion by finite elements, started a moment after the drawing settles).
+ * React components subscribe to `getState()` and the editor's state, render, and call `run(id)`
+ * or a named method; they hold no application logic.
+ *
+ * Timers and the torsion worker come in through ControllerDeps, so tests drive it with fakes.
+ */
+import { allSectionViews, newSectionFile, serialiseDocument, type SectionDocument, type SectionFile } from '../../core/document/index.ts';
+import type { Part } from '../../core/document/types.ts';
+import { propertiesCsv, sectionSvg } from '../../core/export/index.ts';
+import { getPartType } from '../../core/parts/index.ts';
+import { sectionFromDocument } from '../../core/section/index.ts';
+import { convertLength, defaultDisplaySet, plainDisplaySet, type DisplaySet, type LengthUnit } from '../../core/units/index.ts';
+import { Editor } from '../editor/editor.ts';
+import { outlineBox, type Vec } from '../editor/geometry.ts';
+import { scaleDocumentLengths, uniquePartId } from '../editor/transforms.ts';
+import type { Host, HostCommand } from '../host/host.ts';
+import { COMMANDS, isCommandId, type CommandId, type CommandTarget, type ShownView } from './commands.ts';
+import { documentFromText } from './files.ts';
+import { keyAction, type KeyInput } from './keymap.ts';
+import { createResultsCache, shapeOutlineResolver, type Results } from './results.ts';
+import type { TorsionState } from './torsion-client.ts';
+import { fitView, zoomAt, type View } from './view.ts';
+
+export const EXAMPLE_NAME = 'footbridge-box-girder.section.json';
+/** Host setting: the example has been shown once (it opens on first start only). */
+export const SEEN_EXAMPLE_SETTING = 'seenExample';
+export const DISPLAY_SETTING = 'displayUnits';
+export const FIGURES_SETTING = 'figures';
+export const RECOVERY_DELAY_MS = 1200;
+export const TORSION_DELAY_MS = 400;
+/** Information notes clear themselves after this long; errors stay until dismissed. */
+export const NOTE_LIFETIME_MS = 6000;
+
+export const DISPLAY_CHOICES: readonly { id: string; label: string; set: (doc: LengthUnit) => DisplaySet }[] = [
+  { id: 'document', label: 'document unit (scaled)', set: (u) => defaultDisplaySet(u) },
+  { id: 'in', label: 'in, in², in³, in⁴', set: () => plainDisplaySet('in') },
+  { id: 'mm-scaled', label: 'mm, 10³ mm³, 10⁶ mm⁴', set: () => defaultDisplaySet('mm') },
+  { id: 'mm', label: 'mm, mm², mm³, mm⁴', set: () => plainDisplaySet('mm') },
+  { id: 'cm', label: 'cm, cm², cm³, cm⁴', set: () => plainDisplaySet('cm') },
+  { id: 'm', label: 'm, m², m³, m⁴', set: () => plainDisplaySet('m') },
+];
+export const FIGURE_CHOICES: readonly number[] = [3, 4, 5, 6];
+
+/** What the canvas draws on top of the parts (View menu). */
+export interface Overlays {
+  readonly centroid: boolean;
+  readonly axes: boolean;
+  readonly principal: boolean;
+  readonly pna: boolean;
+  readonly fibres: boolean;
+  readonly dimensions: boolean;
+  /** Colour map of the normal stress, extremes and neutral axis (needs forces in the stress panel). */
+  readonly stress: boolean;
+  readonly kern: boolean;
+}
+
+export interface Banner {
+  readonly kind: 'error' | 'info';
+  readonly title: string;
+  readonly lines: readonly string[];
+}
+
+export interface AppState {
+  readonly banner: Banner | null;
+  /** Text of unsaved work from an earlier session, offered until answered. */
+  readonly recovery: string | null;
+  readonly shown: ShownView | null;
+  readonly view: View;
+  readonly size: { readonly width: number; readonly height: number };
+  readonly overlays: Overlays;
+  readonly displayId: string;
+  readonly sig: number;
+  readonly torsion: TorsionState;
+  /** The document name waiting for a discard answer (the in-page dialog), or null. */
+  readonly asking: string | null;
+  /** Parts on the clipboard (Copy, Cut), or 0. */
+  readonly clipboardParts: number;
+}
+
+/** One timer source (window's in the app; fake ones in tests). */
+export interface Timers {
+  set(fn: () => void, ms: number): unknown;
+  clear(handle: unknown): void;
+}
+
+/** The torsion solver in the background: one solve at a time, a newer one cancels the older. */
+export interface TorsionRunner {
+  solve(doc: SectionDocument): void;
+  cancel(): void;
+}
+
+export interface ControllerDeps {
+  readonly host: Host;
+  /** The example document's text (assets/examples). */
+  readonly exampleText: string;
+  /** Makes the torsion runner, given where to report its state. */
+  readonly torsion: (onState: (s: TorsionState) => void) => TorsionRunner;
+  readonly timers?: Timers;
+}
+
+const isLengthParam = (shape: string, key: string): boolean => {
+  const spec = getPartType(shape)?.params.find((p) => p.key === key);
+  return spec === undefined || spec.quantity === undefined || spec.quantity === 'length';
+};
+
+const errorText = (err: unknown): string => (err instanceof Error ? err.message : String(err));
+
+export class AppController implements CommandTarget {
+  readonly editor: Editor;
+  private readonly host: Host;
+  private readonly timers: Timers;
+  private readonly exampleText: string;
+  private readonly torsionRunner: TorsionRunner;
+  private readonly compute = createResultsCache();
+  private readonly listeners = new Set<() => void>();
+  private state: AppState;
+  private pendingFit = true;
+  /** The example was loaded and waits to be seen (marked seen once the canvas has shown it). */
+  private exampleWaiting = false;
+  private clipboard: readonly Part[] = [];
+  private pasteCount = 0;
+  private lastDoc: SectionDocument | null = null;
+  private lastGesture = false;
+  private lastTitle = '';
+  private wasDirty = false;
+  private torsionTimer: unknown = null;
+  private recoveryTimer: unknown = null;
+  private noteTimer: unknown = null;
+  private answerDiscard: ((yes: boolean) => void) | null = null;
+  private readonly unsubscribeEditor: () => void;
+  private unsubscribeHost: (() => void) | null = null;
+
+  constructor(deps: ControllerDeps) {
+    this.host = deps.host;
+    this.exampleText = deps.exampleText;
+    this.timers = deps.timers ?? { set: (fn, ms) => globalThis.setTimeout(fn, ms), clear: (h) => globalThis.clearTimeout(h as ReturnType<typeof setTimeout>) };
+    const holder: { ed: Editor | null } = { ed: null };
+    const resolver = shapeOutlineResolver(() => holder.ed?.getState().doc.unit ?? 'mm');
+    this.editor = holder.ed = new Editor(newSectionFile('mm'), { resolveShape: resolver });
+    this.state = {
+      banner: null,
+      recovery: null,
+      shown: null,
+      view: { scale: 0.5, ox: 400, oy: 300 },
+      size: { width: 0, height: 0 },
+      overlays: { centroid: true, axes: true, principal: true, pna: false, fibres: false, dimensions: true, stress: false, kern: false },
+      displayId: 'document',
+      sig: 4,
+      torsion: { kind: 'idle' },
+      asking: null,
+      clipboardParts: 0,
+    };
+    this.torsionRunner = deps.torsion((torsion) => this.set({ torsion }));
+    this.unsubscribeEditor = this.editor.subscribe(() => this.editorChanged());
+    this.editorChanged();
+  }
+
+  // ---- subscription -------------------------------------------------------------------------
+
+  subscribe = (fn: () => void): (() => void) => {
+    this.listeners.add(fn);
+    return () => this.listeners.delete(fn);
+  };
+
+  getState = (): AppState => this.state;
+
+  private set(patch: Partial<AppState>): void {
+    this.state = { ...this.state, ...patch };
+    for (const fn of this.listeners) fn();
+  }
+
+  /** Stop timers, the worker and subscriptions (the page is going away, or a test ends). */
+  dispose(): void {
+    for (const t of [this.torsionTimer, this.recoveryTimer, this.noteTimer]) if (t !== null) this.timers.clear(t);
+    this.torsionRunner.cancel();
+    this.unsubscribeEditor();
+    this.unsubscribeHost?.();
+  }
+
+  // ---- derived results ----------------------------------------------------------------------
+
+  /** The active section's properties and diagnostics (memoised by document). */
+  results(doc: SectionDocument = this.editor.getState().doc): Results {
+    return this.compute(doc);
+  }
+
+  /** The display set chosen under "Show results in", for the document's unit. */
+  display(): DisplaySet {
+    const choice = DISPLAY_CHOICES.find((d) => d.id === this.state.displayId) ?? (DISPLAY_CHOICES[0] as (typeof DISPLAY_CHOICES)[number]);
+    return choice.set(this.editor.getState().doc.unit);
+  }
+
+  /** Every section of the file as { name, doc }, the active one as the editor's own view. */
+  sectionViews(): { name: string; doc: SectionDocument }[] {
+    const st = this.editor.getState();
+    return allSectionViews(st.sectionFile).map((v, i) => (st.sectionFile.sections[i]?.id === st.activeSection ? { name: v.name, doc: st.doc } : v));
+  }
+
+  /** The file's display name (file name once saved or opened, else the document's name). */
+  documentName(): string {
+    const st = this.editor.getState();
+    return st.file?.name ?? st.sectionFile.name;
+  }
+
+  // ---- reacting to edits --------------------------------------------------------------------
+
+  private editorChanged(): void {
+    const st = this.editor.getState();
+    const title = `${st.dirty ? '• ' : ''}${this.documentName()} — Sectionsmith`;
+    if (title !== this.lastTitle) {
+      this.lastTitle = title;
+      this.host.setTitle(title);
+      this.host.setUnsaved?.(st.dirty);
+    }
+    if (st.doc !== this.lastDoc || st.gesture !== this.lastGesture) {
+      const docChanged = st.doc !== this.lastDoc;
+      this.lastDoc = st.doc;
+      this.lastGesture = st.gesture;
+      const p = this.results(st.doc).properties;
+      // The section centroid is a snap target.
+      this.editor.setCentroid(p ? [p.cx, p.cy] : null);
+      this.scheduleTorsion();
+      if (docChanged) this.scheduleRecovery();
+    } else this.scheduleRecovery();
+  }
+
+  /**
+   * Torsion a moment after the drawing settles: any newer edit cancels a running solve, since
+   * its answer would describe an older section. Nothing runs on a section without properties.
+   */
+  private scheduleTorsion(): void {
+    if (this.torsionTimer !== null) this.timers.clear(this.torsionTimer);
+    this.torsionTimer = null;
+    this.torsionRunner.cancel();
+    const st = this.editor.getState();
+    if (st.gesture || !this.results(st.doc).properties) return;
+    const doc = st.doc;
+    this.torsionTimer = this.timers.set(() => {
+      this.torsionTimer = null;
+      this.torsionRunner.solve(doc);
+    }, TORSION_DELAY_MS);
+  }
+
+  /**
+   * Recovery text shortly after each change; cleared when the work becomes clean again (saved,
+   * or undone back to the saved state). A fresh start never clears it: that text may be the
+   * previous session's, still on offer. While that offer is unanswered nothing is written, so
+   * the earlier work is not overwritten by new edits; answering it resumes writing at once.
+   */
+  private scheduleRecovery(): void {
+    if (this.recoveryTimer !== null) this.timers.clear(this.recoveryTimer);
+    this.recoveryTimer = null;
+    if (this.state.recovery !== null) return;
+    const st = this.editor.getState();
+    if (!st.dirty && !this.wasDirty) return;
+    this.recoveryTimer = this.timers.set(() => {
+      this.recoveryTimer = null;
+      const now = this.editor.getState();
+      this.wasDirty = now.dirty;
+      this.host.writeRecovery(now.dirty ? serialiseDocument(now.sectionFile) : null).catch((err: unknown) => this.error('Unsaved work could not be kept for recovery.', [errorText(err)]));
+    }, RECOVERY_DELAY_MS);
+  }
+
+  // ---- notes --------------------------------------------------------------------------------
+
+  /** An information note: it clears itself after NOTE_LIFETIME_MS. */
+  note(title: string, lines: readonly string[] = []): void {
+    this.showBanner({ kind: 'info', title, lines });
+  }
+
+  /** An error: it stays until dismissed or replaced. */
+  error(title: string, lines: readonly string[] = []): void {
+    this.showBanner({ kind: 'error', title, lines });
+  }
+
+  private showBanner(banner: Banner | null): void {
+    if (this.noteTimer !== null) this.timers.clear(this.noteTimer);
+    this.noteTimer = null;
+    if (banner?.kind === 'info') {
+      this.noteTimer = this.timers.set(() => {
+        this.noteTimer = null;
+        if (this.state.banner === banner) this.set({ banner: null });
+      }, NOTE_LIFETIME_MS);
+    }
+    this.set({ banner });
+  }
+
+  dismissBanner(): void {
+    this.showBanner(null);
+  }
+
+  // ---- start-up -----------------------------------------------------------------------------
+
+  /**
+   * First start: open the file the host was given, else the example (once: it is marked seen only
+   * after it has shown, so a reload during start-up shows it again); offer recovery if a previous
+   * session ended without saving. Host commands (menu items) are listened to from here on.
+   */
+  async start(): Promise<void> {
+    this.unsubscribeHost = this.host.onCommand?.((c) => void this.runHostCommand(c)) ?? null;
+    const [launched, left, seen, displayId, figures] = await Promise.all([
+      this.host.launchFile?.() ?? Promise.resolve(null),
+      this.host.readRecovery(),
+      this.readSetting(SEEN_EXAMPLE_SETTING),
+      this.readSetting(DISPLAY_SETTING),
+      this.readSetting(FIGURES_SETTING),
+    ]);
+    if (displayId !== null && DISPLAY_CHOICES.some((d) => d.id === displayId)) this.set({ displayId });
+    if (figures !== null && FIGURE_CHOICES.includes(Number(figures))) this.set({ sig: Number(figures) });
+    if (launched) this.openText(launched.text, launched.name, launched.handle);
+    else if (seen === null) {
+      const ex = this.exampleFile();
+      if (ex) {
+        this.loadDoc(ex, { name: EXAMPLE_NAME, handle: null });
+        this.exampleWaiting = true;
+        this.markExampleSeenIfShown();
+      }
+    }
+    if (left) this.set({ recovery: left });
+  }
+
+  private async readSetting(key: string): Promise<string | null> {
+    try {
+      return (await this.host.readSetting?.(key)) ?? null;
+    } catch {
+      return null; // an unreadable setting is the default, not a reason to refuse to start
+    }
+  }
+
+  private writeSetting(key: string, value: string | null): void {
+    this.host.writeSetting?.(key, value).catch((err: unknown) => this.error('A setting could not be kept.', [errorText(err)]));
+  }
+
+  private markExampleSeenIfShown(): void {
+    if (!this.exampleWaiting || this.pendingFit) return;
+    this.exampleWaiting = false;
+    this.writeSetting(SEEN_EXAMPLE_SETTING, '1');
+  }
+
+  private exampleFile(): SectionFile | null {
+    const r = documentFromText(this.exampleText, EXAMPLE_NAME, 'mm');
+    return r.ok ? r.file : null;
+  }
+
+  // ---- documents ----------------------------------------------------------------------------
+
+  private loadDoc(doc: SectionDocument | SectionFile, file: { name: string; handle: string | null } | null, dirty = false): void {
+    this.editor.load(doc, file, dirty);
+    this.clipboardReset();
+    this.pendingFit = true;
+    this.fitIfReady();
+  }
+
+  private clipboardReset(): void {
+    this.pasteCount = 0;
+  }
+
+  /** Ask before discarding unsaved changes (true = go ahead). */
+  async confirmDiscard(): Promise<boolean> {
+    const st = this.editor.getState();
+    if (!st.dirty) return true;
+    return this.host.confirmDiscard(st.file?.name ?? st.doc.name);
+  }
+
+  /** The in-page discard dialog (installed by the shell for the browser host). */
+  askDiscard(name: string): Promise<boolean> {
+    this.answerDiscard?.(false);
+    return new Promise<boolean>((resolve) => {
+      this.answerDiscard = resolve;
+      this.set({ asking: name });
+    });
+  }
+
+  answerAsking(yes: boolean): void {
+    const answer = this.answerDiscard;
+    this.answerDiscard = null;
+    this.set({ asking: null });
+    answer?.(yes);
+  }
+
+  /** Open text as a document; bad text leaves the current document as it was and says why. */
+  openText(text: string, name: string, handle: string | null): boolean {
+    const r = documentFromText(text, name, this.editor.getState().doc.unit);
+    if (!r.ok) {
+      this.error(`Could not open ${name}. The current document is unchanged.`, r.errors);
+      return false;
+    }
+    this.loadDoc(r.file, { name, handle: r.note?.startsWith('GeoJSON') ? null : handle });
+    if (r.note) this.note(`Opened ${name}`, [r.note]);
+    else this.showBanner(null);
+    return true;
+  }
+
+  /** A file dropped or chosen in the page (no handle: saving it is a Save As). */
+  async openGiven(text: string, name: string): Promise<void> {
+    if (await this.confirmDiscard()) this.openText(text, name, null);
+  }
+
+  async newDocument(): Promise<void> {
+    if (await this.confirmDiscard()) this.loadDoc(newSectionFile(this.editor.getState().doc.unit), null);
+  }
+
+  async openWithPicker(): Promise<void> {
+    if (!(await this.confirmDiscard())) return;
+    try {
+      const f = await this.host.open();
+      if (f) this.openText(f.text, f.name, f.handle);
+    } catch (err) {
+      this.error('Could not open the file. The current document is unchanged.', [errorText(err)]);
+    }
+  }
+
+  /** An entry of the host's recent-files list. */
+  async openRecent(handle: string, name: string): Promise<void> {
+    if (!this.host.openRecent || !(await this.confirmDiscard())) return;
+    try {
+      const f = await this.host.openRecent(handle);
+      if (f) this.openText(f.text, f.name, f.handle);
+      else this.error(`${name} is no longer available. The current document is unchanged.`);
+    } catch (err) {
+      this.error(`Could not open ${name}. The current document is unchanged.`, [errorText(err)]);
+    }
+  }
+
+  async openExample(): Promise<void> {
+    if (!(await this.confirmDiscard())) return;
+    const ex = this.exampleFile();
+    if (ex) this.loadDoc(ex, { name: EXAMPLE_NAME, handle: null });
+  }
+
+  async openLaunchFile(): Promise<void> {
+    const f = await this.host.launchFile?.();
+    if (f && (await this.confirmDiscard())) this.openText(f.text, f.name, f.handle);
+  }
+
+  async save(as: boolean): Promise<void> {
+    const st = this.editor.getState();
+    const text = serialiseDocument(st.sectionFile);
+    try {
+      const suggested = st.file?.name ?? `${st.sectionFile.name.replace(/[^\w.-]+/g, '-') || 'section'}.section.json`;
+      const r = !as && st.file?.handle ? await this.host.save(st.file.handle, text) : await this.host.saveAs(suggested, text);
+      if (!r) return;
+      this.editor.markSaved({ name: r.name, handle: r.handle });
+      await this.host.writeRecovery(null);
+      this.wasDirty = false;
+      this.note(`Saved ${r.name}`);
+    } catch (err) {
+      this.error('The document was not saved.', [errorText(err)]);
+    }
+  }
+
+  async exportAs(kind: 'svg' | 'csv'): Promise<void> {
+    const st = this.editor.getState();
+    const section = sectionFromDocument(st.doc);
+    if (!section.properties) {
+      this.error('Nothing was exported: the section has no valid properties.', section.diagnostics.map((d) => d.message));
+      return;
+    }
+    const base = (st.file?.name ?? st.doc.name).replace(/\.(section\.json|geojson|json)$/i, '').replace(/[^\w.-]+/g, '-') || 'section';
+    const torsion = this.state.torsion;
+    const file =
+      kind === 'svg'
+        ? { suggestedName: `${base}.svg`, mimeType: 'image/svg+xml', text: sectionSvg({ name: st.doc.name, unit: st.doc.unit, section, display: this.display() }) }
+        : {
+            suggestedName: `${base}.csv`,
+            mimeType: 'text/csv',
+            text: propertiesCsv({ name: st.doc.name, unit: st.doc.unit, properties: section.properties, torsion: torsion.kind === 'done' && torsion.doc === st.doc ? torsion.result : null }),
+          };
+    try {
+      if (await this.host.exportFile(file)) this.note(`Exported ${file.suggestedName}`);
+    } catch (err) {
+      this.error(`Export of ${file.suggestedName} failed.`, [errorText(err)]);
+    }
+  }
+
+  // ---- recovery offer -----------------------------------------------------------------------
+
+  restoreRecovery(): void {
+    const text = this.state.recovery;
+    if (text === null) return;
+    const r = documentFromText(text, 'recovered work', this.editor.getState().doc.unit);
+    this.set({ recovery: null });
+    if (r.ok) this.loadDoc(r.file, null, true);
+    else this.error('The recovered work could not be read.', r.errors);
+    this.scheduleRecovery();
+  }
+
+  discardRecovery(): void {
+    this.set({ recovery: null });
+    this.host.writeRecovery(null).catch((err: unknown) => this.error('The recovery copy could not be removed.', [errorText(err)]));
+    this.scheduleRecovery();
+  }
+
+  // ---- commands -----------------------------------------------------------------------------
+
+  /** Run a command by id (menus, buttons, keys). */
+  async run(id: CommandId): Promise<void> {
+    await COMMANDS[id].run(this);
+  }
+
+  /** A host menu item; ids the editor does not know are refused with a message, never ignored silently. */
+  async runHostCommand(id: HostCommand | string): Promise<void> {
+    if (isCommandId(id)) await this.run(id);
+    else this.error(`The menu sent a command this editor does not know: ${id}.`);
+  }
+
+  /** A key press: returns true when it was ours (the caller then prevents the browser's default). */
+  keyDown(k: KeyInput): boolean {
+    const action = keyAction(k);
+    if (!action) return false;
+    if (action.kind === 'tool-key') return this.editor.key(action.key) || true;
+    if (action.id.startsWith('nudge-') && this.editor.getState().selection.length === 0) return false;
+    void this.run(action.id);
+    return true;
+  }
+
+  show(view: ShownView | null): void {
+    this.set({ shown: view });
+  }
+
+  // ---- view ---------------------------------------------------------------------------------
+
+  setSize(width: number, height: number): void {
+    if (width === this.state.size.width && height === this.state.size.height) return;
+    this.set({ size: { width, height } });
+    this.fitIfReady();
+  }
+
+  setView(view: View): void {
+    this.set({ view });
+  }
+
+  private fitIfReady(): void {
+    if (!this.pendingFit || this.state.size.width <= 100) return;
+    this.pendingFit = false;
+    this.fit();
+    this.markExampleSeenIfShown();
+  }
+
+  fit(): void {
+    const { width, height } = this.state.size;
+    this.set({ view: fitView(outlineBox(this.editor.outlines()), width, height, 70) });
+  }
+
+  zoomBy(factor: number): void {
+    const { width, height } = this.state.size;
+    this.set({ view: zoomAt(this.state.view, factor, [width / 2, height / 2]) });
+  }
+
+  setOverlays(overlays: Overlays): void {
+    this.set({ overlays });
+  }
+
+  setDisplay(displayId: string): void {
+    if (!DISPLAY_CHOICES.some((d) => d.id === displayId)) return;
+    this.set({ displayId });
+    this.writeSetting(DISPLAY_SETTING, displayId);
+  }
+
+  setFigures(sig: number): void {
+    if (!FIGURE_CHOICES.includes(sig)) return;
+    this.set({ sig });
+    this.writeSetting(FIGURES_SETTING, String(sig));
+  }
+
+  /** Change the document unit: every length is converted exactly, so the section keeps its size. */
+  changeUnit(unit: LengthUnit): void {
+    const from = this.editor.getState().doc.unit;
+    if (unit === from) return;
+    this.editor.replaceAllSections(`Document unit ${from} → ${unit}`, (doc) => ({ ...scaleDocumentLengths(doc, (v) => convertLength(v, from, unit), isLengthParam), unit }));
+    this.set({ view: { ...this.state.view, scale: this.state.view.scale / convertLength(1, from, unit) } });
+  }
+
+  // ---- clipboard and copies -----------------------------------------------------------------
+
+  /** The offset of a copy from its original: one grid step right and one down. */
+  private copyOffset(): Vec {
+    const step = this.editor.getState().snap.grid;
+    return [step, -step];
+  }
+
+  copy(): void {
+    const st = this.editor.getState();
+    const parts = st.doc.parts.filter((p) => st.selection.includes(p.id));
+    if (parts.length === 0) return;
+    this.clipboard = parts;
+    this.pasteCount = 0;
+    this.set({ clipboardParts: parts.length });
+  }
+
+  cut(): void {
+    if (this.editor.getState().selection.length === 0) return;
+    this.copy();
+    this.pasteCount = -1; // the first paste goes back where the parts were
+    this.editor.run('Cut', (doc, sel) => ({ doc: { ...doc, parts: doc.parts.filter((p) => !sel.includes(p.id)) }, selection: [] }));
+  }
+
+  /** Paste the clipboard's parts: each paste one offset further, selected, as one undo step. */
+  paste(): void {
+    if (this.clipboard.length === 0) return;
+    this.pasteCount++;
+    const [ox, oy] = this.copyOffset();
+    const dx = ox * this.pasteCount;
+    const dy = oy * this.pasteCount;
+    const parts = this.clipboard;
+    this.editor.run(parts.length === 1 ? 'Paste part' : 'Paste parts', (doc) => {
+      let out = doc;
+      const ids: string[] = [];
+      for (const p of parts) {
+        const id = uniquePartId(out);
+        ids.push(id);
+        out = { ...out, parts: [...out.parts, { ...p, id, placement: { ...p.placement, x: p.placement.x + dx, y: p.placement.y + dy } }] };
+      }
+      return { doc: out, selection: ids };
+    });
+  }
+
+  /** Duplicate the selection one offset away (a copy exactly on top would add nothing). */
+  duplicate(): void {
+    const [dx, dy] = this.copyOffset();
+    this.editor.duplicateSelection(dx, dy);
+  }
+
+  nudge(dx: number, dy: number): void {
+    this.editor.moveSelectionBy(dx, dy);
+  }
+}

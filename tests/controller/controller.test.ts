@@ -1,0 +1,431 @@
+/**
+ * The app controller without React or a browser: start-up, files, recovery, notes, settings,
+ * background torsion, keys, and every command by id. Expected values are exact arithmetic on
+ * the inputs (grid steps, zoom factors) or what the fake host recorded.
+ */
+import { describe, expect, it } from 'vitest';
+import { newSectionFile, serialiseDocument } from '../../core/document/index.ts';
+import type { Part } from '../../core/document/types.ts';
+import { COMMAND_IDS, type CommandId } from '../../renderer/controller/commands.ts';
+import { DISPLAY_SETTING, EXAMPLE_NAME, NOTE_LIFETIME_MS, RECOVERY_DELAY_MS, SEEN_EXAMPLE_SETTING, TORSION_DELAY_MS } from '../../renderer/controller/controller.ts';
+import { KEY_BINDINGS, type KeyInput } from '../../renderer/controller/keymap.ts';
+import { EXAMPLE_TEXT, rig, settle, type Rig } from './fakes.ts';
+
+const key = (k: string, o: Partial<KeyInput> = {}): KeyInput => ({ key: k, mod: false, shift: false, alt: false, typing: false, ...o });
+
+/** A controller with one 100 × 20 plate (id part-1) at the origin, selected, snapping grid 10. */
+function withPlate(setup?: Parameters<typeof rig>[0]): Rig {
+  const r = rig(setup);
+  r.c.editor.addRectangle({ x: 0, y: 0, width: 100, height: 20 });
+  return r;
+}
+
+const placed = (r: Rig): [string, number, number][] => r.c.editor.getState().doc.parts.map((p: Part) => [p.id, p.placement.x, p.placement.y]);
+
+describe('start-up', () => {
+  it('opens the example on first start and marks it seen only once the canvas has shown it', async () => {
+    const r = rig(() => undefined, false);
+    await r.c.start();
+    expect(r.c.editor.getState().file?.name).toBe(EXAMPLE_NAME);
+    expect(r.host.settings.has(SEEN_EXAMPLE_SETTING)).toBe(false); // not shown yet: no canvas size
+    r.c.setSize(800, 600);
+    await settle();
+    expect(r.host.settings.get(SEEN_EXAMPLE_SETTING)).toBe('1');
+  });
+
+  it('opens the example again when the page reloaded before it had shown', async () => {
+    const first = rig(() => undefined, false);
+    await first.c.start();
+    first.c.dispose(); // the page died during start-up
+    const second = rig((h) => {
+      for (const [k, v] of first.host.settings) h.settings.set(k, v);
+    });
+    await second.c.start();
+    expect(second.c.editor.getState().file?.name).toBe(EXAMPLE_NAME);
+  });
+
+  it('starts empty once the example has been seen', async () => {
+    const r = rig((h) => h.settings.set(SEEN_EXAMPLE_SETTING, '1'));
+    await r.c.start();
+    expect(r.c.editor.getState().doc.parts).toHaveLength(0);
+  });
+
+  it('opens the file the host was given at start instead of the example', async () => {
+    const text = serialiseDocument({ ...newSectionFile('in'), name: 'Trailer frame' });
+    const r = rig((h) => (h.launch = { name: 'trailer.section.json', handle: 'h-9', text }));
+    await r.c.start();
+    expect(r.c.editor.getState().file).toEqual({ name: 'trailer.section.json', handle: 'h-9' });
+    expect(r.c.editor.getState().doc.unit).toBe('in');
+  });
+
+  it('offers unsaved work of an earlier session; restoring loads it as unsaved', async () => {
+    const left = serialiseDocument({ ...newSectionFile('mm'), name: 'Mezzanine flitch beam' });
+    const r = rig((h) => {
+      h.recovery = left;
+      h.settings.set(SEEN_EXAMPLE_SETTING, '1');
+    });
+    await r.c.start();
+    expect(r.c.getState().recovery).toBe(left);
+    r.c.restoreRecovery();
+    expect(r.c.getState().recovery).toBeNull();
+    expect(r.c.editor.getState().sectionFile.name).toBe('Mezzanine flitch beam');
+    expect(r.c.editor.getState().dirty).toBe(true);
+  });
+
+  it('discarding the offer clears the recovery copy', async () => {
+    const r = rig((h) => (h.recovery = 'whatever was left'));
+    await r.c.start();
+    r.c.discardRecovery();
+    await settle();
+    expect(r.host.recovery).toBeNull();
+    expect(r.c.getState().recovery).toBeNull();
+  });
+
+  it('reads the display unit and figures from the host settings', async () => {
+    const r = rig((h) => {
+      h.settings.set(DISPLAY_SETTING, 'in');
+      h.settings.set('figures', '6');
+    });
+    await r.c.start();
+    expect(r.c.getState().displayId).toBe('in');
+    expect(r.c.getState().sig).toBe(6);
+  });
+});
+
+describe('background work and recovery', () => {
+  it('solves torsion once the drawing has settled for the delay, and cancels on a newer edit', () => {
+    const r = withPlate();
+    expect(r.torsion.solved).toHaveLength(0);
+    r.timers.advance(TORSION_DELAY_MS - 1);
+    r.c.editor.moveSelectionBy(10, 0); // a newer edit restarts the wait
+    r.timers.advance(TORSION_DELAY_MS - 1);
+    expect(r.torsion.solved).toHaveLength(0);
+    r.timers.advance(1);
+    expect(r.torsion.solved).toEqual([r.c.editor.getState().doc]);
+  });
+
+  it('does not solve torsion of a section without properties (nothing drawn)', () => {
+    const r = rig();
+    r.timers.advance(10 * TORSION_DELAY_MS);
+    expect(r.torsion.solved).toHaveLength(0);
+  });
+
+  it('reports the runner state in its own state', () => {
+    const r = withPlate();
+    r.torsion.report({ kind: 'running', fraction: 0.5 });
+    expect(r.c.getState().torsion).toEqual({ kind: 'running', fraction: 0.5 });
+  });
+
+  it('writes the recovery copy a moment after an edit and clears it when the work is saved', async () => {
+    const r = withPlate();
+    r.timers.advance(RECOVERY_DELAY_MS);
+    await settle();
+    expect(r.host.recovery).toBe(serialiseDocument(r.c.editor.getState().sectionFile));
+    await r.c.run('save');
+    expect(r.host.recovery).toBeNull();
+  });
+
+  it('writes nothing while an earlier session’s work is still on offer', async () => {
+    const r = rig((h) => (h.recovery = 'earlier work'));
+    await r.c.start();
+    r.c.editor.addRectangle({ x: 0, y: 0, width: 10, height: 10 });
+    r.timers.advance(10 * RECOVERY_DELAY_MS);
+    await settle();
+    expect(r.host.recoveryWrites).toEqual([]);
+  });
+});
+
+describe('notes, title and settings', () => {
+  it('an information note clears itself; an error stays', () => {
+    const r = rig();
+    r.c.note('Saved x');
+    r.timers.advance(NOTE_LIFETIME_MS - 1);
+    expect(r.c.getState().banner?.title).toBe('Saved x');
+    r.timers.advance(1);
+    expect(r.c.getState().banner).toBeNull();
+    r.c.error('Could not open y');
+    r.timers.advance(10 * NOTE_LIFETIME_MS);
+    expect(r.c.getState().banner?.title).toBe('Could not open y');
+  });
+
+  it('the window title names the document and marks unsaved work', () => {
+    const r = withPlate();
+    expect(r.host.titles.at(-1)).toBe('• Untitled section — Sectionsmith');
+  });
+
+  it('the display unit and figures are kept through the host, not the page storage', async () => {
+    const r = rig();
+    r.c.setDisplay('cm');
+    r.c.setFigures(5);
+    await settle();
+    expect(r.host.settings.get(DISPLAY_SETTING)).toBe('cm');
+    expect(r.host.settings.get('figures')).toBe('5');
+  });
+
+  it('changing the document unit keeps the section the same physical size (25.4 mm per inch, exact)', () => {
+    const r = withPlate();
+    r.c.changeUnit('in');
+    const part = r.c.editor.getState().doc.parts[0];
+    expect(part?.type === 'rectangle' ? part.width : NaN).toBeCloseTo(100 / 25.4, 12);
+  });
+
+  it('refuses a host command it does not know, with a message', async () => {
+    const r = rig();
+    await r.c.start();
+    r.host.send('make-coffee');
+    await settle();
+    expect(r.c.getState().banner?.kind).toBe('error');
+    expect(r.c.getState().banner?.title).toContain('make-coffee');
+  });
+});
+
+describe('keys', () => {
+  it('Ctrl+S saves even while typing; Ctrl+Z in a text box is the box’s own', () => {
+    const r = withPlate();
+    expect(r.c.keyDown(key('s', { mod: true, typing: true }))).toBe(true);
+    expect(r.c.keyDown(key('z', { mod: true, typing: true }))).toBe(false);
+    expect(r.c.editor.getState().doc.parts).toHaveLength(1);
+  });
+
+  it('plain letters pick tools, but not while typing', () => {
+    const r = rig();
+    expect(r.c.keyDown(key('r'))).toBe(true);
+    expect(r.c.editor.getState().toolId).toBe('rectangle');
+    expect(r.c.keyDown(key('p', { typing: true }))).toBe(false);
+    expect(r.c.editor.getState().toolId).toBe('rectangle');
+  });
+
+  it('arrows move the selection one grid step, and are left to the page when nothing is selected', () => {
+    const r = withPlate();
+    expect(r.c.keyDown(key('ArrowLeft'))).toBe(true);
+    expect(placed(r)).toEqual([['part-1', -10, 0]]);
+    r.c.editor.select([]);
+    expect(r.c.keyDown(key('ArrowLeft'))).toBe(false);
+  });
+
+  it('Escape, Enter, Delete and Backspace go to the active tool', () => {
+    const r = withPlate();
+    expect(r.c.keyDown(key('Delete'))).toBe(true);
+    expect(r.c.editor.getState().doc.parts).toHaveLength(0);
+  });
+
+  it('every binding names a command that exists, and no chord is bound twice', () => {
+    const chords = KEY_BINDINGS.map((b) => b.chord);
+    expect(new Set(chords).size).toBe(chords.length);
+    for (const b of KEY_BINDINGS) expect(COMMAND_IDS).toContain(b.command);
+  });
+});
+
+/** One check per command: the Record type makes a new command without a test a type error. */
+const COMMAND_CASES: Record<CommandId, () => Promise<void>> = {
+  async new() {
+    const r = withPlate((h) => (h.discardAnswer = false));
+    await r.c.run('new');
+    expect(r.host.discardAsked).toEqual(['Untitled section']);
+    expect(r.c.editor.getState().doc.parts).toHaveLength(1); // kept: the user said no
+    r.host.discardAnswer = true;
+    await r.c.run('new');
+    expect(r.c.editor.getState().doc.parts).toHaveLength(0);
+  },
+  async open() {
+    const r = withPlate();
+    r.c.editor.markSaved({ name: 'a.section.json', handle: null });
+    r.host.nextOpen = { name: 'broken.section.json', handle: 'h', text: '{ not json' };
+    await r.c.run('open');
+    expect(r.c.getState().banner?.kind).toBe('error');
+    expect(r.c.editor.getState().doc.parts).toHaveLength(1); // unchanged
+    r.host.nextOpen = { name: 'box.section.json', handle: 'h-2', text: EXAMPLE_TEXT };
+    await r.c.run('open');
+    expect(r.c.editor.getState().file).toEqual({ name: 'box.section.json', handle: 'h-2' });
+  },
+  async save() {
+    const r = withPlate();
+    await r.c.run('save');
+    expect(r.host.saved).toEqual([{ handle: null, suggested: 'Untitled-section.section.json', text: serialiseDocument(r.c.editor.getState().sectionFile) }]);
+    expect(r.c.editor.getState().dirty).toBe(false);
+    r.c.editor.moveSelectionBy(1, 0);
+    await r.c.run('save'); // now has a handle: saved back to the same file
+    expect(r.host.saved[1]?.handle).toBe('h-1');
+    expect(r.c.getState().banner?.title).toBe('Saved saved.section.json');
+  },
+  async 'save-as'() {
+    const r = withPlate();
+    await r.c.run('save');
+    await r.c.run('save-as');
+    expect(r.host.saved.map((s) => s.handle)).toEqual([null, null]);
+  },
+  async 'export-svg'() {
+    const r = rig();
+    await r.c.run('export-svg');
+    expect(r.c.getState().banner?.kind).toBe('error'); // nothing drawn: nothing to export
+    r.c.editor.addRectangle({ x: 0, y: 0, width: 100, height: 20 });
+    await r.c.run('export-svg');
+    expect(r.host.exported[0]?.mimeType).toBe('image/svg+xml');
+    expect(r.host.exported[0]?.text).toContain('<svg');
+  },
+  async 'export-csv'() {
+    const r = withPlate();
+    await r.c.run('export-csv');
+    expect(r.host.exported[0]?.suggestedName).toBe('Untitled-section.csv');
+    expect(r.host.exported[0]?.mimeType).toBe('text/csv');
+  },
+  async compare() {
+    const r = rig();
+    await r.c.run('compare');
+    expect(r.c.getState().shown).toBe('compare');
+  },
+  async 'print-report'() {
+    const r = rig();
+    await r.c.run('print-report');
+    expect(r.c.getState().shown).toBe('print-report');
+  },
+  async 'check-table'() {
+    const r = rig();
+    await r.c.run('check-table');
+    expect(r.c.getState().shown).toBe('check-table');
+  },
+  async 'open-example'() {
+    const r = rig();
+    await r.c.run('open-example');
+    expect(r.c.editor.getState().file?.name).toBe(EXAMPLE_NAME);
+    expect(r.c.editor.getState().doc.parts.length).toBeGreaterThan(0);
+  },
+  async 'open-launch-file'() {
+    const r = rig((h) => (h.launch = { name: 'given.section.json', handle: 'h-5', text: EXAMPLE_TEXT }));
+    await r.c.run('open-launch-file');
+    expect(r.c.editor.getState().file?.name).toBe('given.section.json');
+  },
+  async undo() {
+    const r = withPlate();
+    await r.c.run('undo');
+    expect(r.c.editor.getState().doc.parts).toHaveLength(0);
+  },
+  async redo() {
+    const r = withPlate();
+    await r.c.run('undo');
+    await r.c.run('redo');
+    expect(r.c.editor.getState().doc.parts).toHaveLength(1);
+  },
+  async copy() {
+    const r = withPlate();
+    await r.c.run('copy');
+    expect(r.c.getState().clipboardParts).toBe(1);
+    expect(r.c.editor.getState().doc.parts).toHaveLength(1); // copying changes nothing
+  },
+  async cut() {
+    const r = withPlate();
+    await r.c.run('cut');
+    expect(r.c.editor.getState().doc.parts).toHaveLength(0);
+    await r.c.run('paste'); // a cut part pastes back where it was
+    expect(placed(r)).toEqual([['part-1', 0, 0]]);
+  },
+  async paste() {
+    const r = withPlate();
+    await r.c.run('copy');
+    await r.c.run('paste');
+    await r.c.run('paste');
+    // each paste one grid step (10) further right and down
+    expect(placed(r)).toEqual([['part-1', 0, 0], ['part-2', 10, -10], ['part-3', 20, -20]]);
+    expect(r.c.editor.getState().selection).toEqual(['part-3']);
+    await r.c.run('undo');
+    expect(r.c.editor.getState().doc.parts).toHaveLength(2); // one paste = one step
+  },
+  async duplicate() {
+    const r = withPlate();
+    await r.c.run('duplicate');
+    expect(placed(r)).toEqual([['part-1', 0, 0], ['part-2', 10, -10]]);
+  },
+  async delete() {
+    const r = withPlate();
+    await r.c.run('delete');
+    expect(r.c.editor.getState().doc.parts).toHaveLength(0);
+  },
+  async 'select-all'() {
+    const r = withPlate();
+    r.c.editor.addRectangle({ x: 200, y: 0, width: 10, height: 10 });
+    r.c.editor.select([]);
+    await r.c.run('select-all');
+    expect(r.c.editor.getState().selection).toEqual(['part-1', 'part-2']);
+  },
+  async 'zoom-in'() {
+    const r = rig();
+    const before = r.c.getState().view.scale;
+    await r.c.run('zoom-in');
+    expect(r.c.getState().view.scale).toBeCloseTo(before * 1.25, 12);
+  },
+  async 'zoom-out'() {
+    const r = rig();
+    const before = r.c.getState().view.scale;
+    await r.c.run('zoom-out');
+    expect(r.c.getState().view.scale).toBeCloseTo(before * 0.8, 12);
+  },
+  async 'zoom-fit'() {
+    const r = withPlate();
+    await r.c.run('zoom-fit');
+    // 100 × 20 plate in 800 × 600 px with a 70 px margin: width governs, (800 − 140) / 100
+    expect(r.c.getState().view.scale).toBeCloseTo(6.6, 12);
+  },
+  async shortcuts() {
+    const r = rig();
+    await r.c.run('shortcuts');
+    expect(r.c.getState().shown).toBe('shortcuts');
+  },
+  async 'tool-select'() {
+    const r = rig();
+    r.c.editor.setTool('polygon');
+    await r.c.run('tool-select');
+    expect(r.c.editor.getState().toolId).toBe('select');
+  },
+  async 'tool-rectangle'() {
+    const r = rig();
+    await r.c.run('tool-rectangle');
+    expect(r.c.editor.getState().toolId).toBe('rectangle');
+  },
+  async 'tool-circle'() {
+    const r = rig();
+    await r.c.run('tool-circle');
+    expect(r.c.editor.getState().toolId).toBe('circle');
+  },
+  async 'tool-polygon'() {
+    const r = rig();
+    await r.c.run('tool-polygon');
+    expect(r.c.editor.getState().toolId).toBe('polygon');
+  },
+  async 'tool-vertex'() {
+    const r = rig();
+    await r.c.run('tool-vertex');
+    expect(r.c.editor.getState().toolId).toBe('vertex');
+  },
+  async 'nudge-left'() {
+    const r = withPlate();
+    await r.c.run('nudge-left');
+    expect(placed(r)).toEqual([['part-1', -10, 0]]);
+  },
+  async 'nudge-right'() {
+    const r = withPlate();
+    await r.c.run('nudge-right');
+    expect(placed(r)).toEqual([['part-1', 10, 0]]);
+  },
+  async 'nudge-up'() {
+    const r = withPlate();
+    await r.c.run('nudge-up');
+    expect(placed(r)).toEqual([['part-1', 0, 10]]);
+  },
+  async 'nudge-down'() {
+    const r = withPlate();
+    await r.c.run('nudge-down');
+    expect(placed(r)).toEqual([['part-1', 0, -10]]);
+  },
+};
+
+describe('every command by id', () => {
+  for (const id of COMMAND_IDS) it(id, () => COMMAND_CASES[id]());
+
+  it('a host menu item runs the command of the same id', async () => {
+    const r = withPlate((h) => h.settings.set(SEEN_EXAMPLE_SETTING, '1'));
+    await r.c.start();
+    r.host.send('undo');
+    await settle();
+    expect(r.c.editor.getState().doc.parts).toHaveLength(0);
+  });
+});
