@@ -14,6 +14,7 @@ import { TorsionClient } from '../../controller/torsion-client.ts';
 import { Canvas } from '../canvas/Canvas.tsx';
 import { EntryPanel } from '../parts/EntryPanel.tsx';
 import { MenuBar } from './MenuBar.tsx';
+import { ShortcutSheet } from './ShortcutSheet.tsx';
 import { PartsPanel } from '../parts/PartsPanel.tsx';
 import { PartsPalette } from '../parts/PartsPalette.tsx';
 import { ResultsPanel } from '../results/ResultsPanel.tsx';
@@ -232,6 +233,7 @@ export function App(): ReactElement {
       {app.shown === 'compare' && <CompareView sections={sectionViews} fileName={docName} display={display} sig={app.sig} onClose={() => controller.show(null)} />}
       {app.shown === 'check-table' && <CheckView host={getHost()} onClose={() => controller.show(null)} />}
       {app.shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} fileTitle={state.sectionFile.name} display={display} sig={app.sig} torsion={torsion} member={memberCase} onClose={() => controller.show(null)} />}
+      {app.shown === 'shortcuts' && <ShortcutSheet onClose={() => controller.show(null)} />}
       {app.asking !== null && (
         <div className="modal-back">
           <div className="modal" role="dialog" aria-modal="true" data-testid="confirm-discard">

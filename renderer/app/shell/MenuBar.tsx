@@ -2,11 +2,10 @@
 import { useEffect, useRef, useState, type ReactElement } from 'react';
 import type { Overlays } from '../../controller/controller.ts';
 
-export type MenuAction =
-  | 'new' | 'open' | 'save' | 'save-as' | 'export-svg' | 'export-csv'
-  | 'undo' | 'redo' | 'delete' | 'duplicate' | 'select-all'
-  | 'zoom-in' | 'zoom-out' | 'zoom-fit' | 'open-example'
-  | 'compare' | 'print-report' | 'check-table';
+import type { CommandId } from '../../controller/commands.ts';
+import { shortcutOf } from '../../controller/keymap.ts';
+
+export type MenuAction = CommandId;
 
 interface Props {
   readonly onAction: (a: MenuAction) => void;
@@ -43,7 +42,7 @@ export function MenuBar(props: Props): ReactElement {
     return () => window.removeEventListener('mousedown', close);
   }, []);
 
-  const item = (action: MenuAction, label: string, shortcut = '', disabled = false): ReactElement => (
+  const item = (action: MenuAction, label: string, shortcut = shortcutOf(action), disabled = false): ReactElement => (
     <button
       type="button"
       role="menuitem"
@@ -79,14 +78,14 @@ export function MenuBar(props: Props): ReactElement {
       {menu(
         'File',
         <>
-          {item('new', 'New section', 'Ctrl+N')}
-          {item('open', 'Open…', 'Ctrl+O')}
+          {item('new', 'New section')}
+          {item('open', 'Open…')}
           <button type="button" role="menuitem" className="menu-item" data-testid="menu-open-file-input" onClick={() => fileInput.current?.click()}>
             <span>Open from a file picker…</span>
             <kbd />
           </button>
-          {item('save', 'Save', 'Ctrl+S')}
-          {item('save-as', 'Save as…', 'Ctrl+Shift+S')}
+          {item('save', 'Save')}
+          {item('save-as', 'Save as…')}
           <hr />
           {item('export-svg', 'Export drawing (SVG)…')}
           {item('export-csv', 'Export properties (CSV)…')}
@@ -99,20 +98,23 @@ export function MenuBar(props: Props): ReactElement {
       {menu(
         'Edit',
         <>
-          {item('undo', props.undoLabel ? `Undo ${props.undoLabel.toLowerCase()}` : 'Undo', 'Ctrl+Z', !props.canUndo)}
-          {item('redo', props.redoLabel ? `Redo ${props.redoLabel.toLowerCase()}` : 'Redo', 'Ctrl+Y', !props.canRedo)}
+          {item('undo', props.undoLabel ? `Undo ${props.undoLabel.toLowerCase()}` : 'Undo', shortcutOf('undo'), !props.canUndo)}
+          {item('redo', props.redoLabel ? `Redo ${props.redoLabel.toLowerCase()}` : 'Redo', shortcutOf('redo'), !props.canRedo)}
           <hr />
-          {item('duplicate', 'Duplicate', 'Ctrl+D')}
+          {item('cut', 'Cut')}
+          {item('copy', 'Copy')}
+          {item('paste', 'Paste')}
+          {item('duplicate', 'Duplicate')}
           {item('delete', 'Delete', 'Del')}
-          {item('select-all', 'Select all parts', 'Ctrl+A')}
+          {item('select-all', 'Select all parts')}
         </>,
       )}
       {menu(
         'View',
         <>
-          {item('zoom-in', 'Zoom in', '+')}
-          {item('zoom-out', 'Zoom out', '−')}
-          {item('zoom-fit', 'Fit the section', '0')}
+          {item('zoom-in', 'Zoom in')}
+          {item('zoom-out', 'Zoom out')}
+          {item('zoom-fit', 'Fit the section')}
           <hr />
           {OVERLAY_NAMES.map(([key, label]) => (
             <label key={key} className="menu-item check">
@@ -122,7 +124,13 @@ export function MenuBar(props: Props): ReactElement {
           ))}
         </>,
       )}
-      {menu('Help', <>{item('open-example', 'Open the example: footbridge box girder')}</>)}
+      {menu(
+        'Help',
+        <>
+          {item('shortcuts', 'Keyboard shortcuts')}
+          {item('open-example', 'Open the example: footbridge box girder')}
+        </>,
+      )}
       <span className="quick">
         <button type="button" data-testid="undo" disabled={!props.canUndo} title={props.undoLabel ? `Undo ${props.undoLabel}` : 'Nothing to undo'} onClick={() => props.onAction('undo')}>
           ↶ Undo
