@@ -14,6 +14,8 @@ export interface FlatRing {
   readonly xy: number[];
   /** Largest sweep per chord used in this ring, radians (0 without arcs). */
   readonly maxChordSweep: number;
+  /** Per vertex: 1 when it lies on an arc (an arc's end or a chord point), else 0. */
+  readonly onArc: number[];
 }
 
 /** Chord points strictly between P_s and P_e of the bulge arc, appended to `out`. */
@@ -48,19 +50,23 @@ export function flattenRingChords(ring: Ring, maxSweep: number): FlatRing {
   const src = ring.xy;
   const count = src.length / 2;
   const out: number[] = [];
+  const onArc: number[] = [];
   let maxChordSweep = 0;
   for (let i = 0; i < count; i++) {
     const xs = src[2 * i] ?? Number.NaN;
     const ys = src[2 * i + 1] ?? Number.NaN;
-    out.push(xs, ys);
     const b = ring.bulge?.[i] ?? 0;
+    const before = ring.bulge?.[(i + count - 1) % count] ?? 0;
+    out.push(xs, ys);
+    onArc.push(b !== 0 || before !== 0 ? 1 : 0);
     if (b !== 0) {
       const j = (i + 1) % count;
       const used = appendArcInterior(out, xs, ys, src[2 * j] ?? Number.NaN, src[2 * j + 1] ?? Number.NaN, b, maxSweep);
       maxChordSweep = Math.max(maxChordSweep, used);
+      while (onArc.length < out.length / 2) onArc.push(1);
     }
   }
-  return { xy: out, maxChordSweep };
+  return { xy: out, maxChordSweep, onArc };
 }
 
 /** Signed area of a closed polyline (shoelace); > 0 when counter-clockwise. */

@@ -13,13 +13,15 @@
  * refineUniform splits every triangle into four similar ones (nested refinement).
  */
 import type { Region } from '../geometry/types.ts';
-import { planarGraphOfRegion } from './planar-input.ts';
+import { planarGraphOfRegion, type PlanarGraph } from './planar-input.ts';
 import { presplitSegments, refineTriangulation } from './refine.ts';
+import { graphMoments, simplifiedGraph } from './simplify.ts';
 import { reentrantCorners, sizeFieldOf } from './size-field.ts';
-import { MeshCancelledError, MeshInputError, type MeshOptions, type TriangleMesh } from './types.ts';
+import { MeshCancelledError, MeshInputError, type MeshOptions, type MeshSimplification, type TriangleMesh } from './types.ts';
 
 export { MeshCancelledError, MeshInputError, MeshRefinementError } from './types.ts';
-export type { MeshOptions, TriangleMesh } from './types.ts';
+export type { MeshOptions, MeshSimplification, TriangleMesh } from './types.ts';
+export type { PlanarGraph } from './planar-input.ts';
 
 const DEFAULTS = {
   layers: 3,
@@ -41,15 +43,63 @@ function checkedOption(name: keyof typeof DEFAULTS, value: number | undefined, l
   return v;
 }
 
+/** The region's planar graph (arcs flattened at maxChordAngleDeg), for meshGraph. */
+export function regionGraph(region: Region, options: Pick<MeshOptions, 'maxChordAngleDeg'> = {}): PlanarGraph {
+  const chordDeg = checkedOption('maxChordAngleDeg', options.maxChordAngleDeg, 0.05, 30);
+  return planarGraphOfRegion(region, (chordDeg * Math.PI) / 180);
+}
+
 export function meshRegion(region: Region, options: MeshOptions = {}): TriangleMesh {
+  return meshGraph(regionGraph(region, options), options);
+}
+
+/** Relative tolerance of the rough pass that only feeds the thickness estimate (× bounding diagonal). */
+const ROUGH_TOLERANCE = 1e-4;
+
+/**
+ * The graph with dense chains reduced within simplify × local thickness (simplify.ts). The
+ * thickness comes from a size field (layers 1, no corner grading) on a rough reduction of the
+ * graph, so the ray casting never meets thousands of edges. Null when nothing can be removed.
+ */
+function budgetedGraph(graph: PlanarGraph, simplify: number): { graph: PlanarGraph; summary: MeshSimplification } | null {
+  const rough = simplifiedGraph(graph, () => ROUGH_TOLERANCE * graph.diagonal);
+  if (rough.keptPoints === rough.inputPoints) return null;
+  const thickness = sizeFieldOf(rough.graph, [], { layers: 1, compactDivisions: 1, cornerRefinement: 1, grading: DEFAULTS.grading });
+  // A compact piece (thickness near √area) changes J several times faster per unit of chord sag
+  // than a thin wall (J of a disc ∝ r⁴, of a thin tube ∝ t), so its tolerance is up to 6× smaller.
+  const compact = Math.sqrt(Math.max(...graph.pieces.map((p) => p.area)));
+  const fine = simplifiedGraph(graph, (x, y) => {
+    const t = thickness.at(x, y);
+    return (simplify * t) / (1 + 5 * Math.min(1, (t / compact) ** 2));
+  });
+  const before = graphMoments(graph);
+  const after = graphMoments(fine.graph);
+  return {
+    graph: fine.graph,
+    summary: {
+      inputPoints: fine.inputPoints,
+      keptPoints: fine.keptPoints,
+      runs: fine.runs,
+      deltaArea: after.area / before.area - 1,
+      deltaIx: after.Ix / before.Ix - 1,
+      deltaIy: after.Iy / before.Iy - 1,
+    },
+  };
+}
+
+export function meshGraph(input: PlanarGraph, options: MeshOptions = {}): TriangleMesh {
   const layers = checkedOption('layers', options.layers, 0.5, 64);
   const compactDivisions = checkedOption('compactDivisions', options.compactDivisions, 1, 512);
-  const chordDeg = checkedOption('maxChordAngleDeg', options.maxChordAngleDeg, 0.05, 30);
   const minAngleDeg = checkedOption('minAngleDeg', options.minAngleDeg, 0, 30);
   const cornerRefinement = checkedOption('cornerRefinement', options.cornerRefinement, 1, 64);
   const grading = checkedOption('grading', options.grading, 0.05, 2);
   const maxPoints = checkedOption('maxPoints', options.maxPoints, 16, 4_000_000);
-  const graph = planarGraphOfRegion(region, (chordDeg * Math.PI) / 180);
+  const simplify = options.simplify ?? 0;
+  if (!(simplify >= 0 && simplify <= 0.1)) {
+    throw new MeshInputError({ code: 'bad-parameter', message: `mesh option simplify = ${simplify} is outside 0..0.1` });
+  }
+  const reduced = simplify > 0 ? budgetedGraph(input, simplify) : null;
+  const graph = reduced?.graph ?? input;
   const corners = reentrantCorners(graph);
   const size = sizeFieldOf(graph, corners, { layers, compactDivisions, cornerRefinement, grading });
   if (options.onProgress && options.onProgress(0) === false) throw new MeshCancelledError();
@@ -65,6 +115,7 @@ export function meshRegion(region: Region, options: MeshOptions = {}): TriangleM
     badTriangles: refined.badTriangles,
     reentrantCorners: corners.length,
     maxChordSweep: graph.maxChordSweep,
+    simplification: reduced?.summary ?? null,
   };
 }
 

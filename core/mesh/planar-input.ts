@@ -25,15 +25,18 @@ export interface PlanarGraph {
   readonly pieces: { readonly area: number; readonly box: readonly [number, number, number, number] }[];
   readonly diagonal: number;
   readonly maxChordSweep: number;
+  /** Per point: 1 when it lies on an exact arc (kept by simplify.ts, whose chords are already budgeted). */
+  readonly onArc: Uint8Array;
 }
 
 interface OrientedRing {
   readonly xy: number[];
+  readonly onArc: number[];
   readonly polygon: number;
   readonly ring: number;
 }
 
-function checkedRing(p: Polygon, polygon: number, ring: number, maxSweep: number): { xy: number[]; sweep: number; area: number } {
+function checkedRing(p: Polygon, polygon: number, ring: number, maxSweep: number): { xy: number[]; onArc: number[]; sweep: number; area: number } {
   const r = ring < 0 ? p.outer : p.holes[ring];
   const where = ring < 0 ? `polygon ${polygon}, outer ring` : `polygon ${polygon}, hole ${ring}`;
   // Two vertices are enough when an arc closes the ring (a full circle is two bulge-1 arcs).
@@ -55,8 +58,10 @@ function checkedRing(p: Polygon, polygon: number, ring: number, maxSweep: number
   }
   // Material on the left: outer CCW (area > 0), hole CW (area < 0).
   const wantPositive = ring < 0;
-  const xy = (area > 0) === wantPositive ? flat.xy : reversedPolyline(flat.xy);
-  return { xy, sweep: flat.maxChordSweep, area: wantPositive ? Math.abs(area) : -Math.abs(area) };
+  const keep = (area > 0) === wantPositive;
+  const xy = keep ? flat.xy : reversedPolyline(flat.xy);
+  const onArc = keep ? flat.onArc : [...flat.onArc].reverse();
+  return { xy, onArc, sweep: flat.maxChordSweep, area: wantPositive ? Math.abs(area) : -Math.abs(area) };
 }
 
 function reversedPolyline(xy: readonly number[]): number[] {
@@ -65,25 +70,35 @@ function reversedPolyline(xy: readonly number[]): number[] {
   return out;
 }
 
-/** Merges points closer than `tol` through a hash grid; returns index per input point. */
+/**
+ * Merges points closer than `tol` through a hash grid; returns index per input point. Cell keys
+ * pack the low 26 bits of each cell coordinate into one exact number: two far cells may share a
+ * key, which only adds candidates that the distance test then rejects.
+ */
 class PointMerger {
   readonly xy: number[] = [];
-  private readonly cells = new Map<string, number[]>();
+  private readonly cells = new Map<number, number[]>();
   constructor(private readonly tol: number) {}
+
+  private static key(cx: number, cy: number): number {
+    return (cx & 0x3ffffff) * 67_108_864 + (cy & 0x3ffffff);
+  }
 
   add(x: number, y: number): number {
     const cx = Math.floor(x / this.tol);
     const cy = Math.floor(y / this.tol);
     for (let i = -1; i <= 1; i++) {
       for (let j = -1; j <= 1; j++) {
-        for (const k of this.cells.get(`${cx + i},${cy + j}`) ?? []) {
-          if (Math.hypot((this.xy[2 * k] ?? 0) - x, (this.xy[2 * k + 1] ?? 0) - y) <= this.tol) return k;
+        const list = this.cells.get(PointMerger.key(cx + i, cy + j));
+        if (list === undefined) continue;
+        for (const k of list) {
+          if (Math.hypot(this.xy[2 * k]! - x, this.xy[2 * k + 1]! - y) <= this.tol) return k;
         }
       }
     }
     const id = this.xy.length / 2;
     this.xy.push(x, y);
-    const key = `${cx},${cy}`;
+    const key = PointMerger.key(cx, cy);
     const list = this.cells.get(key);
     if (list) list.push(id);
     else this.cells.set(key, [id]);
@@ -92,13 +107,13 @@ class PointMerger {
 }
 
 /** Splits directed edges at points lying on them (T-junctions between touching parts). */
-function splitAtTJunctions(xy: readonly number[], edges: [number, number][], tol: number): [number, number][] {
+function splitAtTJunctions(xy: readonly number[], edges: readonly number[], tol: number): number[] {
   const n = xy.length / 2;
   const px = (i: number): number => xy[2 * i] ?? 0;
   const py = (i: number): number => xy[2 * i + 1] ?? 0;
   // Sort points by x so each edge only scans the points inside its x-range.
-  const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => px(a) - px(b));
-  const sortedX = order.map(px);
+  const order = Int32Array.from({ length: n }, (_, i) => i).sort((a, b) => px(a) - px(b));
+  const sortedX = Float64Array.from(order, px);
   const lowerBound = (v: number): number => {
     let lo = 0;
     let hi = sortedX.length;
@@ -109,27 +124,33 @@ function splitAtTJunctions(xy: readonly number[], edges: [number, number][], tol
     }
     return lo;
   };
-  const out: [number, number][] = [];
-  for (const [a, b] of edges) {
+  const out: number[] = [];
+  for (let e = 0; e < edges.length; e += 2) {
+    const a = edges[e]!;
+    const b = edges[e + 1]!;
     const dx = px(b) - px(a);
     const dy = py(b) - py(a);
     const len2 = dx * dx + dy * dy;
-    const hits: { u: number; k: number }[] = [];
+    let hits: { u: number; k: number }[] | null = null;
     for (let s = lowerBound(Math.min(px(a), px(b)) - tol); s < n && (sortedX[s] ?? 0) <= Math.max(px(a), px(b)) + tol; s++) {
       const k = order[s] ?? 0;
       if (k === a || k === b) continue;
       const u = ((px(k) - px(a)) * dx + (py(k) - py(a)) * dy) / len2;
       if (u <= 0 || u >= 1) continue;
       const dist = Math.abs((px(k) - px(a)) * dy - (py(k) - py(a)) * dx) / Math.sqrt(len2);
-      if (dist <= tol) hits.push({ u, k });
+      if (dist <= tol) (hits ??= []).push({ u, k });
+    }
+    if (hits === null) {
+      out.push(a, b);
+      continue;
     }
     hits.sort((p, q) => p.u - q.u);
     let from = a;
     for (const h of hits) {
-      out.push([from, h.k]);
+      out.push(from, h.k);
       from = h.k;
     }
-    out.push([from, b]);
+    out.push(from, b);
   }
   return out;
 }
@@ -148,7 +169,7 @@ export function planarGraphOfRegion(region: Region, maxSweep: number): PlanarGra
       maxChordSweep = Math.max(maxChordSweep, r.sweep);
       area += r.area;
       for (let i = 0; i < r.xy.length; i += 2) growBox(pbox, r.xy[i] ?? 0, r.xy[i + 1] ?? 0);
-      rings.push({ xy: r.xy, polygon: pi, ring: ri });
+      rings.push({ xy: r.xy, onArc: r.onArc, polygon: pi, ring: ri });
     }
     if (!(area > 0)) throw new MeshInputError({ code: 'zero-area', message: `polygon ${pi}: its holes cover its outer ring`, polygon: pi });
     pieces.push({ area, box: pbox });
@@ -157,17 +178,25 @@ export function planarGraphOfRegion(region: Region, maxSweep: number): PlanarGra
   const diagonal = Math.hypot(box[2] - box[0], box[3] - box[1]);
   const tol = 1e-9 * diagonal;
   const merger = new PointMerger(tol);
-  const edges: [number, number][] = [];
+  /** Directed edges as consecutive (from, to) pairs. */
+  const edges: number[] = [];
+  const arcPoints: number[] = [];
   for (const r of rings) {
     const ids: number[] = [];
-    for (let i = 0; i < r.xy.length; i += 2) ids.push(merger.add(r.xy[i] ?? 0, r.xy[i + 1] ?? 0));
+    for (let i = 0; i < r.xy.length; i += 2) {
+      const id = merger.add(r.xy[i] ?? 0, r.xy[i + 1] ?? 0);
+      ids.push(id);
+      if (r.onArc[i / 2]) arcPoints.push(id);
+    }
     for (let i = 0; i < ids.length; i++) {
       const a = ids[i] ?? 0;
       const b = ids[(i + 1) % ids.length] ?? 0;
-      if (a !== b) edges.push([a, b]);
+      if (a !== b) edges.push(a, b);
     }
   }
-  return { ...netSegments(merger.xy, splitAtTJunctions(merger.xy, edges, tol)), pieces, diagonal, maxChordSweep };
+  const onArc = new Uint8Array(merger.xy.length / 2);
+  for (const id of arcPoints) onArc[id] = 1;
+  return { ...netSegments(merger.xy, splitAtTJunctions(merger.xy, edges, tol)), pieces, diagonal, maxChordSweep, onArc };
 }
 
 function growBox(b: [number, number, number, number], x: number, y: number): void {
@@ -177,13 +206,15 @@ function growBox(b: [number, number, number, number], x: number, y: number): voi
   b[3] = Math.max(b[3], y);
 }
 
-function netSegments(xy: number[], edges: readonly [number, number][]): Pick<PlanarGraph, 'xy' | 'segA' | 'segB' | 'segNet'> {
+function netSegments(xy: number[], edges: readonly number[]): Pick<PlanarGraph, 'xy' | 'segA' | 'segB' | 'segNet'> {
   const byKey = new Map<number, number>();
   const segA: number[] = [];
   const segB: number[] = [];
   const segNet: number[] = [];
   const n = xy.length / 2;
-  for (const [p, q] of edges) {
+  for (let e = 0; e < edges.length; e += 2) {
+    const p = edges[e]!;
+    const q = edges[e + 1]!;
     const a = Math.min(p, q);
     const b = Math.max(p, q);
     const key = a * n + b;

@@ -25,6 +25,21 @@ export interface TriangleMesh {
   readonly reentrantCorners: number;
   /** Largest arc sweep per chord actually used, radians (0 when the region has no arcs). */
   readonly maxChordSweep: number;
+  /** What the simplification of dense chains changed (null when it was off or removed nothing). */
+  readonly simplification: MeshSimplification | null;
+}
+
+/** The geometric change made by simplifying dense boundary chains for the mesh (core/mesh/simplify.ts). */
+export interface MeshSimplification {
+  /** Boundary points before and after. */
+  readonly inputPoints: number;
+  readonly keptPoints: number;
+  /** Per replaced run (6 numbers): chord ends xa, ya, xb, yb, the material area the chord adds (< 0: removes), Σ|area| between run and chord. */
+  readonly runs: Float64Array;
+  /** Relative change of the area and of the centroidal Ix, Iy of the meshed outline (simplified / input − 1). */
+  readonly deltaArea: number;
+  readonly deltaIx: number;
+  readonly deltaIy: number;
 }
 
 export interface MeshOptions {
@@ -42,6 +57,12 @@ export interface MeshOptions {
   readonly grading?: number;
   /** Cap on the points refinement may insert (default 400 000); exceeding it throws MeshRefinementError. */
   readonly maxPoints?: number;
+  /**
+   * Simplify dense boundary chains for the mesh: drop a vertex when it lies within this fraction
+   * of the local wall thickness from the chord replacing it (0 = off, the default; at most 0.1).
+   * Vertices on exact arcs and shared by touching parts are always kept.
+   */
+  readonly simplify?: number;
   /** Called after each refinement round with a fraction 0..1; return false to cancel. */
   readonly onProgress?: (fraction: number) => boolean | void;
 }

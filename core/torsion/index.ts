@@ -7,9 +7,16 @@
  * (union them first). A section of several materials needs the G-weighted form of METHODS §7.7,
  * which this module does not do.
  *
+ * Dense outlines (thousands of vertices along a curve, as imported from drawings) are simplified
+ * for the mesh only (core/mesh/simplify.ts) within geometryTolerance of J: the change of J is
+ * estimated from the coarse solution by Hadamard's boundary variation, reported in
+ * simplifiedOutline with the change of area, Ix and Iy, and added to jRelativeError; if it
+ * exceeds its share, the coarse level is redone with a smaller tolerance.
+ *
  * Method: meshRegion (core/mesh) at half the requested layers, each straight-sided T6 element
  * then split into four (nested mesh at the requested layers). The warping function is solved on
- * both levels by Jacobi-PCG (the coarse solution, exactly prolongated, starts the fine solve).
+ * both levels by conjugate gradients preconditioned with symmetric Gauss–Seidel (sparse.ts; the
+ * coarse solution, exactly prolongated, starts the fine solve).
  * The constants come from the fine level. Because J_h ≥ J_{h/2} ≥ J (minimum principle, METHODS
  * §7.2), J_coarse − J_fine is a lower bound of the coarse error; the reported jRelativeError is
  * the Richardson estimate of the fine error, (J_c − J_f)/((2^p − 1)·J_f) with p = 4/3 when the
@@ -21,7 +28,7 @@
  * the theoretical stress unbounded there (METHODS §7.6); the field shows a finite mesh value.
  */
 import type { Region } from '../geometry/types.ts';
-import { MeshCancelledError, MeshInputError, meshRegion } from '../mesh/index.ts';
+import { MeshCancelledError, MeshInputError, meshGraph, regionGraph, type MeshSimplification, type PlanarGraph, type TriangleMesh } from '../mesh/index.ts';
 import { TorsionCancelledError } from './errors.ts';
 import type { TorsionOptions, TorsionResult } from './types.ts';
 import { bandOrdered, childTriangles, nodalGradient, prolongate, quadraticMesh, solveWarping, type QuadraticMesh, type WarpingSolution } from './warping.ts';
@@ -40,6 +47,13 @@ export interface TorsionAnalysis {
   readonly solution: WarpingSolution;
   /** J of the coarse level (for the error estimate). */
   readonly jCoarse: number;
+  readonly coarseIterations: number;
+  /**
+   * Wall time per phase, ms, by options.now (all 0 without a clock): mesh (graph, coarse mesh,
+   * quadratic nodes, fine mesh), assemble, solve and post (both levels), and redo (a coarse
+   * level thrown away because the simplified outline changed J by more than its share).
+   */
+  readonly phaseMs: { readonly mesh: number; readonly assemble: number; readonly solve: number; readonly post: number; readonly redo: number };
   readonly minAngleDeg: number;
   readonly reentrantCorners: number;
 }
@@ -59,6 +73,8 @@ export interface TorsionStressField {
 }
 
 const defaultLayers = 3;
+/** Default share of the J budget that the simplification of dense outlines may use (0.1 % of the 0.2 % target). */
+const defaultGeometryTolerance = 1e-3;
 
 function stage(onProgress: TorsionOptions['onProgress'], from: number, to: number): ((f: number) => boolean | void) | undefined {
   if (!onProgress) return undefined;
@@ -72,37 +88,125 @@ function checkedOption(name: string, value: number, lo: number, hi: number): num
   return value;
 }
 
+interface CoarseLevel {
+  readonly base: TriangleMesh;
+  readonly coarse: QuadraticMesh;
+  readonly solve: WarpingSolution;
+  readonly geometryChange: { readonly change: number; readonly bound: number };
+  readonly meshMs: number;
+}
+
+/**
+ * Estimated relative change of J caused by the simplified outline, from Hadamard's variation of
+ * the torsional rigidity under a normal boundary shift δn: ΔJ = ∮ |τ̂|² δn ds, with τ̂ the shear
+ * stress per unit G·θ′ (Pólya & Szegő 1951, Isoperimetric Inequalities in Mathematical Physics
+ * [from memory]; for a disc of radius r, |τ̂| = r and ΔJ = 2πr³·δr = d(πr⁴/2), an identity the
+ * tests check). Each run's ∫δn ds is the material area its chord adds; |τ̂|² is the mean of its
+ * two chord ends on the coarse solution. `change` is that first-order estimate (signed: an
+ * inscribed outer chord lowers J, a hole's chord raises it); `bound` is what enters the error
+ * budget: 1.25 × |change|, but never less than a quarter of the sum without cancellation.
+ */
+function geometryChangeOfJ(simplification: MeshSimplification | null, q: QuadraticMesh, s: WarpingSolution): { change: number; bound: number } {
+  const runs = simplification?.runs;
+  if (!runs || runs.length === 0) return { change: 0, bound: 0 };
+  const key = (x: number, y: number): string => `${x},${y}`;
+  const tau2 = new Map<string, number>();
+  for (let r = 0; r < runs.length; r += RUN) {
+    tau2.set(key(runs[r]!, runs[r + 1]!), Number.NaN);
+    tau2.set(key(runs[r + 2]!, runs[r + 3]!), Number.NaN);
+  }
+  const { gx, gy } = nodalGradient(q, s.omega);
+  let largest = 0;
+  for (let i = 0; i < q.xy.length / 2; i++) {
+    const x = q.xy[2 * i]!;
+    const y = q.xy[2 * i + 1]!;
+    const tx = gx[i]! - (y - s.yc);
+    const ty = gy[i]! + (x - s.xc);
+    const t2 = tx * tx + ty * ty;
+    largest = Math.max(largest, t2);
+    const k = key(x, y);
+    if (tau2.has(k)) tau2.set(k, t2);
+  }
+  let change = 0;
+  let absolute = 0;
+  for (let r = 0; r < runs.length; r += RUN) {
+    const a = tau2.get(key(runs[r]!, runs[r + 1]!)) ?? Number.NaN;
+    const b = tau2.get(key(runs[r + 2]!, runs[r + 3]!)) ?? Number.NaN;
+    // A chord end that is not a mesh node cannot happen; if it did, the largest τ̂² keeps the bound.
+    const weight = ((Number.isNaN(a) ? largest : a) + (Number.isNaN(b) ? largest : b)) / 2;
+    change += weight * runs[r + 4]!;
+    absolute += weight * runs[r + 5]!;
+  }
+  // ×1.25 covers the second-order terms the first-order variation leaves out.
+  return { change: change / s.J, bound: (1.25 * Math.max(Math.abs(change), absolute / 4)) / s.J };
+}
+
+/** Numbers per run in MeshSimplification.runs. */
+const RUN = 6;
+
 export function torsionAnalysis(region: Region, options: TorsionOptions = {}): TorsionAnalysis {
   const layers = checkedOption('layers', options.layers ?? defaultLayers, 1, 64);
   const tolerance = checkedOption('tolerance', options.tolerance ?? 1e-10, 1e-15, 1e-3);
   const maxIterations = Math.floor(checkedOption('maxIterations', options.maxIterations ?? 20_000, 1, 10_000_000));
-  try {
-    const base = meshRegion(region, {
+  const geometryTolerance = checkedOption('geometryTolerance', options.geometryTolerance ?? defaultGeometryTolerance, 0, 0.01);
+  const now = options.now ?? ((): number => 0);
+  let reached = 0;
+  // Progress never runs backwards, even when the coarse level is redone.
+  const progress = options.onProgress ? (f: number): boolean | void => options.onProgress?.((reached = Math.max(reached, f))) : undefined;
+  const coarseLevel = (graph: PlanarGraph, simplify: number): CoarseLevel => {
+    const t0 = now();
+    const base = meshGraph(graph, {
       layers: layers / 2,
       // Compact pieces: 8 fine-level elements across at the default 3 layers, scaled with layers.
       compactDivisions: (4 * layers) / 3,
-      maxChordAngleDeg: options.maxChordAngleDeg,
       minAngleDeg: options.minAngleDeg,
       maxPoints: options.maxPoints,
-      onProgress: stage(options.onProgress, 0, 0.15),
+      simplify,
+      onProgress: stage(progress, 0, 0.15),
     });
     const coarse = bandOrdered(quadraticMesh(base.xy, base.triangles));
+    const meshMs = now() - t0;
     // The coarse level only feeds the error estimate and the start of the fine solve; with the
     // energy form of J its solver error enters squared, so 1e-7 is ample there.
-    const coarseTolerance = Math.max(tolerance, 1e-7);
-    const solveC = solveWarping(coarse, { tolerance: coarseTolerance, maxIterations, onProgress: stage(options.onProgress, 0.15, 0.3) });
+    const solve = solveWarping(coarse, { tolerance: Math.max(tolerance, 1e-7), maxIterations, now, onProgress: stage(progress, 0.15, 0.3) });
+    return { base, coarse, solve, geometryChange: geometryChangeOfJ(base.simplification, coarse, solve), meshMs };
+  };
+  try {
+    const t0 = now();
+    const graph = regionGraph(region, { maxChordAngleDeg: options.maxChordAngleDeg });
+    const graphMs = now() - t0;
+    let simplify = geometryTolerance;
+    let level: CoarseLevel;
+    try {
+      level = coarseLevel(graph, simplify);
+    } catch (err) {
+      // A chord of the simplified outline crossed a nearby boundary: mesh the outline as given.
+      if (!(err instanceof MeshInputError) || simplify === 0) throw err;
+      level = coarseLevel(graph, (simplify = 0));
+    }
+    const first = level;
+    if (level.geometryChange.bound > geometryTolerance) {
+      // The estimate is about linear in the tolerance (chord sag δ, run count ∝ δ^-1/2, area ∝ δ^3/2 each).
+      simplify *= (0.6 * geometryTolerance) / level.geometryChange.bound;
+      level = coarseLevel(graph, simplify);
+    }
+    const { base, coarse, solve: solveC } = level;
+    const t1 = now();
     const fine = bandOrdered(quadraticMesh(coarse.xy, childTriangles(coarse)));
     const triangles = cornerTriangles(fine);
+    const fineMeshMs = now() - t1;
     const solveF = solveWarping(fine, {
       tolerance,
       maxIterations,
+      now,
       initial: prolongate(coarse, fine, solveC.omega),
-      onProgress: stage(options.onProgress, 0.3, 1),
+      onProgress: stage(progress, 0.3, 1),
     });
     const p = base.reentrantCorners > 0 ? 4 / 3 : 2;
     const feError = Math.max(0, solveC.J - solveF.J) / ((2 ** p - 1) * solveF.J);
     // Δφ²/3 is the measured full-circle deficit (METHODS §7.8); ×1.25 makes it an upper estimate.
     const chordError = (1.25 * base.maxChordSweep * base.maxChordSweep) / 3;
+    const simplified = base.simplification;
     const result: TorsionResult = {
       J: solveF.J,
       Cw: solveF.Cw,
@@ -111,10 +215,21 @@ export function torsionAnalysis(region: Region, options: TorsionOptions = {}): T
       meshElements: fine.elements.length / 6,
       meshNodes: fine.xy.length / 2,
       iterations: solveF.iterations,
-      jRelativeError: feError + chordError,
+      jRelativeError: feError + chordError + level.geometryChange.bound,
       components: solveF.components,
+      simplifiedOutline: simplified
+        ? { inputPoints: simplified.inputPoints, meshPoints: simplified.keptPoints, deltaArea: simplified.deltaArea, deltaIx: simplified.deltaIx, deltaIy: simplified.deltaIy, jChange: level.geometryChange.change }
+        : null,
     };
-    return { result, mesh: fine, triangles, solution: solveF, jCoarse: solveC.J, minAngleDeg: base.minAngleDeg, reentrantCorners: base.reentrantCorners };
+    const redoMs = level === first ? 0 : first.meshMs + first.solve.phaseMs.assemble + first.solve.phaseMs.solve + first.solve.phaseMs.post;
+    const phaseMs = {
+      mesh: graphMs + level.meshMs + fineMeshMs,
+      assemble: solveC.phaseMs.assemble + solveF.phaseMs.assemble,
+      solve: solveC.phaseMs.solve + solveF.phaseMs.solve,
+      post: solveC.phaseMs.post + solveF.phaseMs.post,
+      redo: redoMs,
+    };
+    return { result, mesh: fine, triangles, solution: solveF, jCoarse: solveC.J, coarseIterations: solveC.iterations, phaseMs, minAngleDeg: base.minAngleDeg, reentrantCorners: base.reentrantCorners };
   } catch (err) {
     if (err instanceof MeshCancelledError) throw new TorsionCancelledError();
     throw err;

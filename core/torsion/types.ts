@@ -14,6 +14,20 @@ export interface TorsionResult {
   readonly jRelativeError: number;
   /** Number of disconnected pieces (each twists on its own; J values add). */
   readonly components: number;
+  /**
+   * Dense outlines are simplified for the finite-element model only (core/mesh/simplify.ts);
+   * this says how much: boundary points before and after, the relative change of the meshed
+   * area and centroidal Ix, Iy, and the estimated relative change of J (already included in
+   * jRelativeError). Null when nothing was simplified. Exact properties never use it.
+   */
+  readonly simplifiedOutline?: {
+    readonly inputPoints: number;
+    readonly meshPoints: number;
+    readonly deltaArea: number;
+    readonly deltaIx: number;
+    readonly deltaIy: number;
+    readonly jChange: number;
+  } | null;
 }
 
 export interface TorsionOptions {
@@ -31,4 +45,13 @@ export interface TorsionOptions {
   readonly tolerance?: number;
   /** Conjugate-gradient iteration cap per solve (default 20 000). Optional extension. */
   readonly maxIterations?: number;
+  /**
+   * Largest relative change of J allowed from simplifying dense outlines for the mesh (default
+   * 1e-3, i.e. 0.1 %; 0 meshes every vertex). Vertices within this fraction of the local wall
+   * thickness of their chord are dropped; if the change estimated on the coarse solution still
+   * exceeds it, the coarse level is redone with a smaller tolerance.
+   */
+  readonly geometryTolerance?: number;
+  /** Clock in ms for the phase times of torsionAnalysis (e.g. performance.now); none by default. */
+  readonly now?: () => number;
 }

@@ -129,6 +129,8 @@ export function prolongate(coarse: QuadraticMesh, fine: QuadraticMesh, values: F
 export interface SolveSettings {
   readonly tolerance: number;
   readonly maxIterations: number;
+  /** Clock for the phase times, ms (the caller's; core has no timer of its own). */
+  readonly now?: (() => number) | undefined;
   readonly initial?: Float64Array | undefined;
   readonly onProgress?: ((fraction: number) => boolean | void) | undefined;
 }
@@ -157,6 +159,8 @@ export interface WarpingSolution {
   readonly relativeResidual: number;
   readonly components: number;
   readonly componentOfNode: Int32Array;
+  /** Wall time of each phase, ms, by SolveSettings.now (0 without a clock). */
+  readonly phaseMs: { readonly assemble: number; readonly solve: number; readonly post: number };
 }
 
 function componentsOf(nodes: number, elements: Int32Array): { count: number; of: Int32Array } {
@@ -252,6 +256,8 @@ function triangleSecondMoments(x: readonly number[], y: readonly number[], area:
 }
 
 export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolution {
+  const now = s.now ?? ((): number => 0);
+  const t0 = now();
   const n = q.xy.length / 2;
   const { area, xc, yc } = meshCentroid(q);
   const X = new Float64Array(n);
@@ -290,6 +296,7 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
     }
   }
   const comps = componentsOf(n, e);
+  const t1 = now();
   const sol = pcgSolve(K, F, s.initial ?? new Float64Array(n), {
     tolerance: s.tolerance,
     maxIterations: s.maxIterations,
@@ -297,6 +304,7 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
     components: comps.count,
     onProgress: s.onProgress,
   });
+  const t2 = now();
   const omega = sol.x;
   const Kw = new Float64Array(n);
   csrMultiply(K, omega, Kw);
@@ -319,6 +327,7 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
     J, Cw, xs: xc + Xs, ys: yc + Ys, xc, yc, area, Ix: Ixx, Iy: Iyy, Ixy, Ip,
     omega, load: F, energy, iterations: sol.iterations, relativeResidual: sol.relativeResidual,
     components: comps.count, componentOfNode: comps.of,
+    phaseMs: { assemble: t1 - t0, solve: t2 - t1, post: now() - t2 },
   };
 }
 
