@@ -110,10 +110,20 @@ function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: L
     ['xs', g(values.xs), unit, 'shear centre x (Trefftz)'],
     ['ys', g(values.ys), unit, 'shear centre y (Trefftz)'],
     ['meshElements', String(r.meshElements), '', '6-node triangles in the torsion mesh'],
-    ['jRelativeError', formatSig(r.jRelativeError * 100, 2), '%', 'estimated error of J (refined mesh and chord terms)'],
+    ['jRelativeError', formatSig(r.jRelativeError * 100, 2), '%', 'estimated error of J (refined mesh, arc chords, simplified outline)'],
   ];
   if (r.components > 1) rows.push(['torsionComponents', String(r.components), '', 'separate pieces: each twists on its own, J values add']);
-  return { json: values, rows, errors: [] };
+  const o = r.simplifiedOutline;
+  if (!o) return { json: values, rows, errors: [] };
+  const pct = (v: number): string => formatSig(v * 100, 2);
+  rows.push(
+    ['torsionOutline', `${o.inputPoints} → ${o.meshPoints}`, 'points', 'dense outline simplified for the torsion mesh only (exact properties use every point)'],
+    ['torsionDeltaA', pct(o.deltaArea), '%', 'change of area of the meshed outline'],
+    ['torsionDeltaIx', pct(o.deltaIx), '%', 'change of Ix of the meshed outline'],
+    ['torsionDeltaIy', pct(o.deltaIy), '%', 'change of Iy of the meshed outline'],
+    ['torsionDeltaJ', pct(o.jChange), '%', 'estimated change of J from the simplification (in jRelativeError)'],
+  );
+  return { json: { ...values, torsionOutline: o }, rows, errors: [] };
 }
 
 function describeInput(s: LoadedSection): string {
@@ -231,6 +241,10 @@ export const propsCommand: Command = {
     '--torsion adds finite-element torsion of the (single-material) section: J (unit⁴), Cw (unit⁶,',
     'about the shear centre), the Trefftz shear centre xs, ys (section coordinates), meshElements,',
     'jRelativeError (estimated relative error of J) and torsionComponents (separate pieces).',
+    'A dense outline (e.g. a curve imported as thousands of vertices) is simplified for the',
+    'torsion mesh only, within 0.1 % of J; "torsionOutline" then gives inputPoints, meshPoints and',
+    'the relative changes deltaArea, deltaIx, deltaIy and jChange (estimated, included in',
+    'jRelativeError).',
     '',
     'Bad input (unreadable file, JSON syntax, schema, geometry) exits with code 2 and names the',
     'file and the place: line and column, JSON path, or part, ring and vertex.',
