@@ -4,7 +4,7 @@
  * folder and types it does not know. Plain functions so the traversal rules are unit-tested.
  */
 import path from 'node:path';
-import { APP_HOST, APP_SCHEME } from './window-options.ts';
+import { APP_HOST, APP_SCHEME, responseHeaders } from './window-options.ts';
 
 const CONTENT_TYPES: Readonly<Record<string, string>> = {
   '.html': 'text/html; charset=utf-8',
@@ -53,4 +53,20 @@ export function webFileFor(root: string, encodedPath: string): AppFile | null {
   if (filePath !== resolvedRoot && !filePath.startsWith(resolvedRoot + path.sep)) return null;
   const contentType = CONTENT_TYPES[path.extname(filePath).toLowerCase()];
   return contentType ? { filePath, contentType } : null;
+}
+
+/**
+ * The handler main gives to protocol.handle('app', …): the file of webFileFor's rules with the
+ * app's headers (the CSP) on every answer, and a 404 that carries them too. `fetchFile` reads a
+ * file by path (main: net.fetch of its file: URL; tests: a plain read).
+ */
+export function appProtocolHandler(root: string, fetchFile: (filePath: string) => Promise<Response>): (request: { readonly url: string }) => Promise<Response> {
+  const notFound = (): Response => new Response('Not found', { status: 404, headers: responseHeaders('text/plain; charset=utf-8') });
+  return async (request) => {
+    const file = appFileFor(root, request.url);
+    if (!file) return notFound();
+    const response = await fetchFile(file.filePath).catch(() => null);
+    if (!response?.ok) return notFound();
+    return new Response(response.body, { status: 200, headers: responseHeaders(file.contentType) });
+  };
 }

@@ -8,12 +8,14 @@
  *
  * Bundled by electron/build.mjs to out/electron/main.cjs; the renderer build is read from dist/web.
  */
-import { app, BrowserWindow, dialog, ipcMain, Menu, net, protocol, session, type IpcMainInvokeEvent, type WebContents } from 'electron';
+import { app, BrowserWindow, dialog, ipcMain, Menu, net, protocol, session, type IpcMainInvokeEvent } from 'electron';
 import { promises as fs } from 'node:fs';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { appFileFor } from './app-files.ts';
+import { appProtocolHandler } from './app-files.ts';
 import type { InvokeChannel, HostCommand, SendChannel } from './channels.ts';
+import { createGrantedPaths, DOCUMENT_EXTENSION } from './granted-paths.ts';
+import { claimSingleInstance } from './instance.ts';
 import { guarded } from './ipc-guard.ts';
 import { documentPathFromArgv } from './launch-file.ts';
 import { menuTemplate } from './menu.ts';
@@ -23,20 +25,16 @@ import { readRecentFiles, withRecent, writeRecentFiles, type RecentFile } from '
 import { createRecoveryStore } from './recovery.ts';
 import { saveAtomically } from './save.ts';
 import { createSettingsStore } from './settings.ts';
-import {
-  APP_ENTRY_URL, APP_SCHEME, denyPermissionCheck, denyPermissionRequest, denyWindowOpen,
-  isNavigationAllowed, PRIVILEGED_SCHEMES, responseHeaders, windowOptions,
-} from './window-options.ts';
+import { APP_ENTRY_URL, APP_SCHEME, applySessionPolicy, lockDown, PRIVILEGED_SCHEMES, windowOptions } from './window-options.ts';
 
 const WEB_ROOT = path.join(__dirname, '..', '..', 'dist', 'web');
 const PRELOAD = path.join(__dirname, 'preload.cjs');
-const DOCUMENT_EXTENSION = '.section.json';
 
 protocol.registerSchemesAsPrivileged([...PRIVILEGED_SCHEMES]);
 
 let window: BrowserWindow | null = null;
-/** Paths the user chose (or gave on the command line): the only ones the renderer may save to. */
-const grantedPaths = new Set<string>();
+/** Paths the user chose, or opened as documents the app can save back: the only ones the renderer may save to. */
+const grantedPaths = createGrantedPaths();
 let launchPath = documentPathFromArgv(process.argv, process.cwd(), process.defaultApp === true);
 let unsaved = false;
 let closeConfirmed = false;
@@ -66,14 +64,15 @@ function listen<C extends SendChannel>(channel: C, handler: (...args: PayloadOf<
   });
 }
 
-async function readDocumentFile(filePath: string): Promise<{ name: string; handle: string; text: string }> {
+async function readDocumentFile(filePath: string): Promise<{ name: string; handle: string | null; text: string }> {
   const info = await fs.stat(filePath);
   if (!info.isFile()) throw new Error(`"${filePath}" is not a file.`);
   if (info.size > MAX_TEXT_BYTES) throw new Error(`"${filePath}" is ${info.size} bytes; the largest document this build opens is ${MAX_TEXT_BYTES} bytes.`);
   const text = await fs.readFile(filePath, 'utf8');
-  grantedPaths.add(filePath);
+  // A GeoJSON or DXF drawing is read, never written over: its Save asks for a place (handle null).
+  const savable = grantedPaths.opened(filePath, text);
   await rememberRecent(filePath);
-  return { name: path.basename(filePath), handle: filePath, text };
+  return { name: path.basename(filePath), handle: savable ? filePath : null, text };
 }
 
 async function rememberRecent(filePath: string): Promise<void> {
@@ -84,7 +83,7 @@ async function rememberRecent(filePath: string): Promise<void> {
 
 async function saveDocument(filePath: string, text: string): Promise<{ name: string; handle: string }> {
   await saveAtomically(filePath, checkedDocumentText(text));
-  grantedPaths.add(filePath);
+  grantedPaths.chosen(filePath);
   await rememberRecent(filePath);
   return { name: path.basename(filePath), handle: filePath };
 }
@@ -207,30 +206,9 @@ async function confirmDiscard(owner: BrowserWindow, documentName: string | null)
   return answer.response === 0;
 }
 
-/** Serves dist/web under app://sectionsmith/ with the CSP on every response. */
-function registerAppProtocol(): void {
-  protocol.handle(APP_SCHEME, async (request) => {
-    const file = appFileFor(WEB_ROOT, request.url);
-    if (!file) return new Response('Not found', { status: 404, headers: responseHeaders('text/plain; charset=utf-8') });
-    const response = await net.fetch(pathToFileURL(file.filePath).toString()).catch(() => null);
-    if (!response?.ok) return new Response('Not found', { status: 404, headers: responseHeaders('text/plain; charset=utf-8') });
-    return new Response(response.body, { status: 200, headers: responseHeaders(file.contentType) });
-  });
-}
-
-function lockDown(contents: WebContents): void {
-  contents.on('will-navigate', (event, url) => {
-    if (!isNavigationAllowed(url)) event.preventDefault();
-  });
-  contents.on('will-redirect', (event, url) => {
-    if (!isNavigationAllowed(url)) event.preventDefault();
-  });
-  contents.on('will-attach-webview', (event) => event.preventDefault());
-  contents.setWindowOpenHandler(denyWindowOpen);
-}
-
 function createWindow(): void {
-  const win = new BrowserWindow(windowOptions(PRELOAD));
+  // Developer tools only when running from the source tree, never in a packaged build.
+  const win = new BrowserWindow(windowOptions(PRELOAD, { devTools: !app.isPackaged }));
   window = win; // its web contents were locked down on 'web-contents-created'
   win.once('ready-to-show', () => win.show());
   win.on('close', (event) => {
@@ -248,30 +226,45 @@ function createWindow(): void {
   void win.loadURL(APP_ENTRY_URL);
 }
 
-// Every web contents (the window's, and any a future feature creates) is locked down at birth.
-app.on('web-contents-created', (_event, contents) => lockDown(contents));
+/** Everything the first instance does; a second instance never gets here (electron/instance.ts). */
+function startPrimary(): void {
+  // Every web contents (the window's, and any a future feature creates) is locked down at birth.
+  app.on('web-contents-created', (_event, contents) => lockDown(contents));
 
-// macOS passes files opened from Finder this way, before or after ready.
-app.on('open-file', (event, filePath) => {
-  event.preventDefault();
-  launchPath = filePath;
-  if (window) sendCommand('open-launch-file');
+  // macOS passes files opened from Finder this way, before or after ready.
+  app.on('open-file', (event, filePath) => {
+    event.preventDefault();
+    launchPath = filePath;
+    if (window) sendCommand('open-launch-file');
+  });
+
+  app.on('window-all-closed', () => app.quit());
+
+  // A clean exit (saved, or changes knowingly discarded) removes this window's recovery copy, and no other.
+  app.on('will-quit', (event) => {
+    event.preventDefault();
+    void recovery.clear().finally(() => app.exit(0));
+  });
+
+  void app.whenReady().then(async () => {
+    applySessionPolicy(session.defaultSession);
+    recent = await readRecentFiles(recentListFile);
+    protocol.handle(APP_SCHEME, appProtocolHandler(WEB_ROOT, (filePath) => net.fetch(pathToFileURL(filePath).toString())));
+    registerHandlers();
+    Menu.setApplicationMenu(Menu.buildFromTemplate(menuTemplate(sendCommand, process.platform)));
+    createWindow();
+  });
+}
+
+// A second start (the file manager opening another document, say) hands its command line to the
+// running instance, which shows its window and opens the file there (asking before it replaces
+// unsaved work), and quits before it creates anything of its own.
+const primary = claimSingleInstance(app, (argv, workingDirectory) => {
+  const filePath = documentPathFromArgv(argv, workingDirectory, process.defaultApp === true);
+  if (filePath) launchPath = filePath;
+  if (!window) return;
+  if (window.isMinimized()) window.restore();
+  window.focus();
+  if (filePath) sendCommand('open-launch-file');
 });
-
-app.on('window-all-closed', () => app.quit());
-
-// A clean exit (saved, or changes knowingly discarded) leaves no recovery file behind.
-app.on('will-quit', (event) => {
-  event.preventDefault();
-  void recovery.clear().finally(() => app.exit(0));
-});
-
-void app.whenReady().then(async () => {
-  session.defaultSession.setPermissionRequestHandler(denyPermissionRequest);
-  session.defaultSession.setPermissionCheckHandler(denyPermissionCheck);
-  recent = await readRecentFiles(recentListFile);
-  registerAppProtocol();
-  registerHandlers();
-  Menu.setApplicationMenu(Menu.buildFromTemplate(menuTemplate(sendCommand, process.platform)));
-  createWindow();
-});
+if (primary) startPrimary();

@@ -6,7 +6,9 @@
  *   security on; its only bridge is the preload's named functions (electron/preload.ts).
  * - The app is served from the custom protocol app://sectionsmith/ (registered standard + secure),
  *   never from file://, with a strict Content-Security-Policy on every response.
- * - Navigation away from the app, new windows and every permission request are denied.
+ * - Navigation away from the app, new windows and every permission request are denied
+ *   (`lockDown` on every web contents, `applySessionPolicy` on the session).
+ * - Developer tools are there in development only; a packaged build has none.
  */
 import type { BrowserWindowConstructorOptions, CustomScheme } from 'electron';
 
@@ -39,7 +41,12 @@ export const PRIVILEGED_SCHEMES: readonly CustomScheme[] = [
   { scheme: APP_SCHEME, privileges: { standard: true, secure: true, supportFetchAPI: true, codeCache: true } },
 ];
 
-export function windowOptions(preloadPath: string): BrowserWindowConstructorOptions {
+export interface WindowChoices {
+  /** Developer tools: true only when running from the source tree (`!app.isPackaged`). Default false. */
+  readonly devTools?: boolean;
+}
+
+export function windowOptions(preloadPath: string, choices: WindowChoices = {}): BrowserWindowConstructorOptions {
   return {
     width: 1400,
     height: 900,
@@ -61,7 +68,7 @@ export function windowOptions(preloadPath: string): BrowserWindowConstructorOpti
       webviewTag: false,
       navigateOnDragDrop: false,
       spellcheck: false,
-      devTools: true,
+      devTools: choices.devTools === true,
     },
   };
 }
@@ -97,4 +104,38 @@ export function responseHeaders(contentType: string): Record<string, string> {
     'Cross-Origin-Opener-Policy': 'same-origin',
     'Referrer-Policy': 'no-referrer',
   };
+}
+
+/** The few parts of a WebContents that lockDown uses (Electron's own type satisfies it). */
+export interface LockableContents {
+  on(event: 'will-navigate' | 'will-redirect', listener: (event: { preventDefault(): void }, url: string) => void): unknown;
+  on(event: 'will-attach-webview', listener: (event: { preventDefault(): void }) => void): unknown;
+  setWindowOpenHandler(handler: () => { action: 'deny' }): void;
+}
+
+/**
+ * Applied to every web contents when it is created (app 'web-contents-created'): it may reload
+ * the app but never navigate or redirect anywhere else, never attach a webview, never open a window.
+ */
+export function lockDown(contents: LockableContents): void {
+  contents.on('will-navigate', (event, url) => {
+    if (!isNavigationAllowed(url)) event.preventDefault();
+  });
+  contents.on('will-redirect', (event, url) => {
+    if (!isNavigationAllowed(url)) event.preventDefault();
+  });
+  contents.on('will-attach-webview', (event) => event.preventDefault());
+  contents.setWindowOpenHandler(denyWindowOpen);
+}
+
+/** The parts of an Electron Session whose permission answers we set. */
+export interface PermissionSession {
+  setPermissionRequestHandler(handler: typeof denyPermissionRequest): void;
+  setPermissionCheckHandler(handler: typeof denyPermissionCheck): void;
+}
+
+/** Every permission request and check of the session is refused. */
+export function applySessionPolicy(session: PermissionSession): void {
+  session.setPermissionRequestHandler(denyPermissionRequest);
+  session.setPermissionCheckHandler(denyPermissionCheck);
 }

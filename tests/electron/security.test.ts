@@ -2,10 +2,13 @@
  * The desktop window's security settings, asserted literally (STYLE.md §13, Electron's own
  * security checklist, common practice): if anyone loosens one, this fails.
  */
-import { readFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, promises as fs, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { describe, expect, it } from 'vitest';
-import { appFileFor } from '../../electron/app-files.ts';
+import { afterAll, describe, expect, it } from 'vitest';
+import { appFileFor, appProtocolHandler } from '../../electron/app-files.ts';
+import { canSaveBack, createGrantedPaths } from '../../electron/granted-paths.ts';
+import { claimSingleInstance, type InstanceApp } from '../../electron/instance.ts';
 import { CHANNELS } from '../../electron/channels.ts';
 import { assertTrustedSender, guarded, type SenderLike } from '../../electron/ipc-guard.ts';
 import { documentPathFromArgv } from '../../electron/launch-file.ts';
@@ -13,8 +16,8 @@ import { plainRemoteMessage } from '../../electron/remote-error.ts';
 import { menuTemplate } from '../../electron/menu.ts';
 import { checkedArgs, checkedDocumentText, PAYLOADS, RejectedMessage } from '../../electron/payloads.ts';
 import {
-  APP_ENTRY_URL, CONTENT_SECURITY_POLICY, denyPermissionCheck, denyPermissionRequest, denyWindowOpen,
-  isAppUrl, isNavigationAllowed, PRIVILEGED_SCHEMES, responseHeaders, windowOptions,
+  APP_ENTRY_URL, applySessionPolicy, CONTENT_SECURITY_POLICY, denyPermissionCheck, denyPermissionRequest, denyWindowOpen,
+  isAppUrl, isNavigationAllowed, lockDown, PRIVILEGED_SCHEMES, responseHeaders, windowOptions, type LockableContents,
 } from '../../electron/window-options.ts';
 import { HOST_COMMANDS } from '../../renderer/host/host.ts';
 import { parseDocument, serialiseDocument } from '../../core/document/index.ts';
@@ -40,7 +43,6 @@ describe('window options', () => {
   it('load the app from app://sectionsmith/, a scheme registered as standard and secure', () => {
     expect(APP_ENTRY_URL).toBe('app://sectionsmith/index.html');
     expect(PRIVILEGED_SCHEMES).toEqual([{ scheme: 'app', privileges: { standard: true, secure: true, supportFetchAPI: true, codeCache: true } }]);
-    expect(readFileSync(path.join(electronDir, 'main.ts'), 'utf8')).toMatch(/win\.loadURL\(APP_ENTRY_URL\)/);
   });
 
   it('send a strict CSP on every app response: nothing by default, scripts only from the app, no objects, framing or forms', () => {
@@ -62,13 +64,161 @@ describe('window options', () => {
     for (const permission of ['media', 'geolocation', 'notifications', 'clipboard-read', 'openExternal']) denyPermissionRequest(null, permission, (granted) => answers.push(granted));
     expect(answers).toEqual([false, false, false, false, false]);
     expect(denyPermissionCheck()).toBe(false);
-    const main = readFileSync(path.join(electronDir, 'main.ts'), 'utf8');
-    expect(main).toMatch(/setPermissionRequestHandler\(denyPermissionRequest\)/);
-    expect(main).toMatch(/setPermissionCheckHandler\(denyPermissionCheck\)/);
-    expect(main).toMatch(/setWindowOpenHandler\(denyWindowOpen\)/);
-    expect(main).toMatch(/'will-navigate'/);
-    // …applied to every web contents when it is created.
-    expect(main).toMatch(/app\.on\('web-contents-created', \(_event, contents\) => lockDown\(contents\)\)/);
+  });
+
+  it('developer tools are off unless asked for (main asks only when the build is not packaged)', () => {
+    expect(prefs?.devTools).toBe(false);
+    expect(windowOptions('/p.cjs', { devTools: false }).webPreferences?.devTools).toBe(false);
+    expect(windowOptions('/p.cjs', { devTools: true }).webPreferences?.devTools).toBe(true);
+  });
+});
+
+// Hardening finding 8: these were regular expressions over main.ts; now the functions main uses
+// are run against fake web contents, a fake session and real files.
+describe('lock-down of every web contents', () => {
+  /** A web contents double: records listeners and the window-open handler. */
+  function fakeContents() {
+    const listeners = new Map<string, (event: { preventDefault(): void }, url?: string) => void>();
+    let openHandler: (() => { action: 'deny' }) | null = null;
+    const contents: LockableContents = {
+      on: (name: string, listener: (event: { preventDefault(): void }, url: string) => void) => listeners.set(name, listener as never),
+      setWindowOpenHandler: (handler) => void (openHandler = handler),
+    };
+    /** Fires an event; true when the listener prevented it. */
+    const fire = (name: string, url?: string): boolean => {
+      let prevented = false;
+      const listener = listeners.get(name);
+      if (!listener) throw new Error(`no listener for ${name}`);
+      listener({ preventDefault: () => void (prevented = true) }, url);
+      return prevented;
+    };
+    return { contents, fire, openHandler: () => openHandler };
+  }
+
+  it('a navigation or redirect away from the app is prevented, a reload of the app is not', () => {
+    const { contents, fire } = fakeContents();
+    lockDown(contents);
+    expect(fire('will-navigate', 'app://sectionsmith/index.html')).toBe(false);
+    expect(fire('will-navigate', 'https://example.com/')).toBe(true);
+    expect(fire('will-navigate', 'file:///home/eng/girder.section.json')).toBe(true);
+    expect(fire('will-redirect', 'app://sectionsmith/index.html')).toBe(false);
+    expect(fire('will-redirect', 'http://127.0.0.1:8080/')).toBe(true);
+    expect(fire('will-navigate', 'not a url')).toBe(true);
+  });
+
+  it('a webview is never attached and every new window is denied', () => {
+    const { contents, fire, openHandler } = fakeContents();
+    lockDown(contents);
+    expect(fire('will-attach-webview')).toBe(true);
+    expect(openHandler()?.()).toEqual({ action: 'deny' });
+  });
+
+  it('the session answers every permission request and check with no', () => {
+    const set: { request: typeof denyPermissionRequest | null; check: typeof denyPermissionCheck | null } = { request: null, check: null };
+    applySessionPolicy({ setPermissionRequestHandler: (h) => void (set.request = h), setPermissionCheckHandler: (h) => void (set.check = h) });
+    const answers: boolean[] = [];
+    for (const permission of ['media', 'fullscreen', 'clipboard-sanitized-write', 'pointerLock']) set.request?.(null, permission, (granted) => answers.push(granted));
+    expect(answers).toEqual([false, false, false, false]);
+    expect(set.check?.()).toBe(false);
+  });
+});
+
+describe('app:// protocol handler', () => {
+  const root = mkdtempSync(path.join(tmpdir(), 'sectionsmith-web-'));
+  writeFileSync(path.join(root, 'index.html'), '<!DOCTYPE html><title>app</title>');
+  mkdirSync(path.join(root, 'assets'));
+  writeFileSync(path.join(root, 'assets', 'index-1.js'), 'console.log(1)');
+  writeFileSync(path.join(path.dirname(root), `${path.basename(root)}-secret.js`), 'secret');
+  afterAll(() => {
+    rmSync(root, { recursive: true, force: true });
+    rmSync(path.join(path.dirname(root), `${path.basename(root)}-secret.js`), { force: true });
+  });
+  const handler = appProtocolHandler(root, async (filePath) => new Response(await fs.readFile(filePath)));
+
+  it('serves the app\'s files with their type and the CSP on every answer', async () => {
+    const page = await handler({ url: 'app://sectionsmith/' });
+    expect(page.status).toBe(200);
+    expect(await page.text()).toBe('<!DOCTYPE html><title>app</title>');
+    expect(page.headers.get('content-type')).toBe('text/html; charset=utf-8');
+    expect(page.headers.get('content-security-policy')).toBe(CONTENT_SECURITY_POLICY);
+    const script = await handler({ url: 'app://sectionsmith/assets/index-1.js' });
+    expect(script.headers.get('content-type')).toBe('text/javascript; charset=utf-8');
+    expect(script.headers.get('x-content-type-options')).toBe('nosniff');
+  });
+
+  it('answers 404, still with the CSP, for traversal, another host, an unknown type and a missing file', async () => {
+    for (const url of [
+      `app://sectionsmith/%2e%2e/${path.basename(root)}-secret.js`,
+      `app://sectionsmith/..%2f${path.basename(root)}-secret.js`,
+      'app://other/index.html',
+      'app://sectionsmith/run.sh',
+      'app://sectionsmith/missing.js',
+      'https://sectionsmith/index.html',
+    ]) {
+      const answer = await handler({ url });
+      expect([url, answer.status]).toEqual([url, 404]);
+      expect(answer.headers.get('content-security-policy')).toBe(CONTENT_SECURITY_POLICY);
+      expect(await answer.text()).toBe('Not found');
+    }
+  });
+});
+
+describe('granted paths: the renderer saves only where the app can save back', () => {
+  const sectionText = JSON.stringify({ format: 'sectionsmith-section', version: 2, name: 'n', unit: 'mm', materials: [], defaultMaterial: null, sections: [] });
+  it('a .section.json document, or a Sectionsmith document under a plain .json name, is granted when opened', () => {
+    const granted = createGrantedPaths();
+    expect(granted.opened('/w/girder.section.json', sectionText)).toBe(true);
+    expect(granted.opened('/w/girder.json', sectionText)).toBe(true);
+    expect(granted.opened('/w/GIRDER.SECTION.JSON', sectionText)).toBe(true);
+    expect(granted.has('/w/girder.section.json') && granted.has('/w/girder.json')).toBe(true);
+  });
+
+  it('a GeoJSON, a DXF or a .json that is not a Sectionsmith document is read but never granted', () => {
+    const granted = createGrantedPaths();
+    const geojson = '{"type":"Polygon","coordinates":[[[0,0],[1,0],[1,1],[0,0]]]}';
+    expect(granted.opened('/w/deck.geojson', geojson)).toBe(false);
+    expect(granted.opened('/w/deck.json', geojson)).toBe(false);
+    expect(granted.opened('/w/plate.dxf', '0\nSECTION\n')).toBe(false);
+    expect(granted.opened('/w/notes.json', '{"format": ')).toBe(false);
+    expect(granted.opened('/w/tricky.geojson', sectionText)).toBe(false);
+    for (const p of ['/w/deck.geojson', '/w/deck.json', '/w/plate.dxf', '/w/notes.json', '/w/tricky.geojson']) expect(granted.has(p)).toBe(false);
+    expect(canSaveBack('/w/deck.section.json.bak', sectionText)).toBe(false);
+  });
+
+  it('a place chosen in Save As is granted', () => {
+    const granted = createGrantedPaths();
+    expect(granted.has('/w/new.section.json')).toBe(false);
+    granted.chosen('/w/new.section.json');
+    expect(granted.has('/w/new.section.json')).toBe(true);
+  });
+});
+
+describe('single instance', () => {
+  /** An Electron app double whose lock is held (or not) and which records quit and the second-instance listener. */
+  function fakeApp(lock: boolean) {
+    const log = { quit: 0, listener: null as null | ((event: unknown, argv: string[], cwd: string) => void) };
+    const app: InstanceApp = {
+      requestSingleInstanceLock: () => lock,
+      quit: () => void (log.quit += 1),
+      on: (_name, listener) => void (log.listener = listener),
+    };
+    return { app, log };
+  }
+
+  it('the first instance goes on and receives the command line of a later start', () => {
+    const { app, log } = fakeApp(true);
+    const seen: [readonly string[], string][] = [];
+    expect(claimSingleInstance(app, (argv, cwd) => seen.push([argv, cwd]))).toBe(true);
+    expect(log.quit).toBe(0);
+    log.listener?.({}, ['/opt/Sectionsmith/sectionsmith', 'rail.section.json'], '/home/eng');
+    expect(seen).toEqual([[['/opt/Sectionsmith/sectionsmith', 'rail.section.json'], '/home/eng']]);
+  });
+
+  it('a second instance quits at once and registers nothing', () => {
+    const { app, log } = fakeApp(false);
+    expect(claimSingleInstance(app, () => { throw new Error('not called'); })).toBe(false);
+    expect(log.quit).toBe(1);
+    expect(log.listener).toBeNull();
   });
 });
 
