@@ -46,12 +46,65 @@ export function reportWindowOptions(): BrowserWindowConstructorOptions {
   return { show: false, width: 900, height: 1200, webPreferences: { ...secure, javascript: false, devTools: false } };
 }
 
-/** The report with the no-fetch policy as the first thing in its head. */
+/**
+ * The report with the no-fetch policy as the first thing in its head. The place is found the way
+ * an HTML parser finds it (WHATWG HTML, tree construction: "before html" and "before head"
+ * insertion modes), not by searching for "<head": leading whitespace, comments and the doctype are
+ * skipped, then an <html> start tag and a <head> start tag when present (attributes may hold ">"
+ * in quotes). Whatever comes next, a <meta> put there is parsed into the document's head, with
+ * or without explicit <html> and <head> tags. A "<head" inside a comment or a <header> cannot
+ * move it. A comment or tag that never ends is refused.
+ */
 export function lockedReportHtml(html: string): string {
-  const head = /<head[^>]*>/i.exec(html);
-  if (!head) throw new Error('The report could not be printed: its HTML has no <head>.');
-  const at = head.index + head[0].length;
+  const at = headContentStart(html);
   return `${html.slice(0, at)}<meta http-equiv="Content-Security-Policy" content="${REPORT_CSP}">${html.slice(at)}`;
+}
+
+/** The offset where the head's first child goes. */
+export function headContentStart(html: string): number {
+  let i = html.charCodeAt(0) === 0xfeff ? 1 : 0;
+  let sawHtml = false;
+  for (;;) {
+    while (i < html.length && ' \t\n\f\r'.includes(html.charAt(i))) i += 1;
+    const rest = html.slice(i, i + 10);
+    if (rest.startsWith('<!--')) {
+      // "<!-->" and "<!--->" close at once (abrupt closing of an empty comment).
+      if (html.startsWith('>', i + 4)) i += 5;
+      else if (html.startsWith('->', i + 4)) i += 6;
+      else {
+        const end = html.indexOf('-->', i + 4);
+        if (end < 0) throw new Error('The report could not be printed: a comment in its HTML never ends.');
+        i = end + 3;
+      }
+    } else if (/^<!doctype/i.test(rest)) {
+      const end = html.indexOf('>', i);
+      if (end < 0) throw new Error('The report could not be printed: its doctype never ends.');
+      i = end + 1;
+    } else if (!sawHtml && /^<html[\t\n\f\r />]/i.test(rest)) {
+      i = startTagEnd(html, i);
+      sawHtml = true;
+    } else if (/^<head[\t\n\f\r />]/i.test(rest)) {
+      return startTagEnd(html, i);
+    } else {
+      return i;
+    }
+  }
+}
+
+/** The offset just past the start tag at `from`; ">" inside a quoted attribute value does not end it. */
+function startTagEnd(html: string, from: number): number {
+  let quote = '';
+  for (let i = from + 1; i < html.length; i += 1) {
+    const c = html.charAt(i);
+    if (quote) {
+      if (c === quote) quote = '';
+    } else if (c === '>') {
+      return i + 1;
+    } else if ((c === '"' || c === "'") && /=[\t\n\f\r ]*$/.test(html.slice(Math.max(from, i - 16), i))) {
+      quote = c;
+    }
+  }
+  throw new Error('The report could not be printed: a tag at the start of its HTML never ends.');
 }
 
 /** "girder-report.html" → "girder-report.pdf"; a chosen path without .pdf gets it. */

@@ -97,10 +97,28 @@ describe('report to PDF (main process)', () => {
     expect(leftovers()).toEqual([]);
   });
 
-  it('HTML without a head is refused before anything is asked', async () => {
+  // Hardening finding 8: the policy went after the first match of /<head[^>]*>/, which a comment,
+  // an attribute or a <header> element can hold, and a <meta> there is no policy at all. The
+  // places below follow WHATWG HTML tree construction ("before html", "before head" modes).
+  const META = `<meta http-equiv="Content-Security-Policy" content="${REPORT_CSP}">`;
+  it('the policy goes after the real <head> start tag, not a "<head>" inside a comment or an attribute', () => {
+    expect(lockedReportHtml('<!DOCTYPE html><!-- a <head> in a comment --><html><head><title>t</title>'))
+      .toBe(`<!DOCTYPE html><!-- a <head> in a comment --><html><head>${META}<title>t</title>`);
+    expect(lockedReportHtml('<!DOCTYPE html><html data-note="<head>" lang=en><HEAD class="x>y"><title>t</title>'))
+      .toBe(`<!DOCTYPE html><html data-note="<head>" lang=en><HEAD class="x>y">${META}<title>t</title>`);
+    expect(lockedReportHtml('\uFEFF<!doctype html>\n<!---->\n<head>\n<title>t</title>')).toBe(`\uFEFF<!doctype html>\n<!---->\n<head>${META}\n<title>t</title>`);
+  });
+
+  it('without a <head> tag the policy goes where the parser opens the head itself, never into a <header> of the body', () => {
+    expect(lockedReportHtml('<!DOCTYPE html><html><body><header>Trailer frame</header></body></html>'))
+      .toBe(`<!DOCTYPE html><html>${META}<body><header>Trailer frame</header></body></html>`);
+    expect(lockedReportHtml('<!DOCTYPE html><p>x</p>')).toBe(`<!DOCTYPE html>${META}<p>x</p>`);
+  });
+
+  it('a comment or tag that never ends is refused before anything is asked', async () => {
     const { deps, log } = fakes();
-    expect(() => lockedReportHtml('<p>no head</p>')).toThrow(/no <head>/);
-    await expect(printReportToPdf('<!DOCTYPE html><p>x</p>', 'x', deps)).rejects.toThrow(/no <head>/);
+    expect(() => lockedReportHtml('<!DOCTYPE html><!-- <head>')).toThrow(/a comment in its HTML never ends/);
+    await expect(printReportToPdf('<!DOCTYPE html><html lang="en', 'x', deps)).rejects.toThrow(/never ends/);
     expect(log.asked).toBe('');
   });
 
