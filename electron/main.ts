@@ -39,7 +39,8 @@ let launchPath = documentPathFromArgv(process.argv, process.cwd(), process.defau
 let unsaved = false;
 let closeConfirmed = false;
 
-const recovery = createRecoveryStore(path.join(app.getPath('userData'), 'recovery'));
+// The ID of the earlier single file until the renderer offers several copies (issue 18 §2).
+const recovery = createRecoveryStore(path.join(app.getPath('userData'), 'recovery'), 'work');
 const recentListFile = path.join(app.getPath('userData'), 'recent-files.json');
 const settings = createSettingsStore(app.getPath('userData'));
 let recent: RecentFile[] = [];
