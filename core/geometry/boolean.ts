@@ -27,7 +27,7 @@
  *   operation, the context and the parts. Size: the library's runaway guard stops at 1,000,000
  *   queued sweep events (two per segment), so inputs of more than about 500,000 segments after
  *   flattening fail with a BooleanError. Does not: validate (validateRegion first).
- * Source: polygon-clipping (M. Fogel), a Martínez–Rueda–Feito sweep; METHODS.md §2.6.
+ * Source: polygon-clipping (M. Fogel), a Martínez–Rueda–Feito sweep; docs/methods.md §2.6.
  */
 import polygonClipping from 'polygon-clipping';
 import type { MultiPolygon as PcMultiPolygon, Polygon as PcPolygon, Ring as PcRing } from 'polygon-clipping';

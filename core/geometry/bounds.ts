@@ -3,12 +3,12 @@
  *
  * Units: the document's length unit. Winding: any (only vertices and arcs are looked at).
  * An arc's farthest point in direction φ is Pc + r(cos φ, sin φ) when φ lies inside its swept
- * interval, otherwise one of its end points (METHODS.md §2.4, "Extreme points").
+ * interval, otherwise one of its end points (docs/methods.md §2.4, "Extreme points").
  * Only OUTER rings are used: holes of a valid region lie inside their outer ring (validateRegion
  * checks that), so they cannot reach farther.
  * Accuracy: an arc's extreme point carries the rounding of its centre from the bulge formula,
  *   a few ulps of the radius. Does not: check validity; an empty region has no bounds (null).
- * Source: METHODS.md §2.4.
+ * Source: docs/methods.md §2.4.
  */
 import { arcOfSegment, ringVertexCount, type ArcGeometry } from './ring.ts';
 import type { Point, Region, Ring } from './types.ts';

@@ -1,5 +1,5 @@
 /**
- * Flattening arcs into polylines to a stated chord tolerance (METHODS.md §2.6).
+ * Flattening arcs into polylines to a stated chord tolerance (docs/methods.md §2.6).
  *
  * Units: the document's length unit. Winding: kept (vertices come out in ring order).
  * Tolerance: every chord's sagitta (greatest distance between the chord and its arc) is
@@ -9,9 +9,9 @@
  *   into coincident chords.
  * Exactness: the ring's own vertices are copied bit for bit; interior arc points are computed
  *   as Ps + r(cos t − cos t0, sin t − sin t0) in half-angle form so a far centre never enters
- *   (METHODS.md §2.4, "Nearly straight arcs").
+ *   (docs/methods.md §2.4, "Nearly straight arcs").
  * Cap: at most MAX_PIECES_PER_ARC pieces per arc; a finer request is a bug (invariant).
- * Does not: check validity. Source: METHODS.md §2.4, §2.6.
+ * Does not: check validity. Source: docs/methods.md §2.4, §2.6.
  */
 import { invariant } from '../invariant.ts';
 import { arcOfSegment, ringVertexCount, type ArcGeometry } from './ring.ts';

@@ -1,5 +1,5 @@
 /**
- * Normalisation: the harmless clean-ups METHODS.md §1.1 lists, and the winding properties rely on.
+ * Normalisation: the harmless clean-ups docs/methods.md §1.1 lists, and the winding properties rely on.
  *
  * Does, for every ring, in this order:
  *   1. drops exactly repeated consecutive vertices (a zero-length segment) and an explicitly
@@ -12,7 +12,7 @@
  * Does not: repair anything else (self-intersections, holes outside, …): validateRegion reports
  *   those. Never mutates its input; returns new rings. A ring with zero signed area keeps its
  *   orientation. A bulge array that ends up all zero is dropped.
- * Source: METHODS.md §1.1 ("Orientation", "Harmless input"); Shewchuk, "Adaptive precision
+ * Source: docs/methods.md §1.1 ("Orientation", "Harmless input"); Shewchuk, "Adaptive precision
  *   floating-point arithmetic and fast robust geometric predicates" (1997) for orient2d.
  */
 import { orient2d } from 'robust-predicates';

@@ -8,7 +8,7 @@
  * a point within 1e-12·r of an arc counts as ON the boundary.
  * Winding: any. Units: any consistent length. Source: Shewchuk (1997) for orient2d; D. Sunday's
  * winding-number test (common practice); the decomposition ring = chord polygon ⊕ circular
- * segments follows METHODS.md §2.2.
+ * segments follows docs/methods.md §2.2.
  */
 import { orient2d } from 'robust-predicates';
 import { arcFromBulge, ringVertexCount } from './ring.ts';

@@ -6,19 +6,19 @@
  * Winding: signed area > 0 means counter-clockwise. Nothing here changes winding except
  *   `reverseRing`, which traces the same boundary (same arcs) the other way round.
  * Bulge: bulge[i] = tan(sweep / 4) for segment i (DXF convention, see types.ts); 0 = straight.
- * Accuracy: the signed area is computed about the ring's first vertex (METHODS.md §1.3) so that
+ * Accuracy: the signed area is computed about the ring's first vertex (docs/methods.md §1.3) so that
  *   a ring far from the origin keeps its digits; each arc adds the fan triangle of its chord plus
  *   the signed circular segment r²(Δt − sin Δt)/2, evaluated by its Taylor series for small
  *   sweeps to avoid cancellation.
  * Does not guarantee: anything for rings with non-finite numbers (validate first).
- * Sources: METHODS.md §1.1 (shoelace / Green's theorem), §2.4 (bulge → centre, radius, sweep);
+ * Sources: docs/methods.md §1.1 (shoelace / Green's theorem), §2.4 (bulge → centre, radius, sweep);
  *   circular segment area r²(θ − sin θ)/2: Roark's Formulas for Stress and Strain, Table A.1
  *   (section properties, circular segment) — common practice.
  */
 import { invariant } from '../invariant.ts';
 import { radians, type Point, type Radians, type Ring } from './types.ts';
 
-/** Centre, radius, start angle and signed sweep of one arc segment (METHODS.md §2). */
+/** Centre, radius, start angle and signed sweep of one arc segment (docs/methods.md §2). */
 export interface ArcGeometry {
   readonly cx: number;
   readonly cy: number;
@@ -126,7 +126,7 @@ export function arcOfSegment(ring: Ring, i: number): ArcGeometry | null {
   return arcFromBulge(xy[2 * i] ?? 0, xy[2 * i + 1] ?? 0, xy[2 * j] ?? 0, xy[2 * j + 1] ?? 0, b);
 }
 
-/** METHODS.md §2.4: Pc = M + ((1 − b²)/(4b))·n_L, r = |d|(1 + b²)/(4|b|), Δt = 4·atan(b). */
+/** docs/methods.md §2.4: Pc = M + ((1 − b²)/(4b))·n_L, r = |d|(1 + b²)/(4|b|), Δt = 4·atan(b). */
 export function arcFromBulge(x0: number, y0: number, x1: number, y1: number, b: number): ArcGeometry {
   invariant(b !== 0, 'arcFromBulge: a straight segment has no arc');
   const dx = x1 - x0;

@@ -7,7 +7,7 @@
  *   bad-bulge    a bulge is not finite, the bulge array's length differs from the vertex count,
  *                or a non-zero bulge sits on a zero-length segment;
  *   too-large    |coordinate| > MAX_COORDINATE = 1e9 in any unit (1000 km in mm): beyond that a
- *                double keeps too few digits for second moments (METHODS.md §1.3);
+ *                double keeps too few digits for second moments (docs/methods.md §1.3);
  *   (arcs are checked too: the ring's exact box, arcs included, must lie within ±MAX_COORDINATE,
  *   since a huge bulge between two near points draws a huge arc);
  *   too-small    the larger side of the ring's box is below MIN_EXTENT = 1e-9 in any unit;
@@ -39,7 +39,7 @@
  * chord tolerance near an arc may be misjudged; containment between touching boundaries is
  * decided by the sampled points (exact for straight rings of up to 2048 vertices when every
  * contact is a shared whole segment or a point that is a vertex of both rings). Reports at most MAX_CONTACT_DIAGNOSTICS contact problems.
- * Sources: METHODS.md §1.1 ("Harmful input"), §2.6; Shamos & Hoey (1976) for sweep-based
+ * Sources: docs/methods.md §1.1 ("Harmful input"), §2.6; Shamos & Hoey (1976) for sweep-based
  * intersection detection; Shewchuk (1997) for orient2d.
  */
 import type { Diagnostic, DiagnosticCode, Point, Region, Ring } from './types.ts';

@@ -1,12 +1,12 @@
 /**
- * Transformed (E-weighted) section of several materials (METHODS.md §6) and its plastic
+ * Transformed (E-weighted) section of several materials (docs/methods.md §6) and its plastic
  * capacity by yield-force balance (§5.1).
  *
  * Input: pieces that do NOT overlap (resolve overlaps first, core/materials/document.ts), each a
  * normalised region in the document's length unit with a material in SI (Pa, kg/m³).
  * Reference modulus: E_ref as given, else the first piece's E. n_i = E_i / E_ref.
  *
- * Sums (METHODS.md §6, stable form): raw integrals of every piece about one local origin (the
+ * Sums (docs/methods.md §6, stable form): raw integrals of every piece about one local origin (the
  * vertex-box centre of all pieces, §1.3), then
  *   EA = Σ E_i A_i,  (x_E, y_E) = Σ E_i (Qy_i, Qx_i) / EA,
  *   EIx = Σ E_i [Ix_i + A_i (yc_i − y_E)²], EIy and EIxy likewise,
@@ -96,7 +96,7 @@ export interface CompositeProperties {
   readonly stiffness: SectionStiffness;
 }
 
-/** Per-unit-length mass of a piece: ρ·A with A in m² (METHODS.md §6). */
+/** Per-unit-length mass of a piece: ρ·A with A in m² (docs/methods.md §6). */
 const massOf = (area: number, unit: LengthUnit, density: number): number => density * convertLength(area, unit, 'm', 2);
 
 export function compositeProperties(pieces: readonly MaterialPiece[], unit: LengthUnit, eRef?: number): CompositeProperties {
@@ -167,7 +167,7 @@ export interface FirstYield {
 
 /**
  * First yield under a moment about x (`about: 'x'`, My = 0) or about y (Mx = 0) in FREE bending:
- * the full strain plane of §6, so EIxy ≠ 0 turns the neutral axis (METHODS.md §9.1).
+ * the full strain plane of §6, so EIxy ≠ 0 turns the neutral axis (docs/methods.md §9.1).
  */
 export function firstYield(c: CompositeProperties, pieces: readonly MaterialPiece[], about: 'x' | 'y'): FirstYield {
   // A unit moment in Pa·unit³ gives stresses in Pa per unit moment.
@@ -190,7 +190,7 @@ export interface PlasticCapacity {
   readonly normalY: number;
   /** Mp = Σ fy_i ∫|s − d| dA, N·m. */
   readonly Mp: number;
-  /** Moment about the perpendicular direction, N·m (METHODS.md §5.1). */
+  /** Moment about the perpendicular direction, N·m (docs/methods.md §5.1). */
   readonly MpPerpendicular: number;
   readonly axialForce: number;
   readonly converged: boolean;

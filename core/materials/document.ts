@@ -3,7 +3,7 @@
  * (a part's own material id, else the document default), and splitting the composed section
  * into non-overlapping pieces of one material each.
  *
- * Overlaps (METHODS.md §6 option (a)): a later part wins. Each visible "add" part keeps only
+ * Overlaps (docs/methods.md §6 option (a)): a later part wins. Each visible "add" part keeps only
  * what no later visible part (add or subtract) covers; a subtract part removes material from
  * every earlier part. The union of the pieces is the section core/section composes, so the
  * geometric properties agree; per-material extreme fibres need the split.

@@ -1,5 +1,5 @@
 /**
- * The reference modulus E_ref of a document's transformed section (METHODS.md §6: n_i = E_i / E_ref).
+ * The reference modulus E_ref of a document's transformed section (docs/methods.md §6: n_i = E_i / E_ref).
  *
  * The document may store `referenceModulus`: a material's E ({ material: id }) or a typed stress
  * ({ value, unit }). Absent, E_ref is the E of the first part with material (compositeProperties

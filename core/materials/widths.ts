@@ -7,7 +7,7 @@
  * the material lies between alternate crossings (even–odd rule; holes are rings like any other).
  * A line that passes exactly through a vertex or an arc end is moved by ±1e−9 of the section
  * height and the two widths are averaged, so a width at a corner height is the mean of the
- * widths just above and below. Units: the document unit. Source: METHODS.md §2.4 (arc points).
+ * widths just above and below. Units: the document unit. Source: docs/methods.md §2.4 (arc points).
  */
 import { arcContainsAngle, regionBounds } from '../geometry/bounds.ts';
 import { arcOfSegment, ringVertexCount } from '../geometry/ring.ts';

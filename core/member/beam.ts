@@ -18,7 +18,7 @@
  * residual are reported). Maximum moment: exact, at an end, a load point or where V = 0.
  * Units: any consistent set (e.g. N, mm, N/mm, N·mm²). Does not: include shear deformation
  * (unconservative for short, deep or sandwich beams), second-order effects or a varying EI.
- * Sources: METHODS.md §10; Gere & Timoshenko, Mechanics of Materials (Macaulay's method);
+ * Sources: docs/methods.md §10; Gere & Timoshenko, Mechanics of Materials (Macaulay's method);
  * Roark's Formulas for Stress and Strain, Table 8.1; AISC Manual Part 3 beam diagrams.
  */
 import { invariant } from '../invariant.ts';

@@ -6,14 +6,14 @@
  * against its limit. Each criterion carries its use ratio; any ratio over 1 fails the member.
  *
  * The section bends about its x axis (loads act in −y, the usual beam orientation); the stiffness
- * is EIx about the E-weighted centroid. Stress in material i at fibre y (METHODS.md §6, §9.1):
+ * is EIx about the E-weighted centroid. Stress in material i at fibre y (docs/methods.md §6, §9.1):
  * σ_i = −M·E_i·(y − y_E)/EIx with M sagging positive (compression at the top). When EIxy ≠ 0 the
  * section is assumed restrained to bend in the load plane (a caution is added).
  *
  * Deflection limits: span/360, /240, /180, /120 as listed in IBC Table 1604.3 (common practice,
  * NOT code compliance: the locally adopted code governs), or a user ratio. For a cantilever the
  * span in the limit is taken as twice the cantilever length, per that table's footnote (from
- * memory). Units: any consistent set, as core/member/beam.ts. Source: METHODS.md §10.
+ * memory). Units: any consistent set, as core/member/beam.ts. Source: docs/methods.md §10.
  */
 import { invariant } from '../invariant.ts';
 import type { StrengthBasis } from '../materials/schema.ts';

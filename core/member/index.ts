@@ -1,4 +1,4 @@
-/** Beam formulas and member checks (METHODS.md §10); see beam.ts and check.ts. */
+/** Beam formulas and member checks (docs/methods.md §10); see beam.ts and check.ts. */
 export * from './beam.ts';
 export * from './check.ts';
 export * from './section-member.ts';

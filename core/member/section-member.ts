@@ -6,7 +6,7 @@
  * the document unit; forces in N and line loads in N/m. Everything is converted to SI once
  * (lengths only through core/units), checked by core/member/check.ts, and returned in SI:
  * deflections and positions in m, moments in N·m, stresses in Pa, EI in N·m².
- * Self-weight, when asked for, is g·Σρ_i A_i from the material densities (METHODS.md §6).
+ * Self-weight, when asked for, is g·Σρ_i A_i from the material densities (docs/methods.md §6).
  */
 import { compositeProperties, type CompositeProperties, type MaterialPiece } from '../materials/composite.ts';
 import type { StrengthBasis } from '../materials/schema.ts';

@@ -1,9 +1,9 @@
 /**
- * Arc flattening for the mesher (METHODS §2.4 bulge convention, §2.6 flattening).
+ * Arc flattening for the mesher (docs/methods.md §2.4 bulge convention, §2.6 flattening).
  *
  * A ring segment with bulge b = tan(sweep/4) is replaced by n equal-angle chords with
  * n = ceil(|sweep| / maxSweep). The chord polygon is inscribed in the arc: its area and J are
- * smaller than the arc region's (METHODS §7.8: ΔJ/J ≈ −Δφ²/3 for a full circle). Exact arcs are
+ * smaller than the arc region's (docs/methods.md §7.8: ΔJ/J ≈ −Δφ²/3 for a full circle). Exact arcs are
  * kept for every integral property elsewhere; only the mesh uses chords.
  * Private to core/mesh: it returns plain coordinate lists, not geometry Rings.
  */
@@ -32,7 +32,7 @@ function appendArcInterior(
   const dx = xe - xs;
   const dy = ye - ys;
   const k = (1 - bulge * bulge) / (4 * bulge);
-  // Centre = chord midpoint + k · left normal (METHODS §2.4).
+  // Centre = chord midpoint + k · left normal (docs/methods.md §2.4).
   const cx = (xs + xe) / 2 - k * dy;
   const cy = (ys + ye) / 2 + k * dx;
   const r = Math.hypot(xs - cx, ys - cy);

@@ -1,5 +1,5 @@
 /**
- * meshRegion: a conforming quality triangle mesh of one Region (METHODS §7.8).
+ * meshRegion: a conforming quality triangle mesh of one Region (docs/methods.md §7.8).
  *
  * Steps: flatten arcs (chords of sweep ≤ maxChordAngleDeg), merge coincident vertices of
  * touching pieces, estimate the local wall thickness, build a graded size field, split the
@@ -26,7 +26,7 @@ export type { PlanarGraph } from './planar-input.ts';
 const DEFAULTS = {
   layers: 3,
   compactDivisions: 8,
-  // 2.5° per chord keeps the chord-polygon deficit of a full circle (≈ Δφ²/3, METHODS §7.8) at
+  // 2.5° per chord keeps the chord-polygon deficit of a full circle (≈ Δφ²/3, docs/methods.md §7.8) at
   // −0.063 %, inside the 0.1 % budget for J; 3.6° would give −0.13 %.
   maxChordAngleDeg: 2.5,
   minAngleDeg: 22,

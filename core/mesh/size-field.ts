@@ -5,7 +5,7 @@
  * along its inward normal to the first boundary edge it meets (shared edges between touching
  * parts are interior and ignored). A sample of thickness t asks for h = t / layers; a piece of
  * material area A asks for h ≤ √A / compactDivisions everywhere in its bounding box; sharp
- * re-entrant corners ask for h / cornerRefinement at the corner (METHODS §7.8: grade ×2–4 finer
+ * re-entrant corners ask for h / cornerRefinement at the corner (docs/methods.md §7.8: grade ×2–4 finer
  * there). The field is the Lipschitz envelope min_s (h_s + grading · |x − x_s|) on a background
  * grid, computed with a two-pass chamfer sweep (8 neighbours; ≤ 8 % anisotropy, conservative).
  * Cost: ray casting is O(samples × edges); the grid has at most ~40 000 cells.

@@ -1,10 +1,10 @@
 /**
  * Contract of core/mesh: conforming quality triangle meshes of a Region, for the torsion finite
- * elements (METHODS §7.8) and for the mesh view.
+ * elements (docs/methods.md §7.8) and for the mesh view.
  *
  * Coordinates are SECTION coordinates (x right, y up) in the region's length unit. Triangles are
  * listed counter-clockwise, three node indices each. Arcs are replaced by chords before meshing
- * (METHODS §2.6), so the mesh covers the inscribed polygon, not the exact arc region.
+ * (docs/methods.md §2.6), so the mesh covers the inscribed polygon, not the exact arc region.
  */
 import type { Diagnostic } from '../geometry/types.ts';
 
@@ -47,7 +47,7 @@ export interface MeshOptions {
   readonly layers?: number;
   /** Fewest elements across a compact piece: size ≤ √(piece area) / this (default 8). */
   readonly compactDivisions?: number;
-  /** Largest arc sweep per chord, degrees (default 2.5, METHODS §7.8: ≈ −0.063 % on a full circle). */
+  /** Largest arc sweep per chord, degrees (default 2.5, docs/methods.md §7.8: ≈ −0.063 % on a full circle). */
   readonly maxChordAngleDeg?: number;
   /** Minimum-angle target of the refinement, degrees (default 22; at most 30). */
   readonly minAngleDeg?: number;

@@ -6,7 +6,7 @@
  * Winding: kept as given. Each corner is rounded by an arc tangent to both neighbouring edges; its
  *   signed sweep equals the signed turning angle θ of the outline at that corner, so a convex
  *   corner of a counter-clockwise ring becomes a CCW arc (bulge > 0) and a concave corner (a root
- *   fillet) a CW arc (bulge < 0), as METHODS.md §2.4 requires. bulge = tan(θ/4) (DXF convention).
+ *   fillet) a CW arc (bulge < 0), as docs/methods.md §2.4 requires. bulge = tan(θ/4) (DXF convention).
  * Geometry: the tangent points lie r·tan(|θ|/2) from the corner along each edge (a circle
  *   tangent to two lines; Euclid, common practice). The arc end points therefore coincide with
  *   the neighbouring straight edges by construction.

@@ -8,7 +8,7 @@
  *   silently replaced by a default would be a wrong answer).
  * Limits: a length lies within [MIN_EXTENT, MAX_COORDINATE] = [1e-9, 1e9] in any unit, or is an
  *   optional 0 (beyond them a double keeps too few digits for second moments, or they underflow:
- *   METHODS.md §1.3); a count is at most MAX_COUNT, so a 400-byte file cannot ask for a million
+ *   docs/methods.md §1.3); a count is at most MAX_COUNT, so a 400-byte file cannot ask for a million
  *   plies and hang every command (cost grows with the count).
  */
 import type { Diagnostic } from '../geometry/types.ts';

@@ -12,7 +12,7 @@
  *   from tf + slope·o/2 at the web to tf − slope·o/2 at the toe, o being the outstand (AISC Manual
  *   Part 1 convention for sloped flanges, from memory).
  * Winding: outer rings counter-clockwise; the flange–web fillets are concave and so run clockwise
- *   about their centres (negative bulge), toe roundings convex and CCW (METHODS.md §2.4).
+ *   about their centres (negative bulge), toe roundings convex and CCW (docs/methods.md §2.4).
  * Toes of the flanges are sharp: rolled toe roundings are small and not tabulated.
  * Local origins (also in each type's `origin`): see the types below.
  */

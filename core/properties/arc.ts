@@ -1,5 +1,5 @@
 /**
- * Circular-arc helpers private to core/properties (METHODS §2.4, §2.5).
+ * Circular-arc helpers private to core/properties (docs/methods.md §2.4, §2.5).
  *
  * An arc segment is stored as its chord (start Ps, end Pe) and a bulge b = tan(sweep/4)
  * (b > 0 counter-clockwise about the centre, b < 0 clockwise; core/geometry/types.ts).
@@ -32,7 +32,7 @@ export const STRAIGHT_BULGE = 1e-16;
 
 export const isStraight = (b: number): boolean => Math.abs(b) < STRAIGHT_BULGE;
 
-/** Centre, radius and angles of the arc from (xs, ys) to (xe, ye) with bulge b ≠ 0 (METHODS §2.4). */
+/** Centre, radius and angles of the arc from (xs, ys) to (xe, ye) with bulge b ≠ 0 (docs/methods.md §2.4). */
 export function arcFromBulge(xs: number, ys: number, xe: number, ye: number, b: number): ArcGeometry {
   const dx = xe - xs;
   const dy = ye - ys;

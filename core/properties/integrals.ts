@@ -2,7 +2,7 @@
  * Raw area integrals of rings and regions: A, ∫x dA, ∫y dA, ∫x² dA, ∫y² dA, ∫xy dA.
  *
  * Method: Green's theorem in fan form, ∬ f dA = 1/(k+2) ∮ f (x dy − y dx) for a monomial f of
- * degree k (METHODS §1.1). Straight edges use the exact vertex sums of §1.1. Circular arcs
+ * degree k (docs/methods.md §1.1). Straight edges use the exact vertex sums of §1.1. Circular arcs
  * (bulge ≠ 0) use the exact decomposition edge(Ps→Pc) + sector + edge(Pc→Pe) with the binomial
  * shift of §2.2; arcs with |sweep| < 0.5 rad use 8-point Gauss–Legendre in t along the arc, with
  * points in half-angle form so the far centre never enters (§2.4; threshold: see SMALL_SWEEP).
@@ -20,7 +20,7 @@
  * only centroids need it added back.
  *
  * Accuracy: straight edges exact up to rounding (~n·ε); arcs at rounding level for every sweep
- * (closed form for |sweep| ≥ 0.5, where r/c ≤ ~2; quadrature below, up to r/c ≈ 1e6, METHODS §2.4).
+ * (closed form for |sweep| ≥ 0.5, where r/c ≤ ~2; quadrature below, up to r/c ≈ 1e6, docs/methods.md §2.4).
  * Not guaranteed: meaningful values for self-intersecting rings (winding-weighted, §1.1).
  */
 import { invariant } from '../invariant.ts';
@@ -30,7 +30,7 @@ import { arcFromBulge, isStraight } from './arc.ts';
 
 /**
  * Below this |sweep| the arc is integrated by 8-point Gauss–Legendre instead of the closed form.
- * METHODS §2.4 suggests 0.01; we use 0.5 rad because the closed form's cancellation (error growing
+ * docs/methods.md §2.4 suggests 0.01; we use 0.5 rad because the closed form's cancellation (error growing
  * like (r/c)⁴) still costs ~1e−7 of a segment's own integrals at 0.02 rad and ~1e−11 of a 60-wide
  * ring's Ixx at 0.016 rad, while the 8-point rule on this trigonometric polynomial of degree 3 has
  * a truncation error below ~1e−20 relative at 0.5 rad (error term Δ¹⁷·3¹⁶·(8!)⁴/(17·(16!)³)).
@@ -52,7 +52,7 @@ const GL_W = [
 /** Accumulator layout, true units: A, Qx=∫y, Qy=∫x, Ixx=∫y², Iyy=∫x², Ixy=∫xy. */
 type Acc = Float64Array;
 
-/** Fan-triangle (O, P, Q) integrals of one straight edge, added to acc (METHODS §1.1). */
+/** Fan-triangle (O, P, Q) integrals of one straight edge, added to acc (docs/methods.md §1.1). */
 function addEdge(x0: number, y0: number, x1: number, y1: number, acc: Acc): void {
   const c = x0 * y1 - x1 * y0;
   acc[0]! += c / 2;
@@ -63,7 +63,7 @@ function addEdge(x0: number, y0: number, x1: number, y1: number, acc: Acc): void
   acc[5]! += ((x0 * y1 + 2 * x0 * y0 + 2 * x1 * y1 + x1 * y0) * c) / 24;
 }
 
-/** Exact arc contribution by edge(Ps→Pc) + sector(Pc) + edge(Pc→Pe) (METHODS §2.2). */
+/** Exact arc contribution by edge(Ps→Pc) + sector(Pc) + edge(Pc→Pe) (docs/methods.md §2.2). */
 function addArcClosedForm(xs: number, ys: number, xe: number, ye: number, b: number, acc: Acc): void {
   const arc = arcFromBulge(xs, ys, xe, ye, b);
   const cx = xs + arc.centreDx;
@@ -95,7 +95,7 @@ function addArcClosedForm(xs: number, ys: number, xe: number, ye: number, b: num
   addEdge(cx, cy, xe, ye, acc);
 }
 
-/** Small-sweep arc: 8-point Gauss–Legendre of the fan form (1.1) along the arc (METHODS §2.4). */
+/** Small-sweep arc: 8-point Gauss–Legendre of the fan form (1.1) along the arc (docs/methods.md §2.4). */
 function addArcQuadrature(xs: number, ys: number, xe: number, ye: number, b: number, acc: Acc): void {
   const arc = arcFromBulge(xs, ys, xe, ye, b);
   const r = arc.radius;
@@ -126,7 +126,7 @@ function addArcQuadrature(xs: number, ys: number, xe: number, ye: number, b: num
   acc[5]! += (h * ixy) / 4;
 }
 
-/** Hot path for a ring of straight edges: one pass, six accumulators, no allocation (METHODS §1.4). */
+/** Hot path for a ring of straight edges: one pass, six accumulators, no allocation (docs/methods.md §1.4). */
 function straightRingSums(xy: Float64Array, ox: number, oy: number, acc: Acc): void {
   const n = xy.length >> 1;
   let xp = xy[2 * n - 2]! - ox;
@@ -201,7 +201,7 @@ export function ringIntegrals(ring: Ring, ox: number, oy: number): RawIntegrals 
   return toRaw(acc, ox, oy, 'ringIntegrals');
 }
 
-/** Centre of the bounding box of all vertices of the region (the local origin of METHODS §1.3). */
+/** Centre of the bounding box of all vertices of the region (the local origin of docs/methods.md §1.3). */
 export function vertexBoxCentre(region: Region): [number, number] {
   let xMin = Infinity, xMax = -Infinity, yMin = Infinity, yMax = -Infinity;
   for (const polygon of region) {

@@ -1,5 +1,5 @@
 /**
- * Elastic section moduli about the centroidal x, y axes and the principal axes (METHODS §4).
+ * Elastic section moduli about the centroidal x, y axes and the principal axes (docs/methods.md §4).
  *
  *   SxTop = Ix/(yMax − cy), SxBottom = Ix/(cy − yMin), SyRight = Iy/(xMax − cx), SyLeft = Iy/(cx − xMin)
  *   S1± = I1 / (extreme v on the ± side), S2± = I2 / (extreme u on the ± side)
@@ -54,7 +54,7 @@ export function outerProjectionRange(region: Region, ux: number, uy: number, ox 
   return { min: out[0], max: out[1] };
 }
 
-/** Elastic moduli of a region with the given centroidal and principal moments (METHODS §4). */
+/** Elastic moduli of a region with the given centroidal and principal moments (docs/methods.md §4). */
 export function elasticModuli(region: Region, m: ModuliInput): ElasticModuli {
   const x = outerProjectionRange(region, 1, 0, m.cx, m.cy);
   const y = outerProjectionRange(region, 0, 1, m.cx, m.cy);

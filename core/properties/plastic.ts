@@ -1,6 +1,6 @@
 /**
  * Plastic neutral axis (PNA) and plastic modulus for bending with the PNA in any direction
- * (METHODS §5), for one region or for several weighted regions (materials).
+ * (docs/methods.md §5), for one region or for several weighted regions (materials).
  *
  * Geometry: the PNA is parallel to t = (cos θ, sin θ); its normal is n = (−sin θ, cos θ) and each
  * point has the coordinate s = n·p. θ = 0° gives s = y (bending about x); θ = −90° gives s = x
@@ -66,7 +66,7 @@ export interface WeightedPlasticAxis {
 export interface PlasticAxis extends WeightedPlasticAxis {
   /** Plastic modulus ∫ |s − d| dA. */
   readonly Z: number;
-  /** ∫ sign(s − d)·(t·p) dA (METHODS §5.1). */
+  /** ∫ sign(s − d)·(t·p) dA (docs/methods.md §5.1). */
   readonly Zperp: number;
   /** True when |Zperp| > 1e−9·Z: the plastic moment is not parallel to the PNA. */
   readonly momentNotParallel: boolean;
@@ -260,7 +260,7 @@ function pushStraight(out: PieceList, x0: number, y0: number, x1: number, y1: nu
 }
 
 /**
- * Offsets τ (in sweep order) where the arc crosses the line s = d (METHODS §2.5). The closed form
+ * Offsets τ (in sweep order) where the arc crosses the line s = d (docs/methods.md §2.5). The closed form
  * t = ψ ± acos(·) locates a crossing only to ~ε·r along the arc, which is useless for nearly
  * straight arcs (r ≫ chord); instead the sweep is split where the arc runs parallel to the line
  * (t = ψ, ψ + π: s(τ) is monotone between), and each sign change is solved in τ with Brent's
@@ -350,7 +350,7 @@ interface Side {
 /**
  * Straight-edged ring: A, ∫s dA and ∫t dA over the part with s ≥ d, in one pass with no clipping
  * output. In the right-handed (t, s) frame Green's theorem gives A = ∮ t ds, ∫s dA = ∮ t·s ds and
- * ∫t dA = ∮ ½t² ds (METHODS §1.1); the cut line adds nothing (ds = 0 along it), so each sum runs
+ * ∫t dA = ∮ ½t² ds (docs/methods.md §1.1); the cut line adds nothing (ds = 0 along it), so each sum runs
  * over the parts of the edges with s ≥ d, where t is linear in s and the integrals are exact:
  * ∫ t ds = Δs(ta + tb)/2, ∫ t s ds = Δs(2ta·sa + ta·sb + tb·sa + 2tb·sb)/6, ∫ ½t² ds = Δs(ta² + ta·tb + tb²)/6.
  */
@@ -457,7 +457,7 @@ function brentRoot(g: (d: number) => number, a0: number, b0: number, ga: number,
 }
 
 /**
- * Straight-edged rings only (METHODS §5.3): the cut width w(s) is piecewise linear between the
+ * Straight-edged rings only (docs/methods.md §5.3): the cut width w(s) is piecewise linear between the
  * sorted, distinct vertex projections u. Each edge P→Q with s_P ≠ s_Q adds sign(s_Q − s_P)·t(s)
  * over its s-range (∮ t ds = A in the right-handed (t, s) frame); the pieces are accumulated as
  * difference arrays, one binary search per edge end, then integrated once from the top. Returns
@@ -526,7 +526,7 @@ const PLATEAU_WALK = 16;
 
 /**
  * One pass over straight-edged rings: the weighted area on the side s ≥ d and the weighted cut
- * width there, with no clipping output. In the right-handed (t, s) frame A = ∮ t ds (METHODS §1.1),
+ * width there, with no clipping output. In the right-handed (t, s) frame A = ∮ t ds (docs/methods.md §1.1),
  * and the cut line contributes nothing (ds = 0 along it), so A₊(d) = Σ over edges of ∫ t ds over
  * the part of the edge with s ≥ d; the cut width −dA₊/dd = Σ t at upward minus downward crossings.
  */
@@ -599,7 +599,7 @@ type NewtonFound =
   | { readonly kind: 'plateau'; readonly low: number; readonly high: number };
 
 /**
- * Straight-edged rings with many vertices (METHODS §5.3): Newton's method on g(d) = 2A₊ − W − N,
+ * Straight-edged rings with many vertices (docs/methods.md §5.3): Newton's method on g(d) = 2A₊ − W − N,
  * g′ = −2·width, safeguarded by bisection inside [s_min, s_max], locates d in O(n) per step with
  * no sorting; then the breakpoints around it are found by linear scans and confirmed by exact
  * evaluations, with the same tests as solveBalance: g > tolerance below and < −tolerance above
@@ -820,7 +820,7 @@ function plasticAxisCore(pieces: readonly WeightedRegion[], angleDeg: Degrees, a
 
 /**
  * PNA of several weighted regions with the PNA at angleDeg (CCW from +x), balancing
- * Σ w_i A_i(s > d) − Σ w_i A_i(s < d) = axialForce (METHODS §5.1, §5.3).
+ * Σ w_i A_i(s > d) − Σ w_i A_i(s < d) = axialForce (docs/methods.md §5.1, §5.3).
  * Throws RangeError for non-positive weights, empty input or |axialForce| > Σ w_i A_i.
  */
 export function plasticNeutralAxisWeighted(
@@ -843,7 +843,7 @@ export function plasticNeutralAxisWeightedByBisection(
   return plasticAxisCore(pieces, angleDeg, axialForce, false).axis;
 }
 
-/** PNA and plastic modulus of one region with the PNA at angleDeg (CCW from +x), METHODS §5. */
+/** PNA and plastic modulus of one region with the PNA at angleDeg (CCW from +x), docs/methods.md §5. */
 export function plasticNeutralAxis(region: Region, angleDeg: Degrees): PlasticAxis {
   const { axis, centroidPlus, centroidMinus } = plasticAxisCore([{ region, weight: 1 }], angleDeg, 0);
   return {
@@ -858,7 +858,7 @@ export function plasticNeutralAxis(region: Region, angleDeg: Degrees): PlasticAx
   };
 }
 
-/** Bending about x: the PNA is horizontal, at y = pnaY (METHODS §5). */
+/** Bending about x: the PNA is horizontal, at y = pnaY (docs/methods.md §5). */
 export function plasticAboutX(region: Region): { readonly pnaY: number; readonly Zx: number; readonly axis: PlasticAxis } {
   const axis = plasticNeutralAxis(region, 0 as Degrees);
   return { pnaY: axis.d, Zx: axis.Z, axis };

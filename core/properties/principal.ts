@@ -1,5 +1,5 @@
 /**
- * Principal axes, rotated and transferred second moments (METHODS §1.2, §3).
+ * Principal axes, rotated and transferred second moments (docs/methods.md §1.2, §3).
  *
  * Sign convention: Ixy = +∫ X·Y dA (Gere & Timoshenko, Mechanics of Materials); angles are
  * counter-clockwise from +x, in degrees at this API. Rotating the axes by θ:
@@ -12,7 +12,7 @@
  */
 import type { Degrees } from '../geometry/types.ts';
 
-/** Relative Mohr-circle radius below which a section is isotropic (METHODS §3). */
+/** Relative Mohr-circle radius below which a section is isotropic (docs/methods.md §3). */
 export const ISOTROPY_TOLERANCE = 1e-12;
 
 export interface PrincipalAxes {
@@ -47,7 +47,7 @@ export interface RotatedMoments {
   readonly Iuv: number;
 }
 
-/** Principal moments and the angle of the I1 axis from centroidal Ix, Iy, Ixy (METHODS §3). */
+/** Principal moments and the angle of the I1 axis from centroidal Ix, Iy, Ixy (docs/methods.md §3). */
 export function principalAxes(Ix: number, Iy: number, Ixy: number): PrincipalAxes {
   const mean = (Ix + Iy) / 2;
   const R = Math.hypot((Ix - Iy) / 2, Ixy);
@@ -63,7 +63,7 @@ export function principalAxes(Ix: number, Iy: number, Ixy: number): PrincipalAxe
 
 /**
  * Second moments about axes parallel to x and y through the point (a, b), transferred from the
- * centroid by the parallel-axis theorem (METHODS §1.2; valid only from the centroid).
+ * centroid by the parallel-axis theorem (docs/methods.md §1.2; valid only from the centroid).
  */
 export function secondMomentsAboutPoint(props: CentroidalMoments, a: number, b: number): AxisMoments {
   const dx = props.cx - a;
@@ -75,7 +75,7 @@ export function secondMomentsAboutPoint(props: CentroidalMoments, a: number, b: 
   };
 }
 
-/** Second moments about centroidal axes rotated CCW by thetaDeg (tensor law, METHODS §3). */
+/** Second moments about centroidal axes rotated CCW by thetaDeg (tensor law, docs/methods.md §3). */
 export function secondMomentsAtAngle(Ix: number, Iy: number, Ixy: number, thetaDeg: Degrees): RotatedMoments {
   const t = (2 * thetaDeg * Math.PI) / 180;
   const c = Math.cos(t);

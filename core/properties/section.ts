@@ -2,17 +2,17 @@
  * Section properties of one region (one material): every field of SectionProperties.
  *
  * Sign conventions (used by every module of core/properties):
- *   - x to the right, y up; angles counter-clockwise from +x, in degrees (METHODS §0);
- *   - Ixy = +∫ X·Y dA about the centroid (Gere & Timoshenko; METHODS §1.5): a right triangle
+ *   - x to the right, y up; angles counter-clockwise from +x, in degrees (docs/methods.md §0);
+ *   - Ixy = +∫ X·Y dA about the centroid (Gere & Timoshenko; docs/methods.md §1.5): a right triangle
  *     with its legs along +x and +y has Ixy < 0;
  *   - θ1 is the axis of I1 ≥ I2, in (−90°, 90°]; 0 with isotropic = true when the principal
- *     direction is undefined (METHODS §3);
+ *     direction is undefined (docs/methods.md §3);
  *   - S1± = I1 / extreme distance from axis 1 on the side of +v / −v, with v = −X sinθ1 + Y cosθ1;
- *     S2± likewise with u = X cosθ1 + Y sinθ1 (METHODS §4);
+ *     S2± likewise with u = X cosθ1 + Y sinθ1 (docs/methods.md §4);
  *   - Zx: PNA horizontal at y = pnaY; Zy: PNA vertical at x = pnaX; Z1, Z2: PNA along axis 1
- *     (bending about axis 1) and along axis 2 (METHODS §5).
+ *     (bending about axis 1) and along axis 2 (docs/methods.md §5).
  *
- * Accuracy: two passes (METHODS §1.3): raw sums about the bounding-box centre give the centroid;
+ * Accuracy: two passes (docs/methods.md §1.3): raw sums about the bounding-box centre give the centroid;
  * the second moments are then summed about the centroid itself, which avoids the A·yc²
  * subtraction. Expect ~1e−13 relative for polygons and exact arcs; ~1e−9 for sections drawn
  * ~1e6 length units from the origin (input representation error).
@@ -37,7 +37,7 @@ export interface CentroidalIntegrals {
   readonly Ixy: number;
 }
 
-/** Centroid and centroidal second moments from raw integrals about any origin (METHODS §1.2). */
+/** Centroid and centroidal second moments from raw integrals about any origin (docs/methods.md §1.2). */
 export function centroidalFromIntegrals(raw: RawIntegrals): CentroidalIntegrals {
   invariant(raw.A !== 0 && Number.isFinite(raw.A), `centroidalFromIntegrals: area is ${raw.A}`);
   const xl = raw.Qy / raw.A;
@@ -56,7 +56,7 @@ export function centroidalFromIntegrals(raw: RawIntegrals): CentroidalIntegrals 
  * A principal axis this close to x or y (degrees) is x or y with rounding in Ixy: a symmetric
  * section's Ixy comes out as ~1e−16·I, not 0, which tilts θ by ~1e−14°. Z1 and Z2 then reuse Zx
  * and Zy instead of two more plastic searches. Z changes with the axis angle by about Z per
- * radian, so the snap moves Z1, Z2 by at most ~2e−11 relative, well inside METHODS' 1e−9.
+ * radian, so the snap moves Z1, Z2 by at most ~2e−11 relative, well inside the 1e−9 of docs/methods.md §11.
  */
 const AXIS_SNAP_DEG = 1e-9;
 
@@ -72,7 +72,7 @@ function plasticModulusAt(region: Region, angleDeg: number, Zx: number, Zy: numb
 export function sectionProperties(region: Region): SectionProperties {
   const first = centroidalFromIntegrals(regionIntegrals(region));
   invariant(first.A > 0, `sectionProperties: the region's area is ${first.A}; a normalised region has positive area`);
-  // Second pass about the centroid itself (METHODS §1.3).
+  // Second pass about the centroid itself (docs/methods.md §1.3).
   const c = centroidalFromIntegrals(regionIntegrals(region, first.cx, first.cy));
   const { A, cx, cy, Ix, Iy, Ixy } = c;
   const p = principalAxes(Ix, Iy, Ixy);

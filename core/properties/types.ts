@@ -1,7 +1,7 @@
 /**
  * Result contract of core/properties. All values are in the region's length unit
  * (area L², moments L⁴, moduli L³, radii L). Sign convention, used everywhere:
- * Ixy = +∫ X·Y dA about the centroid; angles counter-clockwise from +x (METHODS §0, §1.5).
+ * Ixy = +∫ X·Y dA about the centroid; angles counter-clockwise from +x (docs/methods.md §0, §1.5).
  */
 
 /** Raw integrals about a stated origin (ox, oy): A, ∫x dA, ∫y dA, ∫x² dA, ∫y² dA, ∫xy dA in local coordinates x−ox, y−oy. */

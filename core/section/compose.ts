@@ -162,7 +162,7 @@ function boxesOverlap(a: Box, b: Box): boolean {
   return a.minX <= b.maxX && b.minX <= a.maxX && a.minY <= b.maxY && b.minY <= a.maxY;
 }
 
-/** Box of segment i of a ring, exact for arcs (axis extremes inside the sweep, METHODS §2.4), grown by a hair for rounding. */
+/** Box of segment i of a ring, exact for arcs (axis extremes inside the sweep, docs/methods.md §2.4), grown by a hair for rounding. */
 function segmentBox(ring: Ring, i: number, out: Box): Box {
   const { xy } = ring;
   const n = xy.length >> 1;

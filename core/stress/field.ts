@@ -9,7 +9,7 @@
  * Point location is exact for arcs: a point is inside a ring when the even–odd rule over the
  * chords, toggled by each circular segment (between chord and arc) that contains it, says so.
  * Units: lengths of the section; stress in the stiffness' force/length². Points exactly on a
- * boundary may fall either way. Source: METHODS.md §6, §9.1; even–odd rule (common practice).
+ * boundary may fall either way. Source: docs/methods.md §6, §9.1; even–odd rule (common practice).
  */
 import { regionBounds } from '../geometry/bounds.ts';
 import { arcOfSegment, ringVertexCount } from '../geometry/ring.ts';

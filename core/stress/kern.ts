@@ -2,7 +2,7 @@
  * The kern (core) of a section: where a compressive axial load may act without tension
  * (for several materials: without tensile strain) anywhere in the section.
  *
- * Method (METHODS.md §9.2): the convex hull (Andrew's monotone chain) of every outer-ring
+ * Method (docs/methods.md §9.2): the convex hull (Andrew's monotone chain) of every outer-ring
  * vertex and of points standing in for the arcs; each hull edge, written nᵀp = 1 in
  * coordinates about the centroid, gives the kern vertex e = −𝐉n/A with 𝐉 = [[Iy, Ixy],
  * [Ixy, Ix]]; several materials use EA and the EI tensor instead of A and 𝐉.
@@ -19,7 +19,7 @@
  *
  * Units: the section's length unit. Requires a valid, normalised region (outer rings CCW) and a
  * stiffness about the centroid that lies strictly inside the hull.
- * Source: METHODS.md §9.2; A. M. Andrew, "Another efficient algorithm for convex hulls in two
+ * Source: docs/methods.md §9.2; A. M. Andrew, "Another efficient algorithm for convex hulls in two
  * dimensions", Inf. Proc. Letters 9 (1979) (from memory for the bibliographic details).
  */
 import { arcOfSegment, ringVertexCount } from '../geometry/ring.ts';

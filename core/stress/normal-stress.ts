@@ -1,11 +1,11 @@
 /**
  * Normal stress under N, Mx, My by the unsymmetric bending formula, for one or several materials.
  *
- * Sign convention (METHODS.md §9.1): N = ∫σ dA (tension +), Mx = ∫σ·Y dA (tension at +Y when
+ * Sign convention (docs/methods.md §9.1): N = ∫σ dA (tension +), Mx = ∫σ·Y dA (tension at +Y when
  * Mx > 0), My = ∫σ·X dA (tension at +X when My > 0), about the (E-weighted) centroid.
  * Right-hand moment vector components convert with Mx = Mx_vec, My = −My_vec.
  *
- * Strain plane (METHODS.md §6): ε(X, Y) = N/EA + [(My·EIx − Mx·EIxy)X + (Mx·EIy − My·EIxy)Y] / D,
+ * Strain plane (docs/methods.md §6): ε(X, Y) = N/EA + [(My·EIx − Mx·EIxy)X + (Mx·EIy − My·EIxy)Y] / D,
  * D = EIx·EIy − EIxy², and σ_i = E_i·ε in material i. For one material give a stiffness built
  * with E = 1 (EA = A, EI = I): the "strain" is then the stress itself, formula (9.1).
  *
@@ -13,7 +13,7 @@
  * in force/length² of the same system. Does not: include shear stress beyond the average V/A,
  * or any non-linear material behaviour. Tolerance: none (closed form).
  * Source: Gere & Timoshenko, Mechanics of Materials (unsymmetric bending); Boresi & Schmidt,
- * Advanced Mechanics of Materials (generalised flexure formula); METHODS.md §6, §9.1.
+ * Advanced Mechanics of Materials (generalised flexure formula); docs/methods.md §6, §9.1.
  */
 import { extremeAlong } from '../geometry/bounds.ts';
 import type { Point, Region } from '../geometry/types.ts';
@@ -46,7 +46,7 @@ export interface StrainPlane {
   readonly ky: number;
 }
 
-/** The linear strain field of the section under the given forces (METHODS.md §6). */
+/** The linear strain field of the section under the given forces (docs/methods.md §6). */
 export function strainPlane(s: SectionStiffness, f: SectionForces): StrainPlane {
   const D = s.EIx * s.EIy - s.EIxy * s.EIxy;
   invariant(s.EA > 0, 'strainPlane: EA must be positive');
@@ -79,7 +79,7 @@ export interface StressExtremes {
 /**
  * Largest and smallest stress over a region of one material, with where they occur: a linear
  * field peaks on the outer boundary, at a vertex or at an arc's extreme point along the
- * gradient (METHODS.md §9.1). With a zero gradient (pure axial) the first vertex is reported.
+ * gradient (docs/methods.md §9.1). With a zero gradient (pure axial) the first vertex is reported.
  */
 export function stressExtremes(p: StrainPlane, E: number, region: Region): StressExtremes {
   const len = Math.hypot(p.kx, p.ky);
@@ -111,7 +111,7 @@ export interface BoxBounds {
   readonly maxY: number;
 }
 
-/** Where the strain plane is zero (METHODS.md §9.1: α X + β Y = −N/A, direction atan2(−α, β)). */
+/** Where the strain plane is zero (docs/methods.md §9.1: α X + β Y = −N/A, direction atan2(−α, β)). */
 export function neutralAxis(p: StrainPlane, bounds?: BoxBounds): NeutralAxis {
   const g2 = p.kx * p.kx + p.ky * p.ky;
   if (g2 === 0) return { exists: false, point: [p.cx, p.cy], angleDeg: 0, segment: null };

@@ -1,9 +1,9 @@
 /**
- * Straight-sided 6-node triangle (T6) for the Saint-Venant warping function (METHODS §7.3;
+ * Straight-sided 6-node triangle (T6) for the Saint-Venant warping function (docs/methods.md §7.3;
  * Zienkiewicz, Taylor & Zhu, The Finite Element Method, quadratic triangle).
  * Local nodes: 0, 1, 2 corners (CCW), 3 on edge 0–1, 4 on 1–2, 5 on 2–0.
  * K_e = ∫ ∇N·∇Nᵀ dA and F_e = ∫ (Y ∂N/∂X − X ∂N/∂Y) dA have degree-2 integrands: the 3-point
- * mid-edge rule is exact. M_e = ∫ N Nᵀ dA is the closed form of METHODS §7.3 (degree 4).
+ * mid-edge rule is exact. M_e = ∫ N Nᵀ dA is the closed form of docs/methods.md §7.3 (degree 4).
  */
 
 /** Area coordinates and weights (× area) of the 3-point degree-2 rule: edge mid-points. */
@@ -13,7 +13,7 @@ export const MIDEDGE_RULE: readonly (readonly [number, number, number, number])[
   [0.5, 0, 0.5, 1 / 3],
 ];
 
-/** Dunavant (1985) 6-point degree-4 rule [weights from METHODS §7.3, verified by the tests]. */
+/** Dunavant (1985) 6-point degree-4 rule [weights from docs/methods.md §7.3, verified by the tests]. */
 export const DUNAVANT6: readonly (readonly [number, number, number, number])[] = (() => {
   const a1 = 0.445948490915965;
   const b1 = 0.10810301816807;
@@ -78,7 +78,7 @@ export function shapeDerivatives(l1: number, l2: number, l3: number, g: readonly
 
 /**
  * Element stiffness (6 × 6, row-major, into ke) and load (into fe) for nodal coordinates
- * x[0..5], y[0..5] relative to the centroid (METHODS §7.2 area-form right-hand side).
+ * x[0..5], y[0..5] relative to the centroid (docs/methods.md §7.2 area-form right-hand side).
  */
 const scratchX = new Float64Array(6);
 const scratchY = new Float64Array(6);

@@ -1,10 +1,10 @@
 /**
  * Torsion constant J, Trefftz shear centre (xs, ys) and warping constant Cw of ONE material
- * region by finite elements (METHODS §7; Pilkey 2002). Pure TypeScript, no DOM or Node: it runs
+ * region by finite elements (docs/methods.md §7; Pilkey 2002). Pure TypeScript, no DOM or Node: it runs
  * in the editor's Web Worker and in the command line alike.
  *
  * One material only: the caller passes the Region of the parts that share one shear modulus
- * (union them first). A section of several materials needs the G-weighted form of METHODS §7.7,
+ * (union them first). A section of several materials needs the G-weighted form of docs/methods.md §7.7,
  * which this module does not do.
  *
  * Dense outlines (thousands of vertices along a curve, as imported from drawings) are simplified
@@ -17,15 +17,15 @@
  * then split into four (nested mesh at the requested layers). The warping function is solved on
  * both levels by conjugate gradients preconditioned with symmetric Gauss–Seidel (sparse.ts; the
  * coarse solution, exactly prolongated, starts the fine solve).
- * The constants come from the fine level. Because J_h ≥ J_{h/2} ≥ J (minimum principle, METHODS
- * §7.2), J_coarse − J_fine is a lower bound of the coarse error; the reported jRelativeError is
+ * The constants come from the fine level. Because J_h ≥ J_{h/2} ≥ J (minimum principle,
+ * docs/methods.md §7.2), J_coarse − J_fine is a lower bound of the coarse error; the reported jRelativeError is
  * the Richardson estimate of the fine error, (J_c − J_f)/((2^p − 1)·J_f) with p = 4/3 when the
  * section has sharp re-entrant corners (the r^{2/3} corner rate) and p = 2 otherwise (a
  * conservative rate for T6), plus 1.25·Δφ²/3 for arcs replaced by chords of sweep Δφ (the
- * chord deficit of a full circle, METHODS §7.8, rounded up), which the FE comparison cannot see.
+ * chord deficit of a full circle, docs/methods.md §7.8, rounded up), which the FE comparison cannot see.
  * Lengths in the region's unit; xs, ys in section coordinates. iterations = fine-level PCG
  * iterations. Shear stress per unit torque: torsionStressField. Sharp re-entrant corners make
- * the theoretical stress unbounded there (METHODS §7.6); the field shows a finite mesh value.
+ * the theoretical stress unbounded there (docs/methods.md §7.6); the field shows a finite mesh value.
  */
 import type { Region } from '../geometry/types.ts';
 import { MeshCancelledError, MeshInputError, meshGraph, regionGraph, type MeshSimplification, type PlanarGraph, type TriangleMesh } from '../mesh/index.ts';
@@ -204,7 +204,7 @@ export function torsionAnalysis(region: Region, options: TorsionOptions = {}): T
     });
     const p = base.reentrantCorners > 0 ? 4 / 3 : 2;
     const feError = Math.max(0, solveC.J - solveF.J) / ((2 ** p - 1) * solveF.J);
-    // Δφ²/3 is the measured full-circle deficit (METHODS §7.8); ×1.25 makes it an upper estimate.
+    // Δφ²/3 is the measured full-circle deficit (docs/methods.md §7.8); ×1.25 makes it an upper estimate.
     const chordError = (1.25 * base.maxChordSweep * base.maxChordSweep) / 3;
     const simplified = base.simplification;
     const result: TorsionResult = {
@@ -246,7 +246,7 @@ export function torsionConstants(region: Region, options: TorsionOptions = {}): 
   return torsionAnalysis(region, options).result;
 }
 
-/** τ_zX = (T/J)(∂ω/∂X − Y), τ_zY = (T/J)(∂ω/∂Y + X) per unit torque T (METHODS §7.6). */
+/** τ_zX = (T/J)(∂ω/∂X − Y), τ_zY = (T/J)(∂ω/∂Y + X) per unit torque T (docs/methods.md §7.6). */
 export function torsionStressField(analysis: TorsionAnalysis): TorsionStressField {
   const { mesh, solution: s } = analysis;
   const { gx, gy } = nodalGradient(mesh, s.omega);

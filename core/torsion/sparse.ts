@@ -1,7 +1,7 @@
 /**
  * Symmetric sparse matrices in compressed-row form (CSR, Float64Array/Int32Array) and a
  * conjugate-gradient solver preconditioned with symmetric Gauss–Seidel (Eisenstat's form, see
- * pcgSolve) for the singular, consistent Neumann system of the warping function (METHODS §7.4,
+ * pcgSolve) for the singular, consistent Neumann system of the warping function (docs/methods.md §7.4,
  * §7.9, where the methods note suggests a plain diagonal (Jacobi) preconditioner instead).
  * The null space is the constants on each connected component: the right-hand side is made
  * orthogonal to it (per-component mean removed) and the iterate's per-component mean is removed

@@ -1,5 +1,5 @@
 /**
- * Result contract of core/torsion (finite-element Saint-Venant torsion, METHODS §7).
+ * Result contract of core/torsion (finite-element Saint-Venant torsion, docs/methods.md §7).
  * Lengths in the region's unit; xs, ys are section coordinates (not centroidal).
  */
 export interface TorsionResult {

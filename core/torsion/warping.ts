@@ -1,9 +1,9 @@
 /**
  * Saint-Venant warping function on a straight-sided T6 mesh, and the section constants from it
- * (METHODS §7.1–7.5; Pilkey 2002, torsion and warping chapters).
+ * (docs/methods.md §7.1–7.5; Pilkey 2002, torsion and warping chapters).
  *
  * Coordinates X, Y are relative to the mesh centroid. Ip, Ix, Iy, Ixy and the centroid are
- * integrated over the same mesh (METHODS §7.2: mixing exact-arc Ip with a chord mesh would
+ * integrated over the same mesh (docs/methods.md §7.2: mixing exact-arc Ip with a chord mesh would
  * exceed the FE error). J = Ip − Fᵀω (evaluated as the energy functional, see below); the Trefftz shear centre from ∫Xω, ∫Yω; Cw = ∫ω_S² about
  * the shear centre. One material: G cancels. Disconnected components twist independently: J
  * adds; each component's ω is given zero mean, so xs, ys and Cw then treat the pieces as
@@ -45,7 +45,7 @@ export function quadraticMesh(xy: Float64Array, triangles: Int32Array): Quadrati
 }
 
 /**
- * The same mesh with nodes renumbered by reverse Cuthill–McKee (METHODS §7.9): neighbours get
+ * The same mesh with nodes renumbered by reverse Cuthill–McKee (docs/methods.md §7.9): neighbours get
  * nearby numbers, which keeps the Gauss–Seidel sweeps effective and the memory access local.
  */
 export function bandOrdered(q: QuadraticMesh): QuadraticMesh {
@@ -204,7 +204,7 @@ function meshCentroid(q: QuadraticMesh): Moments {
   let sx = 0;
   let sy = 0;
   const e = q.elements;
-  // Local origin at the first node keeps the sums well conditioned (METHODS §1.3).
+  // Local origin at the first node keeps the sums well conditioned (docs/methods.md §1.3).
   const ox = q.xy[0] ?? 0;
   const oy = q.xy[1] ?? 0;
   for (let t = 0; t < e.length; t += 6) {

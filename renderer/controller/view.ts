@@ -1,6 +1,6 @@
 /**
  * The canvas view: section coordinates (y up, document unit) ↔ screen pixels (y down).
- * This is the one place the y axis flips (METHODS §0): screen = (ox + x·s, oy − y·s).
+ * This is the one place the y axis flips (docs/methods.md §0): screen = (ox + x·s, oy − y·s).
  */
 import type { Box, Vec } from '../editor/geometry.ts';
 

@@ -1,7 +1,7 @@
 /**
  * `sectionsmith props` on a 1,000,000-vertex GeoJSON polygon, as a process, against a bare node
  * process that reads and parses the same file and runs the Green's-theorem vertex loop
- * (METHODS §1.1, about the first vertex) — the least any tool must do. Both are timed from
+ * (docs/methods.md §1.1, about the first vertex) — the least any tool must do. Both are timed from
  * spawn to exit, alternately, median of 3; target ratio ≤ 2. The file (an ellipse of 1e6
  * vertices, ~40 MB) is generated in a temporary directory and removed afterwards.
  */

@@ -23,7 +23,7 @@ function bigRing(count = N): Float64Array {
   return xy;
 }
 
-/** The baseline: the plain vertex sums of METHODS §1.1, nothing else. */
+/** The baseline: the plain vertex sums of docs/methods.md §1.1, nothing else. */
 function bareGreen(xy: Float64Array): number {
   const n = xy.length >> 1;
   let xp = xy[2 * n - 2]!, yp = xy[2 * n - 1]!;

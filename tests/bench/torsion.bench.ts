@@ -11,7 +11,7 @@
  *    (what the wall time would be on an idle machine), the iterations of both levels and the
  *    time per phase (mesh, assemble, solve, post).
  *  - torsion-W14X90-J: J at the default mesh. Baseline: J on the reference mesh (layers 12),
- *    solved in this run; FE J decreases under refinement (METHODS §7.2), so the reference is
+ *    solved in this run; FE J decreases under refinement (docs/methods.md §7.2), so the reference is
  *    the better value. Ratio = J / J_ref; the detail states the error against the 0.5 % target.
  *  - torsion-ellipse-4096-time and torsion-hollow-circle-8192-time: an ellipse polygon of 4,096
  *    vertices (a = 60, b = 35) and a hollow circle of two 4,096-vertex rings (D = 100, d = 84),

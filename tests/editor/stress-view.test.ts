@@ -76,7 +76,7 @@ describe('stress view: forces with units', () => {
   });
 
   it('a steel plate on an aluminium plate under N alone: one strain, so the stresses of the parts stand as E_steel : E_aluminium', () => {
-    // Uniform strain ε = N/EA in both (METHODS §6): σ_i = E_i·ε, so σ_steel/σ_al = E_steel/E_al (identity).
+    // Uniform strain ε = N/EA in both (docs/methods.md §6): σ_i = E_i·ε, so σ_steel/σ_al = E_steel/E_al (identity).
     const steel = { ...common, id: 's', name: 'steel', type: 'rectangle', width: 100, height: 20, placement: { ...common.placement, y: 60 }, material: 'astm-a992' } as const;
     const alu = { ...common, id: 'a', name: 'alu', type: 'rectangle', width: 100, height: 100, material: 'al-6061-t6' } as const;
     const doc: SectionDocument = { ...emptyDoc(), parts: [steel, alu] };

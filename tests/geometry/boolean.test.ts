@@ -148,7 +148,7 @@ describe('flattenRing', () => {
       const mid = Math.hypot((x + x2) / 2 - 1, (y + y2) / 2 - 1);
       expect(r - mid).toBeLessThanOrEqual(s);
     }
-    // Piece count per semicircle: ceil(π / (2·acos(1 − s/r))) (METHODS.md §2.6).
+    // Piece count per semicircle: ceil(π / (2·acos(1 − s/r))) (docs/methods.md §2.6).
     expect(flat.pieces[0]).toBe(Math.ceil(Math.PI / (2 * Math.acos(1 - s / r))));
     // Original vertices are copied bit for bit.
     expect([flat.xy[0], flat.xy[1]]).toEqual([8, 1]);

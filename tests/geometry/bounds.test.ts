@@ -3,7 +3,7 @@ import { extremeAlong, regionBounds, ringFromPoints } from '../../core/geometry/
 import { circle, piece, square } from './helpers.ts';
 
 describe('regionBounds', () => {
-  it('reaches the arc extreme points of a circle of two arcs: centre ± r on both axes (METHODS.md §2.4)', () => {
+  it('reaches the arc extreme points of a circle of two arcs: centre ± r on both axes (docs/methods.md §2.4)', () => {
     const b = regionBounds([piece(circle(3, -2, 5))]);
     expect(b?.minX).toBeCloseTo(-2, 13);
     expect(b?.maxX).toBeCloseTo(8, 13);

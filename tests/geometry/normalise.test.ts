@@ -64,7 +64,7 @@ describe('normaliseRegion', () => {
     expect(only(normaliseRegion([piece(ring)])).outer).toEqual(ring);
   });
 
-  it('gives the same ring, up to its start vertex, whichever way the input ran (METHODS.md §11: reverse then re-normalise)', () => {
+  it('gives the same ring, up to its start vertex, whichever way the input ran (docs/methods.md §11: reverse then re-normalise)', () => {
     fc.assert(
       fc.property(fc.array(fc.double({ min: 1, max: 9, noNaN: true }), { minLength: 3, maxLength: 16 }), fc.boolean(), (radii, asHole) => {
         const ring = starRing(1, -2, radii);

@@ -8,7 +8,7 @@ describe('ringSignedArea', () => {
     expect(ringSignedArea(reverseRing(square(0, 0, 3, 2)))).toBe(-6);
   });
 
-  it('keeps its digits far from the origin: a 100 × 200 rectangle at (1.2e6, −7.7e6) has area 20 000 exactly (METHODS.md §1.3)', () => {
+  it('keeps its digits far from the origin: a 100 × 200 rectangle at (1.2e6, −7.7e6) has area 20 000 exactly (docs/methods.md §1.3)', () => {
     expect(ringSignedArea(square(1.2e6, -7.7e6, 1.2e6 + 100, -7.7e6 + 200))).toBe(20000);
   });
 
@@ -48,7 +48,7 @@ describe('reverseRing', () => {
 });
 
 describe('arcOfSegment', () => {
-  it('recovers a quarter circle from bulge tan(π/8): centre (0,0), r 5, start angle 0, sweep +π/2 (METHODS.md §2.4)', () => {
+  it('recovers a quarter circle from bulge tan(π/8): centre (0,0), r 5, start angle 0, sweep +π/2 (docs/methods.md §2.4)', () => {
     const ring = ringFromPoints([[5, 0], [0, 5], [0, 0]], [Math.tan(Math.PI / 8), 0, 0]);
     const arc = arcOfSegment(ring, 0);
     expect(arc).not.toBeNull();

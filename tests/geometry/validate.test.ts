@@ -56,7 +56,7 @@ describe('validateRegion: rings that are fine', () => {
     expect(codes(validateRegion([piece(half, [tri(5.1)])]))).toEqual(['hole-outside']);
   });
 
-  it('tolerates a repeated closing vertex and repeated consecutive vertices (harmless input, METHODS.md §1.1)', () => {
+  it('tolerates a repeated closing vertex and repeated consecutive vertices (harmless input, docs/methods.md §1.1)', () => {
     const ring = ringFromPoints([[0, 0], [3, 0], [3, 0], [3, 2], [0, 2], [0, 0]]);
     expect(validateRegion([piece(ring)])).toEqual([]);
   });

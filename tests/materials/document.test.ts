@@ -15,7 +15,7 @@ function doc(parts: SectionDocument['parts'], defaultMaterial: string | null = n
   };
 }
 
-describe('document parts split into material pieces (later part wins; METHODS §6 overlaps, option (a))', () => {
+describe('document parts split into material pieces (later part wins; docs/methods.md §6 overlaps, option (a))', () => {
   it('a later aluminium bar over a steel bar takes the overlap; a subtract hole cuts both; areas add up exactly', () => {
     const d = doc([
       rectPart('steel bar', 'astm-a36', 0, 0, 100, 20), // x −50..50, y −10..10

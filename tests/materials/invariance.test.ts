@@ -14,11 +14,11 @@ const pieces: MaterialPiece[] = [
 ];
 const base = compositeProperties(pieces, 'mm');
 
-describe('invariance of the E-weighted section (METHODS §11 invariance tests)', () => {
+describe('invariance of the E-weighted section (docs/methods.md §11 invariance tests)', () => {
   it('translating every piece by (1.2e6, −7.7e6) mm leaves EA, EIx, EIy, EIxy unchanged and moves the centroid by the same amount', () => {
     const moved = compositeProperties(pieces.map((p) => ({ ...p, region: translateRegion(p.region, 1.2e6, -7.7e6) })), 'mm');
     expect(rel(moved.EA, base.EA)).toBeLessThan(1e-12);
-    expect(rel(moved.EIx, base.EIx)).toBeLessThan(1e-9); // far-offset input representation, METHODS §11
+    expect(rel(moved.EIx, base.EIx)).toBeLessThan(1e-9); // far-offset input representation, docs/methods.md §11
     expect(rel(moved.EIy, base.EIy)).toBeLessThan(1e-9);
     expect(Math.abs(moved.EIxy - base.EIxy)).toBeLessThan(1e-9 * base.EIx);
     expect(Math.abs(moved.cx - 1.2e6 - base.cx)).toBeLessThan(1e-6);

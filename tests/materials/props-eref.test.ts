@@ -12,7 +12,7 @@ function run(doc: Record<string, unknown>, flags: FlagValues) {
   return { code, out, err };
 }
 
-// The bimaterial strip of METHODS §6 (tests/fixtures/bimaterial-strip.csv) as a document in mm:
+// The bimaterial strip of docs/methods.md §6 (tests/fixtures/bimaterial-strip.csv) as a document in mm:
 // steel 50 × 10 (E 200 000 MPa) under aluminium 50 × 20 (E 70 000 MPa); EA = 1.7e8 N·mm²/mm² (exact arithmetic).
 const material = (id: string, E: number) => ({ id, name: id, kind: 'other', stressUnit: 'MPa', E, nu: 0.3, density: 1000, fy: 250, strengthBasis: 'yield' });
 const part = (id: string, mat: string, y: number, height: number) => ({

@@ -39,7 +39,7 @@ describe('closed-form maximum deflections (analytic refs; Gere & Timoshenko, Roa
     const xi = (1 + Math.sqrt(33)) / 16;
     const expected = (w * L ** 4 * (39 + 55 * Math.sqrt(33))) / (65536 * EI);
     expect(rel(d.value, expected)).toBeLessThan(1e-12);
-    expect(1 / ((d.value * EI) / (w * L ** 4))).toBeCloseTo(184.6, 1); // METHODS §10 table: 184.6
+    expect(1 / ((d.value * EI) / (w * L ** 4))).toBeCloseTo(184.6, 1); // docs/methods.md §10 table: 184.6
     // Our fixed end is at x = 0, so the pinned end is at L.
     expect(Math.abs(L - d.at - xi * L)).toBeLessThan(1e-9 * L);
   });

@@ -40,7 +40,7 @@ describe('member check of a section (core/member/section-member.ts)', () => {
 });
 
 describe('plastic moment at any angle and average shear', () => {
-  it('square a = 100 with the PNA at 30°: Mp = fy·a³(cos t/4 + sin²t/(12 cos t)) (METHODS §5 square_axis_30deg, derived)', () => {
+  it('square a = 100 with the PNA at 30°: Mp = fy·a³(cos t/4 + sin²t/(12 cos t)) (docs/methods.md §5 square_axis_30deg, derived)', () => {
     const t = Math.PI / 6;
     const p = plasticCapacity([{ region: rect(-50, -50, 50, 50), material: steel }], 'mm', 30);
     const Z = 100 ** 3 * (Math.cos(t) / 4 + Math.sin(t) ** 2 / (12 * Math.cos(t))); // mm³

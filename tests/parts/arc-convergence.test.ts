@@ -1,6 +1,6 @@
 /**
  * The polygonised limit of an exact-arc part converges to the arc result like O(Δφ²)
- * (METHODS.md §11, invariance tests): the chords of an arc cut off circular segments whose area
+ * (docs/methods.md §11, invariance tests): the chords of an arc cut off circular segments whose area
  * is ~ r²Δφ³/12 each, so the total error scales with the sagitta r(1 − cos(Δφ/2)) ≈ rΔφ²/8.
  * Quartering the sagitta halves Δφ and should cut the error by a factor of about 4.
  */

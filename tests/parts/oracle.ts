@@ -3,8 +3,8 @@
  * - exactArea: polygon area of the vertices (shoelace) plus, for every arc, the signed circular
  *   segment r²(θ − sin θ)/2 on its chord (Roark's Formulas for Stress and Strain, 7th ed.,
  *   Table A.1, circular segment), with the radius from the bulge, r = c(1 + b²)/(4|b|)
- *   (METHODS.md §2.4).
- * - arcCentre: centre of an arc from its bulge (METHODS.md §2.4).
+ *   (docs/methods.md §2.4).
+ * - arcCentre: centre of an arc from its bulge (docs/methods.md §2.4).
  */
 import type { Region, Ring } from '../../core/geometry/types.ts';
 
@@ -35,7 +35,7 @@ export function exactArea(region: Region): number {
   return region.reduce((s, p) => s + exactRingArea(p.outer) + p.holes.reduce((h, ring) => h + exactRingArea(ring), 0), 0);
 }
 
-/** Centre of the arc on segment i (METHODS.md §2.4: Pc = M + ((1 − b²)/(4b))·n_L). */
+/** Centre of the arc on segment i (docs/methods.md §2.4: Pc = M + ((1 − b²)/(4b))·n_L). */
 export function arcCentre(ring: Ring, i: number): [number, number] {
   const [x0, y0] = ringPoint(ring, i);
   const [x1, y1] = ringPoint(ring, i + 1);

@@ -144,7 +144,7 @@ describe('rolled shapes', () => {
     for (const i of fillets) {
       expect(ring.bulge![i]).toBeCloseTo(-Math.tan(Math.PI / 8), 14);
       const [cx, cy] = arcCentre(ring, i);
-      // Tangent to the web face |x| = tw/2 and to the flange face |y| = d/2 − tf (METHODS §2.4).
+      // Tangent to the web face |x| = tw/2 and to the flange face |y| = d/2 − tf (docs/methods.md §2.4).
       expect(Math.abs(cx)).toBeCloseTo(0.22 + r, 12);
       expect(Math.abs(cy)).toBeCloseTo(7 - 0.71 - r, 12);
       // Both end points lie on a circle of radius r about that centre.

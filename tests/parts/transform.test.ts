@@ -1,7 +1,7 @@
 /**
  * Parts stay correct when placed: rotating a part by θ obeys the second-moment tensor law, and
  * mirroring (x → −x) keeps A, Ix, Iy and changes the sign of Ixy (Gere & Timoshenko, Mechanics of
- * Materials, §12.8–12.9; METHODS.md §3). Placement through core/geometry transformRegion.
+ * Materials, §12.8–12.9; docs/methods.md §3). Placement through core/geometry transformRegion.
  */
 import { describe, expect, it } from 'vitest';
 import { transformRegion } from '../../core/geometry/index.ts';

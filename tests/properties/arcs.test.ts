@@ -1,5 +1,5 @@
 /**
- * Exact circular arcs (METHODS §2) against closed forms and independent quadrature.
+ * Exact circular arcs (docs/methods.md §2) against closed forms and independent quadrature.
  */
 import { describe, expect, it } from 'vitest';
 import { plasticNeutralAxisWeighted, regionIntegrals, ringIntegrals, sectionProperties } from '../../core/properties/index.ts';
@@ -30,12 +30,12 @@ describe('full circle as exact arcs', () => {
     expectRel(p.cx, 7, EXACT);
     expectRel(p.cy, -3, EXACT, 1);
   });
-  it('a circle 1e6 away from the origin keeps Ix = πd⁴/64 to 1e-9 (local origin, METHODS §1.3)', () => {
+  it('a circle 1e6 away from the origin keeps Ix = πd⁴/64 to 1e-9 (local origin, docs/methods.md §1.3)', () => {
     const p = sectionProperties([poly(circleRing(1e6, -1e6, d / 2))]);
     expectRel(p.Ix, I, 1e-9);
     expectRel(p.cx, 1e6, 1e-12);
   });
-  it('raw integrals about the origin: A = πr², Qx = A·cy, Ixx_O = A·cy² + πr⁴/4 (METHODS §2.3 check)', () => {
+  it('raw integrals about the origin: A = πr², Qx = A·cy, Ixx_O = A·cy² + πr⁴/4 (docs/methods.md §2.3 check)', () => {
     const r = 30;
     const raw = ringIntegrals(circleRing(10, 20, r), 0, 0);
     expectRel(raw.A, Math.PI * r * r, EXACT);
@@ -73,7 +73,7 @@ describe('quarter-circle shapes', () => {
   });
 });
 
-describe('polygonised circle converges to the exact arc result like O(Δφ²) (METHODS §11)', () => {
+describe('polygonised circle converges to the exact arc result like O(Δφ²) (docs/methods.md §11)', () => {
   const r = 50;
   const exact = sectionProperties([poly(circleRing(0, 0, r))]).Ix;
   const ngon = (n: number) => {
@@ -130,7 +130,7 @@ function segmentOracle(c: number, sweep: number) {
   return sum;
 }
 
-describe('nearly straight and moderate arcs stay accurate (METHODS §2.4; quadrature below |Δt| = 0.5, closed form above)', () => {
+describe('nearly straight and moderate arcs stay accurate (docs/methods.md §2.4; quadrature below |Δt| = 0.5, closed form above)', () => {
   const c = 100;
   const rectangle = ringIntegrals(rectRing(0, 0, c, 50), 0, 0);
   for (const sweep of [1.2, 0.6, 0.49, 0.02, 0.0099, 0.001, 1e-5]) {
@@ -178,7 +178,7 @@ describe('arc ring reversal and fan-form consistency', () => {
   });
 });
 
-describe('arc extreme points in bounds and moduli (METHODS §2.4, §4)', () => {
+describe('arc extreme points in bounds and moduli (docs/methods.md §2.4, §4)', () => {
   it('semicircle rotated by 30°: the box holds the arc top (0, r) and left (−r, 0) and the end points elsewhere', () => {
     const r = 50;
     const c = Math.cos(Math.PI / 6), s = Math.sin(Math.PI / 6);

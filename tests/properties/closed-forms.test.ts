@@ -2,7 +2,7 @@
  * sectionProperties against textbook closed forms. Reference values come from
  * tests/fixtures/analytic_refs.csv (copied from the shared reference; its `source` column names
  * the book or derivation of each value) or from closed forms written out beside the check.
- * Tolerances: METHODS §11 (1e−12 exact sums, 1e−9 far offset, 1e−12 quadratic PNA, 1e−10 bisection PNA).
+ * Tolerances: docs/methods.md §11 (1e−12 exact sums, 1e−9 far offset, 1e−12 quadratic PNA, 1e−10 bisection PNA).
  */
 import { describe, expect, it } from 'vitest';
 import { sectionProperties, plasticNeutralAxis } from '../../core/properties/index.ts';
@@ -67,7 +67,7 @@ describe('rectangle 100 × 200 (analytic_refs.csv: rectangle)', () => {
   });
 });
 
-describe('rectangle drawn 7.7e6 from the origin (analytic_refs.csv: rectangle_far_offset, METHODS §1.3)', () => {
+describe('rectangle drawn 7.7e6 from the origin (analytic_refs.csv: rectangle_far_offset, docs/methods.md §1.3)', () => {
   const p = sectionProperties(farRectangle);
   it('centroid and Ix = bh³/12 to 1e-9 relative, Ixy = 0 to 1e-9·Ix', () => {
     expectRel(p.cx, ref(rows, 'rectangle_far_offset', 'xc'), 1e-9);
@@ -105,14 +105,14 @@ describe('equilateral triangle, side a = 60, base on the x axis', () => {
   const a = 60;
   const h = (a * Math.sqrt(3)) / 2;
   const p = sectionProperties([poly(ring([0, 0, a, 0, a / 2, h]))]);
-  it('Ix = Iy = √3 a⁴/96 and flagged isotropic with θ1 = 0 (Gere & Timoshenko, Mechanics of Materials, triangle properties; METHODS §3)', () => {
+  it('Ix = Iy = √3 a⁴/96 and flagged isotropic with θ1 = 0 (Gere & Timoshenko, Mechanics of Materials, triangle properties; docs/methods.md §3)', () => {
     const I = (Math.sqrt(3) * a ** 4) / 96;
     expectRel(p.Ix, I, EXACT);
     expectRel(p.Iy, I, EXACT);
     expect(p.isotropic).toBe(true);
     expect(p.thetaDeg).toBe(0);
   });
-  it('shape factor about the base-parallel axis is 4(2 − √2) = 2.343 (classical value, METHODS §5.1)', () => {
+  it('shape factor about the base-parallel axis is 4(2 − √2) = 2.343 (classical value, docs/methods.md §5.1)', () => {
     // S_min = Ix / (2h/3) = bh²/24 and Z = bh²(2 − √2)/6 for any triangle with a horizontal base (width linear in y).
     expectRel(p.Zx, (a * h * h * (2 - Math.SQRT2)) / 6, EXACT);
     expectRel(p.shapeFactorX, 4 * (2 - Math.SQRT2), EXACT);
@@ -223,13 +223,13 @@ describe('unequal angle 150 × 90 × 10, sharp corners: composition of two recta
     expectRel(p.Iy, Iy, EXACT);
     expectRel(p.Ixy, Ixy, EXACT);
   });
-  it('θ1 = ½ atan2(−2Ixy, Ix − Iy) ≈ 20.1° (METHODS §3 quotes 20.135°) and I1 − I2 = 2R (Mohr)', () => {
+  it('θ1 = ½ atan2(−2Ixy, Ix − Iy) ≈ 20.1° (docs/methods.md §3 quotes 20.135°) and I1 − I2 = 2R (Mohr)', () => {
     const theta = (0.5 * Math.atan2(-2 * Ixy, Ix - Iy) * 180) / Math.PI;
     expect(Math.abs(p.thetaDeg - theta)).toBeLessThan(1e-9);
     expect(Math.abs(p.thetaDeg - 20.135)).toBeLessThan(5e-4);
     expectRel(p.I1 - p.I2, 2 * Math.hypot((Ix - Iy) / 2, Ixy), 1e-11);
   });
-  it('about x the plastic moment is not parallel to the PNA (Z⊥ ≠ 0, METHODS §5.1)', () => {
+  it('about x the plastic moment is not parallel to the PNA (Z⊥ ≠ 0, docs/methods.md §5.1)', () => {
     const z = plasticNeutralAxis([poly(ring([0, 0, 90, 0, 90, 10, 10, 10, 10, 150, 0, 150]))], degrees(0));
     expect(z.momentNotParallel).toBe(true);
     expect(Math.abs(z.Zperp)).toBeGreaterThan(1e-3 * z.Z);
@@ -317,7 +317,7 @@ describe('diamond: a 100 × 100 square with its diagonals on the axes (analytic_
   });
 });
 
-describe('square of side a with the PNA at an arbitrary angle t (METHODS §5 square_axis_30deg)', () => {
+describe('square of side a with the PNA at an arbitrary angle t (docs/methods.md §5 square_axis_30deg)', () => {
   // Z(t) = a³ cos t/4 + a³ sin² t/(12 cos t) for |t| ≤ 45°: the two halves are trapezoids (derived).
   const a = 80;
   const square: Region = [poly(rectRing(-a / 2, -a / 2, a / 2, a / 2))];

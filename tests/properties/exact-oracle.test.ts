@@ -1,8 +1,8 @@
 /**
- * Exact-arithmetic oracle: the polygon sums of METHODS §1.1 evaluated here in BigInt rationals
+ * Exact-arithmetic oracle: the polygon sums of docs/methods.md §1.1 evaluated here in BigInt rationals
  * (independent of the engine) for random star-shaped integer polygons, some with holes, and for
  * the same polygons translated 1e6 away and scaled by 1e−4 (compared with the exact rational of
- * the transformed double-precision input). Engine vs exact: 1e−12 relative (METHODS §11).
+ * the transformed double-precision input). Engine vs exact: 1e−12 relative (docs/methods.md §11).
  */
 import { describe, it } from 'vitest';
 import { sectionProperties } from '../../core/properties/index.ts';
@@ -49,7 +49,7 @@ function exactOf(x: number): Q {
 
 interface ExactProps { A: Q; cx: Q; cy: Q; Ix: Q; Iy: Q; Ixy: Q }
 
-/** METHODS §1.1 vertex sums over rings of exact vertices, then §1.2 to the centroid, all exact. */
+/** docs/methods.md §1.1 vertex sums over rings of exact vertices, then §1.2 to the centroid, all exact. */
 function exactProps(rings: readonly (readonly Q[])[]): ExactProps {
   let a = new Q(0n), qx = new Q(0n), qy = new Q(0n), ixx = new Q(0n), iyy = new Q(0n), ixy = new Q(0n);
   const two = new Q(2n);

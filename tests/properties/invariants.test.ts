@@ -1,7 +1,7 @@
 /**
- * Identities every section must satisfy (METHODS §11 invariance tests; STYLE §16), fuzzed with
+ * Identities every section must satisfy (docs/methods.md §11 invariance tests; STYLE §16), fuzzed with
  * fast-check under a fixed seed: translation, rotation (tensor law), mirroring, ring reversal,
- * splitting, and the plastic-modulus identity Z = (A/2)(s̄₊ − s̄₋) (METHODS §5.4).
+ * splitting, and the plastic-modulus identity Z = (A/2)(s̄₊ − s̄₋) (docs/methods.md §5.4).
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
@@ -84,7 +84,7 @@ describe('invariants under fast-check (seed 20261201)', () => {
         // Principal direction is well defined only away from isotropy.
         fc.pre(a.I1 - a.I2 > 1e-6 * a.I1);
         expect(Math.abs(angleDiff180(b.thetaDeg, a.thetaDeg + phi))).toBeLessThan(1e-6);
-        // The rotated section's Ix is the original's moment about the axis at −φ (Gere & Timoshenko, METHODS §3).
+        // The rotated section's Ix is the original's moment about the axis at −φ (Gere & Timoshenko, docs/methods.md §3).
         expectRel(b.Ix, secondMomentsAtAngle(a.Ix, a.Iy, a.Ixy, degrees(-phi)).Iu, 1e-11, scale);
         const za = plasticNeutralAxis(region1(r), degrees(theta));
         const zb = plasticNeutralAxis(rotated, degrees(theta + phi));

@@ -1,5 +1,5 @@
 /**
- * The width-sweep bracket of the plastic neutral axis (METHODS §5.3) against the plain bisection
+ * The width-sweep bracket of the plastic neutral axis (docs/methods.md §5.3) against the plain bisection
  * over every breakpoint: both must return the same d and moment (exact identity — same balance,
  * same closed-form quadratic; 1e−12 relative), on random star polygons with holes, at several
  * angles, with and without axial force, and on a plateau (two separated pieces: mid-interval d).

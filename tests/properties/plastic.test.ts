@@ -1,6 +1,6 @@
 /**
  * Plastic neutral axis: weighted (several materials), axial force, plateaus, arcs, asymmetric
- * sections and bad input (METHODS §5). Closed forms are derived beside each check from the
+ * sections and bad input (docs/methods.md §5). Closed forms are derived beside each check from the
  * stress-block definition Z = ∫|s − d| dA (EN 1993-1-1 plastic modulus definition; Gere & Timoshenko).
  */
 import { describe, expect, it } from 'vitest';
@@ -61,7 +61,7 @@ describe('weighted plastic neutral axis (several materials)', () => {
   });
 });
 
-describe('plateau and breakpoint roots (METHODS §5.3)', () => {
+describe('plateau and breakpoint roots (docs/methods.md §5.3)', () => {
   it('two equal plates with a gap: the PNA is the middle of the gap, reported as a plateau with its interval', () => {
     // [0,100]×[0,10] and [0,100]×[50,60]: any d in [10, 50] balances the areas; Z = 2·1000·(distance of plate centroids)/2.
     const r = plasticNeutralAxis([poly(rectRing(0, 0, 100, 10)), poly(rectRing(0, 50, 100, 60))], degrees(0));
@@ -115,7 +115,7 @@ describe('PNA of sections with arcs (Brent on exact clipped arcs)', () => {
   });
 });
 
-describe('plastic moment not parallel to the PNA (METHODS §5.1)', () => {
+describe('plastic moment not parallel to the PNA (docs/methods.md §5.1)', () => {
   it('equal angle about x has Z⊥ ≠ 0 and is flagged; a rectangle has Z⊥ = 0 and is not', () => {
     const angle = plasticNeutralAxis([poly(ring([0, 0, 100, 0, 100, 10, 10, 10, 10, 100, 0, 100]))], degrees(0));
     expect(angle.momentNotParallel).toBe(true);

@@ -1,5 +1,5 @@
 /**
- * Principal axes, rotated and transferred second moments (METHODS §1.2, §3; Gere & Timoshenko,
+ * Principal axes, rotated and transferred second moments (docs/methods.md §1.2, §3; Gere & Timoshenko,
  * Mechanics of Materials: parallel-axis theorem, transformation equations, principal moments).
  */
 import { describe, expect, it } from 'vitest';
@@ -33,7 +33,7 @@ describe('parallel-axis transfer from the centroid (analytic_refs.csv: rectangle
   });
 });
 
-describe('principal axes (METHODS §3)', () => {
+describe('principal axes (docs/methods.md §3)', () => {
   it('I_u at θ1 equals I1, I_v equals I2 and the product vanishes (right triangle)', () => {
     const p = sectionProperties([poly(ring([0, 0, 120, 0, 0, 90]))]);
     const r = secondMomentsAtAngle(p.Ix, p.Iy, p.Ixy, degrees(p.thetaDeg));

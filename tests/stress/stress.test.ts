@@ -10,7 +10,7 @@ const refs = readRefs(new URL('../fixtures/analytic-refs-stress-member.csv', imp
 /** A single-material stiffness (E = 1): EA = A, EI = I. */
 const geometric = (A: number, cx: number, cy: number, Ix: number, Iy: number, Ixy: number): SectionStiffness => ({ EA: A, cx, cy, EIx: Ix, EIy: Iy, EIxy: Ixy });
 
-describe('normal stress by the unsymmetric bending formula (METHODS §9.1; Gere & Timoshenko)', () => {
+describe('normal stress by the unsymmetric bending formula (docs/methods.md §9.1; Gere & Timoshenko)', () => {
   it('rectangle 100×200, N = −200 kN, Mx = 30 kN·m: σ_top = 35 and σ_bottom = −55 N/mm² (analytic refs rectangle_stress)', () => {
     const s = geometric(20_000, 0, 0, (100 * 200 ** 3) / 12, (200 * 100 ** 3) / 12, 0);
     const p = strainPlane(s, { N: -200_000, Mx: 30e6, My: 0 });
@@ -38,10 +38,10 @@ describe('normal stress by the unsymmetric bending formula (METHODS §9.1; Gere 
     expect(rel(c.stiffness.EIx, Ix)).toBeLessThan(1e-12);
     expect(rel(c.stiffness.EIy, Iy)).toBeLessThan(1e-12);
     expect(rel(c.stiffness.EIxy, Ixy)).toBeLessThan(1e-12);
-    expect(c.thetaDeg).toBeCloseTo(20.135, 3); // METHODS §3: angle_150x90x10 θ1 = 20.135°
+    expect(c.thetaDeg).toBeCloseTo(20.135, 3); // docs/methods.md §3: angle_150x90x10 θ1 = 20.135°
   });
 
-  it('unequal angle under Mx alone: neutral axis at −47.70° (= atan(Ixy/Iy), METHODS §9.1 angle_150x90x10_stress)', () => {
+  it('unequal angle under Mx alone: neutral axis at −47.70° (= atan(Ixy/Iy), docs/methods.md §9.1 angle_150x90x10_stress)', () => {
     const na = neutralAxis(strainPlane(c.stiffness, { N: 0, Mx: 1e6, My: 0 }));
     expect(na.angleDeg).toBeCloseTo(-47.70, 2);
     expect(Math.abs(na.angleDeg - (Math.atan(Ixy / Iy) * 180) / Math.PI)).toBeLessThan(1e-9);
@@ -51,7 +51,7 @@ describe('normal stress by the unsymmetric bending formula (METHODS §9.1; Gere 
   it('unequal angle: the principal-axis route σ = N/A + M1 v/I1 + M2 u/I2 gives the same stress at every vertex', () => {
     const f = { N: -50_000, Mx: 4e6, My: -1.5e6 };
     const p = strainPlane(c.stiffness, f);
-    const t = (Math.atan2(-2 * Ixy, Ix - Iy)) / 2; // θ1 (Gere & Timoshenko; METHODS §3)
+    const t = (Math.atan2(-2 * Ixy, Ix - Iy)) / 2; // θ1 (Gere & Timoshenko; docs/methods.md §3)
     const mean = (Ix + Iy) / 2, R = Math.hypot((Ix - Iy) / 2, Ixy);
     const I1 = mean + R, I2 = mean - R;
     const M1 = f.Mx * Math.cos(t) - f.My * Math.sin(t), M2 = f.Mx * Math.sin(t) + f.My * Math.cos(t);
@@ -112,7 +112,7 @@ describe('stress field samples for a colour map', () => {
   });
 });
 
-describe('kern (METHODS §9.2)', () => {
+describe('kern (docs/methods.md §9.2)', () => {
   it('rectangle 100×200 with corners (0 0)-(100 200): rhombus with half-diagonals b/6 and h/6 (middle-third rule)', () => {
     const s = geometric(20_000, 50, 100, (100 * 200 ** 3) / 12, (200 * 100 ** 3) / 12, 0);
     const k = kern(rect(0, 0, 100, 200), s);

@@ -2,20 +2,20 @@
  * FE torsion constant J against closed forms (Timoshenko & Goodier, Theory of Elasticity,
  * torsion chapter): rectangle series, circle πd⁴/32, hollow circle π(D⁴ − d⁴)/32, ellipse
  * πa³b³/(a² + b²), equilateral triangle √3 a⁴/80. Tolerance 0.1 % at the default mesh
- * (METHODS §7.8: T6 with 3 layers is ≈ 0.1 % or better on these shapes).
+ * (docs/methods.md §7.8: T6 with 3 layers is ≈ 0.1 % or better on these shapes).
  * Curved boundaries are meshed as chord polygons: J of the inscribed polygon is lower by about
- * Δφ²/3 for a full circle (METHODS §7.8, measured on N-gon discs). At the default 2.5° per chord
+ * Δφ²/3 for a full circle (docs/methods.md §7.8, measured on N-gon discs). At the default 2.5° per chord
  * that is −0.063 %, inside the 0.1 % budget; at 3.6° it would be −0.132 %, outside it. The
  * default-mesh checks hold the raw 0.1 %, and once the deficit is added back, a tighter bound.
- * Polygonal sections: any conforming FE solution over-estimates J (minimum principle, METHODS
- * §7.2), so J_FE ≥ J_exact, and on the nested coarse/fine pair J_coarse ≥ J_fine.
+ * Polygonal sections: any conforming FE solution over-estimates J (minimum principle,
+ * docs/methods.md §7.2), so J_FE ≥ J_exact, and on the nested coarse/fine pair J_coarse ≥ J_fine.
  */
 import { describe, expect, it } from 'vitest';
 import { torsionAnalysis, torsionConstants } from '../../core/torsion/index.ts';
 import { annulus, disc, ellipsePolygon, polygon, rectangle, rectangleSeriesJ } from './shapes.ts';
 
 const relErr = (value: number, exact: number): number => value / exact - 1;
-/** Chord deficit of a full circle flattened at sweep Δφ (METHODS §7.8). */
+/** Chord deficit of a full circle flattened at sweep Δφ (docs/methods.md §7.8). */
 const chordDeficit = (sweepDeg: number): number => ((sweepDeg * Math.PI) / 180) ** 2 / 3;
 
 describe('rectangles: J within 0.1 % of the Saint-Venant series, from above', () => {

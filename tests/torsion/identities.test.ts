@@ -1,6 +1,6 @@
 /**
- * Identities of the discrete warping problem (METHODS §7.2, §7.4) and invariance under rigid
- * motion (METHODS §11):
+ * Identities of the discrete warping problem (docs/methods.md §7.2, §7.4) and invariance under rigid
+ * motion (docs/methods.md §11):
  *  - ΣF_i = 0 (Σ N_i = 1 on each element), to 1e-12 Σ|F_i|;
  *  - energy identity ωᵀKω = Fᵀω at the solution (to the solver tolerance);
  *  - the mesh integrates a polygon's area and polar moment exactly (straight-sided elements

@@ -1,9 +1,9 @@
 /**
  * The mesher (core/mesh) by its contract: quality (minimum angle ≥ 20°, the Ruppert/Chew target
- * band of METHODS §7.8), exact coverage of polygonal regions (holes removed), merging of
+ * band of docs/methods.md §7.8), exact coverage of polygonal regions (holes removed), merging of
  * touching parts, element layers through thin walls, grading at re-entrant corners, typed
  * errors for bad input, caps, cancellation. Torsion checks here use the rectangle series
- * (Timoshenko & Goodier) and the fact that disconnected pieces' J values add (METHODS §7.4).
+ * (Timoshenko & Goodier) and the fact that disconnected pieces' J values add (docs/methods.md §7.4).
  */
 import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';

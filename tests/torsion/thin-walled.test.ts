@@ -1,5 +1,5 @@
 /**
- * Sanity bands against thin-walled formulas (METHODS §8; approximate by nature, so ~2–3 %
+ * Sanity bands against thin-walled formulas (docs/methods.md §8; approximate by nature, so ~2–3 %
  * bands, never tight targets):
  *  - channel shear centre e = 3 b² t_f/(6 b t_f + h t_w) outside the web (Gere & Timoshenko,
  *    Mechanics of Materials), and Cw = t_f b³ h²/12 · (3 b t_f + 2 h t_w)/(6 b t_f + h t_w)

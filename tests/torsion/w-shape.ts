@@ -3,7 +3,7 @@
  * dimensions d, bf, tw, tf and the fillet radius r = kdes − tf (the modelling convention named
  * in the AISC Shapes Database notes; AISC gives no radius). Centred on the origin, web on the
  * y axis. Outer ring counter-clockwise; each concave fillet runs clockwise about its centre,
- * bulge −tan(22.5°) (DXF bulge = tan(sweep/4), METHODS §2.4).
+ * bulge −tan(22.5°) (DXF bulge = tan(sweep/4), docs/methods.md §2.4).
  */
 import type { Polygon } from '../../core/geometry/types.ts';
 

@@ -5,7 +5,7 @@
  * Stiffness: with materials, the E-weighted section of core/materials (E in Pa, lengths in the
  * document unit); without, the geometric section with E = 1 Pa, so stresses do not depend on E.
  * Forces go to Pa·unit² (N) and Pa·unit³ (moments) so every stress comes out in Pa.
- * Sign convention (METHODS §9.1): N > 0 tension; Mx > 0 tension at +Y; My > 0 tension at +X.
+ * Sign convention (docs/methods.md §9.1): N > 0 tension; Mx > 0 tension at +Y; My > 0 tension at +X.
  */
 import type { SectionDocument } from '../../../core/document/types.ts';
 import type { Point, Region } from '../../../core/geometry/types.ts';
