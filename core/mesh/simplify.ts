@@ -8,13 +8,13 @@
  * digitized line"): a vertex is dropped only when it lies within the tolerance δ(x, y) of the
  * chord that replaces it. Anchors are never dropped: points shared by more than two segments
  * (touching parts, T-junctions), points where the winding of the chain changes, and points on
- * exact arcs (their chord error is budgeted separately, METHODS §7.8). Every chain keeps at
+ * exact arcs (their chord error is budgeted separately, docs/methods.md §7.8). Every chain keeps at
  * least one interior point, so two chains between the same anchors never collapse onto one
  * chord, and a closed loop without anchors is split into three chains.
  *
  * Only the mesh sees the result; the exact properties are still integrated over the user's
  * outline. The geometric change is measured, not assumed: graphMoments integrates both graphs
- * exactly (Green's theorem, METHODS §1.1), and every replaced run records the area between it
+ * exactly (Green's theorem, docs/methods.md §1.1), and every replaced run records the area between it
  * and its chord so that the torsion module can estimate the change of J (core/torsion).
  * Not guaranteed: a chord may cross a boundary that is closer than δ; the triangulation then
  * rejects the graph (MeshInputError) and the caller falls back to a smaller tolerance.
@@ -234,7 +234,7 @@ export function simplifiedGraph(g: PlanarGraph, tolerance: (x: number, y: number
   return { graph, runs: Float64Array.from(runs), inputPoints: n, keptPoints: xy.length / 2 };
 }
 
-/** Exact area integrals of the material of a graph (net-weighted segments, METHODS §1.1), about the origin. */
+/** Exact area integrals of the material of a graph (net-weighted segments, docs/methods.md §1.1), about the origin. */
 export interface GraphMoments {
   readonly area: number;
   readonly cx: number;
@@ -246,7 +246,7 @@ export interface GraphMoments {
 }
 
 export function graphMoments(g: PlanarGraph): GraphMoments {
-  // A local origin keeps the sums well conditioned (METHODS §1.3).
+  // A local origin keeps the sums well conditioned (docs/methods.md §1.3).
   const ox = g.xy[0] ?? 0;
   const oy = g.xy[1] ?? 0;
   let A = 0, Qx = 0, Qy = 0, Ixx = 0, Iyy = 0, Ixy = 0;

@@ -3,7 +3,7 @@
  * (core/mesh/simplify.ts), the exact outline stays untouched, and the result says what changed.
  * References: Timoshenko & Goodier, Theory of Elasticity, torsion chapter: ellipse
  * J = πa³b³/(a² + b²), hollow circle π(D⁴ − d⁴)/32. The polygon itself is not the ellipse: an
- * inscribed N-gon at equal parametric angles lowers J by about (2π/N)²/3 (METHODS §7.8), which
+ * inscribed N-gon at equal parametric angles lowers J by about (2π/N)²/3 (docs/methods.md §7.8), which
  * is < 4e-6 at the N used here, far inside the 0.2 % target.
  * Dimensions are fresh (not used by other tests).
  */
