@@ -3,9 +3,9 @@
  *
  * Method: Green's theorem in fan form, ∬ f dA = 1/(k+2) ∮ f (x dy − y dx) for a monomial f of
  * degree k (docs/methods.md §1.1). Straight edges use the exact vertex sums of §1.1. Circular arcs
- * (bulge ≠ 0) use the exact decomposition edge(Ps→Pc) + sector + edge(Pc→Pe) with the binomial
- * shift of §2.2; arcs with |sweep| < 0.5 rad use 8-point Gauss–Legendre in t along the arc, with
- * points in half-angle form so the far centre never enters (§2.4; threshold: see SMALL_SWEEP).
+ * (bulge ≠ 0) use composite 8-point Gauss–Legendre in t along the arc, in panels of at most
+ * 0.5 rad, with points in half-angle form so the far centre never enters (§2.4; see SMALL_SWEEP):
+ * for a polynomial integrand of this degree that is exact up to rounding.
  *
  * Winding: the input is a NORMALISED region (outer rings counter-clockwise, holes clockwise,
  * core/geometry/types.ts); holes then contribute negatively by themselves. Rings are not
@@ -19,8 +19,10 @@
  * vertexBoxCentre(region) explicitly when that origin is wanted. The result states its origin;
  * only centroids need it added back.
  *
- * Accuracy: straight edges exact up to rounding (~n·ε); arcs at rounding level for every sweep
- * (closed form for |sweep| ≥ 0.5, where r/c ≤ ~2; quadrature below, up to r/c ≈ 1e6, docs/methods.md §2.4).
+ * Accuracy: straight edges exact up to rounding (~n·ε); arcs at rounding level for every sweep up
+ * to r/c ≈ 1e6 (docs/methods.md §2.4). Measured against 40-digit references (mpmath) for a lone circular
+ * segment swept over 0.3–2 rad, the worst case for cancellation: A, ȳ, Iy and the centroidal Ix
+ * within 2e−14 relative (worst seen 4.6e−15, on Ix; tests/properties/arc-precision.test.ts).
  * Not guaranteed: meaningful values for self-intersecting rings (winding-weighted, §1.1).
  */
 import { invariant } from '../invariant.ts';
@@ -29,11 +31,12 @@ import type { RawIntegrals } from './types.ts';
 import { arcFromBulge, isStraight } from './arc.ts';
 
 /**
- * Below this |sweep| the arc is integrated by 8-point Gauss–Legendre instead of the closed form.
- * docs/methods.md §2.4 suggests 0.01; we use 0.5 rad because the closed form's cancellation (error growing
- * like (r/c)⁴) still costs ~1e−7 of a segment's own integrals at 0.02 rad and ~1e−11 of a 60-wide
- * ring's Ixx at 0.016 rad, while the 8-point rule on this trigonometric polynomial of degree 3 has
- * a truncation error below ~1e−20 relative at 0.5 rad (error term Δ¹⁷·3¹⁶·(8!)⁴/(17·(16!)³)).
+ * The widest panel of the arc quadrature, in radians. The 8-point rule on the fan-form integrand
+ * (a trigonometric polynomial of degree 3 in the sweep) has a truncation error below ~1e−20
+ * relative on a 0.5 rad panel (error term Δ¹⁷·3¹⁶·(8!)⁴/(17·(16!)³)). A closed form about the
+ * centre was used above 0.5 rad until issue 18: it subtracts a sector and a triangle, and lost
+ * up to 5 digits of a thin segment's centroidal Ix between 0.5 and 1.5 rad (4.4e−11 relative at a
+ * bulge of 1/7), so every arc now takes ⌈|sweep|/0.5⌉ panels (at most 13 for a full turn).
  */
 const SMALL_SWEEP = 0.5;
 
@@ -63,67 +66,44 @@ function addEdge(x0: number, y0: number, x1: number, y1: number, acc: Acc): void
   acc[5]! += ((x0 * y1 + 2 * x0 * y0 + 2 * x1 * y1 + x1 * y0) * c) / 24;
 }
 
-/** Exact arc contribution by edge(Ps→Pc) + sector(Pc) + edge(Pc→Pe) (docs/methods.md §2.2). */
-function addArcClosedForm(xs: number, ys: number, xe: number, ye: number, b: number, acc: Acc): void {
-  const arc = arcFromBulge(xs, ys, xe, ye, b);
-  const cx = xs + arc.centreDx;
-  const cy = ys + arc.centreDy;
-  const r = arc.radius;
-  const dt = arc.sweep;
-  const t0 = arc.t0;
-  const t1 = t0 + dt;
-  const S = Math.sin(t1) - Math.sin(t0);
-  const C = Math.cos(t1) - Math.cos(t0);
-  const S2 = Math.sin(2 * t1) - Math.sin(2 * t0);
-  const Ssq = Math.sin(t1) ** 2 - Math.sin(t0) ** 2;
-  const r2 = r * r;
-  const r3 = r2 * r;
-  const r4 = r2 * r2;
-  const As = (r2 * dt) / 2;
-  const ix = (r3 * S) / 3; // ∫ξ dA about the apex
-  const iy = (-r3 * C) / 3; // ∫η dA
-  const ixx = r4 * (dt / 8 + S2 / 16); // ∫ξ² dA
-  const iyy = r4 * (dt / 8 - S2 / 16); // ∫η² dA
-  const ixy = (r4 * Ssq) / 8; // ∫ξη dA
-  addEdge(xs, ys, cx, cy, acc);
-  acc[0]! += As;
-  acc[1]! += cy * As + iy;
-  acc[2]! += cx * As + ix;
-  acc[3]! += cy * cy * As + 2 * cy * iy + iyy;
-  acc[4]! += cx * cx * As + 2 * cx * ix + ixx;
-  acc[5]! += cx * cy * As + cx * iy + cy * ix + ixy;
-  addEdge(cx, cy, xe, ye, acc);
-}
-
-/** Small-sweep arc: 8-point Gauss–Legendre of the fan form (1.1) along the arc (docs/methods.md §2.4). */
-function addArcQuadrature(xs: number, ys: number, xe: number, ye: number, b: number, acc: Acc): void {
+/**
+ * Arc contribution: composite 8-point Gauss–Legendre of the fan form (1.1) along the arc, in
+ * panels of at most SMALL_SWEEP (docs/methods.md §2.4). Points are taken from the arc's start in
+ * half-angle form, P(τ) = Ps + 2r·sin(τ/2)·(−sin(t0 + τ/2), cos(t0 + τ/2)), so the centre (far
+ * away on a flat arc) never enters, and no large sector and triangle are subtracted.
+ */
+function addArc(xs: number, ys: number, xe: number, ye: number, b: number, acc: Acc): void {
   const arc = arcFromBulge(xs, ys, xe, ye, b);
   const r = arc.radius;
   const dt = arc.sweep;
+  const panels = Math.max(1, Math.ceil(Math.abs(dt) / SMALL_SWEEP));
+  const h = dt / panels; // one panel's sweep; dτ = (h/2) dξ within it
   let a = 0, qx = 0, qy = 0, ixx = 0, iyy = 0, ixy = 0;
-  for (let k = 0; k < 8; k++) {
-    const tau = (dt * (1 + GL_X[k]!)) / 2;
-    const chord = 2 * r * Math.sin(tau / 2);
-    const mid = arc.t0 + tau / 2;
-    const x = xs - chord * Math.sin(mid);
-    const y = ys + chord * Math.cos(mid);
-    const t = arc.t0 + tau;
-    // x dy − y dx = r (x cos t + y sin t) dt on the circle.
-    const w = GL_W[k]! * r * (x * Math.cos(t) + y * Math.sin(t));
-    a += w;
-    qx += y * w;
-    qy += x * w;
-    ixx += y * y * w;
-    iyy += x * x * w;
-    ixy += x * y * w;
+  for (let p = 0; p < panels; p++) {
+    for (let k = 0; k < 8; k++) {
+      const tau = h * (p + (1 + GL_X[k]!) / 2);
+      const chord = 2 * r * Math.sin(tau / 2);
+      const mid = arc.t0 + tau / 2;
+      const x = xs - chord * Math.sin(mid);
+      const y = ys + chord * Math.cos(mid);
+      const t = arc.t0 + tau;
+      // x dy − y dx = r (x cos t + y sin t) dt on the circle.
+      const w = GL_W[k]! * r * (x * Math.cos(t) + y * Math.sin(t));
+      a += w;
+      qx += y * w;
+      qy += x * w;
+      ixx += y * y * w;
+      iyy += x * x * w;
+      ixy += x * y * w;
+    }
   }
-  const h = dt / 2; // dτ = (dt/2) dξ
-  acc[0]! += (h * a) / 2;
-  acc[1]! += (h * qx) / 3;
-  acc[2]! += (h * qy) / 3;
-  acc[3]! += (h * ixx) / 4;
-  acc[4]! += (h * iyy) / 4;
-  acc[5]! += (h * ixy) / 4;
+  const half = h / 2;
+  acc[0]! += (half * a) / 2;
+  acc[1]! += (half * qx) / 3;
+  acc[2]! += (half * qy) / 3;
+  acc[3]! += (half * ixx) / 4;
+  acc[4]! += (half * iyy) / 4;
+  acc[5]! += (half * ixy) / 4;
 }
 
 /** Hot path for a ring of straight edges: one pass, six accumulators, no allocation (docs/methods.md §1.4). */
@@ -164,8 +144,7 @@ function mixedRingSums(xy: Float64Array, bulge: Float64Array, ox: number, oy: nu
     const y1 = xy[2 * j + 1]! - oy;
     const b = bulge[i]!;
     if (isStraight(b)) addEdge(x0, y0, x1, y1, acc);
-    else if (Math.abs(4 * Math.atan(b)) < SMALL_SWEEP) addArcQuadrature(x0, y0, x1, y1, b, acc);
-    else addArcClosedForm(x0, y0, x1, y1, b, acc);
+    else addArc(x0, y0, x1, y1, b, acc);
   }
 }
 
