@@ -9,8 +9,9 @@
  *   τ_i = E_i · V · Q_E / (EI · Σ_j E_j·t_j).
  * For one material this is V·Q/(I·t) exactly.
  *
- * Q is exact: the pieces are cut by the half-plane above the axis (core/geometry/boolean.ts, which
- * restores exact arcs) and integrated by Green's theorem (core/properties). The widths t_i come
+ * Q is exact: the part of each piece above the axis is integrated by Green's theorem over the
+ * parts of its edges above the line, arcs included (areaAboveLine, core/properties/plastic.ts),
+ * in one pass and without Boolean clipping. The widths t_i come
  * from core/materials/widths.ts. Units: the document unit for lengths, E in Pa; Q_E is returned
  * in Pa·unit³ and Σ E·t in Pa·unit.
  * Does not: find the largest shear stress over the depth (at a thin web under a wide flange the
@@ -18,13 +19,9 @@
  * the member check says so), nor treat thin-walled open sections whose shear flow runs along the
  * walls (the shear flow of the joints work covers those).
  */
-import { intersectRegions } from '../geometry/boolean.ts';
-import { regionBounds } from '../geometry/bounds.ts';
-import { ringFromPoints } from '../geometry/ring.ts';
-import type { Region } from '../geometry/types.ts';
 import type { MaterialPiece } from '../materials/composite.ts';
 import { regionWidthAt } from '../materials/widths.ts';
-import { regionIntegrals } from '../properties/integrals.ts';
+import { areaAboveLine } from '../properties/plastic.ts';
 
 export interface NeutralAxisShear {
   /** Height of the cut (the E-weighted centroid), document unit. */
@@ -37,28 +34,13 @@ export interface NeutralAxisShear {
   readonly cut: readonly { readonly materialId: string; readonly E: number; readonly width: number }[];
 }
 
-/** The region above the line y = c (a rectangle wider and taller than the region, intersected). */
-function partAbove(region: Region, c: number): Region {
-  const b = regionBounds(region);
-  if (b === null || b.maxY <= c) return [];
-  const pad = Math.max(b.maxX - b.minX, b.maxY - b.minY);
-  const x0 = b.minX - pad, x1 = b.maxX + pad, y1 = b.maxY + pad;
-  const box: Region = [{ outer: ringFromPoints([[x0, c], [x1, c], [x1, y1], [x0, y1]]), holes: [] }];
-  if (b.minY >= c) return region;
-  return intersectRegions(region, box);
-}
-
 /** Q_E and Σ E·t at the horizontal cut y = c (normally the E-weighted centroid). */
 export function neutralAxisShear(pieces: readonly MaterialPiece[], c: number): NeutralAxisShear {
   let QE = 0, Et = 0;
   const byMaterial = new Map<string, { materialId: string; E: number; width: number }>();
   for (const p of pieces) {
-    const above = partAbove(p.region, c);
-    if (above.length > 0) {
-      const r = regionIntegrals(above, 0, c);
-      // First moment about the cut: ∫ (y − c) dA, with the integrals taken about origin (0, c).
-      QE += p.material.E * r.Qx;
-    }
+    // First moment about the cut of the material above it: ∫ (y − c) dA.
+    QE += p.material.E * areaAboveLine(p.region, c).firstMoment;
     const width = regionWidthAt(p.region, c);
     if (width > 0) {
       Et += p.material.E * width;

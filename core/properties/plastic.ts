@@ -819,6 +819,20 @@ function plasticAxisCore(pieces: readonly WeightedRegion[], angleDeg: Degrees, a
 }
 
 /**
+ * Area and first moment ∫(y − c) dA of the part of `region` above the horizontal line y = c:
+ * exact (arcs included), in one pass over the rings, with no Boolean clipping (the sums of
+ * upperSide about an origin on the line, where the cut itself adds nothing). Used for shear
+ * Q = ∫_above (y − ȳ) dA, where clipping a million-vertex outline with polygon-clipping failed.
+ */
+export function areaAboveLine(region: Region, c: number): { readonly area: number; readonly firstMoment: number } {
+  const first = region[0]?.outer.xy;
+  if (first === undefined || first.length === 0) return { area: 0, firstMoment: 0 };
+  const f: Frame = { nx: 0, ny: 1, tx: 1, ty: 0 };
+  const side = upperSide(localRings([{ region, weight: 1 }], first[0]!, c, f), f, 0);
+  return { area: side.A, firstMoment: side.Qs };
+}
+
+/**
  * PNA of several weighted regions with the PNA at angleDeg (CCW from +x), balancing
  * Σ w_i A_i(s > d) − Σ w_i A_i(s < d) = axialForce (docs/methods.md §5.1, §5.3).
  * Throws RangeError for non-positive weights, empty input or |axialForce| > Σ w_i A_i.
