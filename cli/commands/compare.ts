@@ -8,7 +8,8 @@
  */
 import { writeOutputFile } from '../output.ts';
 import { reportHtml } from '../../core/report/index.ts';
-import { COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, comparisonSvg, columnUnit, lightestMeeting, sortAlternatives, type CompareColumn, type Comparison, type Targets } from '../../core/compare/index.ts';
+import { anyTarget, COLUMN_HEADINGS, COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, comparisonSvg, columnHeading, lightestMeeting, sortAlternatives, stiffnessRanking, type CompareColumn, type Comparison, type Pick, type Targets } from '../../core/compare/index.ts';
+import { STRESS_FACTOR_MEANING } from '../../core/member/verdict.ts';
 import { allSectionViews, parseDocument, type SectionDocument } from '../../core/document/index.ts';
 import { formatSig, isLengthUnit } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagValues } from '../command.ts';
@@ -20,19 +21,22 @@ function positive(flag: string, text: string | boolean | undefined): number | un
   return v;
 }
 
-function text(c: Comparison, order: readonly CompareColumn[], sortBy: CompareColumn, pick: ReturnType<typeof lightestMeeting> | null): string {
+function text(c: Comparison, order: readonly CompareColumn[], sortBy: CompareColumn, pick: Pick | null): string {
   const g = (v: number | null): string => (v === null ? '-' : formatSig(v, 4));
-  const head = ['alternative', ...order.map((k) => `${k} [${columnUnit(k, c.unit)}]`)];
+  const head = ['alternative', ...order.map((k) => columnHeading(k, c.unit))];
   const alts = sortAlternatives(c, sortBy);
   const rows = alts.map((a) => [a.name, ...order.map((k) => `${g(a.values[k])} (${a.ratios[k] === null ? '-' : `${formatSig(a.ratios[k], 3)}×`})`)]);
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
   const line = (r: readonly string[]): string => r.map((v, i) => v.padEnd(widths[i]!)).join('  ');
-  const out = [`${c.alternatives.length} alternatives; ratios (×) to "${c.baseline}"; sorted by ${sortBy}${c.beam ? `; simply supported span ${c.beam.span} ${c.unit}, uniform load ${c.beam.load} N/m` : ''}`, '', line(head), ...rows.map(line)];
+  const beam = c.beam === null ? '' : `; simply supported span ${c.beam.span} ${c.unit}, uniform load ${c.beam.load} N/m${c.beam.live !== undefined ? ` (of which live ${c.beam.live} N/m)` : ''}`;
+  const out = [`${c.alternatives.length} alternatives; ratios (×) to "${c.baseline}"; sorted by ${COLUMN_HEADINGS[sortBy]}${beam}`, '', line(head), ...rows.map(line)];
+  out.push('', `stiffness ranking by ${c.stiffnessColumn} (${c.stiffnessNote}): ${stiffnessRanking(c).map((a, i) => `${i + 1}. ${a.name}`).join(', ')}`);
   for (const a of c.alternatives) for (const n of a.notes) out.push(`  ${a.name}: ${n}`);
   if (pick !== null) {
-    out.push('', pick.choice === null ? 'no alternative meets the targets' : `lightest meeting the targets (by ${pick.by}): ${pick.choice.name}`);
-    for (const f of pick.failing) out.push(`  not meeting: ${f}`);
+    out.push('', pick.choice === null ? 'no alternative meets every target' : `lightest meeting every target (by ${pick.by === 'A' ? 'area: no weight for every alternative' : 'weight'}): ${pick.choice.name}`);
+    for (const v of pick.verdicts) if (!v.meets) out.push(`  ${v.name} does not meet: ${v.failures.map((f) => f.message).join('; ')}`);
   }
+  if (c.beam !== null) out.push('', `Stress limits: ${STRESS_FACTOR_MEANING}`);
   out.push('', `CAUTION: ${CAUTION}`, '');
   return out.join('\n');
 }
@@ -66,29 +70,38 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
   try {
     const span = positive('span', flags.span);
     const load = positive('load', flags.load);
+    const live = positive('live', flags.live);
     if ((span === undefined) !== (load === undefined)) return fail('--span and --load go together (span in the unit, load in N/m)');
+    if (live !== undefined && load === undefined) return fail('--live needs --span and --load (the live load is part of the total --load)');
+    const factor = positive('stress-factor', flags['stress-factor']);
     const c = compareDocuments(docs, {
       ...(typeof flags.unit === 'string' && isLengthUnit(flags.unit) ? { unit: flags.unit } : {}),
       ...(typeof flags.baseline === 'string' ? { baseline: flags.baseline } : {}),
-      beam: span !== undefined && load !== undefined ? { span, load } : null,
+      beam: span !== undefined && load !== undefined ? { span, load, ...(live !== undefined ? { live } : {}) } : null,
+      ...(factor !== undefined ? { stressLimits: { factor } } : {}),
     });
-    const minIx = positive('min-ix', flags['min-ix']);
-    const ratio = positive('limit', flags.limit);
-    const targets: Targets = { ...(minIx !== undefined ? { minIx } : {}), ...(ratio !== undefined ? { deflectionRatio: ratio } : {}) };
-    const pick = minIx !== undefined || ratio !== undefined ? lightestMeeting(c, targets) : null;
-    if (typeof flags.csv === 'string') writeOutputFile('csv', flags.csv, comparisonCsv(c));
+    const numbers: [keyof Targets, string][] = [['minIx', 'min-ix'], ['minSx', 'min-sx'], ['minZx', 'min-zx'], ['minEIx', 'min-ei'], ['maxDepth', 'max-depth'], ['deflectionRatio', 'limit'], ['liveDeflectionRatio', 'live-limit']];
+    const targets: Record<string, number | boolean> = {};
+    for (const [key, flag] of numbers) {
+      const v = positive(flag, flags[flag]);
+      if (v !== undefined) targets[key] = v;
+    }
+    if (flags.stress === true) targets.stressWithinLimit = true;
+    const pick = anyTarget(targets as Targets) ? lightestMeeting(c, targets as Targets) : null;
+    if (typeof flags.csv === 'string') writeOutputFile('csv', flags.csv, comparisonCsv(c, pick));
     if (typeof flags.svg === 'string' || typeof flags.report === 'string') {
       const svg = comparisonSvg(docs, c.unit);
       if (typeof flags.svg === 'string') writeOutputFile('svg', flags.svg, svg);
       if (typeof flags.report === 'string') {
         const g = (v: number | null): string => (v === null ? '-' : formatSig(v, 4));
         const rows = sortAlternatives(c, sortBy).map((a) => [a.name, ...COMPARE_COLUMNS.map((k) => `${g(a.values[k])}${a.ratios[k] === null ? '' : ` (${formatSig(a.ratios[k], 3)}×)`}`)]);
+        const targetRows = pick === null ? [] : pick.verdicts.map((v) => [v.name, v.meets ? (pick.choice?.name === v.name ? 'yes (lightest)' : 'yes') : 'no', v.failures.map((f) => f.message).join('; ')]);
         const checks = c.beam === null ? [] : c.alternatives.map((a) => `${a.name}: midspan deflection ${g(a.values.deflection)} m, simply supported span ${c.beam!.span} ${c.unit}, uniform ${c.beam!.load} N/m`);
         const materials = docs.map((d) => `${d.name}: ${d.defaultMaterial ?? 'no default material'}${d.materials.length > 0 ? `; ${d.materials.map((m) => m.name).join(', ')}` : ''}`);
-        writeOutputFile('report', flags.report, reportHtml({ title: `Comparison of ${c.alternatives.length} alternatives`, drawings: [svg], tables: [{ title: `Properties (ratios to "${c.baseline}")`, columns: ['alternative', ...COMPARE_COLUMNS.map((k) => `${k} [${columnUnit(k, c.unit)}]`)], rows }], materials, memberChecks: checks }));
+        writeOutputFile('report', flags.report, reportHtml({ title: `Comparison of ${c.alternatives.length} alternatives`, drawings: [svg], tables: [{ title: `Properties (ratios to "${c.baseline}"); stiffness by ${c.stiffnessColumn}: ${c.stiffnessNote}`, columns: ['alternative', ...COMPARE_COLUMNS.map((k) => columnHeading(k, c.unit))], rows }, ...(pick === null ? [] : [{ title: 'Targets', columns: ['alternative', 'meets every target', 'targets not met (by how much)'], rows: targetRows }])], materials, memberChecks: checks }));
       }
     }
-    if (flags.json === true) io.out(`${JSON.stringify({ ...c, alternatives: sortAlternatives(c, sortBy), pick: pick === null ? null : { name: pick.choice?.name ?? null, by: pick.by, failing: pick.failing } }, null, 2)}\n`);
+    if (flags.json === true) io.out(`${JSON.stringify({ ...c, alternatives: sortAlternatives(c, sortBy), stiffnessRanking: stiffnessRanking(c).map((a) => a.name), pick: pick === null ? null : { name: pick.choice?.name ?? null, by: pick.by, verdicts: pick.verdicts, failing: pick.failing } }, null, 2)}\n`);
     else io.out(text(c, COMPARE_COLUMNS, sortBy, pick));
   } catch (err) {
     if (err instanceof CompareError) return fail(err.message);
@@ -100,15 +113,20 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
 export const compareCommand: Command = {
   name: 'compare',
   summary: 'alternative sections side by side, ratios to a baseline, lightest meeting a target',
-  usage: 'compare FILE [FILE…] [--baseline NAME] [--sort COL] [--span L --load W] [--min-ix X] [--limit N] [--csv OUT] [--json]',
+  usage: 'compare FILE [FILE…] [--baseline NAME] [--sort COL] [--span L --load W [--live W]] [--limit N] [--live-limit N] [--stress] [--stress-factor F] [--min-ix X] [--min-sx X] [--min-zx X] [--min-ei X] [--max-depth X] [--csv OUT] [--json]',
   description: [
     'Each FILE is a Sectionsmith document; each of its sections is one alternative, named by the',
     'section\'s name (one file with several sections compares them; a name found in more than',
     'one file gets "FILE: " in front). The table lists A, Ix, Iy, Sx (smaller fibre), Zx, Ix/A,',
-    'Sx/A, Zx/A and, for documents with materials, EIx (N·m²), weight (N/m) and, with --span',
-    '(in the unit) and --load (N/m), the midspan deflection (m) of a simply supported beam; each',
-    'with its ratio to --baseline (default: the first alternative). --sort COL orders the rows. --min-ix X and --limit N (deflection',
-    '≤ span/N) pick the lightest alternative meeting them (by weight when all have one, else A).',
+    'Sx/A, Zx/A, the overall depth and, for documents with materials, EIx (N·m²), weight (N/m) and,',
+    'with --span (in the unit) and --load (N/m, total; --live its live part), the largest',
+    'deflection (m) of a simply supported beam under total and live load and the bending stress',
+    'use (σ / limit) of the worst material; each with its ratio to --baseline (default: the first',
+    'alternative). --sort COL orders the rows. Where the materials differ, stiffness is ranked by',
+    'EIx, not by geometric Ix. Targets (--limit, --live-limit, --stress, --min-ix, --min-sx,',
+    '--min-zx, --min-ei, --max-depth) pick the lightest alternative meeting every one (by weight',
+    'when all have one, else by area); each other alternative is listed with the targets it fails',
+    'and by how much.',
     '--csv OUT writes the table as CSV; --svg OUT the outlines at one scale; --report OUT.html a printable report.',
   ].join('\n'),
   flags: [
@@ -117,8 +135,16 @@ export const compareCommand: Command = {
     { name: 'unit', type: 'string', value: 'U', description: 'length unit of the table (default: the first document\'s)' },
     { name: 'span', type: 'string', value: 'L', description: 'shared simply supported span, in the unit' },
     { name: 'load', type: 'string', value: 'W', description: 'shared uniform load, N/m' },
+    { name: 'live', type: 'string', value: 'W', description: 'the live part of --load, N/m (for the live-load deflection)' },
+    { name: 'stress-factor', type: 'string', value: 'F', description: 'bending stress limit = F × strength basis (fy; reference Fb for wood); default 1' },
     { name: 'min-ix', type: 'string', value: 'X', description: 'target: Ix at least X (unit^4)' },
-    { name: 'limit', type: 'string', value: 'N', description: 'target: deflection at most span/N (e.g. 360)' },
+    { name: 'min-sx', type: 'string', value: 'X', description: 'target: Sx (smaller fibre) at least X (unit^3)' },
+    { name: 'min-zx', type: 'string', value: 'X', description: 'target: Zx at least X (unit^3)' },
+    { name: 'min-ei', type: 'string', value: 'X', description: 'target: EIx at least X (N·m^2)' },
+    { name: 'max-depth', type: 'string', value: 'X', description: 'target: overall depth at most X (unit)' },
+    { name: 'limit', type: 'string', value: 'N', description: 'target: deflection under total load at most span/N (e.g. 240 or 360)' },
+    { name: 'live-limit', type: 'string', value: 'N', description: 'target: deflection under live load at most span/N (e.g. 360); needs --live' },
+    { name: 'stress', type: 'boolean', description: 'target: bending stress at most its limit in every material (needs --span and --load)' },
     { name: 'csv', type: 'string', value: 'OUT', description: 'write the comparison as CSV' },
     { name: 'svg', type: 'string', value: 'OUT', description: 'write the outlines side by side at one scale (SVG)' },
     { name: 'report', type: 'string', value: 'OUT.html', description: 'write a printable HTML report' },

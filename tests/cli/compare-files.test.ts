@@ -61,14 +61,15 @@ describe('sectionsmith compare with several document files', () => {
     const r = run(['compare', shallow, deep, '--baseline', 'plate 100x300', '--min-ix', '1e8', '--csv', csv]);
     expect(r.code).toBe(0);
     expect(r.out).toContain('ratios (×) to "plate 100x300"');
-    expect(r.out).toContain('lightest meeting the targets (by A): plate 100x300');
+    expect(r.out).toContain('lightest meeting every target (by area: no weight for every alternative): plate 100x300');
+    expect(r.out).toMatch(/plate 100x200 does not meet: Ix 66670000 mm⁴ is below the minimum 100000000 mm⁴ by 33\.33 %/);
     expect(r.out).toContain('CAUTION:');
     const lines = readFileSync(csv, 'utf8').split(/\r?\n/).filter((l) => l !== '');
     expect(lines).toHaveLength(3);
     const head = lines[0]!.split(',');
     const shallowRow = lines.find((l) => l.startsWith('plate 100x200,'))!.split(',');
     // Ix ratio of the shallow plate to the deep one: (200/300)³ = 8/27.
-    expect(rel(Number(shallowRow[head.indexOf('Ix / plate 100x300')]), 8 / 27)).toBeLessThan(1e-12);
+    expect(rel(Number(shallowRow[head.indexOf('Ix (geometric) / plate 100x300')]), 8 / 27)).toBeLessThan(1e-12);
     expect(lines.filter((l) => l.startsWith('plate 100x300,'))).toHaveLength(1);
   });
 

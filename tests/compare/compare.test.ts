@@ -27,7 +27,7 @@ describe('compare alternatives', () => {
     expect(shallow.ratios.Ix).toBeCloseTo(0.25, 12);
     expect(shallow.notes.join(' ')).toContain('no material');
     // No materials anywhere: one note for the section, not one per part.
-    expect(shallow.notes).toEqual(['no EI, weight or deflection: no materials assigned (choose a default material, or one for each part)']);
+    expect(shallow.notes).toEqual(['no EI, weight, deflection or stress: no materials assigned (choose a default material, or one for each part)']);
     expect(sortAlternatives(c, 'Ix').map((a) => a.name)).toEqual(['shallow', 'deep']);
   });
 
@@ -48,7 +48,7 @@ describe('compare alternatives', () => {
     expect(pick.failing).toHaveLength(1);
     expect(pick.failing[0]).toMatch(/^c: /);
     const csv = comparisonCsv(c);
-    expect(csv.split('\r\n')[0]).toContain('deflection [m]');
+    expect(csv.split('\r\n')[0]).toContain('deflection, total load (max) [m]');
     expect(csv).toContain('licensed engineer');
   });
 });

@@ -133,12 +133,45 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
             <span>target deflection ≤ span /</span>
             <input data-testid="compare-ratio" list="compare-ratios" value={inputs.ratio} placeholder="none" onChange={(e) => set('ratio', e.target.value)} />
           </label>
+          <label className="field">
+            <span>live part of the load ({inch ? 'kip/ft' : 'kN/m'})</span>
+            <input data-testid="compare-live" value={inputs.live} placeholder="none" onChange={(e) => set('live', e.target.value)} />
+          </label>
+          <label className="field">
+            <span>target live-load deflection ≤ span /</span>
+            <input data-testid="compare-live-ratio" list="compare-ratios" value={inputs.liveRatio} placeholder="none" onChange={(e) => set('liveRatio', e.target.value)} />
+          </label>
+          <label className="field">
+            <span>target Sx (smaller fibre) ≥ ({display.modulus.label})</span>
+            <input data-testid="compare-min-sx" value={inputs.minSx} placeholder="none" onChange={(e) => set('minSx', e.target.value)} />
+          </label>
+          <label className="field">
+            <span>target Zx ≥ ({display.modulus.label})</span>
+            <input data-testid="compare-min-zx" value={inputs.minZx} placeholder="none" onChange={(e) => set('minZx', e.target.value)} />
+          </label>
+          <label className="field">
+            <span>target EIx ≥ ({inch ? 'kip·in²' : 'kN·m²'})</span>
+            <input data-testid="compare-min-ei" value={inputs.minEI} placeholder="none" onChange={(e) => set('minEI', e.target.value)} />
+          </label>
+          <label className="field">
+            <span>target depth ≤ ({display.length.lengthUnit})</span>
+            <input data-testid="compare-max-depth" value={inputs.maxDepth} placeholder="none" onChange={(e) => set('maxDepth', e.target.value)} />
+          </label>
+          <label className="field check">
+            <input type="checkbox" data-testid="compare-stress" checked={inputs.stress} onChange={(e) => setInputs((x) => ({ ...x, stress: e.target.checked }))} />
+            <span>target bending stress ≤ limit in every material</span>
+          </label>
+          <label className="field">
+            <span>stress limit factor (× strength basis)</span>
+            <input data-testid="compare-stress-factor" value={inputs.stressFactor} placeholder="1 (default)" onChange={(e) => set('stressFactor', e.target.value)} />
+          </label>
           <datalist id="compare-ratios">
             {[360, 240, 180].map((n) => (
               <option key={n} value={n} />
             ))}
           </datalist>
-          <p className="muted small">Simply supported, self-weight not included. Deflection, EI and weight need materials on every part.</p>
+          <p className="muted small">Simply supported, self-weight not included. Deflection, EI, weight and stress need materials on every part. Deflection limits: L/360 live and L/240 total are the IBC Table 1604.3 ratios for floor members (common practice).</p>
+          <p className="muted small" data-testid="compare-stress-meaning">{model.ok ? model.stressMeaning : ''}</p>
         </section>
         {model.excluded.length > 0 && (
           <ul className="error" data-testid="compare-excluded">
@@ -213,6 +246,9 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
               </table>
             </div>
             <p className="muted small">Ratios are to the baseline; click a name to change it. Click a heading to sort (again to reverse).</p>
+            <p className="small" data-testid="compare-stiffness">
+              Stiffness ranking ({model.stiffnessNote}): {model.stiffnessRanking.map((n, i) => `${i + 1}. ${n}`).join(', ')}
+            </p>
             {model.rows.some((a) => a.notes.length > 0) && (
               <ul className="muted small" data-testid="compare-notes">
                 {model.rows.flatMap((a) => a.notes.map((n) => <li key={`${a.name}${n}`}>{a.name}: {n}</li>))}
@@ -221,7 +257,7 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
             {model.targetsSet && (
               <div className="compare-verdict" data-testid="compare-verdict">
                 <p data-testid="compare-lightest">
-                  {model.lightest === null ? 'No alternative meets the targets.' : <>Lightest meeting the targets (by {model.lightestBy === 'weight' ? 'weight' : 'area; not every alternative has a weight'}): <strong>{model.lightest}</strong></>}
+                  {model.lightest === null ? 'No alternative meets every target.' : <>Lightest meeting every target (by {model.lightestBy === 'weight' ? 'weight' : 'area; not every alternative has a weight'}): <strong>{model.lightest}</strong></>}
                 </p>
                 <ul>
                   {model.verdicts.filter((v) => !v.passes).map((v) => (

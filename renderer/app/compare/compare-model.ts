@@ -11,7 +11,8 @@
  * deflection in the display length unit. Alternatives whose geometry is invalid are left out
  * and listed with the reason.
  */
-import { COMPARE_COLUMNS, compareDocuments, CompareError, comparisonCsv, comparisonSvg, lightestMeeting, sortAlternatives, type Alternative, type CompareColumn, type Comparison } from '../../../core/compare/index.ts';
+import { anyTarget, COLUMN_HEADINGS, COMPARE_COLUMNS, compareDocuments, CompareError, comparisonCsv, comparisonSvg, lightestMeeting, sortAlternatives, stiffnessRanking, type Alternative, type CompareColumn, type Comparison, type Pick, type TargetFailure, type Targets } from '../../../core/compare/index.ts';
+import { STRESS_FACTOR_MEANING } from '../../../core/member/verdict.ts';
 import type { SectionDocument } from '../../../core/document/types.ts';
 import type { ReportInput, ReportTable } from '../../../core/report/index.ts';
 import { sectionFromDocument } from '../../../core/section/index.ts';
@@ -33,11 +34,23 @@ export interface CompareInputs {
   readonly load: string;
   /** Ix target in the display unit of second moments; blank = none. */
   readonly minIx: string;
-  /** Deflection target span/n; blank = none. */
+  /** Deflection target under total load, span/n; blank = none. */
   readonly ratio: string;
+  /** The live part of the load (same unit as the load), and its deflection target span/n. */
+  readonly live: string;
+  readonly liveRatio: string;
+  /** Minimums on Sx (smaller fibre) and Zx in the display unit of moduli, EIx in kN·m² (kip·in²); maximum depth in the display length unit. */
+  readonly minSx: string;
+  readonly minZx: string;
+  readonly minEI: string;
+  readonly maxDepth: string;
+  /** Target: bending stress use ≤ 1 in every material. */
+  readonly stress: boolean;
+  /** Stress limit factor × strength basis; blank = 1 (the default, shown with its meaning). */
+  readonly stressFactor: string;
 }
 
-export const DEFAULT_INPUTS: CompareInputs = { baseline: null, sortBy: 'A', descending: false, span: '', load: '', minIx: '', ratio: '' };
+export const DEFAULT_INPUTS: CompareInputs = { baseline: null, sortBy: 'A', descending: false, span: '', load: '', minIx: '', ratio: '', live: '', liveRatio: '', minSx: '', minZx: '', minEI: '', maxDepth: '', stress: false, stressFactor: '' };
 
 export interface ColumnInfo {
   readonly key: CompareColumn;
@@ -70,6 +83,13 @@ export type CompareModel =
       readonly lightest: string | null;
       readonly lightestBy: 'weight' | 'A';
       readonly verdicts: readonly Verdict[];
+      /** Core's pick with every target failure, when targets are set (for the CSV). */
+      readonly pick: Pick | null;
+      /** Alternatives from stiffest down, by EIx where the materials differ (else Ix), and why. */
+      readonly stiffnessRanking: readonly string[];
+      readonly stiffnessNote: string;
+      /** What the stress limit is (shown beside the stress target). */
+      readonly stressMeaning: string;
     };
 
 const inchWork = (u: LengthUnit): boolean => u === 'in' || u === 'ft';
@@ -82,21 +102,24 @@ export function compareColumns(unit: LengthUnit, display: DisplaySet): ColumnInf
   const q = (quantity: Quantity, v: number, power = 1): number => toDisplay(v, unit, display[quantity]) * power;
   const info: Record<CompareColumn, Omit<ColumnInfo, 'key'>> = {
     A: { symbol: 'A', meaning: 'area', unit: display.area.label, toShown: (v) => q('area', v) },
-    Ix: { symbol: 'Ix', meaning: 'second moment about x', unit: display.inertia.label, toShown: (v) => q('inertia', v) },
-    Iy: { symbol: 'Iy', meaning: 'second moment about y', unit: display.inertia.label, toShown: (v) => q('inertia', v) },
-    Sx: { symbol: 'Sx', meaning: 'elastic modulus, smaller fibre', unit: display.modulus.label, toShown: (v) => q('modulus', v) },
-    Zx: { symbol: 'Zx', meaning: 'plastic modulus', unit: display.modulus.label, toShown: (v) => q('modulus', v) },
+    Ix: { symbol: COLUMN_HEADINGS.Ix, meaning: 'second moment about x of the geometry, whatever the materials', unit: display.inertia.label, toShown: (v) => q('inertia', v) },
+    Iy: { symbol: COLUMN_HEADINGS.Iy, meaning: 'second moment about y of the geometry', unit: display.inertia.label, toShown: (v) => q('inertia', v) },
+    Sx: { symbol: COLUMN_HEADINGS.Sx, meaning: 'elastic modulus Ix / (largest distance to a fibre): the smaller of top and bottom', unit: display.modulus.label, toShown: (v) => q('modulus', v) },
+    Zx: { symbol: COLUMN_HEADINGS.Zx, meaning: 'plastic modulus about the plastic neutral axis', unit: display.modulus.label, toShown: (v) => q('modulus', v) },
     // Ix/A is a length², Sx/A and Zx/A lengths: shown in the display length unit.
     IxPerA: { symbol: 'Ix/A', meaning: 'stiffness per area', unit: `${display.length.lengthUnit}²`, toShown: (v) => convertLength(v, unit, display.length.lengthUnit, 2) },
-    SxPerA: { symbol: 'Sx/A', meaning: 'elastic strength per area', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, unit, display.length.lengthUnit) },
+    SxPerA: { symbol: COLUMN_HEADINGS.SxPerA, meaning: 'elastic strength per area', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, unit, display.length.lengthUnit) },
     ZxPerA: { symbol: 'Zx/A', meaning: 'plastic strength per area', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, unit, display.length.lengthUnit) },
+    depth: { symbol: COLUMN_HEADINGS.depth, meaning: 'overall depth of the section (top to bottom)', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, unit, display.length.lengthUnit) },
     EIx: inch
-      ? { symbol: 'EIx', meaning: 'bending stiffness', unit: 'kip·in²', toShown: (v) => v / N_PER_KIP / 0.0254 ** 2 }
-      : { symbol: 'EIx', meaning: 'bending stiffness', unit: 'kN·m²', toShown: (v) => v / 1000 },
+      ? { symbol: COLUMN_HEADINGS.EIx, meaning: 'bending stiffness, each material with its own E', unit: 'kip·in²', toShown: (v) => v / N_PER_KIP / 0.0254 ** 2 }
+      : { symbol: COLUMN_HEADINGS.EIx, meaning: 'bending stiffness, each material with its own E', unit: 'kN·m²', toShown: (v) => v / 1000 },
     weight: inch
       ? { symbol: 'w', meaning: 'weight per length', unit: 'lb/ft', toShown: (v) => (v * 0.3048) / N_PER_LBF }
       : { symbol: 'w', meaning: 'weight per length', unit: 'kN/m', toShown: (v) => v / 1000 },
-    deflection: { symbol: 'δ', meaning: 'midspan deflection, shared beam', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, 'm', display.length.lengthUnit) },
+    deflection: { symbol: 'δ total', meaning: 'largest deflection of the shared beam under the total load', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, 'm', display.length.lengthUnit) },
+    liveDeflection: { symbol: 'δ live', meaning: 'largest deflection of the shared beam under the live load alone', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, 'm', display.length.lengthUnit) },
+    stressUse: { symbol: 'σ/limit', meaning: 'bending stress use of the worst material: stress / (factor × strength basis)', unit: '%', toShown: (v) => v * 100 },
   };
   return COMPARE_COLUMNS.map((key) => ({ key, ...info[key] }));
 }
@@ -121,27 +144,56 @@ function typed(text: string, what: string, positive = true): Typed {
   return { value: r.value, error: null };
 }
 
-function verdictsFor(c: Comparison, columns: readonly ColumnInfo[], minIx: number | null, ratio: number | null): Verdict[] {
+interface ShownTargets {
+  readonly Ix: number | null;
+  readonly Sx: number | null;
+  readonly Zx: number | null;
+  readonly EIx: number | null;
+  readonly depth: number | null;
+  readonly ratio: number | null;
+  readonly liveRatio: number | null;
+}
+
+/** A failure in the view's display units, worded for the screen; core's sentence where there is no shorter one. */
+function shownReason(f: TargetFailure, a: Alternative, c: Comparison, columns: readonly ColumnInfo[], typedTargets: ShownTargets): string {
   const col = (k: CompareColumn): ColumnInfo => columns.find((x) => x.key === k)!;
-  const ix = col('Ix'), d = col('deflection');
-  const f = (v: number): string => formatSig(v, 4);
+  const fmt = (v: number): string => formatSig(v, 4);
   // A typed target reads as typed: 100, not 100.0.
   const t = (v: number): string => {
     const text = formatSig(v, 4);
     return text.includes('.') && !text.includes('e') ? text.replace(/\.?0+$/, '') : text;
   };
-  return c.alternatives.map((a) => {
-    const reasons: string[] = [];
-    if (minIx !== null && !((a.values.Ix ?? 0) >= minIx)) reasons.push(`Ix ${f(ix.toShown(a.values.Ix ?? 0))} ${ix.unit} is below the ${t(ix.toShown(minIx))} ${ix.unit} asked for`);
-    if (ratio !== null) {
-      if (c.beam === null) reasons.push('no deflection: type the shared span and load');
-      else if (a.values.deflection === null) reasons.push(`no deflection: ${a.notes.join('; ') || 'no materials'}`);
-      else {
-        const allowed = convertLength(c.beam.span, c.unit, 'm') / ratio;
-        if (a.values.deflection > allowed) reasons.push(`deflection ${f(d.toShown(a.values.deflection))} ${d.unit} exceeds span/${t(ratio)} = ${f(d.toShown(allowed))} ${d.unit}`);
-      }
+  const by = f.ratio === null ? '' : ` (by ${formatSig(Math.abs(f.ratio - 1) * 100, 3)} %)`;
+  const min = (k: 'Ix' | 'Sx' | 'Zx' | 'EIx', typed: number | null): string => {
+    const x = col(k), v = a.values[k];
+    return v === null || typed === null ? f.message : `${k === 'Sx' ? COLUMN_HEADINGS.Sx : k} ${fmt(x.toShown(v))} ${x.unit} is below the ${t(typed)} ${x.unit} asked for${by}`;
+  };
+  const deflection = (k: 'deflection' | 'liveDeflection', ratio: number | null): string => {
+    const x = col(k), v = a.values[k];
+    if (c.beam === null) return 'no deflection: type the shared span and load';
+    if (v === null) return `no ${k === 'liveDeflection' ? 'live-load ' : ''}deflection: ${a.notes.join('; ') || (k === 'liveDeflection' ? 'type the live part of the load' : 'no materials')}`;
+    const allowed = convertLength(c.beam.span, c.unit, 'm') / (ratio ?? NaN);
+    return `${k === 'liveDeflection' ? 'live-load deflection' : 'deflection'} ${fmt(x.toShown(v))} ${x.unit} exceeds span/${t(ratio ?? NaN)} = ${fmt(x.toShown(allowed))} ${x.unit}${by}`;
+  };
+  switch (f.target) {
+    case 'minIx': return min('Ix', typedTargets.Ix);
+    case 'minSx': return min('Sx', typedTargets.Sx);
+    case 'minZx': return min('Zx', typedTargets.Zx);
+    case 'minEIx': return min('EIx', typedTargets.EIx);
+    case 'maxDepth': {
+      const x = col('depth');
+      return a.values.depth === null || typedTargets.depth === null ? f.message : `depth ${fmt(x.toShown(a.values.depth))} ${x.unit} exceeds the ${t(typedTargets.depth)} ${x.unit} allowed${by}`;
     }
-    return { name: a.name, passes: reasons.length === 0, reasons };
+    case 'deflection': return deflection('deflection', typedTargets.ratio);
+    case 'liveDeflection': return deflection('liveDeflection', typedTargets.liveRatio);
+    case 'stress': return f.message;
+  }
+}
+
+function verdictsFor(c: Comparison, pick: Pick, columns: readonly ColumnInfo[], typedTargets: ShownTargets): Verdict[] {
+  return pick.verdicts.map((v) => {
+    const a = c.alternatives.find((x) => x.name === v.name)!;
+    return { name: v.name, passes: v.meets, reasons: v.failures.map((f) => shownReason(f, a, c, columns, typedTargets)) };
   });
 }
 
@@ -161,25 +213,48 @@ export function compareModel(entries: readonly CompareEntry[], inputs: CompareIn
   const load = typed(inputs.load, `uniform load (${inch ? 'kip/ft' : 'kN/m'})`);
   const minIxTyped = typed(inputs.minIx, `Ix target (${display.inertia.label})`);
   const ratioTyped = typed(inputs.ratio, 'deflection target span/n');
-  const inputErrors = [span.error, load.error, minIxTyped.error, ratioTyped.error].filter((e): e is string => e !== null);
+  const liveTyped = typed(inputs.live, `live part of the load (${inch ? 'kip/ft' : 'kN/m'})`, false);
+  const liveRatioTyped = typed(inputs.liveRatio, 'live-load deflection target span/n');
+  const minSxTyped = typed(inputs.minSx, `Sx target (${display.modulus.label})`);
+  const minZxTyped = typed(inputs.minZx, `Zx target (${display.modulus.label})`);
+  const minEITyped = typed(inputs.minEI, `EIx target (${inch ? 'kip·in²' : 'kN·m²'})`);
+  const maxDepthTyped = typed(inputs.maxDepth, `depth limit (${display.length.lengthUnit})`);
+  const factorTyped = typed(inputs.stressFactor, 'stress limit factor');
+  const all = [span, load, minIxTyped, ratioTyped, liveTyped, liveRatioTyped, minSxTyped, minZxTyped, minEITyped, maxDepthTyped, factorTyped];
+  const inputErrors = all.map((x) => x.error).filter((e): e is string => e !== null);
+  if (liveTyped.value !== null && load.value !== null && !(liveTyped.value >= 0 && liveTyped.value <= load.value)) inputErrors.push(`live part of the load: must be between 0 and the total load ${load.value}, got ${liveTyped.value}`);
   if ((span.value === null) !== (load.value === null) && span.error === null && load.error === null) inputErrors.push('the shared beam needs both a span and a uniform load');
   // kN/m → N/m ×1000; kip/ft → N/m × 4448.2216152605 / 0.3048 (exact factors).
   const loadNPerM = load.value === null ? null : load.value * (inch ? N_PER_KIP / 0.3048 : 1000);
-  const beam = span.value !== null && loadNPerM !== null ? { span: span.value, load: loadNPerM } : null;
+  const perLoad = inch ? N_PER_KIP / 0.3048 : 1000;
+  const liveNPerM = liveTyped.value === null || load.value === null || !(liveTyped.value <= load.value) ? null : liveTyped.value * perLoad;
+  const beam = span.value !== null && loadNPerM !== null ? { span: span.value, load: loadNPerM, ...(liveNPerM !== null ? { live: liveNPerM } : {}) } : null;
   const docs = valid.map((e) => ({ ...e.doc, name: e.name }));
   const baseline = inputs.baseline !== null && valid.some((e) => e.name === inputs.baseline) ? inputs.baseline : valid[0]!.name;
   let comparison: Comparison;
   try {
-    comparison = compareDocuments(docs, { unit, baseline, beam });
+    comparison = compareDocuments(docs, { unit, baseline, beam, ...(factorTyped.value !== null ? { stressLimits: { factor: factorTyped.value } } : {}) });
   } catch (err) {
     if (err instanceof CompareError) return { ok: false, errors: [err.message], excluded };
     throw err;
   }
   const columns = compareColumns(unit, display);
   const minIx = minIxTyped.value === null ? null : fromDisplay(minIxTyped.value, unit, display.inertia);
+  const minSx = minSxTyped.value === null ? null : fromDisplay(minSxTyped.value, unit, display.modulus);
+  const minZx = minZxTyped.value === null ? null : fromDisplay(minZxTyped.value, unit, display.modulus);
+  // kN·m² → N·m² × 1000; kip·in² → N·m² × 4448.2216152605 · 0.0254² (exact factors).
+  const minEIx = minEITyped.value === null ? null : minEITyped.value * (inch ? N_PER_KIP * 0.0254 ** 2 : 1000);
+  const maxDepth = maxDepthTyped.value === null ? null : convertLength(maxDepthTyped.value, display.length.lengthUnit, unit);
   const ratio = ratioTyped.value;
-  const targetsSet = minIx !== null || ratio !== null;
-  const pick = lightestMeeting(comparison, { ...(minIx !== null ? { minIx } : {}), ...(ratio !== null ? { deflectionRatio: ratio } : {}) });
+  const liveRatio = liveRatioTyped.value;
+  const targets: Targets = {
+    ...(minIx !== null ? { minIx } : {}), ...(minSx !== null ? { minSx } : {}), ...(minZx !== null ? { minZx } : {}), ...(minEIx !== null ? { minEIx } : {}),
+    ...(maxDepth !== null ? { maxDepth } : {}), ...(ratio !== null ? { deflectionRatio: ratio } : {}), ...(liveRatio !== null ? { liveDeflectionRatio: liveRatio } : {}),
+    ...(inputs.stress ? { stressWithinLimit: true } : {}),
+  };
+  const targetsSet = anyTarget(targets);
+  const pick = lightestMeeting(comparison, targets);
+  const shownTargets: ShownTargets = { Ix: minIxTyped.value, Sx: minSxTyped.value, Zx: minZxTyped.value, EIx: minEITyped.value, depth: maxDepthTyped.value, ratio, liveRatio };
   return {
     ok: true,
     comparison,
@@ -191,7 +266,11 @@ export function compareModel(entries: readonly CompareEntry[], inputs: CompareIn
     targetsSet,
     lightest: targetsSet ? (pick.choice?.name ?? null) : null,
     lightestBy: pick.by,
-    verdicts: targetsSet ? verdictsFor(comparison, columns, minIx, ratio) : [],
+    verdicts: targetsSet ? verdictsFor(comparison, pick, columns, shownTargets) : [],
+    pick: targetsSet ? pick : null,
+    stiffnessRanking: stiffnessRanking(comparison).map((a) => a.name),
+    stiffnessNote: comparison.stiffnessNote,
+    stressMeaning: STRESS_FACTOR_MEANING,
   };
 }
 
@@ -211,7 +290,7 @@ export function shownRatio(r: number | null): string {
 /** The comparison as files: CSV (full precision, core units) and SVG (outlines at one scale). */
 export function comparisonFiles(m: Extract<CompareModel, { ok: true }>, stem: string): { csv: { suggestedName: string; mimeType: string; text: string }; svg: { suggestedName: string; mimeType: string; text: string } } {
   return {
-    csv: { suggestedName: `${stem}-comparison.csv`, mimeType: 'text/csv', text: comparisonCsv({ ...m.comparison, alternatives: m.rows }) },
+    csv: { suggestedName: `${stem}-comparison.csv`, mimeType: 'text/csv', text: comparisonCsv({ ...m.comparison, alternatives: m.rows }, m.pick) },
     svg: { suggestedName: `${stem}-comparison.svg`, mimeType: 'image/svg+xml', text: comparisonSvg(m.docs, m.comparison.unit) },
   };
 }
@@ -225,13 +304,15 @@ export function comparisonReportInput(m: Extract<CompareModel, { ok: true }>, si
   const efficiency = m.columns.filter((k) => !['A', 'Ix', 'Iy', 'Sx', 'Zx'].includes(k.key));
   const tables: ReportTable[] = [
     { title: `Properties (ratio to "${c.baseline}" in brackets)`, columns: head(geometric), rows: body(geometric) },
-    { title: 'Efficiency, stiffness, weight and deflection', columns: head(efficiency), rows: body(efficiency) },
+    { title: 'Efficiency, stiffness, weight, deflection and stress', columns: head(efficiency), rows: body(efficiency) },
+    { title: `Stiffness ranking (${m.stiffnessNote})`, columns: ['rank', 'alternative'], textColumns: [1], rows: m.stiffnessRanking.map((n, i) => [String(i + 1), n]) },
   ];
-  if (m.targetsSet) tables.push({ title: 'Targets', columns: ['alternative', 'meets the targets', 'why not'], textColumns: [1, 2], rows: m.verdicts.map((v) => [v.name, v.passes ? 'yes' : 'no', v.reasons.join('; ')]) });
+  if (m.targetsSet) tables.push({ title: 'Targets', columns: ['alternative', 'meets every target', 'targets not met (by how much)'], textColumns: [1, 2], rows: m.verdicts.map((v) => [v.name, v.passes ? 'yes' : 'no', v.reasons.join('; ')]) });
   const d = m.columns.find((k) => k.key === 'deflection')!;
   const checks = c.beam === null ? [] : [
-    `Shared beam: simply supported, span ${formatSig(c.beam.span, 4)} ${c.unit}, uniform load ${formatSig(c.beam.load / 1000, 4)} kN/m, self-weight not included; deflection 5wL⁴/(384 EI) at midspan.`,
-    ...m.rows.map((a) => `${a.name}: midspan deflection ${shownNumber(a.values.deflection, d, sig)} ${a.values.deflection === null ? `(${a.notes.join('; ')})` : d.unit}.`),
+    `Shared beam: simply supported, span ${formatSig(c.beam.span, 4)} ${c.unit}, uniform load ${formatSig(c.beam.load / 1000, 4)} kN/m${c.beam.live !== undefined ? ` (live part ${formatSig(c.beam.live / 1000, 4)} kN/m)` : ''}, self-weight not included; deflection 5wL⁴/(384 EI) at midspan.`,
+    ...m.rows.map((a) => `${a.name}: midspan deflection ${shownNumber(a.values.deflection, d, sig)} ${a.values.deflection === null ? `(${a.notes.join('; ')})` : d.unit}${a.stress.length > 0 ? `; bending stress use ${a.stress.map((u) => `${u.material} ${u.ratio === undefined ? 'not checked' : `${formatSig(u.ratio * 100, 3)} %`}`).join(', ')}` : ''}.`),
+    `Stress limits: ${m.stressMeaning}`,
   ];
   if (m.targetsSet) checks.push(m.lightest === null ? 'No alternative meets the targets.' : `Lightest meeting the targets (by ${m.lightestBy === 'weight' ? 'weight' : 'area'}): ${m.lightest}.`);
   return {
