@@ -18,7 +18,10 @@ export async function resultValue(page, key) {
 export async function newSection(page) {
   await page.getByTestId('menu-file').click();
   await page.getByTestId('menu-new').click();
-  await discardIfAsked(page);
+  // Either the in-page question appears (unsaved changes) or the document empties at once: wait
+  // for whichever comes, rather than a fixed 1.5 s for a question that is not coming.
+  await page.waitForFunction(() => document.querySelector('[data-testid="confirm-discard-yes"]') !== null || document.querySelectorAll('[data-testid^="part-row-"]').length === 0);
+  if (await page.getByTestId('confirm-discard-yes').count() > 0) await page.getByTestId('confirm-discard-yes').click();
   await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length === 0);
 }
 

@@ -1,27 +1,29 @@
 // Browser test harness: builds the web app once, serves dist/web on 127.0.0.1 with the desktop
-// app's own CSP (electron/window-options.ts, so a CSP break shows up here too), and drives Debian
-// Chromium through playwright-core. Each test gets a fresh browser context (empty storage,
-// downloads accepted) and fails on an uncaught page error or a CSP violation.
-import { existsSync, mkdirSync } from 'node:fs';
+// app's own CSP (electron/window-options.ts, so a CSP break shows up here too), and drives
+// Chromium through playwright-core (tests/browser/browser.mjs says which one). Each test gets a
+// fresh browser context (empty storage, downloads accepted) and fails on an uncaught page error or a CSP violation.
+import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { chromium } from 'playwright-core';
 import { buildRenderer, ROOT } from '../../electron/build.mjs';
 import { serveWebBuild } from '../../electron/serve-web.mjs';
+import { launchTestBrowser } from './browser.mjs';
 
-export const CHROMIUM = '/usr/bin/chromium';
-export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'];
 export const ARTIFACTS = path.join(ROOT, 'tests', 'browser', 'artifacts');
 export const TEST_TIMEOUT_MS = 60_000;
 
 /** Builds, serves and launches; returns what the tests need and a stop function. */
 export async function startHarness() {
-  if (!existsSync(CHROMIUM)) {
-    throw new Error(`Chromium not found at ${CHROMIUM}: install Debian's chromium package (CI does: apt-get install chromium).`);
+  // The build and the browser's launch (its first unpacking, for the packaged one) overlap.
+  const [launched, built] = await Promise.allSettled([launchTestBrowser(), buildRenderer()]);
+  if (built.status === 'rejected') {
+    if (launched.status === 'fulfilled') await launched.value.browser.close();
+    throw built.reason;
   }
-  await buildRenderer();
+  if (launched.status === 'rejected') throw launched.reason;
+  const { browser, name, launchMs } = launched.value;
   const server = await serveWebBuild({ port: 4317 });
-  const browser = await chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS, headless: true });
+  console.log(`browser: ${name}, launched in ${launchMs} ms`);
   mkdirSync(ARTIFACTS, { recursive: true });
   return {
     browser,
