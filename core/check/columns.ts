@@ -54,6 +54,15 @@ const DESIGNATION_NAMES = ['designation', 'label', 'aisc_manual_label', 'section
 const TYPE_NAMES = ['type', 'shape_type', 'family', 'kind'];
 const DIMENSION_ALIASES: Readonly<Record<string, string>> = { H: 'Ht', k_des: 'kdes', Kdes: 'kdes' };
 const PROPERTY_ALIASES: Readonly<Record<string, string>> = { area: 'A', ag: 'A' };
+/**
+ * Column names of cold-formed product tables, any case (common practice): depth and flange width
+ * map to the rolled symbols d and bf, which a cold-formed row also reads as D and B.
+ */
+const COLD_FORMED_ALIASES: Readonly<Record<string, string>> = {
+  depth: 'd', 'web depth': 'd', 'flange width': 'bf', flange: 'bf', 'flange width top': 'bf', 'flange width bottom': 'B2', 'crown width': 'B', 'brim width': 'Bb',
+  lip: 'L', 'lip length': 'L', 'return lip': 'L', thickness: 't', 'design thickness': 't', 'base metal thickness': 't',
+  radius: 'r', 'inside radius': 'R', 'bend radius': 'R', 'inside bend radius': 'R', 'lip angle': 'lipAngle',
+};
 
 const SUPERSCRIPT: Readonly<Record<string, string>> = { '²': '2', '³': '3', '⁴': '4', '⁶': '6' };
 
@@ -95,7 +104,7 @@ export function detectColumn(header: string, unit: LengthUnit): ColumnRole {
   if (TYPE_NAMES.includes(lower)) return { role: 'type' };
   const { name, unitText } = splitHeader(header);
   const read = unitText === null ? null : readUnit(unitText);
-  const dimension = findSymbol(name, DIMENSION_SYMBOLS, DIMENSION_ALIASES, false);
+  const dimension = findSymbol(name, DIMENSION_SYMBOLS, DIMENSION_ALIASES, false) ?? COLD_FORMED_ALIASES[name.toLowerCase().replace(/\s+/g, ' ')];
   if (dimension !== undefined && header.trim().split('_').length <= 2) {
     if (unitText !== null && read === null) return { role: 'ignore', why: `dimension ${dimension} with an unknown unit "${unitText}"` };
     if (read !== null && (read.power !== 1 || read.scale !== 1)) return { role: 'ignore', why: `dimension ${dimension} with a unit that is not a length ("${unitText}")` };

@@ -22,7 +22,7 @@ import { angleRadii, angleThickness, flangedPart } from '../catalogue/index.ts';
 import type { LengthUnit } from '../units/types.ts';
 
 /** The shape families a table row may name (AISC type codes). */
-export const TABLE_FAMILIES = ['W', 'M', 'HP', 'S', 'C', 'MC', 'WT', 'MT', 'ST', 'L', 'HSS', 'PIPE'] as const;
+export const TABLE_FAMILIES = ['W', 'M', 'HP', 'S', 'C', 'MC', 'WT', 'MT', 'ST', 'L', 'HSS', 'PIPE', 'LC', 'LZ', 'HAT', 'TRACK'] as const;
 export type TableFamily = (typeof TABLE_FAMILIES)[number];
 
 export function isTableFamily(value: string): value is TableFamily {
@@ -32,8 +32,16 @@ export function isTableFamily(value: string): value is TableFamily {
 /** The family named by a type cell ("w", "Pipe", "hss" …), or undefined. */
 export function familyOf(text: string): TableFamily | undefined {
   const key = text.trim().toUpperCase();
-  return isTableFamily(key) ? key : undefined;
+  return isTableFamily(key) ? key : COLD_FORMED_NAMES[key.replace(/[\s_-]+/g, ' ')];
 }
+
+/** Cold-formed families (no AISC label): lipped channel, lipped Z, hat, track. */
+export const COLD_FORMED_FAMILIES: readonly TableFamily[] = ['LC', 'LZ', 'HAT', 'TRACK'];
+
+/** Type cells that name a cold-formed family in words (upper case, single spaces). */
+const COLD_FORMED_NAMES: Readonly<Record<string, TableFamily>> = {
+  'LIPPED CHANNEL': 'LC', 'LIPPED C': 'LC', STUD: 'LC', 'C STUD': 'LC', 'LIPPED Z': 'LZ', 'Z PURLIN': 'LZ', 'HAT CHANNEL': 'HAT', 'FURRING CHANNEL': 'HAT', 'PLAIN CHANNEL': 'TRACK', 'UNLIPPED CHANNEL': 'TRACK',
+};
 
 /** The dimensions each family needs (published symbols); optional ones follow in OPTIONAL_DIMENSIONS. */
 export const REQUIRED_DIMENSIONS: Readonly<Record<TableFamily, readonly string[]>> = {
@@ -49,10 +57,31 @@ export const REQUIRED_DIMENSIONS: Readonly<Record<TableFamily, readonly string[]
   L: ['d', 'b', 't'],
   HSS: ['tdes'],
   PIPE: ['OD', 'tdes'],
+  LC: ['t'],
+  LZ: ['t'],
+  HAT: ['t', 'Bb'],
+  TRACK: ['t'],
 };
 
 /** Every dimension symbol a table column may map to. */
-export const DIMENSION_SYMBOLS: readonly string[] = ['d', 'bf', 'tw', 'tf', 'kdes', 'b', 't', 'Ht', 'B', 'tnom', 'tdes', 'OD', 'ID', 'r', 'rt', 'slope'];
+export const DIMENSION_SYMBOLS: readonly string[] = ['d', 'bf', 'tw', 'tf', 'kdes', 'b', 't', 'Ht', 'B', 'tnom', 'tdes', 'OD', 'ID', 'r', 'rt', 'slope', 'D', 'B2', 'L', 'R', 'Bb', 'lipAngle'];
+
+const COLD_FORMED_PART: Readonly<Record<string, string>> = { LC: 'lipped-channel', LZ: 'lipped-z', HAT: 'hat', TRACK: 'track' };
+
+/**
+ * A cold-formed row (core/parts/cold-formed.ts): depth D (or d), flange width B (or bf), lip L,
+ * thickness t, inside bend radius R (or r); all out-to-out as product tables give them.
+ */
+function coldFormedPart(family: TableFamily, dims: Readonly<Record<string, number>>): TablePartResult {
+  const D = dims['D'] ?? dims['d'];
+  const B = dims['B'] ?? dims['bf'];
+  const R = dims['R'] ?? dims['r'] ?? 0;
+  const missing = [D === undefined ? 'depth (D or d)' : '', B === undefined ? 'flange or crown width (B or bf)' : '', family === 'LC' && dims['L'] === undefined ? 'lip L' : '', ...REQUIRED_DIMENSIONS[family].filter((k) => dims[k] === undefined)].filter((m) => m !== '');
+  if (missing.length > 0) return { ok: false, message: `a ${family} row needs ${missing.join(', ')} (no value given)` };
+  const params: Record<string, number> = { D: D!, B: B!, t: dims['t']!, R };
+  for (const key of ['B2', 'L', 'Bb', 'lipAngle']) if (dims[key] !== undefined && !(family === 'TRACK' && key === 'L')) params[key] = dims[key];
+  return { ok: true, part: { shape: COLD_FORMED_PART[family]!, params, modelling: `${COLD_FORMED_PART[family]!}: out-to-out D, B, L; inside bend radius R = ${R} at every bend (exact arcs)` } };
+}
 
 export interface TablePart {
   readonly shape: string;
@@ -84,6 +113,7 @@ export function labelOD(designation: string): number {
  * designation is used only for a round HSS's nominal OD (inch tables).
  */
 export function tablePart(family: TableFamily, dims: Readonly<Record<string, number>>, designation: string, unit: LengthUnit): TablePartResult {
+  if (COLD_FORMED_FAMILIES.includes(family)) return coldFormedPart(family, dims);
   const missing = need(dims, family, REQUIRED_DIMENSIONS[family]);
   if (family === 'HSS') {
     const t = dims['tdes']!;

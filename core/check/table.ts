@@ -23,7 +23,7 @@ import type { SectionProperties } from '../properties/types.ts';
 import { convertLength } from '../units/index.ts';
 import type { LengthUnit } from '../units/types.ts';
 import { CHECKED_PROPERTIES, mapColumns, type ColumnMapping } from './columns.ts';
-import { familyOf, TABLE_FAMILIES, tablePart, type TableFamily } from './shapes.ts';
+import { COLD_FORMED_FAMILIES, familyOf, TABLE_FAMILIES, tablePart, type TableFamily } from './shapes.ts';
 
 export { CAUTION };
 
@@ -309,7 +309,8 @@ function checkRow(row: number, designation: string, family: TableFamily, dims: R
       });
     }
   }
-  if (readLabels) {
+  // Cold-formed rows have no AISC label to read.
+  if (readLabels && !COLD_FORMED_FAMILIES.includes(family)) {
     const label = labelFindings(designation, family, dims, unit === 'in' ? area : null);
     findings.push(...label, ...(label.length === 0 && unit === 'in' ? catalogueFindings(designation, family, dims) : []));
   }

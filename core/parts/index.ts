@@ -11,6 +11,7 @@ import type { LengthUnit } from '../units/types.ts';
 import type { PartType } from './registry-types.ts';
 import { convertLength } from '../units/index.ts';
 import { inchInUnit } from './inch.ts';
+import { hat, lippedChannel, lippedZ, track } from './cold-formed.ts';
 import { lumber } from './lumber.ts';
 import { angle, channel, doubleAngle, iShape, tee, zShape } from './rolled.ts';
 import { pipe, plate, rectTube, roundBar } from './simple.ts';
@@ -29,7 +30,7 @@ export {
 export { DRESSED_SIZES, dressedSize, type DressedSize } from './lumber-sizes.ts';
 export { dressedPly } from './lumber.ts';
 
-const PART_TYPES: readonly PartType[] = [plate, roundBar, pipe, rectTube, iShape, channel, angle, doubleAngle, tee, zShape, lumber];
+const PART_TYPES: readonly PartType[] = [plate, roundBar, pipe, rectTube, iShape, channel, angle, doubleAngle, tee, zShape, lumber, lippedChannel, lippedZ, hat, track];
 
 /** Every part type, in palette order. */
 export function partTypes(): readonly PartType[] {

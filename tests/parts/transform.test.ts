@@ -15,6 +15,8 @@ const PARTS: readonly (readonly [string, Record<string, number>])[] = [
   ['channel', { d: 6, bf: 2.03, tw: 0.314, tf: 0.343, r: 0.33, slope: 2 / 12 }],
   ['rect-tube', { H: 12, B: 6, t: 0.465 }],
   ['tee', { d: 6.11, bf: 6.49, tw: 0.23, tf: 0.38, r: 0.3 }],
+  ['lipped-z', { D: 8, B: 2.5, B2: 2.25, L: 0.9, t: 0.075, R: 0.1875, lipAngle: 50 }],
+  ['lipped-channel', { D: 8, B: 2.5, B2: 2, L: 0.625, t: 0.075, R: 0.1125 }],
 ];
 
 function region(shape: string, params: Record<string, number>): Region {
