@@ -6,6 +6,8 @@
  * error (cli/command.ts), never 1, so a crash cannot read as "flagged".
  */
 import { writeOutputFile } from '../output.ts';
+import { tableCheckSheet } from '../../core/export/xlsx.ts';
+import { writeXlsxOutput } from '../xlsx.ts';
 import { checkTable, familyOf, MappingError, parseTolerances, readStoredMapping, TableInputError, tableCheckCsv, TABLE_FAMILIES, type ColumnMapping, type TableCheck } from '../../core/check/index.ts';
 import { isLengthUnit } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_FLAGGED, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagValues } from '../command.ts';
@@ -76,7 +78,7 @@ export function checkText(file: string, c: TableCheck): string {
   return lines.join('\n');
 }
 
-function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo, lists: FlagLists = {}): number {
+function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo, lists: FlagLists = {}): number | Promise<number> {
   const fail = (message: string): number => {
     io.err(`sectionsmith check: ${message}\n`);
     return EXIT_BAD_INPUT;
@@ -121,8 +123,10 @@ function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo, 
     if (err instanceof TableInputError || err instanceof MappingError) return fail(`${file}: ${err.message}`);
     throw err;
   }
+  let xlsx: Promise<void> | null = null;
   try {
     if (typeof flags.out === 'string') writeOutputFile('out', flags.out, tableCheckCsv(result));
+    if (typeof flags.xlsx === 'string') xlsx = writeXlsxOutput('xlsx', flags.xlsx, tableCheckSheet(result));
     if (typeof flags['save-map'] === 'string') writeOutputFile('save-map', flags['save-map'], `${JSON.stringify(result.mapping, null, 2)}\n`);
   } catch (err) {
     return fail(`cannot write: ${err instanceof Error ? err.message : String(err)}`);
@@ -133,13 +137,14 @@ function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo, 
   } else {
     io.out(checkText(file, result));
   }
-  return result.summary.rowsFlagged > 0 ? EXIT_FLAGGED : EXIT_OK;
+  const code = result.summary.rowsFlagged > 0 ? EXIT_FLAGGED : EXIT_OK;
+  return xlsx === null ? code : xlsx.then(() => code);
 }
 
 export const checkCommand: Command = {
   name: 'check',
   summary: 'check a table of shapes (CSV) against properties rebuilt from its dimensions',
-  usage: 'check TABLE.csv [--type T] [--map COL=TARGET …] [--tolerance 1% …] [--unit U] [--out REPORT.csv] [--json]',
+  usage: 'check TABLE.csv [--type T] [--map COL=TARGET …] [--tolerance 1% …] [--unit U] [--out REPORT.csv] [--xlsx REPORT.xlsx] [--json]',
   description: [
     'Reads a CSV table of shapes (a designation column, a type column or --type, dimension',
     'columns and tabulated property columns), rebuilds each row with the parts library using',
@@ -175,6 +180,7 @@ export const checkCommand: Command = {
     { name: 'tolerance', type: 'string', value: 'SPEC', description: 'tolerances: 1%, Zx=2%, MC:Iy=7% (default 1 %)', multiple: true },
     { name: 'unit', type: 'string', value: 'U', description: 'unit of columns without one: in|ft|mm|cm|m (default in)' },
     { name: 'out', type: 'string', value: 'REPORT.csv', description: 'write the per-row report as CSV' },
+    { name: 'xlsx', type: 'string', value: 'REPORT.xlsx', description: 'write the per-row report as XLSX (numbers as numbers at full precision, units in the headings, the caution in row 1)' },
     { name: 'mapping', type: 'string', value: 'FILE', description: 'read a saved column mapping (JSON)' },
     { name: 'save-map', type: 'string', value: 'FILE', description: 'write the column mapping used (JSON)' },
     { name: 'own-labels', type: 'boolean', description: "designations are a maker's own: do not read them as AISC labels" },

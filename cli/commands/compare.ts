@@ -7,10 +7,14 @@
  * name in front ("a.json: Deeper web") so each stays distinct.
  */
 import { writeOutputFile } from '../output.ts';
+import { comparisonSheet } from '../../core/export/xlsx.ts';
+import { writeXlsxOutput } from '../xlsx.ts';
 import { reportHtml } from '../../core/report/index.ts';
 import { anyTarget, COLUMN_HEADINGS, COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, comparisonSvg, columnHeading, lightestMeeting, sortAlternatives, stiffnessRanking, type CompareColumn, type Comparison, type Pick, type Targets } from '../../core/compare/index.ts';
 import { STRESS_FACTOR_MEANING } from '../../core/member/verdict.ts';
-import { allSectionViews, parseDocument, type SectionDocument } from '../../core/document/index.ts';
+import { allSectionViews, documentFromJson, parseDocument, type SectionDocument } from '../../core/document/index.ts';
+import { looksLikeDxf } from '../../core/dxf/index.ts';
+import { documentFromDxfText } from '../load.ts';
 import { formatSig, isLengthUnit } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagValues } from '../command.ts';
 
@@ -41,7 +45,7 @@ function text(c: Comparison, order: readonly CompareColumn[], sortBy: CompareCol
   return out.join('\n');
 }
 
-function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo): number {
+function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo): number | Promise<number> {
   const fail = (m: string): number => {
     io.err(`sectionsmith compare: ${m}\n`);
     return EXIT_BAD_INPUT;
@@ -58,7 +62,11 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
     } catch {
       return fail(`${file}: cannot read the file`);
     }
-    const parsed = parseDocument(t, file);
+    // A DXF drawing is read as a one-section document (its unit from $INSUNITS, else --unit).
+    const dxf = /\.dxf$/i.test(file) || looksLikeDxf(t) ? documentFromDxfText(file, t, isLengthUnit(flags.unit) ? flags.unit : undefined, {}) : null;
+    if (dxf !== null && !dxf.ok) return fail(dxf.messages.join('\n'));
+    if (dxf !== null) io.err(dxf.notes.map((n) => `${file}: ${n}\n`).join(''));
+    const parsed = dxf !== null ? documentFromJson(dxf.value) : parseDocument(t, file);
     if (!parsed.ok) return fail(parsed.errors.map((e) => e.message).join('\n'));
     for (const v of allSectionViews(parsed.file)) found.push({ file, ...v });
   }
@@ -67,6 +75,7 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
   const docs: SectionDocument[] = found.map((f) => ((count.get(f.name) ?? 0) > 1 ? { ...f.doc, name: `${f.file}: ${f.name}` } : f.doc));
   const named = new Set(docs.map((d) => d.name));
   if (named.size < docs.length) return fail(`two sections in the same file share a name after all: ${docs.map((d) => JSON.stringify(d.name)).join(', ')}`);
+  let xlsx: Promise<void> | null = null;
   try {
     const span = positive('span', flags.span);
     const load = positive('load', flags.load);
@@ -89,6 +98,7 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
     if (flags.stress === true) targets.stressWithinLimit = true;
     const pick = anyTarget(targets as Targets) ? lightestMeeting(c, targets as Targets) : null;
     if (typeof flags.csv === 'string') writeOutputFile('csv', flags.csv, comparisonCsv(c, pick));
+    if (typeof flags.xlsx === 'string') xlsx = writeXlsxOutput('xlsx', flags.xlsx, comparisonSheet(c, pick));
     if (typeof flags.svg === 'string' || typeof flags.report === 'string') {
       const svg = comparisonSvg(docs, c.unit);
       if (typeof flags.svg === 'string') writeOutputFile('svg', flags.svg, svg);
@@ -107,13 +117,13 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
     if (err instanceof CompareError) return fail(err.message);
     throw err;
   }
-  return EXIT_OK;
+  return xlsx === null ? EXIT_OK : xlsx.then(() => EXIT_OK);
 }
 
 export const compareCommand: Command = {
   name: 'compare',
   summary: 'alternative sections side by side, ratios to a baseline, lightest meeting a target',
-  usage: 'compare FILE [FILE…] [--baseline NAME] [--sort COL] [--span L --load W [--live W]] [--limit N] [--live-limit N] [--stress] [--stress-factor F] [--min-ix X] [--min-sx X] [--min-zx X] [--min-ei X] [--max-depth X] [--csv OUT] [--json]',
+  usage: 'compare FILE [FILE…] [--baseline NAME] [--sort COL] [--span L --load W [--live W]] [--limit N] [--live-limit N] [--stress] [--stress-factor F] [--min-ix X] [--min-sx X] [--min-zx X] [--min-ei X] [--max-depth X] [--csv OUT] [--xlsx OUT] [--json]',
   description: [
     'Each FILE is a Sectionsmith document; each of its sections is one alternative, named by the',
     'section\'s name (one file with several sections compares them; a name found in more than',
@@ -146,6 +156,7 @@ export const compareCommand: Command = {
     { name: 'live-limit', type: 'string', value: 'N', description: 'target: deflection under live load at most span/N (e.g. 360); needs --live' },
     { name: 'stress', type: 'boolean', description: 'target: bending stress at most its limit in every material (needs --span and --load)' },
     { name: 'csv', type: 'string', value: 'OUT', description: 'write the comparison as CSV' },
+    { name: 'xlsx', type: 'string', value: 'OUT', description: 'write the comparison as XLSX (numbers as numbers at full precision, units in the headings, the caution in row 1)' },
     { name: 'svg', type: 'string', value: 'OUT', description: 'write the outlines side by side at one scale (SVG)' },
     { name: 'report', type: 'string', value: 'OUT.html', description: 'write a printable HTML report' },
     { name: 'json', type: 'boolean', description: 'print JSON instead of the table' },

@@ -15,6 +15,8 @@ import { cutParts, sectionDxf } from '../../core/dxf/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
 import { DXF_INPUT_FLAGS, dxfReadOptions, loadSectionArgument, type LoadedSection } from '../load.ts';
 import { writeOutputFile } from '../output.ts';
+import { propertiesSheet } from '../../core/export/xlsx.ts';
+import { writeXlsxOutput } from '../xlsx.ts';
 import { materialPropsResults } from './member.ts';
 
 export const PROPS_FLAGS: readonly FlagSpec[] = [
@@ -24,6 +26,7 @@ export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'section', type: 'string', value: 'NAME', description: 'documents with several sections (alternatives): the one to report (default: the first)' },
   { name: 'torsion', type: 'boolean', description: 'add finite-element torsion: J, Cw, shear centre xs, ys, meshElements, jRelativeError (one material only)' },
   { name: 'dxf', type: 'string', value: 'OUT', description: 'also write the section as a DXF drawing: outline (layer SECTION), centroid, principal axes and a property table with the caution' },
+  { name: 'xlsx', type: 'string', value: 'OUT', description: 'also write the properties table as XLSX (numbers at full precision in plain powers of the section\'s unit, units in the headings, the caution in row 1)' },
   { name: 'dxf-parts', type: 'boolean', description: 'with --dxf: also each part laid flat in its own coordinates, with its holes, on a layer PART-<name> (for cutting)' },
   ...DXF_INPUT_FLAGS,
 ];
@@ -183,7 +186,7 @@ export function writeSectionDxf(out: string, s: LoadedSection, withParts: boolea
   }));
 }
 
-function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo, lists?: FlagLists): number {
+function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo, lists?: FlagLists): number | Promise<number> {
   const loaded = loadSectionArgument(propsCommand, positionals, typeof flags.unit === 'string' ? flags.unit : undefined, io, flags.section, dxfReadOptions(flags, lists));
   if (!loaded) return EXIT_BAD_INPUT;
   const { file, unitFlag, section } = loaded;
@@ -195,13 +198,14 @@ function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo, 
   }
   if (typeof flags.dxf === 'string') writeSectionDxf(flags.dxf, section, flags['dxf-parts'] === true);
   io.out(flags.json === true ? json(file, section, unit, extra) : table(file, section, unit, extra));
+  if (typeof flags.xlsx === 'string') return writeXlsxOutput('xlsx', flags.xlsx, propertiesSheet({ name: section.name, unit: section.unit, properties: section.properties })).then(() => EXIT_OK);
   return EXIT_OK;
 }
 
 export const propsCommand: Command = {
   name: 'props',
   summary: 'section properties of a Sectionsmith document or a GeoJSON area',
-  usage: 'props FILE [--json] [--unit U] [--section NAME] [--eref VALUE] [--torsion] [--dxf OUT [--dxf-parts]] [--layer NAME …] [--parts each|one]',
+  usage: 'props FILE [--json] [--unit U] [--section NAME] [--eref VALUE] [--torsion] [--xlsx OUT] [--dxf OUT [--dxf-parts]] [--layer NAME …] [--parts each|one]',
   description: [
     'FILE is a Sectionsmith document (.json, "format": "sectionsmith-section"), a GeoJSON',
     'Polygon, MultiPolygon, Feature or FeatureCollection (RFC 7946) whose coordinates are lengths',
