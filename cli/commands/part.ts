@@ -11,7 +11,11 @@
  * The readable table is a small formatter of its own: props' table is private to its file.
  */
 import { partFromDesignation, type CatalogueEntry } from '../../core/catalogue/index.ts';
-import { validateRegion } from '../../core/geometry/index.ts';
+import { normaliseRegion, validateRegion } from '../../core/geometry/index.ts';
+import type { Region } from '../../core/geometry/types.ts';
+import { sectionDxf } from '../../core/dxf/index.ts';
+import { parsePointList } from '../../core/parts/points.ts';
+import { writeOutputFile } from '../output.ts';
 import { getPartType, partTypes, shapeRegion } from '../../core/parts/index.ts';
 import { sectionProperties } from '../../core/properties/index.ts';
 import type { SectionProperties } from '../../core/properties/types.ts';
@@ -23,6 +27,9 @@ export const PART_FLAGS: readonly FlagSpec[] = [
   { name: 'designation', type: 'string', value: 'NAME', description: 'a catalogue designation (AISC v15.0 shape such as W14X90, or lumber such as 2x10) instead of TYPE' },
   { name: 'json', type: 'boolean', description: 'print one JSON object (the keys of props) instead of the table' },
   { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m of the dimensions and the results (default in)' },
+  { name: 'points', type: 'string', value: 'FILE', description: 'with TYPE outline: the outline\'s points, one x y per line (tab, semicolon, comma or space separated; header optional)' },
+  { name: 'third', type: 'string', value: 'bulge|radius', description: 'with --points: what a third column is, when its header does not say (bulge = tan(sweep/4); radius of a minor arc, + counter-clockwise)' },
+  { name: 'dxf', type: 'string', value: 'OUT', description: 'also write the part as a DXF drawing (outline on layer SECTION, centroid, principal axes, property table with the caution)' },
 ];
 
 /** A decimal ("0.75"), a fraction ("3/4") or a mixed number ("1-1/2"); NaN otherwise. */
@@ -125,6 +132,8 @@ function runPart(positionals: readonly string[], flags: FlagValues, io: CliIo): 
   const unitFlag = flags.unit;
   if (unitFlag !== undefined && !isLengthUnit(unitFlag)) return fail(`--unit: expected in, ft, mm, cm or m, got ${JSON.stringify(unitFlag)}`);
   const unit: LengthUnit = unitFlag ?? 'in';
+  if (positionals[0] === 'outline') return runOutline(positionals, flags, io, unit, fail);
+  if (typeof flags.points === 'string') return fail('--points goes with TYPE outline: part outline --points FILE.csv');
   const parsed = parseRequest(positionals, flags, unit);
   if (!parsed.ok) return fail(parsed.message);
   const request = parsed.request;
@@ -132,7 +141,41 @@ function runPart(positionals: readonly string[], flags: FlagValues, io: CliIo): 
   const problems = built.diagnostics.length > 0 ? built.diagnostics : validateRegion(built.region);
   if (problems.length > 0) return fail(problems.map((d) => d.message).join('\n'));
   const properties = sectionProperties(built.region);
+  if (typeof flags.dxf === 'string') writePartDxf(flags.dxf, request, built.region, properties);
   io.out(flags.json === true ? json(request, properties, unit) : table(request, properties, unit));
+  return EXIT_OK;
+}
+
+function writePartDxf(out: string, request: Request, region: Region, properties: SectionProperties): void {
+  const name = request.entry?.designation ?? request.shape;
+  writeOutputFile('dxf', out, sectionDxf({ name, unit: request.unit, region, properties, caution: CAUTION, centroid: true, axes: true, table: true }));
+}
+
+/** `part outline --points FILE`: a closed outline from a point list, in --unit (default in). */
+function runOutline(positionals: readonly string[], flags: FlagValues, io: CliIo, unit: LengthUnit, fail: (m: string) => number): number {
+  if (positionals.length > 1) return fail(`outline takes its points from --points FILE, not key=value arguments (got ${positionals.slice(1).join(' ')})`);
+  const file = flags.points;
+  if (typeof file !== 'string') return fail('outline needs --points FILE (one x y per line)');
+  const third = flags.third;
+  if (third !== undefined && third !== 'bulge' && third !== 'radius') return fail(`--third: expected bulge or radius, got ${JSON.stringify(third)}`);
+  let text: string;
+  try {
+    text = io.readFile(file);
+  } catch (err) {
+    return fail(`${file}: cannot read the file: ${(err as { code?: string }).code === 'ENOENT' ? 'no such file' : err instanceof Error ? err.message : String(err)}`);
+  }
+  const list = parsePointList(text, third);
+  if (!list.ok) return fail(list.errors.map((e) => `${file}: ${e.message}`).join('\n'));
+  const xy = Float64Array.from(list.points.flat());
+  const ring = list.bulges.some((b) => b !== 0) ? { xy, bulge: Float64Array.from(list.bulges) } : { xy };
+  const raw: Region = [{ outer: ring, holes: [] }];
+  const problems = validateRegion(raw);
+  if (problems.length > 0) return fail(problems.map((d) => `${file}: ${d.vertex !== undefined ? `point ${d.vertex + 1}: ` : ''}${d.message}`).join('\n'));
+  const region = normaliseRegion(raw);
+  const properties = sectionProperties(region);
+  const request: Request = { shape: 'outline', params: {}, unit };
+  if (typeof flags.dxf === 'string') writePartDxf(flags.dxf, request, region, properties);
+  io.out(flags.json === true ? json(request, properties, unit) : table({ ...request, shape: `outline of ${list.points.length} points from ${file}${list.third !== null ? ` (third column: ${list.third})` : ''}` }, properties, unit));
   return EXIT_OK;
 }
 
@@ -143,7 +186,7 @@ function typeLines(): string[] {
 export const partCommand: Command = {
   name: 'part',
   summary: 'section properties of one standard part, by dimensions or by catalogue designation',
-  usage: 'part TYPE key=value … [--json] [--unit U]  |  part --designation NAME [--json] [--unit U]',
+  usage: 'part TYPE key=value … [--json] [--unit U] [--dxf OUT]  |  part --designation NAME [--json] [--unit U] [--dxf OUT]  |  part outline --points FILE [--third bulge|radius] [--unit U]',
   description: [
     'TYPE is a part type and each key=value one of its dimensions by trade symbol; values may be',
     'decimals or fractions (t=3/4, d=1-1/2). Optional dimensions are marked "?" (rect-tube r',
@@ -154,6 +197,14 @@ export const partCommand: Command = {
     'published dimensions, or NDS dressed lumber such as 2x10) and the modelling conventions used',
     'are printed (e.g. root fillet r = kdes − tf). Properties are always computed from the exact',
     'geometry, never copied from a table.',
+    '',
+    'part outline --points FILE reads a closed outline from a point list: one x y per line, tab,',
+    'semicolon, comma or space separated (what a spreadsheet copies), with or without a header;',
+    'an optional third column is the segment to the next point as a bulge (tan(sweep/4)) or as the',
+    'radius of a minor arc (+ counter-clockwise), named by its header ("bulge", "radius") or by',
+    '--third. Errors name the line and the column. Coordinates are in --unit (default in).',
+    '',
+    '--dxf OUT also writes the part as a DXF drawing (see props --dxf).',
     '',
     'With --json: one object with "input" ("part"), "part", "params", "paramsUnit", "unit",',
     '"caution", "convention", "designation"/"source"/"modelling" for catalogue parts, and every',

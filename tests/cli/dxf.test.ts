@@ -2,7 +2,7 @@
 // props and member read a drawing, --layer and --parts choose what is read, a drawing without
 // $INSUNITS needs --unit, errors exit 2 naming the entity, and props --dxf writes a drawing that
 // reads back with the same properties. Expected values: annulus A = π(ro² − ri²) (Roark, Table A.1).
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -77,5 +77,36 @@ describe('sectionsmith with DXF drawings', () => {
     const text = readFileSync(out, 'utf8');
     expect(text).toMatch(/\nPART-/);
     expect(text).toContain('CAUTION: Results are preliminary');
+  });
+});
+
+describe('sectionsmith part outline --points and part --dxf', () => {
+  it('part outline --points reads a spreadsheet list (header, semicolons, a radius column) into an outline: A = 40·10 + π·5²/2', async () => {
+    const file = join(dir, 'slot-end.csv');
+    writeFileSync(file, 'x;y;radius\n0;0;0\n40;0;5\n40;10;0\n0;10;0\n');
+    const r = await run(['part', 'outline', '--points', file, '--unit', 'mm', '--json']);
+    expect(r.code).toBe(0);
+    const body = JSON.parse(r.out) as { area: number; unit: string };
+    expect(body.unit).toBe('mm');
+    expect(Math.abs(body.area - (400 + (Math.PI * 25) / 2)) / 400).toBeLessThan(1e-12);
+  });
+
+  it('part outline names the line and column of a bad value, and exits 2', async () => {
+    const file = join(dir, 'bad.csv');
+    writeFileSync(file, '0\t0\n40\tforty\n40\t10\n');
+    const r = await run(['part', 'outline', '--points', file]);
+    expect(r.code).toBe(2);
+    expect(r.err).toContain('bad.csv: line 2, column 2: "forty" is not a number');
+  });
+
+  it('part --designation … --dxf writes the part, which reads back with the same area (AISC v15.0 W14X90: A = 26.5 in², published, within 1 %)', async () => {
+    const out = join(dir, 'w14x90.dxf');
+    const first = await run(['part', '--designation', 'W14X90', '--json', '--dxf', out]);
+    expect(first.code).toBe(0);
+    const back = await run(['props', out, '--layer', 'SECTION', '--json']);
+    const a = (JSON.parse(first.out) as { area: number }).area, b = (JSON.parse(back.out) as { area: number; unit: string });
+    expect(b.unit).toBe('in');
+    expect(Math.abs(b.area - a) / a).toBeLessThan(1e-12);
+    expect(Math.abs(b.area - 26.5) / 26.5).toBeLessThan(0.01);
   });
 });
