@@ -23,12 +23,15 @@ export { MeshCancelledError, MeshInputError, MeshRefinementError } from './types
 export type { MeshOptions, MeshSimplification, TriangleMesh } from './types.ts';
 export type { PlanarGraph } from './planar-input.ts';
 
+/** Largest arc sweep per chord by default, degrees (see DEFAULTS). */
+export const DEFAULT_CHORD_ANGLE_DEG = 2.5;
+
 const DEFAULTS = {
   layers: 3,
   compactDivisions: 8,
   // 2.5° per chord keeps the chord-polygon deficit of a full circle (≈ Δφ²/3, docs/methods.md §7.8) at
   // −0.063 %, inside the 0.1 % budget for J; 3.6° would give −0.13 %.
-  maxChordAngleDeg: 2.5,
+  maxChordAngleDeg: DEFAULT_CHORD_ANGLE_DEG,
   minAngleDeg: 22,
   cornerRefinement: 4,
   grading: 0.3,

@@ -28,8 +28,10 @@
  * the theoretical stress unbounded there (docs/methods.md §7.6); the field shows a finite mesh value.
  */
 import type { Region } from '../geometry/types.ts';
-import { MeshCancelledError, MeshInputError, meshGraph, regionGraph, type MeshSimplification, type PlanarGraph, type TriangleMesh } from '../mesh/index.ts';
+import { DEFAULT_CHORD_ANGLE_DEG, MeshCancelledError, MeshInputError, meshGraph, regionGraph, type MeshSimplification, type PlanarGraph, type TriangleMesh } from '../mesh/index.ts';
+import { invariant } from '../invariant.ts';
 import { TorsionCancelledError } from './errors.ts';
+import { pieceLocator } from './pieces.ts';
 import type { TorsionOptions, TorsionResult } from './types.ts';
 import { bandOrdered, childTriangles, nodalGradient, prolongate, quadraticMesh, solveWarping, type QuadraticMesh, type WarpingSolution } from './warping.ts';
 
@@ -137,6 +139,11 @@ function geometryChangeOfJ(simplification: MeshSimplification | null, q: Quadrat
     change += weight * runs[r + 4]!;
     absolute += weight * runs[r + 5]!;
   }
+  // Several materials: a run's τ̂² counts with the stiffest neighbour's G/G_ref (an upper estimate).
+  let heaviest = 1;
+  if (q.weights) for (const w of q.weights) heaviest = Math.max(heaviest, w);
+  change *= heaviest;
+  absolute *= heaviest;
   // ×1.25 covers the second-order terms the first-order variation leaves out.
   return { change: change / s.J, bound: (1.25 * Math.max(Math.abs(change), absolute / 4)) / s.J };
 }
@@ -145,6 +152,49 @@ function geometryChangeOfJ(simplification: MeshSimplification | null, q: Quadrat
 const RUN = 6;
 
 export function torsionAnalysis(region: Region, options: TorsionOptions = {}): TorsionAnalysis {
+  return analysis(region, options, undefined);
+}
+
+/** A piece of one material for compositeTorsionAnalysis: its region and shear modulus (any unit, the same for all). */
+export interface ShearPiece {
+  readonly region: Region;
+  readonly G: number;
+}
+
+/**
+ * Torsion of a section of several materials, perfectly bonded where they touch (METHODS §7.7):
+ * each element's K_e, F_e and section integrals are weighted by G_e/G_ref, so the result's J is
+ * GJ/G_ref, and the centroid, Ix, Iy, the shear centre (Trefftz) and Cw are G-weighted (with one
+ * Poisson's ratio for all materials this is the same as E-weighting). G_ref defaults to the first
+ * piece's G. Pieces must not overlap; pieces that do not touch twist on their own (components).
+ */
+export function compositeTorsionAnalysis(pieces: readonly ShearPiece[], options: TorsionOptions & { readonly referenceShearModulus?: number } = {}): TorsionAnalysis {
+  if (pieces.length === 0) throw new MeshInputError({ code: 'empty-section', message: 'no material pieces to analyse' });
+  pieces.forEach((p, i) => {
+    if (!(p.G > 0 && Number.isFinite(p.G))) throw new MeshInputError({ code: 'bad-parameter', message: `piece ${i}: shear modulus G = ${p.G} must be a positive number` });
+  });
+  const gRef = options.referenceShearModulus ?? pieces[0]!.G;
+  if (!(gRef > 0 && Number.isFinite(gRef))) throw new MeshInputError({ code: 'bad-parameter', message: `reference shear modulus ${gRef} must be a positive number` });
+  const locate = pieceLocator(pieces.map((p) => p.region), ((options.maxChordAngleDeg ?? DEFAULT_CHORD_ANGLE_DEG) * Math.PI) / 180);
+  const ratio = pieces.map((p) => p.G / gRef);
+  const weigh = (xy: Float64Array, triangles: Int32Array): Float64Array => {
+    const w = new Float64Array(triangles.length / 3);
+    for (let t = 0; t < w.length; t++) {
+      const a = triangles[3 * t]!, b = triangles[3 * t + 1]!, c = triangles[3 * t + 2]!;
+      const gx = (xy[2 * a]! + xy[2 * b]! + xy[2 * c]!) / 3;
+      const gy = (xy[2 * a + 1]! + xy[2 * b + 1]! + xy[2 * c + 1]!) / 3;
+      let k = locate(gx, gy);
+      // A centroid on a ray through a vertex: try points nearer each corner.
+      for (const v of [a, b, c]) if (k < 0) k = locate((gx + xy[2 * v]!) / 2, (gy + xy[2 * v + 1]!) / 2);
+      invariant(k >= 0, `torsion mesh element ${t} at (${gx}, ${gy}) lies in no material piece`);
+      w[t] = ratio[k]!;
+    }
+    return w;
+  };
+  return analysis(pieces.flatMap((p) => p.region), options, weigh);
+}
+
+function analysis(region: Region, options: TorsionOptions, weigh: ((xy: Float64Array, triangles: Int32Array) => Float64Array) | undefined): TorsionAnalysis {
   const layers = checkedOption('layers', options.layers ?? defaultLayers, 1, 64);
   const tolerance = checkedOption('tolerance', options.tolerance ?? 1e-10, 1e-15, 1e-3);
   const maxIterations = Math.floor(checkedOption('maxIterations', options.maxIterations ?? 20_000, 1, 10_000_000));
@@ -164,7 +214,7 @@ export function torsionAnalysis(region: Region, options: TorsionOptions = {}): T
       simplify,
       onProgress: stage(progress, 0, 0.15),
     });
-    const coarse = bandOrdered(quadraticMesh(base.xy, base.triangles));
+    const coarse = bandOrdered({ ...quadraticMesh(base.xy, base.triangles), weights: weigh?.(base.xy, base.triangles) });
     const meshMs = now() - t0;
     // The coarse level only feeds the error estimate and the start of the fine solve; with the
     // energy form of J its solver error enters squared, so 1e-7 is ample there.
@@ -192,7 +242,9 @@ export function torsionAnalysis(region: Region, options: TorsionOptions = {}): T
     }
     const { base, coarse, solve: solveC } = level;
     const t1 = now();
-    const fine = bandOrdered(quadraticMesh(coarse.xy, childTriangles(coarse)));
+    // Each coarse element's four children keep its material (childTriangles order).
+    const fineWeights = coarse.weights ? Float64Array.from({ length: coarse.weights.length * 4 }, (_, i) => coarse.weights![i >> 2]!) : undefined;
+    const fine = bandOrdered({ ...quadraticMesh(coarse.xy, childTriangles(coarse)), weights: fineWeights });
     const triangles = cornerTriangles(fine);
     const fineMeshMs = now() - t1;
     const solveF = solveWarping(fine, {

@@ -17,6 +17,12 @@ export interface QuadraticMesh {
   readonly xy: Float64Array;
   /** Six node indices per element: corners CCW, then mid-sides 0–1, 1–2, 2–0. */
   readonly elements: Int32Array;
+  /**
+   * Per element, its shear modulus over the reference one, G_e/G_ref (METHODS §7.7); absent
+   * means one material (all 1). K_e, F_e, the mass matrix and the section integrals are scaled
+   * by it, so J, the centroid, Ix, Iy, the shear centre and Cw are all G-weighted.
+   */
+  readonly weights?: Float64Array | undefined;
 }
 
 /** Adds one mid-side node per edge (shared by the two triangles on it). */
@@ -82,7 +88,7 @@ export function bandOrdered(q: QuadraticMesh): QuadraticMesh {
     xy[2 * k] = q.xy[2 * old] ?? 0;
     xy[2 * k + 1] = q.xy[2 * old + 1] ?? 0;
   });
-  return { xy, elements: q.elements.map((v) => newId[v] ?? 0) };
+  return { xy, elements: q.elements.map((v) => newId[v] ?? 0), weights: q.weights };
 }
 
 /** Corner triangles of the nested refinement: each T6 split into its four children. */
@@ -210,7 +216,7 @@ function meshCentroid(q: QuadraticMesh): Moments {
   for (let t = 0; t < e.length; t += 6) {
     const xs = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? 0)] ?? 0) - ox);
     const ys = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? 0) + 1] ?? 0) - oy);
-    const a = elementGeometry(xs, ys).twiceArea / 2;
+    const a = (elementGeometry(xs, ys).twiceArea / 2) * (q.weights?.[t / 6] ?? 1);
     area += a;
     sx += (a * ((xs[0] ?? 0) + (xs[1] ?? 0) + (xs[2] ?? 0))) / 3;
     sy += (a * ((ys[0] ?? 0) + (ys[1] ?? 0) + (ys[2] ?? 0))) / 3;
@@ -228,7 +234,7 @@ function massTimes(q: QuadraticMesh, X: Float64Array, Y: Float64Array, v: Float6
     const b = e[t + 1]!;
     const c = e[t + 2]!;
     const twice = (X[b]! - X[a]!) * (Y[c]! - Y[a]!) - (X[c]! - X[a]!) * (Y[b]! - Y[a]!);
-    const s = twice / 2 / 180;
+    const s = (twice / 2 / 180) * (q.weights?.[t / 6] ?? 1);
     for (let j = 0; j < 6; j++) local[j] = v[e[t + j]!]!;
     for (let i = 0; i < 6; i++) {
       let acc = 0;
@@ -282,7 +288,12 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
       ey[k] = Y[e[t + k] ?? 0] ?? 0;
     }
     const a = elementStiffnessAndLoad(ex, ey, ke, fe);
-    const [xx, yy, xy] = triangleSecondMoments([ex[0] ?? 0, ex[1] ?? 0, ex[2] ?? 0], [ey[0] ?? 0, ey[1] ?? 0, ey[2] ?? 0], a);
+    const w = q.weights?.[t / 6] ?? 1;
+    if (w !== 1) {
+      for (let k = 0; k < 36; k++) ke[k]! *= w;
+      for (let k = 0; k < 6; k++) fe[k]! *= w;
+    }
+    const [xx, yy, xy] = triangleSecondMoments([ex[0] ?? 0, ex[1] ?? 0, ex[2] ?? 0], [ey[0] ?? 0, ey[1] ?? 0, ey[2] ?? 0], a * w);
     Iyy += xx;
     Ixx += yy;
     Ixy += xy;
