@@ -9,7 +9,9 @@
  * `extraResults`; nothing else needs to change.
  */
 import type { SectionProperties } from '../../core/properties/types.ts';
-import { MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type TorsionResult } from '../../core/torsion/index.ts';
+import { compositeTorsionAnalysis, MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type ShearPiece, type TorsionResult } from '../../core/torsion/index.ts';
+import { builtInMaterial, documentMaterials, materialPiecesFromDocument, pascalsTo } from '../../core/materials/index.ts';
+import type { SectionDocument } from '../../core/document/types.ts';
 import { convertLength, defaultDisplaySet, formatSig, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
 import { cutParts, sectionDxf } from '../../core/dxf/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
@@ -24,7 +26,7 @@ export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m: for GeoJSON the unit of its coordinates (required); for a document the unit to report in (default: its own)' },
   { name: 'eref', type: 'string', value: 'VALUE', description: 'documents with materials: reference modulus for the transformed section, e.g. 200GPa or 29000ksi (default: the document\'s referenceModulus, else the first part\'s E)' },
   { name: 'section', type: 'string', value: 'NAME', description: 'documents with several sections (alternatives): the one to report (default: the first)' },
-  { name: 'torsion', type: 'boolean', description: 'add finite-element torsion: J, Cw, shear centre xs, ys, meshElements, jRelativeError (one material only)' },
+  { name: 'torsion', type: 'boolean', description: 'add finite-element torsion: J, Cw, shear centre xs, ys, meshElements, jRelativeError (several materials: G-weighted, with GJ)' },
   { name: 'dxf', type: 'string', value: 'OUT', description: 'also write the section as a DXF drawing: outline (layer SECTION), centroid, principal axes and a property table with the caution' },
   { name: 'xlsx', type: 'string', value: 'OUT', description: 'also write the properties table as XLSX (numbers at full precision in plain powers of the section\'s unit, units in the headings, the caution in row 1)' },
   { name: 'dxf-parts', type: 'boolean', description: 'with --dxf: also each part laid flat in its own coordinates, with its holes, on a layer PART-<name> (for cutting)' },
@@ -88,15 +90,41 @@ function extraResults(file: string, section: LoadedSection, flags: FlagValues, i
   return { json: { ...materials.json, ...torsion.json }, rows: [...materials.rows, ...torsion.rows], errors: [...materials.errors, ...torsion.errors] };
 }
 
-/** --torsion: core/torsion on the section's region; refused when visible parts differ in material (one G only). */
-function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: LengthUnit): ExtraResults {
-  if (section.doc !== undefined) {
-    const used = new Set(section.doc.parts.filter((p) => p.visible && p.operation === 'add').map((p) => p.material ?? '(default)'));
-    if (used.size > 1) return { json: {}, rows: [], errors: [`${file}: --torsion: the finite-element torsion handles one material, but the parts use ${[...used].join(', ')}`] };
+/** The pieces of a document whose visible parts use more than one material, each with its G (Pa). */
+interface TorsionMaterials {
+  readonly pieces: readonly ShearPiece[];
+  readonly gRef: number;
+  readonly gRefName: string;
+  /** Per material: id, name, G in Pa, and where G comes from. */
+  readonly moduli: readonly { readonly id: string; readonly name: string; readonly G: number; readonly from: string; readonly eOverG: number }[];
+}
+
+function torsionMaterials(doc: SectionDocument): TorsionMaterials | { readonly errors: readonly string[] } | null {
+  const used = new Set(doc.parts.filter((p) => p.visible && p.operation === 'add').map((p) => p.material ?? doc.defaultMaterial));
+  if (used.size <= 1) return null;
+  const found = materialPiecesFromDocument(doc);
+  const problems = [...found.issues, ...found.diagnostics.map((d) => d.message)];
+  if (problems.length > 0) return { errors: problems };
+  const stored = documentMaterials(doc).materials;
+  const moduli = new Map<string, TorsionMaterials['moduli'][number]>();
+  for (const p of found.pieces) {
+    const m = p.material;
+    if (moduli.has(m.id)) continue;
+    const raw = stored.get(m.id) ?? builtInMaterial(m.id);
+    const from = raw?.G !== undefined ? 'typed' : `from E and ν = ${raw?.nu ?? '?'}: G = E/(2(1 + ν))`;
+    moduli.set(m.id, { id: m.id, name: m.name, G: m.G, from, eOverG: m.E / m.G });
   }
+  const first = found.pieces[0]!.material;
+  return { pieces: found.pieces.map((p) => ({ region: p.region, G: p.material.G })), gRef: first.G, gRefName: first.name, moduli: [...moduli.values()] };
+}
+
+/** --torsion: core/torsion on the section's region; a document of several materials is G-weighted (G_ref: the first part's material). */
+function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: LengthUnit): ExtraResults {
+  const composite = section.doc !== undefined ? torsionMaterials(section.doc) : null;
+  if (composite !== null && 'errors' in composite) return { json: {}, rows: [], errors: composite.errors.map((e) => `${file}: --torsion: ${e}`) };
   let r: TorsionResult;
   try {
-    r = torsionConstants(section.region);
+    r = composite ? compositeTorsionAnalysis(composite.pieces).result : torsionConstants(section.region);
   } catch (err) {
     // Bad geometry, or a mesh/solver cap reached: say which, never a stack trace.
     if (err instanceof MeshInputError || err instanceof MeshRefinementError || err instanceof TorsionSolveError) {
@@ -104,6 +132,33 @@ function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: L
     }
     throw err;
   }
+  const out = torsionRows(section, unit, r);
+  return composite ? withMaterialRows(out, composite, section, unit, r) : out;
+}
+
+/** GJ, G_ref and each material's G with its origin, for a section of several materials. */
+function withMaterialRows(out: ExtraResults, c: TorsionMaterials, section: LoadedSection, unit: LengthUnit, r: TorsionResult): ExtraResults {
+  const imperialUnit = unit === 'in' || unit === 'ft';
+  const stress = imperialUnit ? 'ksi' : 'GPa';
+  const force = imperialUnit ? 'lbf' : 'N';
+  // G in force per unit²: Pa = N/m², psi = lbf/in².
+  const perUnit2 = imperialUnit ? pascalsTo(c.gRef, 'psi') * convertLength(1, unit, 'in', 1) ** 2 : c.gRef * convertLength(1, unit, 'm', 1) ** 2;
+  const GJ = perUnit2 * convertLength(r.J, section.unit, unit, 4);
+  const g = (v: number): string => formatSig(v, SIGNIFICANT, { grouping: ',' });
+  const shown = (pa: number): number => pascalsTo(pa, stress);
+  const rows: (readonly [string, string, string, string])[] = [
+    ['GJ', g(GJ), `${force}·${unit}²`, `torsional stiffness Σ G_i J_i (J above is GJ / G_ref)`],
+    ['Gref', g(shown(c.gRef)), stress, `reference shear modulus: ${c.gRefName} (the first part's material)`],
+    ...c.moduli.map((m) => ['G', g(shown(m.G)), stress, `${m.name}: ${m.from}`] as const),
+  ];
+  const ratios = c.moduli.map((m) => m.eOverG);
+  const spread = Math.max(...ratios) / Math.min(...ratios) - 1;
+  if (spread > 0.01) rows.push(['weighting', 'G', '', 'shear centre and Cw are G-weighted; the materials differ in E/G (Poisson ratio), so E-weighting would move them']);
+  const json = { GJ, GJUnit: `${force}·${unit}²`, gRef: shown(c.gRef), shearModulusUnit: stress, shearModuli: c.moduli.map((m) => ({ material: m.id, G: shown(m.G), from: m.from })) };
+  return { json: { ...out.json, ...json }, rows: [...out.rows, ...rows], errors: out.errors };
+}
+
+function torsionRows(section: LoadedSection, unit: LengthUnit, r: TorsionResult): ExtraResults {
   const L = (v: number, power: number): number => convertLength(v, section.unit, unit, power);
   const g = (v: number): string => formatSig(v, SIGNIFICANT, { grouping: ',' });
   const values = { J: L(r.J, 4), Cw: L(r.Cw, 6), xs: L(r.xs, 1), ys: L(r.ys, 1), meshElements: r.meshElements, jRelativeError: r.jRelativeError, torsionComponents: r.components };
@@ -242,9 +297,12 @@ export const propsCommand: Command = {
     'the document\'s referenceModulus when it has one (a material\'s E or a typed value), else the first',
     'part\'s E; --eref VALUE overrides both (unit suffix Pa, kPa, MPa, GPa, psi or ksi; default MPa or psi).',
     '',
-    '--torsion adds finite-element torsion of the (single-material) section: J (unit⁴), Cw (unit⁶,',
+    '--torsion adds finite-element torsion of the section: J (unit⁴), Cw (unit⁶,',
     'about the shear centre), the Trefftz shear centre xs, ys (section coordinates), meshElements,',
     'jRelativeError (estimated relative error of J) and torsionComponents (separate pieces).',
+    'Parts of several materials are bonded where they touch and weighted by G_i/G_ref (G_ref: the',
+    'first part\'s material): J is then GJ/G_ref, and "GJ" (force·unit²), "gRef" and "shearModuli"',
+    '(each material\'s G and whether it was typed or derived from E and ν) are added.',
     'A dense outline (e.g. a curve imported as thousands of vertices) is simplified for the',
     'torsion mesh only, within 0.1 % of J; "torsionOutline" then gives inputPoints, meshPoints and',
     'the relative changes deltaArea, deltaIx, deltaIy and jChange (estimated, included in',

@@ -1,11 +1,11 @@
 /**
- * Torsion constant J, Trefftz shear centre (xs, ys) and warping constant Cw of ONE material
- * region by finite elements (docs/methods.md §7; Pilkey 2002). Pure TypeScript, no DOM or Node: it runs
- * in the editor's Web Worker and in the command line alike.
+ * Torsion constant J, Trefftz shear centre (xs, ys) and warping constant Cw by finite elements
+ * (docs/methods.md §7; Pilkey 2002). Pure TypeScript, no DOM or Node: it runs in the editor's
+ * Web Worker and in the command line alike.
  *
- * One material only: the caller passes the Region of the parts that share one shear modulus
- * (union them first). A section of several materials needs the G-weighted form of docs/methods.md §7.7,
- * which this module does not do.
+ * torsionAnalysis takes the Region of one material. compositeTorsionAnalysis takes pieces of
+ * several materials, each with its shear modulus, and weights every element by G_i/G_ref
+ * (docs/methods.md §7.7): J = GJ/G_ref, and the centroid, shear centre and Cw are G-weighted.
  *
  * Dense outlines (thousands of vertices along a curve, as imported from drawings) are simplified
  * for the mesh only (core/mesh/simplify.ts) within geometryTolerance of J: the change of J is
@@ -162,7 +162,7 @@ export interface ShearPiece {
 }
 
 /**
- * Torsion of a section of several materials, perfectly bonded where they touch (METHODS §7.7):
+ * Torsion of a section of several materials, perfectly bonded where they touch (docs/methods.md §7.7):
  * each element's K_e, F_e and section integrals are weighted by G_e/G_ref, so the result's J is
  * GJ/G_ref, and the centroid, Ix, Iy, the shear centre (Trefftz) and Cw are G-weighted (with one
  * Poisson's ratio for all materials this is the same as E-weighting). G_ref defaults to the first

@@ -1,6 +1,6 @@
 /**
  * Which material piece holds a point, for the G-weighted torsion of a section of several
- * materials (METHODS §7.7). Each piece's rings are flattened with the mesh's own chord rule
+ * materials (docs/methods.md §7.7). Each piece's rings are flattened with the mesh's own chord rule
  * (core/mesh/flatten.ts), so the test sees the same outline the mesh covers, and a point is
  * inside when a ray towards +x crosses the piece's rings an odd number of times. Edges are
  * bucketed by rows of y, so a query costs the edges of one row, not of the whole outline.

@@ -5,7 +5,8 @@
  * Coordinates X, Y are relative to the mesh centroid. Ip, Ix, Iy, Ixy and the centroid are
  * integrated over the same mesh (docs/methods.md §7.2: mixing exact-arc Ip with a chord mesh would
  * exceed the FE error). J = Ip − Fᵀω (evaluated as the energy functional, see below); the Trefftz shear centre from ∫Xω, ∫Yω; Cw = ∫ω_S² about
- * the shear centre. One material: G cancels. Disconnected components twist independently: J
+ * the shear centre. One material: G cancels; several: every element integral is weighted by
+ * QuadraticMesh.weights (G_e/G_ref, docs/methods.md §7.7). Disconnected components twist independently: J
  * adds; each component's ω is given zero mean, so xs, ys and Cw then treat the pieces as
  * warping freely, with no shear connection between them.
  */
@@ -18,7 +19,7 @@ export interface QuadraticMesh {
   /** Six node indices per element: corners CCW, then mid-sides 0–1, 1–2, 2–0. */
   readonly elements: Int32Array;
   /**
-   * Per element, its shear modulus over the reference one, G_e/G_ref (METHODS §7.7); absent
+   * Per element, its shear modulus over the reference one, G_e/G_ref (docs/methods.md §7.7); absent
    * means one material (all 1). K_e, F_e, the mass matrix and the section integrals are scaled
    * by it, so J, the centroid, Ix, Iy, the shear centre and Cw are all G-weighted.
    */

@@ -1,15 +1,15 @@
 /**
- * Torsion of sections of several materials (perfect bond), METHODS §7.7: each element weighted
+ * Torsion of sections of several materials (perfect bond), docs/methods.md §7.7: each element weighted
  * by G_i/G_ref, J reported as GJ/G_ref.
  * References:
  *  - concentric circles: the warping of a circular section is zero, and ω = 0 also meets the
  *    interface conditions, so GJ = Σ G_i·J_i with J_i the polar moment of each ring
  *    (Timoshenko & Goodier, Theory of Elasticity, torsion of circular shafts; closed form).
- *    Arcs are meshed as chords of 2.5°: J is lower by about Δφ²/3 = 0.063 % (METHODS §7.8).
+ *    Arcs are meshed as chords of 2.5°: J is lower by about Δφ²/3 = 0.063 % (docs/methods.md §7.8).
  *  - rectangles: the Saint-Venant series (Timoshenko & Goodier), via tests/torsion/shapes.ts.
  *  - thin layered strip: the trial warping ω = −X·(Y − y_G) (y_G the G-weighted centroid) is
  *    quadratic, so it lies in the T6 space, and the FE J is at most its energy
- *    4·b·Σ G_i ∫(Y − y_G)² dy / G_ref (minimum principle, METHODS §7.2; identity).
+ *    4·b·Σ G_i ∫(Y − y_G)² dy / G_ref (minimum principle, docs/methods.md §7.2; identity).
  * G values are inputs of the tests (any positive numbers): 79.3 and 26 GPa are steel and
  * aluminium (common practice), 12 GPa a concrete-like fill, E/16 for timber (common practice).
  */
