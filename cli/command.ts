@@ -24,6 +24,8 @@ export interface CliIo {
   readonly err: (text: string) => void;
   /** Reads a text file (UTF-8); throws the platform's error when it cannot. */
   readonly readFile: (path: string) => string;
+  /** A file's size in bytes, when the host can tell without reading it; throws like readFile. */
+  readonly fileSize?: (path: string) => number;
 }
 
 export interface FlagSpec {

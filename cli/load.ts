@@ -5,7 +5,7 @@
  * A document may hold several sections (alternatives): the first is read unless one is named
  * (--section NAME); an unknown name is an error that lists the names the file has.
  */
-import { documentFromJson, findSection, parseJson, sectionView, type SectionDocument } from '../core/document/index.ts';
+import { documentFromJson, findSection, parseJson, textTooLong, sectionView, type SectionDocument } from '../core/document/index.ts';
 import type { Diagnostic, Region } from '../core/geometry/types.ts';
 import { normaliseRegion, validateRegion } from '../core/geometry/index.ts';
 import { geoJsonPathOf, isGeoJson, regionFromGeoJson } from '../core/geojson.ts';
@@ -182,6 +182,9 @@ type LoadFailure = { readonly ok: false; readonly messages: readonly string[] };
 function readSectionFile(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined, dxfOptions: DxfReadOptions): GeoJsonRead | { readonly kind: 'document'; readonly value: unknown; readonly notes?: readonly string[] } | LoadFailure {
   let text: string;
   try {
+    // Refuse a file far too large before reading it into memory at all.
+    const tooLong = io.fileSize === undefined ? null : textTooLong(io.fileSize(file));
+    if (tooLong !== null) return { ok: false, messages: [`${file}: ${tooLong}`] };
     text = io.readFile(file);
   } catch (err) {
     const code = (err as { code?: string }).code;

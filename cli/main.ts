@@ -3,7 +3,7 @@
  * one line here plus its file in cli/commands/. Flags are parsed strictly (an unknown flag is an
  * error, never ignored) from each command's own flag list, which also writes its help.
  */
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import { EXIT_BAD_INPUT, EXIT_BUG, EXIT_CODES_HELP, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagValues } from './command.ts';
 import { checkCommand } from './commands/check.ts';
@@ -152,5 +152,6 @@ export function processIo(): CliIo {
     out: (text) => void process.stdout.write(text),
     err: (text) => void process.stderr.write(text),
     readFile: (path) => readFileSync(path, 'utf8'),
+    fileSize: (path) => statSync(path).size,
   };
 }

@@ -15,6 +15,7 @@
  * Errors name the JSON path, e.g. features[3].geometry.coordinates[0][5].
  */
 import type { Polygon, Region, Ring } from './geometry/types.ts';
+import { MAX_DOCUMENT_VERTICES } from './document/schema.ts';
 
 export interface GeoJsonIssue {
   readonly path: string;
@@ -159,6 +160,9 @@ export function regionFromGeoJson(value: unknown): GeoJsonResult {
   for (const p of out.polygons) {
     vertexCount += p.outer.xy.length / 2;
     for (const h of p.holes) vertexCount += h.xy.length / 2;
+  }
+  if (vertexCount > MAX_DOCUMENT_VERTICES) {
+    return { ok: false, errors: [{ path: '(top level)', message: `the file holds ${vertexCount.toLocaleString('en-US')} vertices, more than this build computes (${MAX_DOCUMENT_VERTICES.toLocaleString('en-US')}); simplify or split the outlines` }] };
   }
   return { ok: true, region: out.polygons, sources: out.sources, vertexCount };
 }

@@ -9,7 +9,7 @@
  */
 import type { LengthUnit } from '../units/types.ts';
 import { migrateToCurrent } from './migrations.ts';
-import { validateDocument, type DocumentIssue } from './schema.ts';
+import { MAX_DOCUMENT_VERTICES, validateDocument, type DocumentIssue } from './schema.ts';
 import { fileFromSection, firstSectionView } from './sections.ts';
 import { DOCUMENT_FORMAT, SECTION_VIEW_VERSION, type JointSetting, type MaterialRef, type Part, type SectionDocument, type SectionFile } from './types.ts';
 
@@ -122,7 +122,25 @@ export function jsonSyntaxError(text: string): { offset: number; message: string
 }
 
 /** JSON.parse that reports where the syntax is wrong (line and column) instead of throwing. */
+/**
+ * The longest text this build parses (characters, about bytes for a document or GeoJSON file):
+ * past it JSON.parse alone needs gigabytes and minutes (a 10-million-vertex file, ~400 MB, ran
+ * past 120 s in 3 GB), so such a file is refused at once, saying how big it is and the limit.
+ * 128 MiB holds a section of MAX_DOCUMENT_VERTICES vertices with room to spare.
+ */
+export const MAX_TEXT_LENGTH = 128 * 1024 * 1024;
+
+const megabytes = (n: number): string => `${(n / (1024 * 1024)).toFixed(n < 10 * 1024 * 1024 ? 1 : 0)} MB`;
+
+/** The refusal for a text longer than MAX_TEXT_LENGTH, or null. */
+export function textTooLong(length: number): string | null {
+  if (length <= MAX_TEXT_LENGTH) return null;
+  return `the file is ${megabytes(length)}, more than this build reads (${megabytes(MAX_TEXT_LENGTH)}, about ${MAX_DOCUMENT_VERTICES.toLocaleString('en-US')} vertices); simplify or split the outlines`;
+}
+
 export function parseJson(input: string): JsonResult {
+  const tooLong = textTooLong(input.length);
+  if (tooLong !== null) return { ok: false, errors: [{ path: '', message: tooLong }] };
   // A UTF-8 byte-order mark (which some Windows editors write) is not part of the JSON (RFC 8259 §8.1 lets a parser ignore it).
   const text = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   try {

@@ -332,10 +332,33 @@ function crossFieldIssues(doc: SectionFile): DocumentIssue[] {
 export type ValidationResult = { readonly ok: true; readonly document: SectionFile } | { readonly ok: false; readonly issues: readonly DocumentIssue[] };
 
 /** Validates a parsed JSON value against the current format; never throws on user data. */
+/**
+ * The most vertices (outline points, over every section) one document may hold: a million-vertex
+ * section computes in a second or two; past a few million the tool can no longer answer while
+ * someone waits, so the document is refused with its count and this limit.
+ */
+export const MAX_DOCUMENT_VERTICES = 2_000_000;
+
+function vertexCount(file: SectionFile): number {
+  let n = 0;
+  for (const section of file.sections) {
+    for (const part of section.parts) {
+      if (part.type !== 'polygon') continue;
+      n += part.outer.length;
+      for (const hole of part.holes) n += hole.length;
+    }
+  }
+  return n;
+}
+
 export function validateDocument(value: unknown): ValidationResult {
   const result = v.safeParse(documentSchema, value, { abortEarly: false });
   if (!result.success) return { ok: false, issues: result.issues.map(issueToDocumentIssue) };
   const document = result.output as SectionFile;
+  const vertices = vertexCount(document);
+  if (vertices > MAX_DOCUMENT_VERTICES) {
+    return { ok: false, issues: [{ path: '', message: `the document holds ${vertices.toLocaleString('en-US')} outline vertices, more than this build computes (${MAX_DOCUMENT_VERTICES.toLocaleString('en-US')}); simplify or split the outlines` }] };
+  }
   const issues = crossFieldIssues(document);
   return issues.length > 0 ? { ok: false, issues } : { ok: true, document };
 }

@@ -51,6 +51,52 @@ function timeMs(args: readonly string[]): { ms: number; out: string } {
 
 const median = (xs: number[]): number => xs.sort((a, b) => a - b)[Math.floor(xs.length / 2)] ?? Number.NaN;
 
+/** The same ellipse as a Sectionsmith document (one polygon part, steel), for props, member and compare. */
+function ellipseDocument(n: number): string {
+  const parts: string[] = [];
+  for (let i = 0; i < n; i++) {
+    const t = (2 * Math.PI * i) / n;
+    parts.push(`[${1000 + 200 * Math.cos(t)},${500 + 100 * Math.sin(t)}]`);
+  }
+  const steel = '{"id":"s","name":"steel","kind":"steel","stressUnit":"MPa","E":200000,"nu":0.3,"density":7850,"fy":345,"strengthBasis":"yield"}';
+  const part = `{"id":"p1","name":"ellipse","type":"polygon","placement":{"x":0,"y":0,"rotationDeg":0,"mirror":false},"operation":"add","material":null,"visible":true,"outer":[${parts.join(',')}],"holes":[]}`;
+  return `{"format":"sectionsmith-section","version":3,"name":"bench","unit":"mm","materials":[${steel}],"defaultMaterial":"s","sections":[{"id":"a","name":"A","parts":[${part}]}]}`;
+}
+
+/** The bare baseline for a document: parse, then the same six Green sums over its one outline. */
+const BARE_DOCUMENT = BARE.replace('const r = g.coordinates[0];', 'const o = g.sections[0].parts[0].outer; const r = [...o, o[0]];');
+
+/**
+ * A 1e6-vertex document through props, member and compare, each against the bare parse-and-sum
+ * of the same file, alternately, median of 3 (issue 18 §3: within 2× of the baseline).
+ */
+function documentLines(dir: string): BenchLine[] {
+  const file = join(dir, 'ellipse-1e6.section.json');
+  writeFileSync(file, ellipseDocument(VERTICES));
+  const runs: Record<string, readonly string[]> = {
+    props: ['props', file, '--json'],
+    member: ['member', file, '--span', '6000', '--support', 'simple', '--uniform', '10kN/m'],
+    compare: ['compare', file],
+  };
+  const times: Record<string, number[]> = { props: [], member: [], compare: [], bare: [] };
+  for (let k = 0; k < 3; k++) {
+    for (const [name, args] of Object.entries(runs)) {
+      const t0 = performance.now();
+      // member and compare may exit 1 (a criterion over its limit): that is a result, not a failure.
+      try { execFileSync(process.execPath, [cli, ...args], { encoding: 'utf8', maxBuffer: 1 << 24 }); } catch (err) {
+        if ((err as { status?: number }).status !== 1) throw err;
+      }
+      times[name]!.push(performance.now() - t0);
+    }
+    times.bare!.push(timeMs(['-e', BARE_DOCUMENT, file]).ms);
+  }
+  const baseline = median(times.bare!);
+  return Object.keys(runs).map((name) => {
+    const value = median(times[name]!);
+    return { name: `cli-${name}-1e6-document`, value, unit: 'ms', baseline, baselineUnit: 'ms', ratio: value / baseline, detail: `${VERTICES}-vertex document, parse and validation included; target ratio <= 2` };
+  });
+}
+
 export async function bench(): Promise<BenchLine[]> {
   const dir = mkdtempSync(join(tmpdir(), 'sectionsmith-bench-'));
   try {
@@ -72,7 +118,8 @@ export async function bench(): Promise<BenchLine[]> {
     if (Math.abs(area - bareArea) > 1e-9 * bareArea) throw new Error(`areas differ: sectionsmith ${area}, bare loop ${bareArea}`);
     const value = median(cliTimes);
     const baseline = median(bareTimes);
-    return [{ name: 'cli-props-1e6-geojson', value, unit: 'ms', baseline, baselineUnit: 'ms', ratio: value / baseline, detail: `${VERTICES} vertices, validation included; target ratio <= 2` }];
+    const lines: BenchLine[] = [{ name: 'cli-props-1e6-geojson', value, unit: 'ms', baseline, baselineUnit: 'ms', ratio: value / baseline, detail: `${VERTICES} vertices, validation included; target ratio <= 2` }];
+    return [...lines, ...documentLines(dir)];
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
