@@ -5,7 +5,8 @@
  *
  * Overlaps (docs/methods.md §6 option (a)): a later part wins. Each visible "add" part keeps only
  * what no later visible part (add or subtract) covers; a subtract part removes material from
- * every earlier part. The union of the pieces is the section core/section composes, so the
+ * every earlier part, except a fastener hole: the pieces are the GROSS section, as stiffness
+ * (EA, EI) and deflection use it (core/section/compose.ts). The union of the pieces is the section core/section composes, so the
  * geometric properties agree; per-material extreme fibres need the split.
  * A part id that names no document material but a built-in one uses the built-in entry.
  * Problems are returned, never repaired: a missing material, an unknown id or an invalid field
@@ -14,7 +15,7 @@
 import type { SectionDocument } from '../document/types.ts';
 import { BooleanError, differenceRegions, regionBounds } from '../geometry/index.ts';
 import type { Diagnostic, Region } from '../geometry/types.ts';
-import { partLabel, regionFromDocument } from '../section/index.ts';
+import { isFastenerHole, partLabel, regionFromDocument } from '../section/index.ts';
 import type { MaterialPiece } from './composite.ts';
 import { builtInMaterial } from './library.ts';
 import { materialInSI, validateMaterial, type Material } from './schema.ts';
@@ -73,7 +74,7 @@ export function materialPiecesFromDocument(doc: SectionDocument): DocumentPieces
     let region = placed.region;
     for (const later of composed.parts.slice(k + 1)) {
       if (region.length === 0) break;
-      if (!boxesOverlap(region, later.region)) continue;
+      if (isFastenerHole(later.part) || !boxesOverlap(region, later.region)) continue;
       try {
         region = differenceRegions(region, later.region, { context: 'splitting the section by material', parts: [label, partLabel(later.part, later.index)] });
       } catch (err) {

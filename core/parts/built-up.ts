@@ -11,10 +11,12 @@
  *   union is not needed. `role` suggests a material ('steel' or 'timber') for the caller to map.
  * Bolt holes: a hole through a plate shows in the cross-section as a strip as wide as the hole
  *   and as deep as the plies it passes through (net-section practice; AISC 360-16 §B4.3b,
- *   common practice). Use `axis: 'z'` only for holes running along the member (round voids).
+ *   common practice). Such strips are fastener holes (cutoutRole 'fastener-hole'): a net-section
+ *   deduction only. Use `axis: 'z'` only for holes running along the member (round voids,
+ *   cutoutRole 'void').
  */
 import type { Diagnostic } from '../geometry/types.ts';
-import type { Placement, Operation } from '../document/types.ts';
+import type { CutoutRole, Placement, Operation } from '../document/types.ts';
 import type { LengthUnit } from '../units/types.ts';
 import { inchInUnit } from './inch.ts';
 import { dressedPly } from './lumber.ts';
@@ -27,6 +29,8 @@ interface PieceCommon {
   readonly placement: Placement;
   readonly operation: Operation;
   readonly role?: 'steel' | 'timber';
+  /** Subtract pieces: what the cut-out is (core/document/types.ts CutoutRole). */
+  readonly cutoutRole?: CutoutRole;
 }
 
 export type BuiltUpPiece =
@@ -92,10 +96,10 @@ export function boltHolePattern(options: BoltHoleOptions): BuiltUp {
     for (let j = 0; j < columns; j++) {
       const placement = at(options.x + (j - (columns - 1) / 2) * gauge, options.y + (i - (rows - 1) / 2) * pitch);
       const label = rows * columns === 1 ? name : `${name} ${i * columns + j + 1}`;
-      if (axis === 'z') pieces.push({ name: label, type: 'circle', diameter, placement, operation: 'subtract' });
+      if (axis === 'z') pieces.push({ name: label, type: 'circle', diameter, placement, operation: 'subtract', cutoutRole: 'void' });
       else {
         const [width, height] = axis === 'y' ? [diameter, depth] : [depth, diameter];
-        pieces.push({ name: label, type: 'rectangle', width, height, placement, operation: 'subtract' });
+        pieces.push({ name: label, type: 'rectangle', width, height, placement, operation: 'subtract', cutoutRole: 'fastener-hole' });
       }
     }
   }

@@ -26,3 +26,4 @@ export {
   type PnaMethod,
 } from './plastic.ts';
 export { sectionProperties, centroidalFromIntegrals, type CentroidalIntegrals } from './section.ts';
+export { netSectionProperties, type NetSectionProperties } from './net.ts';

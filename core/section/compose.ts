@@ -7,6 +7,12 @@
  * transformRegion), normalised and validated. Then the parts are combined in document order:
  * "add" is a union with what came before, "subtract" a difference.
  *
+ * Gross and net: a cut-out whose role is 'fastener-hole' (core/document/types.ts CutoutRole) is
+ * left out of `region`, the GROSS section that stiffness, deflection, torsion, plastic moduli and
+ * the stress map use: a bolt hole exists only at the bolt, not along the member. Where such holes
+ * exist, `net` is the section with them cut as well (every part in document order, as drawn),
+ * for the net-section properties (core/properties/net.ts). Voids cut both.
+ *
  * Choice: hidden parts (visible: false) are EXCLUDED from the computed section. Visibility is an
  * editing aid, and the numbers must describe what the user sees; the count of hidden parts is
  * returned so every output can say that some were left out.
@@ -30,7 +36,7 @@ import type { Part, SectionDocument } from '../document/types.ts';
 import type { Diagnostic, Polygon, Region, Ring } from '../geometry/types.ts';
 import { BooleanError, MAX_COORDINATE, MIN_EXTENT, arcContainsAngle, arcOfSegment, differenceRegions, normaliseRegion, transformRegion, unionRegions, validateRegion } from '../geometry/index.ts';
 import { shapeRegion } from '../parts/index.ts';
-import { sectionProperties } from '../properties/index.ts';
+import { netSectionProperties, sectionProperties, type NetSectionProperties } from '../properties/index.ts';
 import type { SectionProperties } from '../properties/types.ts';
 import type { LengthUnit } from '../units/types.ts';
 
@@ -45,8 +51,12 @@ export interface ComposedPart {
 }
 
 export interface Composition {
-  /** The combined section; empty when any diagnostic stopped the composition. */
+  /** The combined GROSS section (fastener holes left out); empty when any diagnostic stopped the composition. */
   readonly region: Region;
+  /** The net section (gross less the visible fastener holes, in document order); null when there are none or on diagnostics. */
+  readonly net: Region | null;
+  /** Visible cut-outs whose role is 'fastener-hole'. */
+  readonly fastenerHoles: number;
   readonly parts: readonly ComposedPart[];
   readonly diagnostics: readonly Diagnostic[];
   /** Parts left out because visible is false. */
@@ -56,8 +66,15 @@ export interface Composition {
 }
 
 export interface SectionResult extends Composition {
-  /** null when there are diagnostics (no numbers are given for bad geometry). */
+  /** Properties of the gross section; null when there are diagnostics (no numbers are given for bad geometry). */
   readonly properties: SectionProperties | null;
+  /** Net-section properties, only where fastener holes exist (null otherwise, or when the net section has no area). */
+  readonly netProperties: NetSectionProperties | null;
+}
+
+/** True for a subtract part whose role is a fastener hole (a net-section deduction only). */
+export function isFastenerHole(part: Part): boolean {
+  return part.operation === 'subtract' && part.cutoutRole === 'fastener-hole';
 }
 
 /** How a part is named in diagnostics: its name, else its position in the list. */
@@ -346,7 +363,7 @@ function combineParts(parts: readonly ComposedPart[], docName: string): Combinin
   return state;
 }
 
-/** The document's visible parts combined into one region, with every problem found. */
+/** The document's visible parts combined into one region (gross) and, with fastener holes, the net region, with every problem found. */
 export function regionFromDocument(doc: SectionDocument): Composition {
   const parts: ComposedPart[] = [];
   const diagnostics: Diagnostic[] = [];
@@ -360,21 +377,32 @@ export function regionFromDocument(doc: SectionDocument): Composition {
     diagnostics.push(...placed.diagnostics);
     parts.push({ part, index, region: placed.region, diagnostics: placed.diagnostics });
   });
-  if (diagnostics.length > 0) return { region: [], parts, diagnostics, hiddenParts, booleanCalls: 0 };
+  const fastenerHoles = parts.filter((p) => isFastenerHole(p.part)).length;
+  if (diagnostics.length > 0) return { region: [], net: null, fastenerHoles, parts, diagnostics, hiddenParts, booleanCalls: 0 };
 
-  const combined = combineParts(parts, doc.name);
+  const combined = combineParts(fastenerHoles > 0 ? parts.filter((p) => !isFastenerHole(p.part)) : parts, doc.name);
   diagnostics.push(...combined.diagnostics);
-  const { region, booleanCalls } = combined;
+  let { region, booleanCalls } = combined;
   if (diagnostics.length === 0 && region.length === 0) {
     const why = doc.parts.length === 0 ? 'the document has no parts' : hiddenParts === doc.parts.length ? 'every part is hidden' : 'the subtract parts remove all of it';
     diagnostics.push({ code: 'empty-section', message: `the section has no area: ${why}` });
   }
-  return { region: diagnostics.length > 0 ? [] : region, parts, diagnostics, hiddenParts, booleanCalls };
+  let net: Region | null = null;
+  if (fastenerHoles > 0 && diagnostics.length === 0) {
+    const withHoles = combineParts(parts, doc.name);
+    diagnostics.push(...withHoles.diagnostics);
+    booleanCalls += withHoles.booleanCalls;
+    net = withHoles.region;
+  }
+  if (diagnostics.length > 0) region = [];
+  return { region, net: diagnostics.length > 0 ? null : net, fastenerHoles, parts, diagnostics, hiddenParts, booleanCalls };
 }
 
-/** Composition and properties; properties are null when anything is wrong. */
+/** Composition and properties (gross, and net where fastener holes exist); properties are null when anything is wrong. */
 export function sectionFromDocument(doc: SectionDocument): SectionResult {
   const composed = regionFromDocument(doc);
-  const properties = composed.diagnostics.length === 0 ? sectionProperties(composed.region) : null;
-  return { ...composed, properties };
+  const ok = composed.diagnostics.length === 0;
+  const properties = ok ? sectionProperties(composed.region) : null;
+  const netProperties = ok && composed.net !== null && composed.net.length > 0 ? netSectionProperties(composed.net) : null;
+  return { ...composed, properties, netProperties };
 }

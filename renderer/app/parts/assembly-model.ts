@@ -432,7 +432,7 @@ export function defaultRoleMaterial(doc: SectionDocument, role: Role, id: Assemb
 // ---- into the document ----------------------------------------------------------------------
 
 function partOf(piece: BuiltUpPiece, id: string, name: string, material: string | null): Part {
-  const common = { id, name, placement: piece.placement, operation: piece.operation, material, visible: true };
+  const common = { id, name, placement: piece.placement, operation: piece.operation, ...(piece.cutoutRole === undefined ? {} : { cutoutRole: piece.cutoutRole }), material, visible: true };
   switch (piece.type) {
     case 'shape':
       return { ...common, type: 'shape', shape: piece.shape, params: piece.params, ...(piece.designation === undefined ? {} : { designation: piece.designation }) };
