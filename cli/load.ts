@@ -5,12 +5,13 @@
  * A document may hold several sections (alternatives): the first is read unless one is named
  * (--section NAME); an unknown name is an error that lists the names the file has.
  */
-import { documentFromJson, findSection, parseJson, textTooLong, sectionView, type SectionDocument } from '../core/document/index.ts';
+import { CUTOUT_ROLES, documentFromJson, findSection, parseJson, textTooLong, sectionView, type CutoutRole, type SectionDocument } from '../core/document/index.ts';
 import type { Diagnostic, Region } from '../core/geometry/types.ts';
 import { normaliseRegion, validateRegion } from '../core/geometry/index.ts';
 import { geoJsonPathOf, isGeoJson, regionFromGeoJson } from '../core/geojson.ts';
 import { sectionProperties } from '../core/properties/index.ts';
 import type { SectionProperties } from '../core/properties/types.ts';
+import type { NetSectionProperties } from '../core/properties/index.ts';
 import { type ComposedPart, sectionFromDocument } from '../core/section/index.ts';
 import { isLengthUnit, type LengthUnit } from '../core/units/index.ts';
 import { documentFromDxf, importDxf, looksLikeDxf } from '../core/dxf/index.ts';
@@ -28,6 +29,10 @@ export interface LoadedSection {
   readonly unit: LengthUnit;
   readonly region: Region;
   readonly properties: SectionProperties;
+  /** Documents with fastener holes: the net section and its properties (properties above are gross). */
+  readonly net?: { readonly region: Region; readonly properties: NetSectionProperties; readonly holes: number };
+  /** The composed parts (documents only), for joints and pieces. */
+  readonly composedParts?: readonly ComposedPart[];
   /** Parts used / left out (documents only; 0 for GeoJSON). */
   readonly parts: number;
   readonly hiddenParts: number;
@@ -111,7 +116,30 @@ export function sectionNames(names: readonly string[]): string {
   return names.map((n) => JSON.stringify(n)).join(', ');
 }
 
-function fromDocument(file: string, value: unknown, sectionName: string | undefined): LoadResult {
+/**
+ * `--cutout-role PART=ROLE` (repeatable): the role of a cut-out for this run, PART being a part's
+ * name or id in the chosen section, ROLE "fastener-hole" or "void". The file is not changed.
+ */
+export function withCutoutRoles(doc: SectionDocument, specs: readonly string[]): { readonly doc: SectionDocument; readonly errors: readonly string[] } {
+  const errors: string[] = [];
+  let parts = doc.parts;
+  for (const spec of specs) {
+    const eq = spec.lastIndexOf('=');
+    const name = eq < 0 ? '' : spec.slice(0, eq).trim();
+    const role = eq < 0 ? '' : spec.slice(eq + 1).trim();
+    if (name === '' || !(CUTOUT_ROLES as readonly string[]).includes(role)) {
+      errors.push(`--cutout-role: expected PART=fastener-hole or PART=void (PART a part's name or id), got ${JSON.stringify(spec)}`);
+      continue;
+    }
+    const matches = parts.filter((p) => p.name === name || p.id === name);
+    if (matches.length === 0) errors.push(`--cutout-role: no part named ${JSON.stringify(name)} in section "${doc.name}"`);
+    else if (matches.some((p) => p.operation !== 'subtract')) errors.push(`--cutout-role: part ${JSON.stringify(name)} adds material; a role belongs to a cut-out (a subtract part)`);
+    else parts = parts.map((p) => (matches.includes(p) ? { ...p, cutoutRole: role as CutoutRole } : p));
+  }
+  return { doc: parts === doc.parts ? doc : { ...doc, parts }, errors };
+}
+
+function fromDocument(file: string, value: unknown, sectionName: string | undefined, cutoutRoles: readonly string[] = []): LoadResult {
   const parsed = documentFromJson(value);
   if (!parsed.ok) return { ok: false, messages: parsed.errors.map((e) => `${file}: ${e.message}`) };
   const whole = parsed.file;
@@ -120,7 +148,9 @@ function fromDocument(file: string, value: unknown, sectionName: string | undefi
     return { ok: false, messages: [`${file}: --section: no section named ${JSON.stringify(sectionName)}; the sections are ${sectionNames(whole.sections.map((s) => s.name))}`] };
   }
   const index = whole.sections.indexOf(chosen);
-  const doc = sectionView(whole, chosen.id);
+  const roled = withCutoutRoles(sectionView(whole, chosen.id), cutoutRoles);
+  if (roled.errors.length > 0) return { ok: false, messages: roled.errors.map((e) => `${file}: ${e}`) };
+  const doc = roled.doc;
   // Paths as in the user's file: a file read from the one-section layout has its parts at the top.
   const list = parsed.migratedFrom !== null && parsed.migratedFrom < 2 ? 'parts' : `sections[${index}].parts`;
   const result = sectionFromDocument(doc);
@@ -140,7 +170,8 @@ function fromDocument(file: string, value: unknown, sectionName: string | undefi
     ok: true,
     section: {
       kind: 'document', name: doc.name, doc, documentName: whole.name, sectionIndex: index, sectionCount: whole.sections.length,
-      unit: doc.unit, region: result.region, properties: result.properties, parts: result.parts.length, hiddenParts: result.hiddenParts,
+      unit: doc.unit, region: result.region, properties: result.properties, parts: result.parts.length, hiddenParts: result.hiddenParts, composedParts: result.parts,
+      ...(result.net !== null && result.netProperties !== null ? { net: { region: result.net, properties: result.netProperties, holes: result.fastenerHoles } } : {}),
     },
   };
 }
@@ -207,14 +238,15 @@ function readSectionFile(file: string, io: CliIo, geoJsonUnit: LengthUnit | unde
 }
 
 /** Reads FILE as a document (its first section, or the one named `sectionName`) or as GeoJSON (which needs `geoJsonUnit`). */
-export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined, sectionName?: string, dxfOptions: DxfReadOptions = {}): LoadResult {
+export function loadSection(file: string, io: CliIo, geoJsonUnit: LengthUnit | undefined, sectionName?: string, dxfOptions: DxfReadOptions = {}, cutoutRoles: readonly string[] = []): LoadResult {
   const read = readSectionFile(file, io, geoJsonUnit, dxfOptions);
   if ('ok' in read) return read;
   if (read.kind === 'document') {
-    const loaded = fromDocument(file, read.value, sectionName);
+    const loaded = fromDocument(file, read.value, sectionName, cutoutRoles);
     return loaded.ok && read.notes !== undefined ? { ok: true, section: { ...loaded.section, importNotes: read.notes } } : loaded;
   }
   if (sectionName !== undefined) return { ok: false, messages: [`${file}: --section: a GeoJSON file has no named sections; --section applies to Sectionsmith documents`] };
+  if (cutoutRoles.length > 0) return { ok: false, messages: [`${file}: --cutout-role: a GeoJSON file has no parts; roles apply to the cut-outs of Sectionsmith documents`] };
   return fromGeoJson(file, read);
 }
 
@@ -230,6 +262,7 @@ export function loadSectionArgument(
   io: CliIo,
   sectionFlag?: string | boolean,
   dxfOptions: DxfReadOptions | string = {},
+  cutoutRoles: readonly string[] = [],
 ): { readonly file: string; readonly unitFlag: LengthUnit | undefined; readonly section: LoadedSection } | null {
   if (typeof dxfOptions === 'string') {
     io.err(`sectionsmith ${command.name}: ${dxfOptions}\n`);
@@ -248,7 +281,7 @@ export function loadSectionArgument(
     io.err(`sectionsmith ${command.name}: --section: expected the name of a section, got ${typeof sectionFlag === 'string' ? JSON.stringify(sectionFlag) : 'nothing'}\n`);
     return null;
   }
-  const loaded = loadSection(file, io, unitFlag, sectionFlag, dxfOptions);
+  const loaded = loadSection(file, io, unitFlag, sectionFlag, dxfOptions, cutoutRoles);
   if (!loaded.ok) {
     io.err(`${loaded.messages.join('\n')}\n`);
     return null;

@@ -12,6 +12,7 @@ import type { SectionProperties } from '../../core/properties/types.ts';
 import { compositeTorsionAnalysis, MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type ShearPiece, type TorsionResult } from '../../core/torsion/index.ts';
 import { builtInMaterial, documentMaterials, materialPiecesFromDocument, pascalsTo } from '../../core/materials/index.ts';
 import type { SectionDocument } from '../../core/document/types.ts';
+import type { NetSectionProperties } from '../../core/properties/index.ts';
 import { convertLength, defaultDisplaySet, formatSig, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
 import { cutParts, sectionDxf } from '../../core/dxf/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
@@ -26,6 +27,7 @@ export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m: for GeoJSON the unit of its coordinates (required); for a document the unit to report in (default: its own)' },
   { name: 'eref', type: 'string', value: 'VALUE', description: 'documents with materials: reference modulus for the transformed section, e.g. 200GPa or 29000ksi (default: the document\'s referenceModulus, else the first part\'s E)' },
   { name: 'section', type: 'string', value: 'NAME', description: 'documents with several sections (alternatives): the one to report (default: the first)' },
+  { name: 'cutout-role', type: 'string', value: 'PART=ROLE', description: 'treat cut-out PART (name or id) as ROLE for this run: fastener-hole (net-section deduction only) or void (missing along the member); the file is not changed', multiple: true },
   { name: 'torsion', type: 'boolean', description: 'add finite-element torsion: J, Cw, shear centre xs, ys, meshElements, jRelativeError (several materials: G-weighted, with GJ)' },
   { name: 'dxf', type: 'string', value: 'OUT', description: 'also write the section as a DXF drawing: outline (layer SECTION), centroid, principal axes and a property table with the caution' },
   { name: 'xlsx', type: 'string', value: 'OUT', description: 'also write the properties table as XLSX (numbers at full precision in plain powers of the section\'s unit, units in the headings, the caution in row 1)' },
@@ -82,9 +84,44 @@ interface ExtraResults {
   readonly errors: readonly string[];
 }
 
-/** Results beyond the geometry, as JSON keys and table rows [symbol, value, unit, what]: the E-weighted values of a document with materials. */
+const NET_ROWS: readonly (readonly [keyof NetSectionProperties, string, Quantity, string])[] = [
+  ['area', 'An', 'area', 'net area (fastener holes deducted)'],
+  ['cx', 'cx,net', 'length', 'net centroid x (net neutral axis, y bending)'],
+  ['cy', 'cy,net', 'length', 'net centroid y (net neutral axis, x bending)'],
+  ['Ix', 'Ix,net', 'inertia', 'net second moment about the net x axis'],
+  ['Iy', 'Iy,net', 'inertia', 'net second moment about the net y axis'],
+  ['Ixy', 'Ixy,net', 'inertia', 'net product of inertia'],
+  ['SxTop', 'Sx,net,top', 'modulus', 'net elastic modulus, x axis, top fibre'],
+  ['SxBottom', 'Sx,net,bottom', 'modulus', 'net elastic modulus, x axis, bottom fibre'],
+  ['SyLeft', 'Sy,net,left', 'modulus', 'net elastic modulus, y axis, left fibre'],
+  ['SyRight', 'Sy,net,right', 'modulus', 'net elastic modulus, y axis, right fibre'],
+];
+
+/** Net-section rows and the JSON "net" object, where fastener holes exist. */
+function netResults(section: LoadedSection, unit: LengthUnit): ExtraResults {
+  const net = section.net;
+  if (net === undefined) return { json: { fastenerHoles: 0 }, rows: [], errors: [] };
+  const display = defaultDisplaySet(unit);
+  const values: Record<string, number> = {};
+  const rows = NET_ROWS.map(([key, symbol, q, what]) => {
+    const v = convertLength(net.properties[key], section.unit, unit, QUANTITY_POWER[q]);
+    values[key] = v;
+    return [symbol, formatSig(toDisplay(v, unit, display[q]), SIGNIFICANT, { grouping: ',' }), display[q].label, what] as const;
+  });
+  return {
+    json: { fastenerHoles: net.holes, net: { ...values, note: 'net section: the gross section less its fastener holes; every other value is gross (fastener holes exist only at the fasteners)' } },
+    rows: [['fastenerHoles', String(net.holes), '', 'fastener holes: deducted in the net rows only; all other values are gross'], ...rows],
+    errors: [],
+  };
+}
+
+function joined(...parts: readonly ExtraResults[]): ExtraResults {
+  return { json: Object.assign({}, ...parts.map((p) => p.json)) as Record<string, unknown>, rows: parts.flatMap((p) => p.rows), errors: parts.flatMap((p) => p.errors) };
+}
+
+/** Results beyond the geometry, as JSON keys and table rows [symbol, value, unit, what]: net section, the E-weighted values of a document with materials, torsion. */
 function extraResults(file: string, section: LoadedSection, flags: FlagValues, io: CliIo, unit: LengthUnit): ExtraResults {
-  const materials = materialPropsResults(file, section, flags, io, unit);
+  const materials = joined(netResults(section, unit), materialPropsResults(file, section, flags, io, unit));
   if (flags.torsion !== true) return materials;
   const torsion = torsionResults(file, section, io, unit);
   return { json: { ...materials.json, ...torsion.json }, rows: [...materials.rows, ...torsion.rows], errors: [...materials.errors, ...torsion.errors] };
@@ -242,7 +279,7 @@ export function writeSectionDxf(out: string, s: LoadedSection, withParts: boolea
 }
 
 function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo, lists?: FlagLists): number | Promise<number> {
-  const loaded = loadSectionArgument(propsCommand, positionals, typeof flags.unit === 'string' ? flags.unit : undefined, io, flags.section, dxfReadOptions(flags, lists));
+  const loaded = loadSectionArgument(propsCommand, positionals, typeof flags.unit === 'string' ? flags.unit : undefined, io, flags.section, dxfReadOptions(flags, lists), lists?.['cutout-role'] ?? []);
   if (!loaded) return EXIT_BAD_INPUT;
   const { file, unitFlag, section } = loaded;
   const unit = unitFlag ?? section.unit;
@@ -260,7 +297,7 @@ function runProps(positionals: readonly string[], flags: FlagValues, io: CliIo, 
 export const propsCommand: Command = {
   name: 'props',
   summary: 'section properties of a Sectionsmith document or a GeoJSON area',
-  usage: 'props FILE [--json] [--unit U] [--section NAME] [--eref VALUE] [--torsion] [--xlsx OUT] [--dxf OUT [--dxf-parts]] [--layer NAME …] [--parts each|one]',
+  usage: 'props FILE [--json] [--unit U] [--section NAME] [--eref VALUE] [--cutout-role PART=ROLE …] [--torsion] [--xlsx OUT] [--dxf OUT [--dxf-parts]] [--layer NAME …] [--parts each|one]',
   description: [
     'FILE is a Sectionsmith document (.json, "format": "sectionsmith-section"), a GeoJSON',
     'Polygon, MultiPolygon, Feature or FeatureCollection (RFC 7946) whose coordinates are lengths',
@@ -296,6 +333,13 @@ export const propsCommand: Command = {
     'lbf/ft for in/ft), materialUnits and per-part modular ratios "materials". The reference modulus is',
     'the document\'s referenceModulus when it has one (a material\'s E or a typed value), else the first',
     'part\'s E; --eref VALUE overrides both (unit suffix Pa, kPa, MPa, GPa, psi or ksi; default MPa or psi).',
+    '',
+    'Cut-outs have a role: a fastener hole (bolt, rivet or pin hole) is a net-section deduction',
+    'only, so every property above, EI and torsion use the gross section; the net section is',
+    'reported beside it as "net" (An, cx, cy, Ix, Iy, Ixy, SxTop, SxBottom, SyLeft, SyRight, the',
+    'net centroid being the net neutral axis) with "fastenerHoles", the count. A void (the default)',
+    'is missing along the member and counts everywhere. --cutout-role PART=ROLE sets a role for one',
+    'run.',
     '',
     '--torsion adds finite-element torsion of the section: J (unit⁴), Cw (unit⁶,',
     'about the shear centre), the Trefftz shear centre xs, ys (section coordinates), meshElements,',

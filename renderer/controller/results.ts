@@ -6,6 +6,7 @@
 import type { SectionDocument } from '../../core/document/types.ts';
 import type { Diagnostic } from '../../core/geometry/types.ts';
 import type { SectionProperties } from '../../core/properties/types.ts';
+import type { NetSectionProperties } from '../../core/properties/index.ts';
 import { localRegion, sectionFromDocument } from '../../core/section/index.ts';
 import type { Part } from '../../core/document/types.ts';
 import { flattenRing, type Vec } from '../editor/geometry.ts';
@@ -16,6 +17,9 @@ export interface Results {
   readonly stale: SectionProperties | null;
   readonly diagnostics: readonly Diagnostic[];
   readonly hiddenParts: number;
+  /** Net-section properties where fastener holes exist (the gross `properties` ignore them). */
+  readonly net: NetSectionProperties | null;
+  readonly fastenerHoles: number;
   /** Wall time of the recompute, milliseconds. */
   readonly millis: number;
 }
@@ -30,11 +34,15 @@ export function createResultsCache(): (doc: SectionDocument) => Results {
     let properties: SectionProperties | null = null;
     let diagnostics: readonly Diagnostic[];
     let hiddenParts = 0;
+    let net: NetSectionProperties | null = null;
+    let fastenerHoles = 0;
     try {
       const r = sectionFromDocument(doc);
       properties = r.properties;
       diagnostics = r.diagnostics;
       hiddenParts = r.hiddenParts;
+      net = r.netProperties;
+      fastenerHoles = r.fastenerHoles;
     } catch (err) {
       // A thrown error is a bug in core, not bad user data; say so rather than show nothing.
       diagnostics = [{ code: 'boolean-failed', message: `internal error while computing the section: ${err instanceof Error ? err.message : String(err)}` }];
@@ -42,7 +50,7 @@ export function createResultsCache(): (doc: SectionDocument) => Results {
     const millis = performance.now() - t0;
     if (properties) lastValid = properties;
     lastDoc = doc;
-    last = { properties, stale: properties ? null : lastValid, diagnostics, hiddenParts, millis };
+    last = { properties, stale: properties ? null : lastValid, diagnostics, hiddenParts, net, fastenerHoles, millis };
     return last;
   };
 }

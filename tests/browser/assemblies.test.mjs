@@ -119,7 +119,9 @@ export async function aCoverPlatedW14X90WithFlangeHolesChangesTheAreaByThePlateL
   await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length === 6);
   const dh = 15 / 16;
   const change = 16 * 0.75 - 2 * dh * (0.71 + 0.75) - 2 * dh * 0.71;
-  const area = await resultValue(page, 'area');
-  near('ΔA = b·t − Σ hole strips (exact arithmetic)', area - alone, change, 1e-9);
+  // The holes are fastener holes: the gross area gains the plate only; the net area loses the strips too.
+  near('gross ΔA = b·t (exact arithmetic)', (await resultValue(page, 'area')) - alone, 16 * 0.75, 1e-9);
+  const area = await resultValue(page, 'net-area');
+  near('net ΔA = b·t − Σ hole strips (exact arithmetic)', area - alone, change, 1e-9);
   await page.screenshot({ path: path.join(artifactsDir, 'cover-plated-placed.png') });
 }
