@@ -1,0 +1,8 @@
+/**
+ * Joints between parts (contacts.ts), the parts that act together and the overlaps (groups.ts).
+ * For torsion of sections whose parts do not all act together, use partsActingTogether(doc).groups:
+ * one region per group, each to be solved on its own and summed.
+ */
+export { findJoints, jointKindText, jointSettingFor, jointTolerance, JOINT_TOLERANCE_RATIO, type ContactSegment, type Joint } from './contacts.ts';
+export { partOverlaps, partsActingTogether, OVERLAP_AREA_RATIO, SEPARATE_PIECES_NOTE, type ActingGroup, type ActingGroups, type PartOverlap } from './groups.ts';
+export { separateTorsion, type GroupTorsion, type SeparateTorsion } from './torsion.ts';
