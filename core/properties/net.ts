@@ -8,7 +8,7 @@
  * Ixy,net and the elastic moduli to each extreme fibre.
  *
  * Units: the region's length unit (L², L, L⁴, L³). Same conventions and accuracy as
- * sectionProperties (two-pass integrals about the centroid, METHODS §1.3; moduli METHODS §4).
+ * sectionProperties (two-pass integrals about the centroid, docs/methods.md §1.3; moduli §4).
  * Assumes a normalised, valid region of positive area (throws an InvariantError otherwise).
  */
 import { invariant } from '../invariant.ts';
