@@ -31,6 +31,8 @@ interface PieceCommon {
   readonly role?: 'steel' | 'timber';
   /** Subtract pieces: what the cut-out is (core/document/types.ts CutoutRole). */
   readonly cutoutRole?: CutoutRole;
+  /** Which material of a member with several (wood I-joist: 'flange' or 'web'). */
+  readonly materialRole?: string;
 }
 
 export type BuiltUpPiece =

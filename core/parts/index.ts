@@ -13,6 +13,7 @@ import { convertLength } from '../units/index.ts';
 import { inchInUnit } from './inch.ts';
 import { hat, lippedChannel, lippedZ, track } from './cold-formed.ts';
 import { lumber } from './lumber.ts';
+import { glulam, lvl, psl } from './timber.ts';
 import { angle, channel, doubleAngle, iShape, tee, zShape } from './rolled.ts';
 import { pipe, plate, rectTube, roundBar } from './simple.ts';
 
@@ -29,8 +30,9 @@ export {
 } from './built-up.ts';
 export { DRESSED_SIZES, dressedSize, type DressedSize } from './lumber-sizes.ts';
 export { dressedPly } from './lumber.ts';
+export { LAMINATION_THICKNESS_IN, multiPlyLumber, woodIJoist, type MultiPlyOptions, type WoodIJoistOptions } from './timber.ts';
 
-const PART_TYPES: readonly PartType[] = [plate, roundBar, pipe, rectTube, iShape, channel, angle, doubleAngle, tee, zShape, lumber, lippedChannel, lippedZ, hat, track];
+const PART_TYPES: readonly PartType[] = [plate, roundBar, pipe, rectTube, iShape, channel, angle, doubleAngle, tee, zShape, lumber, lippedChannel, lippedZ, hat, track, glulam, lvl, psl];
 
 /** Every part type, in palette order. */
 export function partTypes(): readonly PartType[] {

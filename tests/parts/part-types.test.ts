@@ -21,8 +21,8 @@ function messages(shape: string, params: Record<string, number>): string {
 }
 
 describe('every part type', () => {
-  it('lists the ten trade part types, the double angle and the four cold-formed parts, each with a documented origin', () => {
-    expect(partTypes().map((t) => t.id)).toEqual(['plate', 'round-bar', 'pipe', 'rect-tube', 'i-shape', 'channel', 'angle', 'double-angle', 'tee', 'z-shape', 'lumber', 'lipped-channel', 'lipped-z', 'hat', 'track']);
+  it('lists the ten trade part types, the double angle, the four cold-formed parts and glulam, LVL, PSL, each with a documented origin', () => {
+    expect(partTypes().map((t) => t.id)).toEqual(['plate', 'round-bar', 'pipe', 'rect-tube', 'i-shape', 'channel', 'angle', 'double-angle', 'tee', 'z-shape', 'lumber', 'lipped-channel', 'lipped-z', 'hat', 'track', 'glulam', 'lvl', 'psl']);
     for (const t of partTypes()) expect(t.origin, t.id).toMatch(/\w/);
   });
 
