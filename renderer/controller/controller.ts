@@ -132,8 +132,9 @@ export class AppController implements CommandTarget {
   private recoveryTimer: unknown = null;
   private noteTimer: unknown = null;
   private answerDiscard: ((yes: boolean) => void) | null = null;
-  private readonly unsubscribeEditor: () => void;
+  private unsubscribeEditor: (() => void) | null = null;
   private unsubscribeHost: (() => void) | null = null;
+  private started = false;
 
   constructor(deps: ControllerDeps) {
     this.host = deps.host;
@@ -156,7 +157,13 @@ export class AppController implements CommandTarget {
       clipboardParts: 0,
     };
     this.torsionRunner = deps.torsion((torsion) => this.set({ torsion }));
-    this.unsubscribeEditor = this.editor.subscribe(() => this.editorChanged());
+    this.attach();
+  }
+
+  /** Listen to the editor and the host's menu commands (again, after dispose: React may remount). */
+  private attach(): void {
+    this.unsubscribeEditor ??= this.editor.subscribe(() => this.editorChanged());
+    this.unsubscribeHost ??= this.host.onCommand?.((c) => void this.runHostCommand(c)) ?? null;
     this.editorChanged();
   }
 
@@ -177,9 +184,11 @@ export class AppController implements CommandTarget {
   /** Stop timers, the worker and subscriptions (the page is going away, or a test ends). */
   dispose(): void {
     for (const t of [this.torsionTimer, this.recoveryTimer, this.noteTimer]) if (t !== null) this.timers.clear(t);
+    this.torsionTimer = this.recoveryTimer = this.noteTimer = null;
     this.torsionRunner.cancel();
-    this.unsubscribeEditor();
+    this.unsubscribeEditor?.();
     this.unsubscribeHost?.();
+    this.unsubscribeEditor = this.unsubscribeHost = null;
   }
 
   // ---- derived results ----------------------------------------------------------------------
@@ -302,7 +311,9 @@ export class AppController implements CommandTarget {
    * session ended without saving. Host commands (menu items) are listened to from here on.
    */
   async start(): Promise<void> {
-    this.unsubscribeHost = this.host.onCommand?.((c) => void this.runHostCommand(c)) ?? null;
+    this.attach();
+    if (this.started) return; // a second mount of the same controller: start-up is done once
+    this.started = true;
     const [launched, left, seen, displayId, figures] = await Promise.all([
       this.host.launchFile?.() ?? Promise.resolve(null),
       this.host.readRecovery(),

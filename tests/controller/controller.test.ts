@@ -429,3 +429,19 @@ describe('every command by id', () => {
     expect(r.c.editor.getState().doc.parts).toHaveLength(0);
   });
 });
+
+describe('mounting twice (React development mode mounts, unmounts and mounts again)', () => {
+  it('keeps following the editor after dispose and a second start, and loads the example once', async () => {
+    const r = rig();
+    await r.c.start();
+    r.c.dispose();
+    await r.c.start();
+    expect(r.c.editor.getState().file?.name).toBe(EXAMPLE_NAME);
+    r.c.editor.moveSelectionBy(0, 0);
+    r.c.editor.select(['deck-plate']);
+    r.c.editor.moveSelectionBy(10, 0);
+    expect(r.host.titles.at(-1)).toBe(`• ${EXAMPLE_NAME} — Sectionsmith`);
+    r.timers.advance(TORSION_DELAY_MS);
+    expect(r.torsion.solved.at(-1)).toBe(r.c.editor.getState().doc);
+  });
+});
