@@ -5,6 +5,7 @@
  */
 import type { Editor } from '../editor/editor.ts';
 import type { ToolId } from '../editor/tools/tool.ts';
+import type { AlignEdge, DistributeMode } from '../editor/transforms.ts';
 
 /** What the commands act on: the editor, and the controller's own work (files, views, clipboard). */
 export interface CommandTarget {
@@ -35,6 +36,8 @@ export interface Command {
 }
 
 const tool = (id: ToolId, label: string): Command => ({ label, run: (t) => t.editor.setTool(id) });
+const align = (edge: AlignEdge, label: string): Command => ({ label, run: (t) => t.editor.alignSelection(edge) });
+const spread = (axis: 'x' | 'y', mode: DistributeMode, label: string): Command => ({ label, run: (t) => t.editor.distributeSelection(axis, mode) });
 const nudge = (sx: number, sy: number, label: string): Command => ({
   label,
   run: (t) => {
@@ -63,6 +66,18 @@ export const COMMANDS = {
   duplicate: { label: 'Duplicate', run: (t) => t.duplicate() },
   delete: { label: 'Delete', run: (t) => t.editor.deleteSelection() },
   'select-all': { label: 'Select all parts', run: (t) => t.editor.select(t.editor.getState().doc.parts.map((p) => p.id)) },
+  'align-left': align('left', 'Align left edges'),
+  'align-centre-x': align('centre-x', 'Align centres (vertical line)'),
+  'align-right': align('right', 'Align right edges'),
+  'align-top': align('top', 'Align top edges'),
+  'align-centre-y': align('centre-y', 'Align middles (horizontal line)'),
+  'align-bottom': align('bottom', 'Align bottom edges'),
+  'distribute-x': spread('x', 'centres', 'Distribute centres left to right'),
+  'distribute-y': spread('y', 'centres', 'Distribute centres bottom to top'),
+  'space-x': spread('x', 'gaps', 'Equal gaps left to right'),
+  'space-y': spread('y', 'gaps', 'Equal gaps bottom to top'),
+  'touch-x': spread('x', 'touch', 'Side by side, touching (left to right)'),
+  'touch-y': spread('y', 'touch', 'Stacked, touching (bottom to top)'),
   'zoom-in': { label: 'Zoom in', run: (t) => t.zoomBy(1.25) },
   'zoom-out': { label: 'Zoom out', run: (t) => t.zoomBy(0.8) },
   'zoom-fit': { label: 'Fit the section', run: (t) => t.fit() },

@@ -50,7 +50,9 @@ export function createResultsCache(): (doc: SectionDocument) => Results {
     const millis = performance.now() - t0;
     if (properties) lastValid = properties;
     lastDoc = doc;
-    last = { properties, stale: properties ? null : lastValid, diagnostics, hiddenParts, net, fastenerHoles, millis };
+    // An empty section (a new alternative, everything deleted) shows nothing left over from before.
+    const empty = !doc.parts.some((p) => p.visible);
+    last = { properties, stale: properties || empty ? null : lastValid, diagnostics, hiddenParts, net, fastenerHoles, millis };
     return last;
   };
 }

@@ -18,7 +18,7 @@ import { documentOutlines, outlineBox, outlineHit, type PartOutline, type ShapeR
 import { emptyHistory, isDirty, markSaved, pushStep, redoStep, undoStep, type History, type Snapshot } from './history.ts';
 import { snapPoint, snapTargets, type SnapResult, type SnapSettings } from './snapping.ts';
 import {
-  alignParts, deleteParts, duplicateParts, mirrorParts, reorderPart, rotateParts, translateParts, uniquePartId, type AlignEdge,
+  alignParts, arrayParts, deleteParts, distributeParts, duplicateParts, mirrorParts, reorderPart, rotateParts, translateParts, uniquePartId, type AlignEdge, type DistributeMode,
 } from './transforms.ts';
 import type { PointerInput, SnapOptions, ToolContext, ToolId, ToolState } from './tools/tool.ts';
 import { polygonPartFrom } from './tools/polygon-placing.ts';
@@ -433,6 +433,19 @@ export class Editor {
 
   alignSelection(edge: AlignEdge): void {
     this.run('Align', (doc, sel) => ({ doc: alignParts(doc, sel, edge, this.outlines(doc)) }));
+  }
+
+  /** `count` copies of the selection at a pitch (dx, dy); the copies become the selection. */
+  arraySelection(count: number, dx: number, dy: number): void {
+    this.run(count === 1 ? 'Array: 1 copy' : `Array: ${count} copies`, (doc, sel) => {
+      if (sel.length === 0) return { doc };
+      const r = arrayParts(doc, sel, count, dx, dy);
+      return { doc: r.doc, selection: r.ids };
+    });
+  }
+
+  distributeSelection(axis: 'x' | 'y', mode: DistributeMode): void {
+    this.run(mode === 'touch' ? 'Place side by side' : 'Distribute', (doc, sel) => ({ doc: distributeParts(doc, sel, axis, mode, this.outlines(doc)) }));
   }
 
   reorder(id: string, direction: -1 | 1): void {

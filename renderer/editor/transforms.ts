@@ -129,6 +129,74 @@ function alignOffset(edge: AlignEdge, b: Box, all: Box): [number, number] {
   }
 }
 
+/**
+ * An array: `count` copies of the parts `ids`, the k-th moved by k·(dx, dy) from the originals
+ * (so count 2 with a pitch of one ply's thickness builds a 3-ply member). Copies are named
+ * "<name> 2", "<name> 3", … and placed after the originals; returns the new ids in order.
+ */
+export function arrayParts(doc: SectionDocument, ids: readonly string[], count: number, dx: number, dy: number): { doc: SectionDocument; ids: string[] } {
+  if (!Number.isInteger(count) || count < 1) throw new Error(`arrayParts: count must be a whole number ≥ 1, got ${count}`);
+  let out = doc;
+  const newIds: string[] = [];
+  for (let k = 1; k <= count; k++) {
+    for (const id of ids) {
+      const p = doc.parts.find((q) => q.id === id);
+      if (!p) continue;
+      const copyId = uniquePartId(out);
+      newIds.push(copyId);
+      const copy: Part = { ...p, id: copyId, name: `${p.name} ${k + 1}`, placement: { ...p.placement, x: p.placement.x + k * dx, y: p.placement.y + k * dy } };
+      out = { ...out, parts: [...out.parts, copy] };
+    }
+  }
+  return { doc: out, ids: newIds };
+}
+
+export type DistributeMode = 'centres' | 'gaps' | 'touch';
+
+/**
+ * Spread the parts `ids` along x or y by their bounding boxes, in the order of their lower edge:
+ * - 'centres': the first and last stay; the centres between are equally spaced;
+ * - 'gaps': the first and last stay; the gaps between neighbouring boxes are made equal;
+ * - 'touch': the first stays; each next box starts where the one before ends (plies side by side).
+ */
+export function distributeParts(doc: SectionDocument, ids: readonly string[], axis: 'x' | 'y', mode: DistributeMode, outlines: readonly PartOutline[]): SectionDocument {
+  const lo = (b: Box): number => (axis === 'x' ? b.xMin : b.yMin);
+  const hi = (b: Box): number => (axis === 'x' ? b.xMax : b.yMax);
+  const boxes = outlines
+    .filter((o) => ids.includes(o.partId))
+    .map((o) => ({ id: o.partId, box: outlineBox([o]) as Box }))
+    .sort((a, b) => lo(a.box) - lo(b.box) || hi(a.box) - hi(b.box));
+  if (boxes.length < 2 || (mode !== 'touch' && boxes.length < 3)) return doc;
+  const first = boxes[0] as { id: string; box: Box };
+  const last = boxes[boxes.length - 1] as { id: string; box: Box };
+  const targets: number[] = []; // new lower edge of each box
+  if (mode === 'touch') {
+    let at = lo(first.box);
+    for (const b of boxes) {
+      targets.push(at);
+      at += hi(b.box) - lo(b.box);
+    }
+  } else if (mode === 'centres') {
+    const c0 = (lo(first.box) + hi(first.box)) / 2;
+    const c1 = (lo(last.box) + hi(last.box)) / 2;
+    boxes.forEach((b, i) => targets.push(c0 + ((c1 - c0) * i) / (boxes.length - 1) - (hi(b.box) - lo(b.box)) / 2));
+  } else {
+    const sizes = boxes.reduce((sum, b) => sum + hi(b.box) - lo(b.box), 0);
+    const gap = (hi(last.box) - lo(first.box) - sizes) / (boxes.length - 1);
+    let at = lo(first.box);
+    for (const b of boxes) {
+      targets.push(at);
+      at += hi(b.box) - lo(b.box) + gap;
+    }
+  }
+  let out = doc;
+  boxes.forEach((b, i) => {
+    const d = (targets[i] as number) - lo(b.box);
+    if (d !== 0) out = translateParts(out, [b.id], axis === 'x' ? d : 0, axis === 'y' ? d : 0);
+  });
+  return out;
+}
+
 /** Move parts up (toward the end, drawn last) or down in the list by one place. */
 export function reorderPart(doc: SectionDocument, id: string, direction: -1 | 1): SectionDocument {
   const i = doc.parts.findIndex((p) => p.id === id);

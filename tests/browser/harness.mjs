@@ -1,7 +1,8 @@
 // Browser test harness: builds the web app once, serves dist/web on 127.0.0.1 with the desktop
 // app's own CSP (electron/window-options.ts, so a CSP break shows up here too), and drives
 // Chromium through playwright-core (tests/browser/browser.mjs says which one). Each test gets a
-// fresh browser context (empty storage, downloads accepted) and fails on an uncaught page error or a CSP violation.
+// fresh browser context (empty storage, downloads accepted) and fails on an uncaught page error or
+// any console error (CSP violations included).
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -42,7 +43,8 @@ export async function runOne(harness, name, test) {
   const problems = [];
   page.on('pageerror', (error) => problems.push(`uncaught page error: ${error.message}`));
   page.on('console', (message) => {
-    if (message.type() === 'error' && /Content.Security.Policy|Refused to/i.test(message.text())) problems.push(`CSP violation: ${message.text()}`);
+    // Any console error fails the test (a CSP violation is named as such).
+    if (message.type() === 'error') problems.push(/Content.Security.Policy|Refused to/i.test(message.text()) ? `CSP violation: ${message.text()}` : `console error: ${message.text()}`);
   });
   const artifactsDir = path.join(ARTIFACTS, name.replace(/[^\w.-]+/g, '_'));
   mkdirSync(artifactsDir, { recursive: true });

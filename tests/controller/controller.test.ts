@@ -216,6 +216,54 @@ describe('keys', () => {
   });
 });
 
+
+/** Two plates 10 × 10 at (0, 0) and 60 × 20 at (100, 50), both selected. */
+function twoPlates(): Rig {
+  const r = rig();
+  r.c.editor.addRectangle({ x: 0, y: 0, width: 10, height: 10 });
+  r.c.editor.addRectangle({ x: 100, y: 50, width: 60, height: 20 });
+  r.c.editor.select(['part-1', 'part-2']);
+  return r;
+}
+
+/** Align: the selection box is x −5 … 130, y −5 … 60; each edge is exact arithmetic on it. */
+function alignCases(): Record<'align-left' | 'align-centre-x' | 'align-right' | 'align-top' | 'align-centre-y' | 'align-bottom', () => Promise<void>> {
+  const expectPlaced = (id: CommandId, want: [string, number, number][]) => async (): Promise<void> => {
+    const r = twoPlates();
+    await r.c.run(id);
+    expect(placed(r)).toEqual(want);
+  };
+  return {
+    'align-left': expectPlaced('align-left', [['part-1', 0, 0], ['part-2', 25, 50]]),
+    'align-centre-x': expectPlaced('align-centre-x', [['part-1', 62.5, 0], ['part-2', 62.5, 50]]),
+    'align-right': expectPlaced('align-right', [['part-1', 125, 0], ['part-2', 100, 50]]),
+    'align-top': expectPlaced('align-top', [['part-1', 0, 55], ['part-2', 100, 50]]),
+    'align-centre-y': expectPlaced('align-centre-y', [['part-1', 0, 27.5], ['part-2', 100, 27.5]]),
+    'align-bottom': expectPlaced('align-bottom', [['part-1', 0, 0], ['part-2', 100, 5]]),
+  };
+}
+
+/** Distribute and touch: three plates of widths (heights) 10, 20, 30 at 0, 100, 130 along each axis. */
+function spreadCases(): Record<'distribute-x' | 'distribute-y' | 'space-x' | 'space-y' | 'touch-x' | 'touch-y', () => Promise<void>> {
+  const run = (id: CommandId, axis: 'x' | 'y', want: number[]) => async (): Promise<void> => {
+    const r = rig();
+    [[0, 10], [100, 20], [130, 30]].forEach(([at, size]) =>
+      r.c.editor.addRectangle(axis === 'x' ? { x: at as number, y: 0, width: size as number, height: 5 } : { x: 0, y: at as number, width: 5, height: size as number }),
+    );
+    r.c.editor.select(['part-1', 'part-2', 'part-3']);
+    await r.c.run(id);
+    expect(r.c.editor.getState().doc.parts.map((p) => (axis === 'x' ? p.placement.x : p.placement.y))).toEqual(want);
+  };
+  return {
+    'distribute-x': run('distribute-x', 'x', [0, 65, 130]),
+    'distribute-y': run('distribute-y', 'y', [0, 65, 130]),
+    'space-x': run('space-x', 'x', [0, 60, 130]),
+    'space-y': run('space-y', 'y', [0, 60, 130]),
+    'touch-x': run('touch-x', 'x', [0, 15, 40]),
+    'touch-y': run('touch-y', 'y', [0, 15, 40]),
+  };
+}
+
 /** One check per command: the Record type makes a new command without a test a type error. */
 const COMMAND_CASES: Record<CommandId, () => Promise<void>> = {
   async new() {
@@ -347,6 +395,8 @@ const COMMAND_CASES: Record<CommandId, () => Promise<void>> = {
     await r.c.run('select-all');
     expect(r.c.editor.getState().selection).toEqual(['part-1', 'part-2']);
   },
+  ...alignCases(),
+  ...spreadCases(),
   async 'zoom-in'() {
     const r = rig();
     const before = r.c.getState().view.scale;

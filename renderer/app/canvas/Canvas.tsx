@@ -13,6 +13,7 @@ import type { Diagnostic } from '../../../core/geometry/types.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
 import { COLOURS } from './palette.ts';
 import type { Overlays } from '../../controller/controller.ts';
+import { placeLabels, type LabelBox, type LabelRequest } from './labels.ts';
 import { gridStep, toScreen, toSection, zoomAt, type View } from '../../controller/view.ts';
 import { formatSig } from '../../../core/units/index.ts';
 import { arcOfSegment, ringVertexCount } from '../../../core/geometry/ring.ts';
@@ -143,14 +144,35 @@ function PartShape({ o, view, subtract, selected }: { o: PartOutline; view: View
   );
 }
 
-function ResultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: SectionProperties; view: View; overlays: Overlays; width: number; height: number; shearCentre: readonly [number, number] | null }): ReactElement {
+/** What an overlay draws: shapes, labels to be placed (labels.ts), and boxes labels must keep clear of. */
+interface OverlayParts {
+  readonly items: ReactElement[];
+  readonly labels: LabelRequest[];
+  readonly reserved: LabelBox[];
+}
+
+let measureContext: CanvasRenderingContext2D | null = null;
+/** A label of `text` at `fontSize` (Konva's default Arial), with 2 px of padding round it. */
+function label(id: string, text: string, anchor: Vec, offsets: readonly (readonly [number, number])[], priority: number, fontSize = 11, colour = '', style = ''): LabelRequest & { fontSize: number; colour: string; style: string } {
+  measureContext ??= document.createElement('canvas').getContext('2d');
+  let w = text.length * fontSize * 0.6;
+  if (measureContext) {
+    measureContext.font = `${style} ${fontSize}px Arial`;
+    w = measureContext.measureText(text).width;
+  }
+  return { id, text, anchor, offsets, width: Math.ceil(w) + 4, height: fontSize + 4, priority, fontSize, colour, style };
+}
+
+function resultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: SectionProperties; view: View; overlays: Overlays; width: number; height: number; shearCentre: readonly [number, number] | null }): OverlayParts {
   const c = toScreen(view, [p.cx, p.cy]);
   const far = Math.hypot(width, height);
   const items: ReactElement[] = [];
+  const labels: LabelRequest[] = [];
+  const reserved: LabelBox[] = [];
   if (overlays.axes) {
     items.push(<Line key="ax" points={[c[0] - far, c[1], c[0] + far, c[1]]} stroke={COLOURS.centroid} strokeWidth={1} dash={[10, 4, 2, 4]} />);
     items.push(<Line key="ay" points={[c[0], c[1] - far, c[0], c[1] + far]} stroke={COLOURS.centroid} strokeWidth={1} dash={[10, 4, 2, 4]} />);
-    items.push(<Text key="axl" x={c[0] + 8} y={c[1] + 4} text="x" fontSize={12} fontStyle="italic" fill={COLOURS.centroid} />);
+    labels.push(label('axis-x', 'x', [Math.min(width - 20, c[0] + 60), c[1]], [[0, 3], [0, -17]], 5, 12, COLOURS.centroid, 'italic'));
   }
   if (overlays.principal && !p.isotropic) {
     // Screen y is down: a CCW section angle θ draws as −θ on screen.
@@ -159,14 +181,15 @@ function ResultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: 
     const len = Math.min(width, height) * 0.45;
     items.push(<Line key="p1" points={[c[0] - d1[0] * len, c[1] - d1[1] * len, c[0] + d1[0] * len, c[1] + d1[1] * len]} stroke={COLOURS.principal} strokeWidth={1.4} />);
     items.push(<Line key="p2" points={[c[0] + d1[1] * len * 0.6, c[1] - d1[0] * len * 0.6, c[0] - d1[1] * len * 0.6, c[1] + d1[0] * len * 0.6]} stroke={COLOURS.principal} strokeWidth={1} dash={[6, 4]} />);
-    items.push(<Text key="p1l" x={Math.min(width - 130, c[0] + d1[0] * len + 4)} y={c[1] + d1[1] * len - 16} text={`axis 1, θ = ${formatSig(Math.abs(p.thetaDeg) < 1e-9 ? 0 : p.thetaDeg, 4)}°`} fontSize={12} fill={COLOURS.principal} />);
+    labels.push(label('principal', `axis 1, θ = ${formatSig(Math.abs(p.thetaDeg) < 1e-9 ? 0 : p.thetaDeg, 4)}°`, [c[0] + d1[0] * len, c[1] + d1[1] * len], [[-120, -18], [4, -18], [-120, 4]], 2, 12, COLOURS.principal));
   }
   if (overlays.pna) {
     const y = toScreen(view, [0, p.pnaY])[1];
     const x = toScreen(view, [p.pnaX, 0])[0];
     items.push(<Line key="pnax" points={[0, y, width, y]} stroke={COLOURS.pna} strokeWidth={1} dash={[3, 3]} />);
     items.push(<Line key="pnay" points={[x, 0, x, height]} stroke={COLOURS.pna} strokeWidth={1} dash={[3, 3]} />);
-    items.push(<Text key="pnal" x={30} y={y + 3} text="plastic neutral axis (x)" fontSize={11} fill={COLOURS.pna} />);
+    labels.push(label('pna-x', 'plastic neutral axis (x)', [RULER + 8, y], [[0, 3], [0, -17]], 3, 11, COLOURS.pna));
+    labels.push(label('pna-y', 'plastic neutral axis (y)', [x, RULER + 8], [[4, 0], [-150, 0]], 4, 11, COLOURS.pna));
   }
   if (overlays.fibres) {
     const top = toScreen(view, [p.cx, p.yMax]);
@@ -174,8 +197,8 @@ function ResultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: 
     const xo = c[0] + 14;
     items.push(<Line key="ft" points={[xo, top[1], xo, c[1]]} stroke={COLOURS.dimension} strokeWidth={1} pointerLength={5} />);
     items.push(<Line key="fb" points={[xo + 8, c[1], xo + 8, bottom[1]]} stroke={COLOURS.dimension} strokeWidth={1} />);
-    items.push(<Text key="ftl" x={xo + 4} y={(top[1] + c[1]) / 2 - 6} text={`c top ${formatSig(p.yMax - p.cy, 4)}`} fontSize={11} fill={COLOURS.dimension} />);
-    items.push(<Text key="fbl" x={xo + 12} y={(bottom[1] + c[1]) / 2 - 6} text={`c bottom ${formatSig(p.cy - p.yMin, 4)}`} fontSize={11} fill={COLOURS.dimension} />);
+    labels.push(label('fibre-top', `c top ${formatSig(p.yMax - p.cy, 4)}`, [xo, (top[1] + c[1]) / 2], [[4, -7]], 6, 11, COLOURS.dimension));
+    labels.push(label('fibre-bottom', `c bottom ${formatSig(p.cy - p.yMin, 4)}`, [xo + 8, (bottom[1] + c[1]) / 2], [[4, -7]], 6, 11, COLOURS.dimension));
   }
   if (overlays.dimensions) {
     const a = toScreen(view, [p.xMin, p.yMin]);
@@ -185,11 +208,14 @@ function ResultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: 
     items.push(<Line key="dw" points={[a[0], yb, b[0], yb]} stroke={COLOURS.dimension} strokeWidth={1} />);
     items.push(<Line key="dwa" points={[a[0], a[1] + 4, a[0], yb + 4]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
     items.push(<Line key="dwb" points={[b[0], a[1] + 4, b[0], yb + 4]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
-    items.push(<Text key="dwl" x={(a[0] + b[0]) / 2 - 30} y={yb + 4} text={tick(Number((p.xMax - p.xMin).toPrecision(6)))} fontSize={11} fill={COLOURS.dimension} />);
+    const wText = tick(Number((p.xMax - p.xMin).toPrecision(6)));
+    labels.push(label('width', wText, [(a[0] + b[0]) / 2, yb], [[-(wText.length * 3.3), 3]], 1, 11, COLOURS.dimension));
     items.push(<Line key="dh" points={[xl, a[1], xl, b[1]]} stroke={COLOURS.dimension} strokeWidth={1} />);
     items.push(<Line key="dha" points={[a[0] - 4, a[1], xl - 4, a[1]]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
     items.push(<Line key="dhb" points={[a[0] - 4, b[1], xl - 4, b[1]]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
-    items.push(<Text key="dhl" x={xl - 16} y={(a[1] + b[1]) / 2 + 24} rotation={-90} text={tick(Number((p.yMax - p.yMin).toPrecision(6)))} fontSize={11} fill={COLOURS.dimension} />);
+    const hText = tick(Number((p.yMax - p.yMin).toPrecision(6)));
+    items.push(<Text key="dhl" x={xl - 16} y={(a[1] + b[1]) / 2 + 24} rotation={-90} text={hText} fontSize={11} fill={COLOURS.dimension} />);
+    reserved.push({ x: xl - 17, y: (a[1] + b[1]) / 2 + 24 - hText.length * 7, width: 15, height: hText.length * 7 });
   }
   if (overlays.centroid) {
     items.push(
@@ -199,6 +225,8 @@ function ResultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: 
         <Line points={[0, -11, 0, 11]} stroke={COLOURS.centroid} strokeWidth={1.5} />
       </Group>,
     );
+    reserved.push({ x: c[0] - 12, y: c[1] - 12, width: 24, height: 24 });
+    labels.push(label('centroid', 'centroid', c, [[12, -20], [12, 6], [-70, -20]], 0, 11, COLOURS.centroid));
   }
   if (overlays.centroid && shearCentre) {
     // Shear centre (Trefftz, finite elements): a small diamond, labelled, distinct from the centroid's circle.
@@ -206,11 +234,12 @@ function ResultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: 
     items.push(
       <Group key="sc" x={s[0]} y={s[1]}>
         <Line points={[0, -8, 8, 0, 0, 8, -8, 0]} closed stroke={COLOURS.centroid} strokeWidth={1.5} />
-        <Text x={9} y={-16} text="shear centre" fontSize={11} fill={COLOURS.centroid} />
       </Group>,
     );
+    reserved.push({ x: s[0] - 9, y: s[1] - 9, width: 18, height: 18 });
+    labels.push(label('shear-centre', 'shear centre', s, [[10, -18], [10, 4], [-85, -18], [-85, 4]], 1, 11, COLOURS.centroid));
   }
-  return <>{items}</>;
+  return { items, labels, reserved };
 }
 
 /** Traces a region (arcs exact) on a canvas context in screen coordinates; holes by the even–odd rule. */
@@ -238,8 +267,10 @@ function traceRegion(ctx: { moveTo: (x: number, y: number) => void; lineTo: (x: 
 }
 
 /** The stress map (an exact linear gradient per piece), the extremes, the neutral axis, and the kern. */
-function StressOverlay({ sv, view, overlays, width, height }: { sv: StressView; view: View; overlays: Overlays; width: number; height: number }): ReactElement {
+function stressOverlay({ sv, view, overlays, width, height }: { sv: StressView; view: View; overlays: Overlays; width: number; height: number }): OverlayParts {
   const items: ReactElement[] = [];
+  const labels: LabelRequest[] = [];
+  const reserved: LabelBox[] = [];
   if (overlays.stress) {
     const { plane } = sv;
     const g = Math.hypot(plane.kx, plane.ky);
@@ -287,25 +318,18 @@ function StressOverlay({ sv, view, overlays, width, height }: { sv: StressView; 
       const t = (Math.min(r[0], width - 110) - l[0]) / (r[0] - l[0] || 1);
       const lx = l[0] + Math.max(0, Math.min(1, t)) * (r[0] - l[0]);
       const ly = l[1] + Math.max(0, Math.min(1, t)) * (r[1] - l[1]);
-      items.push(
-        <Label key="nal" x={Math.max(4, Math.min(width - 100, lx + 6))} y={Math.max(4, Math.min(height - 24, ly - 22))}>
-          <Tag fill={COLOURS.paper} opacity={0.85} cornerRadius={2} />
-          <Text text="neutral axis" fontSize={11} fill={COLOURS.neutralAxis} padding={2} />
-        </Label>,
-      );
+      labels.push(label('neutral-axis', 'neutral axis', [lx, ly], [[6, -22], [6, 6]], 3, 11, COLOURS.neutralAxis));
     }
-    for (const [key, p, label] of [['max', sv.maxAt, 'σmax'], ['min', sv.minAt, 'σmin']] as const) {
+    for (const [key, p, name] of [['max', sv.maxAt, 'σmax'], ['min', sv.minAt, 'σmin']] as const) {
       const s = toScreen(view, p);
       items.push(
         <Group key={`x${key}`} x={s[0]} y={s[1]}>
           <Circle radius={6} stroke={COLOURS.stressMark} strokeWidth={2} fill={COLOURS.handle} />
           <Circle radius={2} fill={COLOURS.stressMark} />
-          <Label x={s[0] > width - 170 ? -150 : 9} y={key === 'max' ? -20 : 6}>
-            <Tag fill={COLOURS.paper} opacity={0.85} cornerRadius={2} />
-            <Text text={`${label} ${sv.labels[key]}`} fontSize={12} fontStyle="bold" fill={COLOURS.stressMark} padding={2} />
-          </Label>
         </Group>,
       );
+      reserved.push({ x: s[0] - 7, y: s[1] - 7, width: 14, height: 14 });
+      labels.push(label(`stress-${key}`, `${name} ${sv.labels[key]}`, s, key === 'max' ? [[9, -20], [-150, -20]] : [[9, 6], [-150, 6]], 1, 12, COLOURS.stressMark, 'bold'));
     }
   }
   if (overlays.stress) {
@@ -324,14 +348,15 @@ function StressOverlay({ sv, view, overlays, width, height }: { sv: StressView; 
         <Text x={w - 60} y={14} width={60} align="right" text={`+${half}`} fontSize={10} fill={COLOURS.dimension} />
       </Group>,
     );
+    reserved.push({ x: x0 - 6, y: y0 - 18, width: w + 12, height: 50 });
   }
   if (overlays.kern && sv.kern.length >= 3) {
     items.push(<Line key="kern" points={flat(view, sv.kern)} closed stroke={COLOURS.kern} strokeWidth={1.8} fill="rgba(44,138,122,0.12)" />);
     const top = sv.kern.reduce((a, b) => (b[1] > a[1] ? b : a));
     const s = toScreen(view, top);
-    items.push(<Text key="kernl" x={s[0] + 6} y={s[1] - 16} text="kern" fontSize={11} fontStyle="italic" fill={COLOURS.kern} />);
+    labels.push(label('kern', 'kern', s, [[6, -16], [6, 4]], 4, 11, COLOURS.kern, 'italic'));
   }
-  return <>{items}</>;
+  return { items, labels, reserved };
 }
 
 function InteractionOverlay({ state, outlines, view }: { state: EditorState; outlines: readonly PartOutline[]; view: View }): ReactElement {
@@ -355,10 +380,10 @@ function InteractionOverlay({ state, outlines, view }: { state: EditorState; out
       if (!state.selection.includes(o.partId) || o.circle) continue;
       // Standard parts: their outline points are chords of arcs, not corners worth marking.
       if (state.doc.parts.find((p) => p.id === o.partId)?.type === 'shape') continue;
-      for (const v of o.vertices) {
+      o.vertices.forEach((v, vi) => {
         const s = toScreen(view, v);
-        items.push(<Rect key={`s${o.partId}-${s[0]}-${s[1]}`} x={s[0] - 2.5} y={s[1] - 2.5} width={5} height={5} fill={COLOURS.selection} listening={false} />);
-      }
+        items.push(<Rect key={`s${o.partId}-${vi}`} x={s[0] - 2.5} y={s[1] - 2.5} width={5} height={5} fill={COLOURS.selection} listening={false} />);
+      });
     }
   }
   const d = tool.draft;
@@ -453,6 +478,13 @@ export function Canvas(props: Props): ReactElement {
   const adds = order.filter((x) => x.part.operation === 'add');
   const subs = order.filter((x) => x.part.operation === 'subtract');
 
+  // Overlays, then their labels placed together so none covers another or the stress legend.
+  const stressParts = props.stress && (overlays.stress || overlays.kern) ? stressOverlay({ sv: props.stress, view, overlays, width: size.width, height: size.height }) : null;
+  const resultParts = props.properties ? resultsOverlay({ p: props.properties, view, overlays, width: size.width, height: size.height, shearCentre: props.shearCentre ?? null }) : null;
+  const requests = [...(resultParts?.labels ?? []), ...(stressParts?.labels ?? [])];
+  const { placed } = placeLabels(requests, [...(resultParts?.reserved ?? []), ...(stressParts?.reserved ?? [])], size.width, size.height);
+  const labelStyle = new Map(requests.map((r) => [r.id, r as LabelRequest & { fontSize?: number; colour?: string; style?: string }]));
+
   return (
     <div
       ref={host}
@@ -530,19 +562,37 @@ export function Canvas(props: Props): ReactElement {
             <PartShape key={x.part.id} o={x.o as PartOutline} view={view} subtract selected={selected.has(x.part.id)} />
           ))}
         </Layer>
-        {props.stress && (overlays.stress || overlays.kern) && (
+        {stressParts && (
           <Layer listening={false}>
-            <StressOverlay sv={props.stress} view={view} overlays={overlays} width={size.width} height={size.height} />
+            {stressParts.items}
           </Layer>
         )}
         <Layer listening={false}>
-          {props.properties && <ResultsOverlay p={props.properties} view={view} overlays={overlays} width={size.width} height={size.height} shearCentre={props.shearCentre ?? null} />}
+          {resultParts?.items}
           <DiagnosticMarks diagnostics={props.diagnostics} view={view} />
+        </Layer>
+        <Layer listening={false}>
+          {placed.map((l) => {
+            const style = labelStyle.get(l.id);
+            return (
+              <Label key={l.id} x={l.x} y={l.y}>
+                <Tag fill={COLOURS.paper} opacity={0.85} cornerRadius={2} />
+                <Text text={l.text} fontSize={style?.fontSize ?? 11} fontStyle={style?.style || 'normal'} fill={style?.colour || COLOURS.dimension} padding={2} />
+              </Label>
+            );
+          })}
         </Layer>
         <Layer listening={false}>
           <InteractionOverlay state={state} outlines={outlines} view={view} />
         </Layer>
       </Stage>
+      <ul className="canvas-labels" data-testid="canvas-labels" aria-label="Labels on the drawing">
+        {placed.map((l) => (
+          <li key={l.id} data-testid="canvas-label" data-label={l.id} data-box={`${l.x} ${l.y} ${l.width} ${l.height}`}>
+            {l.text}
+          </li>
+        ))}
+      </ul>
     </div>
   );
 }

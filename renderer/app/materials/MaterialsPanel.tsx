@@ -34,7 +34,9 @@ import './material-editor.css';
 
 export function materialChoices(doc: SectionDocument): { id: string; name: string }[] {
   const own = doc.materials.map((m) => ({ id: m.id, name: `${m.name} (this document)` }));
-  return [...own, ...BUILT_IN_MATERIALS.filter((b) => !doc.materials.some((m) => m.id === b.id)).map((b) => ({ id: b.id, name: b.name }))];
+  // A library material already in the document (same id, or the same name under another id) is listed once.
+  const inDocument = (b: { id: string; name: string }): boolean => doc.materials.some((m) => m.id === b.id || m.name.trim().toLowerCase() === b.name.trim().toLowerCase());
+  return [...own, ...BUILT_IN_MATERIALS.filter((b) => !inDocument(b)).map((b) => ({ id: b.id, name: b.name }))];
 }
 
 const N_PER_KIP = 4448.2216152605; // 1 kip = 1000 lbf, 1 lbf = 4.4482216152605 N (exact by definition)

@@ -10,6 +10,7 @@ import { ShapeParameters } from './PartsPalette.tsx';
 import { materialChoices } from '../materials/MaterialsPanel.tsx';
 import { withPartMaterial } from '../materials/material-form.ts';
 import type { LengthUnit } from '../../../core/units/index.ts';
+import type { CommandId } from '../../controller/commands.ts';
 
 type Fields = Record<string, string>;
 
@@ -117,11 +118,8 @@ export function EntryPanel({ editor, state }: { editor: Editor; state: EditorSta
     'rect-width': '100', 'rect-height': '200', 'rect-x': '0', 'rect-y': '0',
     'circle-diameter': '20', 'circle-x': '0', 'circle-y': '0',
     'point-x': '0', 'point-y': '0',
-    'move-dx': '0', 'move-dy': '0', 'moveto-x': '0', 'moveto-y': '0', 'rotate-angle': '15',
   });
   const [error, setError] = useState('');
-  const sel = state.selection;
-  const selectedPart = sel.length === 1 ? state.doc.parts.find((p) => p.id === sel[0]) : undefined;
   const draft = state.tool.draft;
   const drafted = draft?.kind === 'polygon' ? draft.points.length : 0;
 
@@ -140,10 +138,6 @@ export function EntryPanel({ editor, state }: { editor: Editor; state: EditorSta
   const addPoint = (): void => {
     const v = read(f, [['point-x', 'point x'], ['point-y', 'point y']], setError);
     if (v) editor.typedPoint([v['point-x'] as number, v['point-y'] as number]);
-  };
-  const transform = (keys: [string, string][], fn: (v: Record<string, number>) => void): void => {
-    const v = read(f, keys, setError);
-    if (v) fn(v);
   };
 
   return (
@@ -186,6 +180,46 @@ export function EntryPanel({ editor, state }: { editor: Editor; state: EditorSta
         </div>
       </details>
       {error && <p className="error" role="alert" data-testid="entry-error">{error}</p>}
+    </section>
+  );
+}
+
+const ALIGN: readonly [CommandId, string, string][] = [
+  ['align-left', '⇤ left', 'Align left edges'],
+  ['align-centre-x', 'centre ↔', 'Align centres on a vertical line'],
+  ['align-right', 'right ⇥', 'Align right edges'],
+  ['align-top', '⤒ top', 'Align top edges'],
+  ['align-centre-y', 'middle ↕', 'Align middles on a horizontal line'],
+  ['align-bottom', '⤓ bottom', 'Align bottom edges'],
+];
+const SPREAD: readonly [CommandId, string, string][] = [
+  ['touch-x', 'touch ↔', 'Side by side, each touching the next (plies)'],
+  ['touch-y', 'touch ↕', 'Stacked, each touching the next'],
+  ['distribute-x', 'centres ↔', 'Equal spacing of centres, left to right (3 or more)'],
+  ['distribute-y', 'centres ↕', 'Equal spacing of centres, bottom to top (3 or more)'],
+  ['space-x', 'gaps ↔', 'Equal gaps, left to right (3 or more)'],
+  ['space-y', 'gaps ↕', 'Equal gaps, bottom to top (3 or more)'],
+];
+
+/**
+ * The selection's editor: the selected part's own fields (name, size, material, placement), then
+ * moving, turning, mirroring, copies and arrays, align and spread for several parts. It sits at
+ * the top of the left column so it is in view as soon as something is selected.
+ */
+export function SelectionPanel({ editor, state, run }: { editor: Editor; state: EditorState; run: (id: CommandId) => void }): ReactElement | null {
+  const unit = state.doc.unit;
+  const [f, set] = useFields({ 'move-dx': '0', 'move-dy': '0', 'moveto-x': '0', 'moveto-y': '0', 'rotate-angle': '15', 'array-count': '2', 'array-dx': '0', 'array-dy': '0' });
+  const [error, setError] = useState('');
+  const sel = state.selection;
+  const selectedPart = sel.length === 1 ? state.doc.parts.find((p) => p.id === sel[0]) : undefined;
+  const transform = (keys: [string, string][], fn: (v: Record<string, number>) => void): void => {
+    setError('');
+    const v = read(f, keys, setError);
+    if (v) fn(v);
+  };
+  if (sel.length === 0) return null;
+  return (
+    <section className="selection-panel" aria-label="Selected parts" data-testid="selection-panel">
       {selectedPart && <SelectedPart editor={editor} part={selectedPart} unit={unit} />}
       {sel.length > 0 && (
         <details open className="transforms">
@@ -209,21 +243,52 @@ export function EntryPanel({ editor, state }: { editor: Editor; state: EditorSta
           <div className="buttons">
             <button type="button" data-testid="transform-mirror-lr" onClick={() => editor.mirrorSelection('left-right')}>Mirror ↔</button>
             <button type="button" data-testid="transform-mirror-tb" onClick={() => editor.mirrorSelection('top-bottom')}>Mirror ↕</button>
-            <button type="button" data-testid="transform-duplicate" onClick={() => editor.duplicateSelection()}>Duplicate</button>
-            <button type="button" data-testid="transform-delete" onClick={() => editor.deleteSelection()}>Delete</button>
+            <button type="button" data-testid="transform-duplicate" title="A copy one grid step away (Ctrl+D)" onClick={() => run('duplicate')}>Duplicate</button>
+            <button type="button" data-testid="transform-delete" onClick={() => run('delete')}>Delete</button>
+          </div>
+          <div className="grid4" aria-label="Array">
+            <Field id="array-count" label="copies" f={f} set={set} title="number of copies" />
+            <Field id="array-dx" label="pitch x" f={f} set={set} title="step between copies along x" />
+            <Field id="array-dy" label="pitch y" f={f} set={set} title="step between copies along y" />
+            <button
+              type="button"
+              data-testid="transform-array"
+              title="Copies at a pitch, e.g. plies of a built-up member"
+              onClick={() =>
+                transform([['array-count', 'copies'], ['array-dx', 'pitch x'], ['array-dy', 'pitch y']], (v) => {
+                  const n = v['array-count'] as number;
+                  if (!Number.isInteger(n) || n < 1 || n > 200) return setError('copies must be a whole number from 1 to 200');
+                  if (v['array-dx'] === 0 && v['array-dy'] === 0) return setError('give a pitch: with 0 and 0 every copy would lie on the original');
+                  editor.arraySelection(n, v['array-dx'] as number, v['array-dy'] as number);
+                })
+              }
+            >
+              Array
+            </button>
           </div>
           {sel.length > 1 && (
-            <div className="buttons" aria-label="Align">
+            <div className="buttons align-row" aria-label="Align">
               <span className="muted">Align</span>
-              {(['left', 'centre-x', 'right', 'top', 'centre-y', 'bottom'] as const).map((edge) => (
-                <button key={edge} type="button" data-testid={`align-${edge}`} onClick={() => editor.alignSelection(edge)}>
-                  {edge.replace('centre-x', 'centre ↔').replace('centre-y', 'centre ↕')}
+              {ALIGN.map(([id, text, title]) => (
+                <button key={id} type="button" data-testid={id} title={title} onClick={() => run(id)}>
+                  {text}
+                </button>
+              ))}
+            </div>
+          )}
+          {sel.length > 1 && (
+            <div className="buttons align-row" aria-label="Distribute">
+              <span className="muted">Spread</span>
+              {SPREAD.map(([id, text, title]) => (
+                <button key={id} type="button" data-testid={id} title={title} onClick={() => run(id)} disabled={sel.length < 3 && !id.startsWith('touch')}>
+                  {text}
                 </button>
               ))}
             </div>
           )}
         </details>
       )}
+      {error && <p className="error" role="alert" data-testid="selection-error">{error}</p>}
     </section>
   );
 }

@@ -12,7 +12,7 @@ import { AppController, DISPLAY_CHOICES, FIGURE_CHOICES } from '../../controller
 import { createResultsCache } from '../../controller/results.ts';
 import { TorsionClient } from '../../controller/torsion-client.ts';
 import { Canvas } from '../canvas/Canvas.tsx';
-import { EntryPanel } from '../parts/EntryPanel.tsx';
+import { EntryPanel, SelectionPanel } from '../parts/EntryPanel.tsx';
 import { MenuBar } from './MenuBar.tsx';
 import { ShortcutSheet } from './ShortcutSheet.tsx';
 import { PartsPanel } from '../parts/PartsPanel.tsx';
@@ -146,6 +146,7 @@ export function App(): ReactElement {
               </button>
             ))}
           </div>
+          <SelectionPanel editor={editor} state={state} run={(id) => void controller.run(id)} />
           <PartsPanel editor={editor} state={state} />
           <PartsPalette editor={editor} state={state} onPlaced={() => controller.fit()} />
           <EntryPanel editor={editor} state={state} />
