@@ -16,7 +16,7 @@
  *   AISI S100 and the AISI Cold-Formed Steel Design Manual use the same bend model). The outline
  *   runs out along one face and back along the other; the ends are square cuts.
  * Winding: counter-clockwise outer ring; a bend's outside arc is convex (CCW), its inside arc
- *   concave (CW), as METHODS.md §2.4 requires.
+ *   concave (CW), as docs/methods.md §2.4 requires.
  * Local origins: given in each type's `origin`.
  * Does not guarantee: that unusual proportions (a lip longer than the depth, a bend radius larger
  *   than a flange) make sense; edges too short for their bends are reported by parameter.
