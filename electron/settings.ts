@@ -35,20 +35,22 @@ function checkKey(key: string): void {
 
 export function createSettingsStore(folder: string): SettingsStore {
   const file = path.join(folder, SETTINGS_FILE_NAME);
-  const load = async (): Promise<Record<string, string>> => {
+  // A Map, never a plain object: keys are the renderer's text, and "constructor" or "__proto__"
+  // looked up on an object find Object.prototype's members instead of a setting.
+  const load = async (): Promise<Map<string, string>> => {
     let text: string;
     try {
       text = await nodeFs.readFile(file, 'utf8');
     } catch (error) {
-      if (errorCode(error) === 'ENOENT') return {};
+      if (errorCode(error) === 'ENOENT') return new Map();
       throw error;
     }
     try {
       const value: unknown = JSON.parse(text);
-      if (typeof value !== 'object' || value === null || Array.isArray(value)) return {};
-      return Object.fromEntries(Object.entries(value).filter((e): e is [string, string] => typeof e[1] === 'string' && SETTING_KEY.test(e[0])));
+      if (typeof value !== 'object' || value === null || Array.isArray(value)) return new Map();
+      return new Map(Object.entries(value).filter((e): e is [string, string] => typeof e[1] === 'string' && SETTING_KEY.test(e[0])));
     } catch {
-      return {}; // damaged: read as empty, replaced at the next write
+      return new Map(); // damaged: read as empty, replaced at the next write
     }
   };
   let queue: Promise<unknown> = Promise.resolve();
@@ -57,19 +59,20 @@ export function createSettingsStore(folder: string): SettingsStore {
     async read(key) {
       checkKey(key);
       await queue.catch(() => undefined);
-      return (await load())[key] ?? null;
+      return (await load()).get(key) ?? null;
     },
     write(key, value) {
       checkKey(key);
       if (value !== null && value.length > SETTING_VALUE_MAX) throw new Error(`setting "${key}" is ${value.length} characters; at most ${SETTING_VALUE_MAX} are kept`);
       const next = queue.catch(() => undefined).then(async () => {
         const all = await load();
-        delete all[key]; // re-inserted last: the newest entry
-        if (value !== null) all[key] = value;
-        const keys = Object.keys(all);
-        for (const old of keys.slice(0, Math.max(0, keys.length - SETTINGS_MAX_ENTRIES))) delete all[old];
+        all.delete(key); // re-inserted last: the newest entry
+        if (value !== null) all.set(key, value);
+        const keys = [...all.keys()];
+        for (const old of keys.slice(0, Math.max(0, keys.length - SETTINGS_MAX_ENTRIES))) all.delete(old);
         await nodeFs.mkdir(folder, { recursive: true });
-        await saveAtomically(file, `${JSON.stringify(all)}\n`, { keepBackup: false });
+        // Object.fromEntries defines own properties, so even "__proto__" is written as a key.
+        await saveAtomically(file, `${JSON.stringify(Object.fromEntries(all))}\n`, { keepBackup: false });
       });
       queue = next;
       return next;

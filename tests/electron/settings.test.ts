@@ -25,6 +25,16 @@ describe('settings store', () => {
     expect(await store.read('check-mapping:3:0a1b2c3d')).toBeNull();
   });
 
+  it('keys named like Object.prototype members are settings like any other (issue 18 finding 1): read null before a write, the value after', async () => {
+    const store = createSettingsStore(folder);
+    for (const key of ['constructor', 'toString', '__proto__', 'valueOf', 'hasOwnProperty']) {
+      expect(await store.read(key), key).toBeNull();
+      await store.write(key, `kept ${key}`);
+    }
+    const again = createSettingsStore(folder);
+    for (const key of ['constructor', 'toString', '__proto__', 'valueOf', 'hasOwnProperty']) expect(await again.read(key), key).toBe(`kept ${key}`);
+  });
+
   it('keeps every one of 20 writes started together (queued, none lost), and a new store reads them from disk', async () => {
     const store = createSettingsStore(folder);
     await Promise.all(Array.from({ length: 20 }, (_, i) => store.write(`k${i}`, `v${i}`)));
