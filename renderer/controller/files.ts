@@ -5,7 +5,8 @@
  * `file` is the whole file (every section); `doc` is its first section's view, for callers that
  * take one section (allSectionViews(file) gives them all).
  */
-import { fileFromSection, parseDocument, parseJson, newDocument, type SectionDocument, type SectionFile, type PolygonPart } from '../../core/document/index.ts';
+import { allSectionViews, fileFromSection, parseDocument, parseJson, newDocument, type SectionDocument, type SectionFile, type PolygonPart } from '../../core/document/index.ts';
+import { regionFromDocument } from '../../core/section/index.ts';
 import { isGeoJson, regionFromGeoJson } from '../../core/geojson.ts';
 import type { Ring } from '../../core/geometry/types.ts';
 import type { LengthUnit } from '../../core/units/index.ts';
@@ -39,9 +40,29 @@ export function documentFromText(text: string, fileName: string, unit: LengthUni
       holes: poly.holes.map(points),
     }));
     const doc: SectionDocument = { ...newDocument(unit, stem(fileName)), parts };
-    return { ok: true, file: fileFromSection(doc), doc, note: `GeoJSON coordinates read in ${unit}, the document unit.` };
+    const file = fileFromSection(doc);
+    const far = outOfRange(file, fileName);
+    if (far.length > 0) return { ok: false, errors: far };
+    return { ok: true, file, doc, note: `GeoJSON coordinates read in ${unit}, the document unit.` };
   }
   const parsed = parseDocument(text, fileName);
   if (!parsed.ok) return { ok: false, errors: parsed.errors.map((e) => (e.line !== undefined ? `${e.message}` : e.message)) };
+  const far = outOfRange(parsed.file, fileName);
+  if (far.length > 0) return { ok: false, errors: far };
   return { ok: true, file: parsed.file, doc: parsed.document, ...(parsed.migratedFrom !== null ? { note: `Read from document version ${parsed.migratedFrom}; it will be saved in the current version.` } : {}) };
+}
+
+/**
+ * Parts beyond the coordinate limits (core/geometry MAX_COORDINATE, MIN_EXTENT), in the words the
+ * command line uses: such a file is refused on opening, as `sectionsmith props` refuses it,
+ * rather than opened into a view that cannot be drawn (a part at 1e20 froze the editor).
+ */
+function outOfRange(file: SectionFile, fileName: string): string[] {
+  const out: string[] = [];
+  for (const { name, doc } of allSectionViews(file)) {
+    for (const d of regionFromDocument(doc).diagnostics) {
+      if (d.code === 'too-large' || d.code === 'too-small') out.push(`${fileName}${file.sections.length > 1 ? ` (section "${name}")` : ''}: ${d.message}`);
+    }
+  }
+  return out;
 }

@@ -33,6 +33,24 @@ export function fitView(box: Box | null, width: number, height: number, margin =
   return { scale, ox: width / 2 - cx * scale, oy: height / 2 + cy * scale };
 }
 
+/** At most this many grid lines or ruler ticks along one direction. */
+export const MAX_GRID_LINES = 4000;
+
+/**
+ * The multiples k of `step` with a ≤ k·step ≤ b, at most MAX_GRID_LINES of them. Counted, never
+ * stepped: beyond 2^53 (a part at 1e20 in a fitted view) k + 1 === k, and a loop that steps k
+ * froze the editor.
+ */
+export function gridIndices(a: number, b: number, step: number): number[] {
+  const first = Math.ceil(a / step);
+  const count = Math.floor(b / step) - first + 1;
+  if (!(count > 0) || !Number.isFinite(first)) return [];
+  const n = Math.min(count, MAX_GRID_LINES);
+  const out: number[] = [];
+  for (let i = 0; i < n; i++) out.push(first + i);
+  return out;
+}
+
 /** Grid spacing of 1, 2 or 5 × 10^k document units, at least `minPixels` apart on screen. */
 export function gridStep(scale: number, minPixels = 14): number {
   const raw = minPixels / scale;

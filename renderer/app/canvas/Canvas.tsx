@@ -14,7 +14,7 @@ import type { SectionProperties } from '../../../core/properties/types.ts';
 import { COLOURS } from './palette.ts';
 import type { Overlays } from '../../controller/controller.ts';
 import { placeLabels, type LabelBox, type LabelRequest } from './labels.ts';
-import { gridStep, toScreen, toSection, zoomAt, type View } from '../../controller/view.ts';
+import { gridIndices, gridStep, toScreen, toSection, zoomAt, type View } from '../../controller/view.ts';
 import { formatSig } from '../../../core/units/index.ts';
 import { arcOfSegment, ringVertexCount } from '../../../core/geometry/ring.ts';
 import type { Region } from '../../../core/geometry/types.ts';
@@ -72,11 +72,11 @@ function GridAndRulers({ view, width, height, unit }: { view: View; width: numbe
           ctx.lineWidth = 1;
           ctx.stroke();
         };
-        for (let k = Math.ceil(x0 / step); k * step <= x1; k++) {
+        for (const k of gridIndices(x0, x1, step)) {
           const sx = Math.round(view.ox + k * step * view.scale) + 0.5;
           line(sx, 0, sx, height, k === 0 ? COLOURS.axis : k % 5 === 0 ? COLOURS.gridMajor : COLOURS.gridMinor);
         }
-        for (let k = Math.ceil(y0 / step); k * step <= y1; k++) {
+        for (const k of gridIndices(y0, y1, step)) {
           const sy = Math.round(view.oy - k * step * view.scale) + 0.5;
           line(0, sy, width, sy, k === 0 ? COLOURS.axis : k % 5 === 0 ? COLOURS.gridMajor : COLOURS.gridMinor);
         }
@@ -86,13 +86,13 @@ function GridAndRulers({ view, width, height, unit }: { view: View; width: numbe
         ctx.fillRect(0, 0, RULER, height);
         ctx.fillStyle = COLOURS.rulerText;
         ctx.font = '10px system-ui, sans-serif';
-        for (let k = Math.ceil(x0 / major); k * major <= x1; k++) {
+        for (const k of gridIndices(x0, x1, major)) {
           const sx = view.ox + k * major * view.scale;
           if (sx < RULER + 4) continue;
           line(sx, RULER - 6, sx, RULER, COLOURS.rulerText);
           ctx.fillText(tick(k * major), sx + 2, 12);
         }
-        for (let k = Math.ceil(y0 / major); k * major <= y1; k++) {
+        for (const k of gridIndices(y0, y1, major)) {
           const sy = view.oy - k * major * view.scale;
           if (sy < RULER + 4) continue;
           line(RULER - 6, sy, RULER, sy, COLOURS.rulerText);
