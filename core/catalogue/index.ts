@@ -290,3 +290,57 @@ export function partFromDesignation(designation: string, catalogue: Catalogue = 
   const hint = close.length > 0 ? `; close: ${close.join(', ')}` : '';
   return { ok: false, message: `no catalogue entry "${designation}"${hint}` };
 }
+
+/**
+ * What a user typed, read as a designation: upper case, "×" as X, "2 x 10" → 2X10, "w14 90" →
+ * W14X90 (a space between two numbers is the X), other spaces dropped.
+ */
+export function queryKey(text: string): string {
+  return text
+    .trim()
+    .toUpperCase()
+    .replace(/×/g, 'X')
+    .replace(/\s*X\s*/g, 'X')
+    .replace(/(\d)\s+(?=\d)/g, '$1X')
+    .replace(/\s+/g, '');
+}
+
+/** A nominal lumber size as typed ("2X10", "4X4"): digits X digits, nothing else. */
+const LUMBER_QUERY = /^\d+X\d+$/;
+
+/** The number after the last X of a key ("W14X90" → 90), for nearest-weight ordering. */
+function lastNumber(key: string): number {
+  const m = /X(\d+(?:\.\d+)?)$/.exec(key);
+  return m === null ? Number.NaN : Number(m[1]);
+}
+
+/**
+ * Entries matching typed text, closest first: an exact designation, then designations that start
+ * with the text, then ones that contain it, then shapes of the same family and depth ordered by
+ * how near their nominal weight is to the one typed ("W14X91" finds W14X90 first). When the text
+ * is a lumber size ("2x10", "2 x 10"), lumber comes before steel at every rank.
+ */
+export function findShapes(text: string, catalogue: Catalogue = STANDARD, limit = 20): CatalogueEntry[] {
+  const q = queryKey(text);
+  if (q === '') return [];
+  const lumberFirst = LUMBER_QUERY.test(q);
+  const stem = /^([A-Z]+[\d.]+X)/.exec(q)?.[1];
+  const wanted = lastNumber(q);
+  const ranked: { entry: CatalogueEntry; rank: number; near: number; order: number }[] = [];
+  catalogue.entries.forEach((entry, order) => {
+    const key = designationKey(entry.designation);
+    let rank: number;
+    let near = key.length - q.length;
+    if (key === q) rank = 0;
+    else if (key.startsWith(q)) rank = 1;
+    else if (key.includes(q)) rank = 2;
+    else if (stem !== undefined && key.startsWith(stem) && Number.isFinite(wanted)) {
+      rank = 3;
+      near = Math.abs(lastNumber(key) - wanted);
+    } else return;
+    ranked.push({ entry, rank, near, order });
+  });
+  const steel = (e: CatalogueEntry): number => (lumberFirst && e.family !== 'lumber' ? 1 : 0);
+  ranked.sort((a, b) => steel(a.entry) - steel(b.entry) || a.rank - b.rank || a.near - b.near || a.order - b.order);
+  return ranked.slice(0, limit).map((r) => r.entry);
+}
