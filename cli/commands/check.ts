@@ -39,15 +39,17 @@ export function mapItems(values: readonly string[]): string[] {
   return items.filter((s) => s !== '');
 }
 
-function overridesOf(values: readonly string[] | undefined): Record<string, string> {
-  const out: Record<string, string> = {};
+/** Column → target, keyed by the header text as typed (a Map, so a column named "constructor" is just a name). */
+function overridesOf(values: readonly string[] | undefined): Map<string, string> {
+  const out = new Map<string, string>();
   for (const item of mapItems(values ?? [])) {
     const eq = item.lastIndexOf('=');
     if (eq <= 0 || eq === item.length - 1) throw new MappingError(`--map: "${item}" is not COLUMN=TARGET (e.g. "Ix (in4)=Ix" or depth=d)`);
     const column = item.slice(0, eq).trim();
     const target = item.slice(eq + 1).trim();
-    if (out[column] !== undefined && out[column] !== target) throw new MappingError(`--map: column "${column}" is given two targets, ${out[column]} and ${target}`);
-    out[column] = target;
+    const earlier = out.get(column);
+    if (earlier !== undefined && earlier !== target) throw new MappingError(`--map: column "${column}" is given two targets, ${earlier} and ${target}`);
+    out.set(column, target);
   }
   return out;
 }
@@ -57,7 +59,7 @@ const pct = (v: number): string => `${v >= 0 ? '+' : ''}${(v * 100).toFixed(2)} 
 export function checkText(file: string, c: TableCheck): string {
   const s = c.summary;
   const lines = [
-    `${file}: ${s.rowsChecked} row${s.rowsChecked === 1 ? '' : 's'} checked, ${s.rowsFlagged} flagged; ${s.propertiesChecked} tabulated values compared, ${s.propertiesFlagged} beyond tolerance (unit ${c.unit})`,
+    `${file}: ${s.rowsRead} row${s.rowsRead === 1 ? '' : 's'}: ${s.rowsPassed} pass, ${s.rowsFlagged} flagged, ${s.rowsNotChecked} not checked; ${s.propertiesChecked} tabulated values compared, ${s.propertiesFlagged} beyond tolerance (unit ${c.unit})`,
     'Each row rebuilt from its dimensions with the parts library; deviation = computed / table − 1.',
     '',
     'worst deviation of each property:',
@@ -67,11 +69,13 @@ export function checkText(file: string, c: TableCheck): string {
   ];
   for (const r of c.rows) {
     const worst = r.properties.reduce((a, p) => (Math.abs(p.deviation) > Math.abs(a) ? p.deviation : a), 0);
-    lines.push(`  ${String(r.row).padStart(4)}  ${r.designation.padEnd(16)} ${r.family.padEnd(4)} ${r.flagged ? 'FLAGGED' : 'pass   '}  ${r.properties.length} values, largest ${pct(worst)}`);
+    const status = r.status === 'flagged' ? 'FLAGGED    ' : r.status === 'pass' ? 'pass       ' : 'NOT CHECKED';
+    lines.push(`  ${String(r.row).padStart(4)}  ${r.designation.padEnd(16)} ${(r.family ?? '?').padEnd(4)} ${status}  ${r.properties.length} values${r.properties.length > 0 ? `, largest ${pct(worst)}` : ''}${r.familyFrom === 'designation' ? ' (family from the designation)' : ''}`);
     for (const f of r.findings) lines.push(`          ${f}`);
+    if (r.notCheckedReason !== undefined) lines.push(`          not checked: ${r.notCheckedReason}`);
   }
   if (c.ignoredColumns.length > 0) {
-    lines.push('', 'columns not checked:');
+    lines.push('', 'columns not used (not recognised, or recognised but not checked):');
     for (const col of c.ignoredColumns) lines.push(`  ${col.header}: ${col.why}`);
   }
   lines.push('', `CAUTION: ${CAUTION}`, '');
@@ -137,7 +141,11 @@ function runCheck(positionals: readonly string[], flags: FlagValues, io: CliIo, 
   } else {
     io.out(checkText(file, result));
   }
-  const code = result.summary.rowsFlagged > 0 ? EXIT_FLAGGED : EXIT_OK;
+  if (result.summary.rowsChecked === 0) {
+    // Nothing compared is not a pass: a header-only table, or rows that could not be judged.
+    io.err(`sectionsmith check: ${file}: nothing checked: ${result.summary.rowsRead === 0 ? 'the table has a header but no rows' : `none of its ${result.summary.rowsRead} rows could be compared (${[...new Set(result.rows.map((r) => r.notCheckedReason ?? ''))].join('; ')})`}\n`);
+  }
+  const code = result.summary.rowsChecked === 0 ? EXIT_BAD_INPUT : result.summary.rowsFlagged > 0 ? EXIT_FLAGGED : EXIT_OK;
   return xlsx === null ? code : xlsx.then(() => code);
 }
 
@@ -146,16 +154,21 @@ export const checkCommand: Command = {
   summary: 'check a table of shapes (CSV) against properties rebuilt from its dimensions',
   usage: 'check TABLE.csv [--type T] [--map COL=TARGET …] [--tolerance 1% …] [--unit U] [--out REPORT.csv] [--xlsx REPORT.xlsx] [--json]',
   description: [
-    'Reads a CSV table of shapes (a designation column, a type column or --type, dimension',
-    'columns and tabulated property columns), rebuilds each row with the parts library using',
+    'Reads a CSV table of shapes (a designation column, dimension columns and tabulated property',
+    'columns; the family from a type column, --type, or the designation\'s prefix W, HP, S, C …),',
+    'rebuilds each row with the parts library using',
     'the catalogue conventions (W: r = kdes − tf; S, C: 2:12 flange slope; HSS and Pipe: tdes),',
     'computes A, Ix, Iy, Sx, Sy, Zx, Zy, rx, ry (angles also Iw, Iz, rz) and flags every value',
-    'that differs from the table by more than its tolerance. Inch tables also have their',
+    'that differs from the table by more than its tolerance. A row is pass, flagged, or not',
+    'checked (with the reason: a dimension or every value missing, or no family). Every',
+    'comparison is reported, whichever fires first. Inch tables also have their',
     'designations read as AISC labels (family, nominal weight, legs, walls) and looked up in the',
     'AISC Shapes Database v15.0 (dimensions compared); --own-labels turns that off.',
     '',
-    'Columns are recognised by trade symbol with the unit in a suffix or bracket: d_in, bf, tw,',
-    'tf, kdes, t, b, Ht, B, tnom, tdes, OD; A_in2, Ix_in4, "Ix [mm^4]", "Sx (10^3 mm^3)". A',
+    'Columns are recognised by trade symbol, in any case where case does not change the meaning,',
+    'with words around it and the unit in a suffix or bracket: d_in, "Depth d (in)", "Flange',
+    'width bf (in)", "Web tw (in)", "k des (in)", t, b, Ht, B, tnom, tdes, OD; A_in2, Ix_in4,',
+    '"Ix [mm^4]", "Sx (10^3 mm^3)". A',
     'column without a unit is in --unit (default in). Types: W, M, HP, S, C, MC, WT, MT, ST, L,',
     'HSS, PIPE.',
     '',
@@ -166,18 +179,21 @@ export const checkCommand: Command = {
     '',
     '--tolerance: a default ("1%", or a fraction "0.01"), per property ("Zx=2%") or per family',
     'and property ("MC:Iy=7%"), the flag repeated or several separated by commas; the most',
-    'specific applies. Default 1 %.',
+    'specific applies. Built-in defaults: A 1 %, I, S, Z, r 1.5 % (AISC prints 3 significant',
+    'figures), S and C y-axis 3 %, MC up to 7 %, angles Z 2 % and Iz 2.5 %; a default you give',
+    'replaces them all.',
     '',
     '--out REPORT.csv writes one row per table row (status, findings, table and computed values,',
     'deviation and tolerance in %). --json prints the summary, rows and mapping as JSON.',
     '',
-    'Exit codes: 0 every row passes; 1 some rows are flagged; 2 bad input (the message names the',
-    'row and the column); 3 an internal error (please report it).',
+    'At most 100,000 rows per table. Exit codes: 0 no row flagged (rows not checked are listed);',
+    '1 some rows are flagged; 2 bad input (the message names the row and the column) or nothing',
+    'checked (a header without rows, or no row could be compared); 3 an internal error.',
   ].join('\n'),
   flags: [
     { name: 'type', type: 'string', value: 'T', description: 'family of rows without a type column: W, M, HP, S, C, MC, WT, MT, ST, L, HSS, PIPE' },
     { name: 'map', type: 'string', value: 'COL=TARGET', description: 'correct the column mapping (see above)', multiple: true },
-    { name: 'tolerance', type: 'string', value: 'SPEC', description: 'tolerances: 1%, Zx=2%, MC:Iy=7% (default 1 %)', multiple: true },
+    { name: 'tolerance', type: 'string', value: 'SPEC', description: 'tolerances: 1%, Zx=2%, MC:Iy=7% (built-in defaults per family, see above)', multiple: true },
     { name: 'unit', type: 'string', value: 'U', description: 'unit of columns without one: in|ft|mm|cm|m (default in)' },
     { name: 'out', type: 'string', value: 'REPORT.csv', description: 'write the per-row report as CSV' },
     { name: 'xlsx', type: 'string', value: 'REPORT.xlsx', description: 'write the per-row report as XLSX (numbers as numbers at full precision, units in the headings, the caution in row 1)' },

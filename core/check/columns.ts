@@ -31,12 +31,17 @@ export const CHECKED_PROPERTIES: Readonly<Record<string, { readonly power: numbe
   rz: { power: 1, what: 'minor principal radius of gyration (angles)' },
 };
 
+/** The checked property a symbol names, or undefined; an own-property test, so "constructor" or "__proto__" is just unknown text. */
+export function checkedProperty(symbol: string): { readonly power: number; readonly what: string } | undefined {
+  return Object.hasOwn(CHECKED_PROPERTIES, symbol) ? CHECKED_PROPERTIES[symbol] : undefined;
+}
+
 /** Recognised trade columns that this check does not recompute (listed as not checked, never silently). */
-const NOT_CHECKED: Readonly<Record<string, string>> = {
-  J: 'torsion constant: needs finite elements (sectionsmith props --torsion)',
-  Cw: 'warping constant: not recomputed by the table check',
-  W: 'nominal weight: read from the designation instead',
-};
+const NOT_CHECKED: ReadonlyMap<string, string> = new Map([
+  ['J', 'torsion constant: needs finite elements (sectionsmith props --torsion)'],
+  ['Cw', 'warping constant: not recomputed by the table check'],
+  ['W', 'nominal weight: read from the designation instead'],
+]);
 
 export type ColumnRole =
   | { readonly role: 'designation' }
@@ -52,17 +57,17 @@ export interface ColumnMapping {
 
 const DESIGNATION_NAMES = ['designation', 'label', 'aisc_manual_label', 'section', 'shape', 'name', 'size'];
 const TYPE_NAMES = ['type', 'shape_type', 'family', 'kind'];
-const DIMENSION_ALIASES: Readonly<Record<string, string>> = { H: 'Ht', k_des: 'kdes', Kdes: 'kdes' };
-const PROPERTY_ALIASES: Readonly<Record<string, string>> = { area: 'A', ag: 'A' };
+const DIMENSION_ALIASES: ReadonlyMap<string, string> = new Map([['H', 'Ht'], ['k_des', 'kdes'], ['Kdes', 'kdes'], ['k des', 'kdes'], ['depth', 'd'], ['flange width', 'bf'], ['web thickness', 'tw'], ['flange thickness', 'tf'], ['outside diameter', 'OD'], ['wall thickness', 'tdes']]);
+const PROPERTY_ALIASES: ReadonlyMap<string, string> = new Map([['area', 'A'], ['ag', 'A']]);
 /**
  * Column names of cold-formed product tables, any case (common practice): depth and flange width
  * map to the rolled symbols d and bf, which a cold-formed row also reads as D and B.
  */
-const COLD_FORMED_ALIASES: Readonly<Record<string, string>> = {
+const COLD_FORMED_ALIASES: ReadonlyMap<string, string> = new Map(Object.entries({
   depth: 'd', 'web depth': 'd', 'flange width': 'bf', flange: 'bf', 'flange width top': 'bf', 'flange width bottom': 'B2', 'crown width': 'B', 'brim width': 'Bb',
   lip: 'L', 'lip length': 'L', 'return lip': 'L', thickness: 't', 'design thickness': 't', 'base metal thickness': 't',
   radius: 'r', 'inside radius': 'R', 'bend radius': 'R', 'inside bend radius': 'R', 'lip angle': 'lipAngle',
-};
+}));
 
 const SUPERSCRIPT: Readonly<Record<string, string>> = { '²': '2', '³': '3', '⁴': '4', '⁶': '6' };
 
@@ -87,12 +92,31 @@ export function splitHeader(header: string): { name: string; unitText: string | 
   return { name: h, unitText: null };
 }
 
-function findSymbol(name: string, table: readonly string[], aliases: Readonly<Record<string, string>>, anyCase: boolean): string | undefined {
-  if (table.includes(name)) return name;
-  if (aliases[name] !== undefined) return aliases[name];
-  if (!anyCase) return undefined;
-  const lower = name.toLowerCase();
-  return table.find((s) => s.toLowerCase() === lower) ?? aliases[lower];
+/**
+ * The symbol a header name stands for: the whole name exactly, an alias, then (case-insensitive
+ * when no two symbols differ only by case) the whole name without spaces ("k des" → kdes), then
+ * each word from the last ("Flange width bf" → bf, "Depth d" → d). Case is ignored only where it
+ * cannot change the meaning: b and B stay distinct.
+ */
+function findSymbol(name: string, table: readonly string[], aliases: ReadonlyMap<string, string>, anyCase: boolean): string | undefined {
+  const one = (text: string): string | undefined => {
+    if (table.includes(text)) return text;
+    const alias = aliases.get(text) ?? aliases.get(text.toLowerCase());
+    if (alias !== undefined) return alias;
+    const lower = text.toLowerCase();
+    const same = table.filter((s) => s.toLowerCase() === lower);
+    // One symbol of that spelling in any case: "BF" is bf; "b" and "B" differ, so they match exactly only.
+    if (same.length === 1 && (anyCase || table.every((s) => s === same[0] || s.toLowerCase() !== lower))) return same[0];
+    return undefined;
+  };
+  const trimmed = name.trim();
+  const words = trimmed.split(/\s+/).filter((w) => w !== '');
+  for (const candidate of [trimmed, words.join(' '), words.join(''), ...words.slice().reverse()]) {
+    if (candidate === '') continue;
+    const found = one(candidate);
+    if (found !== undefined) return found;
+  }
+  return undefined;
 }
 
 export class MappingError extends Error {}
@@ -104,20 +128,22 @@ export function detectColumn(header: string, unit: LengthUnit): ColumnRole {
   if (TYPE_NAMES.includes(lower)) return { role: 'type' };
   const { name, unitText } = splitHeader(header);
   const read = unitText === null ? null : readUnit(unitText);
-  const dimension = findSymbol(name, DIMENSION_SYMBOLS, DIMENSION_ALIASES, false) ?? COLD_FORMED_ALIASES[name.toLowerCase().replace(/\s+/g, ' ')];
-  if (dimension !== undefined && header.trim().split('_').length <= 2) {
+  const dimension = COLD_FORMED_ALIASES.get(name.trim().toLowerCase().replace(/\s+/g, ' ')) ?? findSymbol(name, DIMENSION_SYMBOLS, DIMENSION_ALIASES, false);
+  const property = findSymbol(name, Object.keys(CHECKED_PROPERTIES), PROPERTY_ALIASES, true);
+  // A whole name that is a property symbol (e.g. "A") is that property, not a dimension found in one of its words.
+  if (dimension !== undefined && header.trim().split('_').length <= 2 && checkedProperty(name.trim()) === undefined) {
     if (unitText !== null && read === null) return { role: 'ignore', why: `dimension ${dimension} with an unknown unit "${unitText}"` };
     if (read !== null && (read.power !== 1 || read.scale !== 1)) return { role: 'ignore', why: `dimension ${dimension} with a unit that is not a length ("${unitText}")` };
     return { role: 'dimension', symbol: dimension, unit: read?.unit ?? unit };
   }
-  const property = findSymbol(name, Object.keys(CHECKED_PROPERTIES), PROPERTY_ALIASES, true);
   if (property !== undefined) return propertyRole(property, read, unitText, unit, header);
-  if (NOT_CHECKED[name] !== undefined) return { role: 'ignore', why: `${name}: ${NOT_CHECKED[name]}` };
+  const notChecked = NOT_CHECKED.get(name);
+  if (notChecked !== undefined) return { role: 'ignore', why: `${name}: ${notChecked}` };
   return { role: 'ignore', why: 'not a designation, type, dimension or property this check knows' };
 }
 
 function propertyRole(symbol: string, read: ReturnType<typeof readUnit>, unitText: string | null, unit: LengthUnit, header: string): ColumnRole {
-  const power = CHECKED_PROPERTIES[symbol]!.power;
+  const power = checkedProperty(symbol)!.power;
   if (unitText !== null && read === null) return { role: 'ignore', why: `property ${symbol} with an unknown unit "${unitText}"` };
   if (read !== null && read.power !== power) {
     return { role: 'ignore', why: `column "${header}" reads as ${symbol}, but its unit "${unitText}" is length^${read.power}, not length^${power}` };
@@ -140,7 +166,7 @@ export function roleFromTarget(target: string, unit: LengthUnit, header: string)
     if (read !== null && read.power !== 1) throw new MappingError(`--map ${header}=${target}: a dimension is a length, not length^${read.power}`);
     return { role: 'dimension', symbol, unit: read?.unit ?? unit };
   }
-  const property = CHECKED_PROPERTIES[symbol];
+  const property = checkedProperty(symbol);
   if (property !== undefined) {
     if (read !== null && read.power !== 1 && read.power !== property.power) throw new MappingError(`--map ${header}=${target}: ${symbol} is length^${property.power}, not length^${read.power}`);
     return { role: 'property', symbol, unit: read?.unit ?? unit, scale: read?.scale ?? 1 };
@@ -154,12 +180,12 @@ export function roleFromTarget(target: string, unit: LengthUnit, header: string)
  * user's overrides, then auto-detection for the rest. Throws MappingError naming the column
  * when an override names no header of the table or two columns claim the same role.
  */
-export function mapColumns(headers: readonly string[], unit: LengthUnit, overrides: Readonly<Record<string, string>> = {}, stored?: ColumnMapping): ColumnMapping {
-  for (const header of Object.keys(overrides)) {
+export function mapColumns(headers: readonly string[], unit: LengthUnit, overrides: ReadonlyMap<string, string> = new Map(), stored?: ColumnMapping): ColumnMapping {
+  for (const header of overrides.keys()) {
     if (!headers.includes(header)) throw new MappingError(`--map ${header}=…: the table has no column "${header}"; its columns: ${headers.join(', ')}`);
   }
   const columns: ({ readonly header: string } & ColumnRole)[] = headers.map((header) => {
-    const override = overrides[header];
+    const override = overrides.get(header);
     if (override !== undefined) return { header, ...roleFromTarget(override, unit, header) };
     const saved = stored?.columns.find((c) => c.header === header);
     if (saved !== undefined) return saved;
@@ -170,7 +196,7 @@ export function mapColumns(headers: readonly string[], unit: LengthUnit, overrid
     const key = c.role === 'dimension' || c.role === 'property' ? `${c.role}:${c.symbol}` : c.role === 'ignore' ? null : c.role;
     if (key === null) continue;
     const earlier = seen.get(key);
-    if (earlier !== undefined && overrides[c.header] === undefined && overrides[earlier] === undefined) {
+    if (earlier !== undefined && !overrides.has(c.header) && !overrides.has(earlier)) {
       // Two columns read the same way by auto-detection: the first one is used, the other is listed as ignored.
       columns[columns.indexOf(c)] = { header: c.header, role: 'ignore', why: `also reads as ${key.replace(/^(dimension|property):/, '')}; column "${earlier}" is used` };
       continue;
@@ -201,7 +227,7 @@ export function readStoredMapping(value: unknown, where: string): ColumnMapping 
       return { header, role, symbol, unit };
     }
     if (role === 'property') {
-      if (CHECKED_PROPERTIES[symbol] === undefined) return fail(`columns[${i}]: unknown property "${symbol}"`);
+      if (checkedProperty(symbol) === undefined) return fail(`columns[${i}]: unknown property "${symbol}"`);
       const s = scale === undefined ? 1 : scale;
       if (typeof s !== 'number' || !(s > 0)) return fail(`columns[${i}].scale must be a positive number`);
       return { header, role, symbol, unit, scale: s };

@@ -10,8 +10,17 @@
  * Units: plain numbers are in `unit` (default in); a column's own unit (header suffix or
  *   bracket) overrides it. Results are in the working unit: the table unit.
  * Bad input (no designation column, a non-numeric cell, an unknown type, a row with more cells
- *   than the header) throws TableInputError naming the row and the column. A row whose
- *   dimensions cannot build a shape is a finding about the table: that row is flagged.
+ *   than the header, more rows than MAX_TABLE_ROWS) throws TableInputError naming the row and the
+ *   column. A row is "pass" (every comparison made agrees), "flagged" (some comparison disagrees,
+ *   or its dimensions build no valid shape) or "not checked" (nothing could be compared: a
+ *   dimension or every tabulated value is missing, or the family is unknown), with the reason.
+ *   Every comparison is made and reported, whichever fires first: property deviations, the
+ *   label's nominal weight and size, and the catalogue's published dimensions.
+ * Family: from the type column, else --type, else the designation's prefix (W, HP, S, …).
+ * Tolerances: DEFAULT_TOLERANCES (per family and property, with the reasoning beside them);
+ *   a tolerance the user gives wins over every built-in one at its level or less specific.
+ * Cost: rows are parsed one at a time (papaparse step mode) and checked as they arrive: linear
+ *   in the rows, at most MAX_TABLE_ROWS.
  * Rows are numbered from 1 for the first row below the header (blank lines are not counted).
  */
 import Papa from 'papaparse';
@@ -22,7 +31,7 @@ import { sectionProperties } from '../properties/index.ts';
 import type { SectionProperties } from '../properties/types.ts';
 import { convertLength } from '../units/index.ts';
 import type { LengthUnit } from '../units/types.ts';
-import { CHECKED_PROPERTIES, mapColumns, type ColumnMapping } from './columns.ts';
+import { checkedProperty, mapColumns, type ColumnMapping } from './columns.ts';
 import { COLD_FORMED_FAMILIES, familyOf, TABLE_FAMILIES, tablePart, type TableFamily } from './shapes.ts';
 
 export { CAUTION };
@@ -30,11 +39,43 @@ export { CAUTION };
 /** Relative tolerances (0.01 = 1 %): a default, per property, and per family and property. */
 export interface Tolerances {
   readonly default: number;
+  /** False when the user gave no default: the built-in DEFAULT_TOLERANCES then fill in (parseTolerances sets it). */
+  readonly defaultGiven?: boolean;
   readonly byProperty?: Readonly<Record<string, number>>;
   readonly byFamily?: Readonly<Record<string, Readonly<Record<string, number>>>>;
 }
 
-export const DEFAULT_TOLERANCE = 0.01;
+export const DEFAULT_TOLERANCE = 0.015;
+
+/**
+ * The built-in tolerances, under which every row of the published AISC Shapes Database v15.0
+ * subset (tests/fixtures/aisc-v15-subset.csv) passes when rebuilt from its own dimensions. Why
+ * not tighter:
+ *  - AISC prints dimensions and properties to three significant figures (W14X90: d = 14.0,
+ *    bf = 14.5). A dimension rounded to 3 figures is off by up to ±0.5 % of its last digit
+ *    (e.g. tf = 0.710 means 0.7095…0.7105), and Iy ∝ tf·bf³ compounds these: W40X199 rebuilds
+ *    with Iy +1.40 %, HP12X53 with Iy −1.24 %. So A within 1 % and I, S, Z, r within 1.5 %
+ *    (the shape's fillet modelled as r = kdes − tf, a convention: AISC publishes no radius).
+ *  - S and C shapes: toes are modelled sharp and the 2:12 flange slope is assumed; the y-axis
+ *    values come out up to ~2.5 % high, so Iy, Sy, Zy 3 %.
+ *  - MC shapes: the flange slope is not published; A and x-axis values 2 %, Iy and Sy 7 %,
+ *    Zy 4 %, ry 3 %.
+ *  - Angles: no root or toe radius is published; Zx, Zy 2 %, the minor principal Iz 2.5 %.
+ * A change of 5 % in a published value is still caught everywhere except MC Iy and Sy.
+ */
+export const DEFAULT_TOLERANCES: Tolerances = {
+  default: DEFAULT_TOLERANCE,
+  byProperty: { A: 0.01 },
+  byFamily: {
+    S: { Iy: 0.03, Sy: 0.03, Zy: 0.03 },
+    C: { Iy: 0.03, Sy: 0.03, Zy: 0.03 },
+    MC: { A: 0.02, Ix: 0.02, Sx: 0.02, Zx: 0.02, Iy: 0.07, Sy: 0.07, Zy: 0.04, ry: 0.03 },
+    L: { Zx: 0.02, Zy: 0.02, Iz: 0.025 },
+  },
+};
+
+/** At most this many rows are checked (the whole AISC database has 2,091): a larger table is refused with a message naming the limit. */
+export const MAX_TABLE_ROWS = 100_000;
 
 /**
  * Relative tolerance of a label's nominal weight against the computed area × 490 lb/ft³.
@@ -52,13 +93,15 @@ export interface CheckOptions {
   readonly unit?: LengthUnit;
   /** The family of every row without a type column (or with an empty type cell). */
   readonly type?: TableFamily;
-  /** User corrections "column → target" (see columns.ts roleFromTarget). */
-  readonly overrides?: Readonly<Record<string, string>>;
+  /** User corrections "column → target" (see columns.ts roleFromTarget), keyed by header. */
+  readonly overrides?: ReadonlyMap<string, string>;
   /** A mapping stored earlier; overrides win over it. */
   readonly mapping?: ColumnMapping;
   readonly tolerances?: Tolerances;
   /** Read designations as AISC labels (default: when the table unit is in). */
   readonly readLabels?: boolean;
+  /** At most this many rows (default MAX_TABLE_ROWS). */
+  readonly maxRows?: number;
   /** Called after each row with the rows done and the rows in all (a view's progress bar). */
   readonly onProgress?: (done: number, total: number) => void;
 }
@@ -74,16 +117,24 @@ export interface PropertyCheck {
   readonly flagged: boolean;
 }
 
+export type RowStatus = 'pass' | 'flagged' | 'not checked';
+
 export interface RowCheck {
   /** 1 for the first row below the header. */
   readonly row: number;
   readonly designation: string;
-  readonly family: TableFamily;
+  /** null when no type column, no --type and no family code at the start of the designation. */
+  readonly family: TableFamily | null;
+  /** Where the family came from. */
+  readonly familyFrom: 'type column' | 'given type' | 'designation' | 'unknown';
   /** The part the row built (dimensions in the working unit), or null when it could not be built. */
   readonly part: { readonly shape: string; readonly params: Readonly<Record<string, number>>; readonly modelling: string } | null;
   readonly properties: readonly PropertyCheck[];
   /** Plain sentences: deviations beyond tolerance, label mismatches, geometry problems. */
   readonly findings: readonly string[];
+  readonly status: RowStatus;
+  /** Why nothing was compared, for a row that is not checked. */
+  readonly notCheckedReason?: string;
   readonly flagged: boolean;
 }
 
@@ -100,8 +151,13 @@ export interface TableCheck {
   readonly mapping: ColumnMapping;
   readonly rows: readonly RowCheck[];
   readonly summary: {
+    /** Rows judged (pass or flagged); rows not checked are counted apart. */
     readonly rowsChecked: number;
+    readonly rowsPassed: number;
     readonly rowsFlagged: number;
+    readonly rowsNotChecked: number;
+    /** Rows read below the header. */
+    readonly rowsRead: number;
     readonly propertiesChecked: number;
     readonly propertiesFlagged: number;
     /** The largest |deviation| of each property symbol, largest first. */
@@ -126,23 +182,75 @@ function numberCell(text: string, where: () => string): number | undefined {
   throw new TableInputError(`${where()}: "${t}" is not a number`);
 }
 
-/** The rows of a CSV text (RFC 4180; papaparse), header first; blank rows dropped. */
-export function parseTable(text: string): { headers: string[]; rows: string[][] } {
-  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { header: false, skipEmptyLines: false });
-  const serious = parsed.errors.find((e) => e.type === 'Quotes');
-  if (serious !== undefined) throw new TableInputError(`CSV: ${serious.message} (row ${serious.row ?? '?'})`);
-  const all = parsed.data.filter((r) => r.some((c) => c.trim() !== ''));
-  const [headers, ...rows] = all;
-  if (headers === undefined) throw new TableInputError('the table is empty: expected a header row and rows of shapes');
-  const trimmed = headers.map((h) => h.trim());
+/** The header row's names, trimmed; throws naming a column without a name. */
+function headerNames(cells: readonly string[]): string[] {
+  const trimmed = cells.map((h) => h.trim());
   trimmed.forEach((h, i) => {
     if (h === '') throw new TableInputError(`header: column ${i + 1} has no name`);
   });
-  return { headers: trimmed, rows };
+  return trimmed;
 }
 
-function toleranceOf(t: Tolerances, family: string, symbol: string): number {
-  return t.byFamily?.[family]?.[symbol] ?? t.byProperty?.[symbol] ?? t.default;
+/**
+ * Reads a CSV text (RFC 4180; papaparse) one row at a time: `onHeader` with the header, then
+ * `onRow` for each non-blank row, without holding the rows. Throws on a quoting error and on
+ * more than MAX_TABLE_ROWS rows, naming the limit.
+ */
+export function streamTable(text: string, onHeader: (headers: string[]) => void, onRow: (cells: string[], row: number) => void, maxRows = MAX_TABLE_ROWS): void {
+  let headers: string[] | null = null;
+  let row = 0;
+  let failure: unknown = null;
+  Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), {
+    header: false,
+    skipEmptyLines: false,
+    step: (result, parser) => {
+      try {
+        const serious = result.errors.find((e) => e.type === 'Quotes');
+        if (serious !== undefined) throw new TableInputError(`CSV: ${serious.message} (row ${row + 1})`);
+        const cells = result.data;
+        if (!cells.some((c) => c.trim() !== '')) return;
+        if (headers === null) {
+          headers = headerNames(cells);
+          onHeader(headers);
+          return;
+        }
+        row++;
+        if (row > maxRows) throw new TableInputError(`the table has more than ${maxRows.toLocaleString('en-US')} rows, the most one check takes; split it into smaller tables`);
+        onRow(cells, row);
+      } catch (err) {
+        failure = err;
+        parser.abort();
+      }
+    },
+  });
+  if (failure !== null) throw failure;
+  if (headers === null) throw new TableInputError('the table is empty: expected a header row and rows of shapes');
+}
+
+/** The rows of a CSV text, header first; blank rows dropped (streamTable, collected). */
+export function parseTable(text: string): { headers: string[]; rows: string[][] } {
+  let headers: string[] = [];
+  const rows: string[][] = [];
+  streamTable(text, (h) => { headers = h; }, (cells) => { rows.push(cells); });
+  return { headers, rows };
+}
+
+const LEADING_FAMILY = /^(HSS|PIPE|WT|MT|ST|MC|HP|W|M|S|C|L)(?=\d)/i;
+
+/** The family a designation's prefix names (W18X50 → W, HSS6X6X1/4 → HSS, Pipe8STD → PIPE), or undefined. */
+export function familyFromDesignation(designation: string): TableFamily | undefined {
+  const m = LEADING_FAMILY.exec(designation.replace(/\s+/g, ''));
+  return m === null ? undefined : familyOf(m[1]!);
+}
+
+const own = <T>(record: Readonly<Record<string, T>> | undefined, key: string): T | undefined => (record !== undefined && Object.hasOwn(record, key) ? record[key] : undefined);
+
+/** The most specific tolerance: the user's family:property, property, default (when given), then the built-in ones. */
+export function toleranceOf(t: Tolerances, family: string, symbol: string): number {
+  const user = own(own(t.byFamily, family), symbol) ?? own(t.byProperty, symbol);
+  if (user !== undefined) return user;
+  if (t.defaultGiven !== false) return t.default;
+  return own(own(DEFAULT_TOLERANCES.byFamily, family), symbol) ?? own(DEFAULT_TOLERANCES.byProperty, symbol) ?? DEFAULT_TOLERANCES.default;
 }
 
 function computedValue(symbol: string, p: SectionProperties): number {
@@ -243,54 +351,66 @@ export function catalogueFindings(designation: string, family: TableFamily, dims
 /** Checks every row of a table given as CSV text. Throws TableInputError on bad input. */
 export function checkTable(text: string, options: CheckOptions = {}): TableCheck {
   const unit = options.unit ?? 'in';
-  const tolerances = options.tolerances ?? { default: DEFAULT_TOLERANCE };
+  const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
   const readLabels = options.readLabels ?? unit === 'in';
-  const { headers, rows } = parseTable(text);
-  const mapping = mapColumns(headers, unit, options.overrides, options.mapping);
-  const cols = mapping.columns;
-  const designationAt = cols.findIndex((c) => c.role === 'designation');
-  if (designationAt < 0) throw new TableInputError(`no designation column: expected a header such as "designation", "label" or "shape" (columns: ${headers.join(', ')}); name one with --map COLUMN=designation`);
-  const typeAt = cols.findIndex((c) => c.role === 'type');
-  if (typeAt < 0 && options.type === undefined) throw new TableInputError(`no type column (a header such as "type" or "shape_type" holding ${TABLE_FAMILIES.join(', ')}): add one, name one with --map COLUMN=type, or give --type`);
-  if (!cols.some((c) => c.role === 'property')) throw new TableInputError(`no property column to check (e.g. A, Ix, Sx, Zx, rx with a unit such as Ix_in4 or "Ix [mm^4]"): name one with --map COLUMN=Ix`);
-
+  // The row count is known only at the end when streaming; progress reports an estimate from the text length.
+  const estimate = Math.max(1, text.split('\n', MAX_TABLE_ROWS + 2).length - 1);
+  let mapping: ColumnMapping | null = null;
+  let headers: string[] = [];
+  let designationAt = -1, typeAt = -1;
   const results: RowCheck[] = [];
-  rows.forEach((cells, index) => {
-    const row = index + 1;
-    const designation = (cells[designationAt] ?? '').trim();
-    const at = (header: string): string => `row ${row}${designation === '' ? '' : ` (${designation})`}, column "${header}"`;
-    if (cells.length > headers.length) throw new TableInputError(`row ${row}${designation === '' ? '' : ` (${designation})`}: ${cells.length} cells, but the header has ${headers.length} columns`);
-    if (designation === '') throw new TableInputError(`${at(headers[designationAt]!)}: the designation is empty`);
-    const typeText = typeAt < 0 ? '' : (cells[typeAt] ?? '').trim();
-    const family = typeText === '' ? options.type : familyOf(typeText);
-    if (family === undefined) {
-      if (typeText === '') throw new TableInputError(`${at(headers[typeAt]!)}: the type is empty and no --type was given`);
-      throw new TableInputError(`${at(headers[typeAt]!)}: unknown type "${typeText}"; known: ${TABLE_FAMILIES.join(', ')}`);
-    }
-    const dims: Record<string, number> = {};
-    const tabulated: { symbol: string; value: number }[] = [];
-    cols.forEach((c, i) => {
-      if (c.role !== 'dimension' && c.role !== 'property') return;
-      const value = numberCell(cells[i] ?? '', () => at(c.header));
-      if (value === undefined) return;
-      if (c.role === 'dimension') dims[c.symbol] = convertLength(value, c.unit, unit);
-      else tabulated.push({ symbol: c.symbol, value: convertLength(value * c.scale, c.unit, unit, CHECKED_PROPERTIES[c.symbol]!.power) });
-    });
-    results.push(checkRow(row, designation, family, dims, tabulated, unit, tolerances, readLabels));
-    options.onProgress?.(row, rows.length);
-  });
-
-  return summarise(unit, mapping, results);
+  streamTable(text, (h) => {
+    headers = h;
+    mapping = mapColumns(h, unit, options.overrides, options.mapping);
+    const cols = mapping.columns;
+    designationAt = cols.findIndex((c) => c.role === 'designation');
+    if (designationAt < 0) throw new TableInputError(`no designation column: expected a header such as "designation", "label" or "shape" (columns: ${h.join(', ')}); name one with --map COLUMN=designation`);
+    typeAt = cols.findIndex((c) => c.role === 'type');
+    if (!cols.some((c) => c.role === 'property')) throw new TableInputError(`no property column to check (e.g. A, Ix, Sx, Zx, rx with a unit such as Ix_in4 or "Ix [mm^4]"): name one with --map COLUMN=Ix`);
+  }, (cells, row) => {
+    results.push(checkCells(cells, row, headers, mapping!, designationAt, typeAt, unit, tolerances, readLabels, options.type));
+    options.onProgress?.(row, Math.max(row, estimate));
+  }, options.maxRows ?? MAX_TABLE_ROWS);
+  return summarise(unit, mapping!, results);
 }
 
-function checkRow(row: number, designation: string, family: TableFamily, dims: Record<string, number>, tabulated: readonly { symbol: string; value: number }[], unit: LengthUnit, tolerances: Tolerances, readLabels: boolean): RowCheck {
+function checkCells(cells: readonly string[], row: number, headers: readonly string[], mapping: ColumnMapping, designationAt: number, typeAt: number, unit: LengthUnit, tolerances: Tolerances, readLabels: boolean, given: TableFamily | undefined): RowCheck {
+  const designation = (cells[designationAt] ?? '').trim();
+  const at = (header: string): string => `row ${row}${designation === '' ? '' : ` (${designation})`}, column "${header}"`;
+  if (cells.length > headers.length) throw new TableInputError(`row ${row}${designation === '' ? '' : ` (${designation})`}: ${cells.length} cells, but the header has ${headers.length} columns`);
+  if (designation === '') throw new TableInputError(`${at(headers[designationAt]!)}: the designation is empty`);
+  const typeText = typeAt < 0 ? '' : (cells[typeAt] ?? '').trim();
+  if (typeText !== '' && familyOf(typeText) === undefined) throw new TableInputError(`${at(headers[typeAt]!)}: unknown type "${typeText}"; known: ${TABLE_FAMILIES.join(', ')}`);
+  const fromLabel = familyFromDesignation(designation);
+  const family = typeText !== '' ? familyOf(typeText)! : given ?? fromLabel ?? null;
+  const familyFrom: RowCheck['familyFrom'] = typeText !== '' ? 'type column' : given !== undefined ? 'given type' : fromLabel !== undefined ? 'designation' : 'unknown';
+  const dims: Record<string, number> = {};
+  const tabulated: { symbol: string; value: number }[] = [];
+  mapping.columns.forEach((c, i) => {
+    if (c.role !== 'dimension' && c.role !== 'property') return;
+    const value = numberCell(cells[i] ?? '', () => at(c.header));
+    if (value === undefined) return;
+    if (c.role === 'dimension') dims[c.symbol] = convertLength(value, c.unit, unit);
+    else tabulated.push({ symbol: c.symbol, value: convertLength(value * c.scale, c.unit, unit, checkedProperty(c.symbol)!.power) });
+  });
+  if (family === null) {
+    const reason = `no family: no type column${typeAt >= 0 ? ' value' : ''}, no --type, and the designation does not start with ${TABLE_FAMILIES.join(', ')}`;
+    return { row, designation, family: null, familyFrom, part: null, properties: [], findings: [], status: 'not checked', notCheckedReason: reason, flagged: false };
+  }
+  return checkRow(row, designation, family, familyFrom, dims, tabulated, unit, tolerances, readLabels);
+}
+
+function checkRow(row: number, designation: string, family: TableFamily, familyFrom: RowCheck['familyFrom'], dims: Record<string, number>, tabulated: readonly { symbol: string; value: number }[], unit: LengthUnit, tolerances: Tolerances, readLabels: boolean): RowCheck {
   const findings: string[] = [];
   const built = tablePart(family, dims, designation, unit);
   let properties: PropertyCheck[] = [];
   let part: RowCheck['part'] = null;
   let area: number | null = null;
+  let notCheckedReason: string | undefined;
   if (!built.ok) {
-    findings.push(`cannot build the shape: ${built.message}`);
+    // Missing dimensions mean nothing could be compared (not checked); present but unusable ones are a finding.
+    if (/no value given/.test(built.message)) notCheckedReason = `cannot build the shape: ${built.message}`;
+    else findings.push(`cannot build the shape: ${built.message}`);
   } else {
     part = built.part;
     const region = shapeRegion(built.part.shape, built.part.params, unit);
@@ -307,14 +427,17 @@ function checkRow(row: number, designation: string, family: TableFamily, dims: R
         if (flagged) findings.push(`${symbol}: table ${short(value)}, computed ${short(computed)} (${pct(deviation)}; tolerance ${pct(tolerance)})`);
         return { symbol, tabulated: value, computed, deviation, tolerance, flagged };
       });
+      if (tabulated.length === 0) notCheckedReason = 'no tabulated value in this row';
     }
   }
   // Cold-formed rows have no AISC label to read.
   if (readLabels && !COLD_FORMED_FAMILIES.includes(family)) {
-    const label = labelFindings(designation, family, dims, unit === 'in' ? area : null);
-    findings.push(...label, ...(label.length === 0 && unit === 'in' ? catalogueFindings(designation, family, dims) : []));
+    // Every comparison is made: the label's weight and size, and the catalogue's dimensions, whichever fires first.
+    findings.push(...labelFindings(designation, family, dims, unit === 'in' ? area : null));
+    if (unit === 'in') findings.push(...catalogueFindings(designation, family, dims));
   }
-  return { row, designation, family, part, properties, findings, flagged: findings.length > 0 };
+  const status: RowStatus = findings.length > 0 ? 'flagged' : notCheckedReason !== undefined ? 'not checked' : 'pass';
+  return { row, designation, family, familyFrom, part, properties, findings, status, ...(status === 'not checked' ? { notCheckedReason } : {}), flagged: status === 'flagged' };
 }
 
 function summarise(unit: LengthUnit, mapping: ColumnMapping, rows: readonly RowCheck[]): TableCheck {
@@ -335,7 +458,14 @@ function summarise(unit: LengthUnit, mapping: ColumnMapping, rows: readonly RowC
     unit,
     mapping,
     rows,
-    summary: { rowsChecked: rows.length, rowsFlagged: rows.filter((r) => r.flagged).length, propertiesChecked, propertiesFlagged, worst },
+    summary: {
+      rowsChecked: rows.filter((r) => r.status !== 'not checked').length,
+      rowsPassed: rows.filter((r) => r.status === 'pass').length,
+      rowsFlagged: rows.filter((r) => r.status === 'flagged').length,
+      rowsNotChecked: rows.filter((r) => r.status === 'not checked').length,
+      rowsRead: rows.length,
+      propertiesChecked, propertiesFlagged, worst,
+    },
     ignoredColumns,
     caution: CAUTION,
   };

@@ -5,7 +5,7 @@
  *   "MC:Iy=7%"             — one property of one family
  * Per cent needs the % sign; a bare number is a fraction (0.01 = 1 %).
  */
-import { CHECKED_PROPERTIES } from './columns.ts';
+import { CHECKED_PROPERTIES, checkedProperty } from './columns.ts';
 import { familyOf } from './shapes.ts';
 import { DEFAULT_TOLERANCE, TableInputError, type Tolerances } from './table.ts';
 
@@ -20,19 +20,22 @@ function fraction(text: string, spec: string): number {
 
 export function parseTolerances(specs: readonly string[]): Tolerances {
   let base = DEFAULT_TOLERANCE;
+  let defaultGiven = false;
+  // Keys are checked symbols and family codes only (validated below), never other user text.
   const byProperty: Record<string, number> = {};
   const byFamily: Record<string, Record<string, number>> = {};
   for (const spec of specs) {
     const eq = spec.indexOf('=');
     if (eq < 0) {
       base = fraction(spec, spec);
+      defaultGiven = true;
       continue;
     }
     const target = spec.slice(0, eq).trim();
     const value = fraction(spec.slice(eq + 1), spec);
     const [a, b] = target.includes(':') ? target.split(':') : [undefined, target];
     const symbol = (b ?? '').trim();
-    if (CHECKED_PROPERTIES[symbol] === undefined) throw new TableInputError(`--tolerance ${spec}: unknown property "${symbol}"; known: ${Object.keys(CHECKED_PROPERTIES).join(', ')}`);
+    if (checkedProperty(symbol) === undefined) throw new TableInputError(`--tolerance ${spec}: unknown property "${symbol}"; known: ${Object.keys(CHECKED_PROPERTIES).join(', ')}`);
     if (a === undefined) {
       byProperty[symbol] = value;
       continue;
@@ -41,5 +44,5 @@ export function parseTolerances(specs: readonly string[]): Tolerances {
     if (family === undefined) throw new TableInputError(`--tolerance ${spec}: unknown family "${a}"`);
     byFamily[family] = { ...(byFamily[family] ?? {}), [symbol]: value };
   }
-  return { default: base, byProperty, byFamily };
+  return { default: base, defaultGiven, byProperty, byFamily };
 }

@@ -84,7 +84,7 @@ export function tableCheckSheet(check: TableCheck): SheetTable {
     header.push(`${s} table [${u}]`, `${s} computed [${u}]`, `${s} deviation [%]`, `${s} tolerance [%]`);
   }
   const rows = check.rows.map((r) => {
-    const cells: SheetCell[] = [num(r.row), text(r.designation), text(r.family), text(r.flagged ? 'flagged' : 'pass'), text(r.findings.join('; '))];
+    const cells: SheetCell[] = [num(r.row), text(r.designation), text(r.family ?? '?'), text(r.status), text([...r.findings, ...(r.notCheckedReason !== undefined ? [`not checked: ${r.notCheckedReason}`] : [])].join('; '))];
     for (const s of symbols) {
       const p = r.properties.find((q) => q.symbol === s);
       if (p === undefined) cells.push(null, null, null, null);

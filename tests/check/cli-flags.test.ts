@@ -58,13 +58,14 @@ describe('repeatable flags', () => {
     expect(['Depth', 'Flange width', 'Web', 'Flange'].map(symbolOf)).toEqual(['d', 'bf', 'tw', 'tf']);
   });
 
-  it('with only the last of those --map flags the other three columns stay unmapped, so no row can be built (exit 1, not 0)', () => {
+  it('with only the last of those --map flags the web column ("Web", no symbol) stays unmapped, so no row can be built: nothing checked, exit 2 (not 0, not a pass)', () => {
     const path = table('renamed-last.csv', { d_in: 'Depth', bf_in: 'Flange width', tw_in: 'Web', tf_in: 'Flange' });
     const r = run(['check', path, ...PASSING, '--map', 'Flange=tf', '--json']);
-    expect(r.code).toBe(1);
-    const body = JSON.parse(r.out) as { summary: { rowsFlagged: number }; rows: { findings: string[] }[] };
-    expect(body.summary.rowsFlagged).toBe(7);
-    expect(body.rows[0]!.findings.join(' ')).toMatch(/cannot build the shape/);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/nothing checked/);
+    const body = JSON.parse(r.out) as { summary: { rowsNotChecked: number }; rows: { notCheckedReason: string }[] };
+    expect(body.summary.rowsNotChecked).toBe(7);
+    expect(body.rows[0]!.notCheckedReason).toMatch(/cannot build the shape: a W row needs tw/);
   });
 
   it('a comma inside a column name survives the comma-separated --map list ("Depth, in=d,Web=tw")', () => {
@@ -99,7 +100,7 @@ describe('per-property tolerance and the report file', () => {
     const out = join(dir, 'report.csv');
     const r = run(['check', path, ...PASSING, '--out', out]);
     expect(r.code).toBe(1);
-    expect(r.out).toContain('7 rows checked, 1 flagged');
+    expect(r.out).toContain('7 rows: 6 pass, 1 flagged, 0 not checked');
     const report = Papa.parse<Record<string, string>>(readFileSync(out, 'utf8'), { header: true, skipEmptyLines: true }).data;
     expect(report).toHaveLength(7);
     const row = report.find((x) => x.designation === 'W14X90')!;

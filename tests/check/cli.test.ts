@@ -28,7 +28,7 @@ describe('sectionsmith check as a process', () => {
     const out = join(dir, 'report.csv');
     const r = run(['check', table, '--tolerance', '1.5%,A=1%', '--out', out]);
     expect(r.code).toBe(0);
-    expect(r.out).toContain('7 rows checked, 0 flagged');
+    expect(r.out).toContain('7 rows: 7 pass, 0 flagged, 0 not checked');
     expect(r.out).toContain('licensed engineer');
     expect(readFileSync(out, 'utf8').split('\r\n').filter((l) => l !== '')).toHaveLength(8);
   });

@@ -102,9 +102,9 @@ describe('column mapping and the CSV report', () => {
   it('headers with bracketed units and a user override are read; a renamed column is ignored until mapped', () => {
     // W14X90, AISC v15.0: d 14.0, bf 14.5, tw 0.440, tf 0.710, kdes 1.31; A 26.5 in², Ix 999 in⁴.
     const text = 'designation,d [in],bf (in),tw,tf,kdes,A [in^2],I major\nW14X90,14,14.5,0.44,0.71,1.31,26.5,999\n';
-    const plain = checkTable(text, { type: 'W', overrides: {} });
+    const plain = checkTable(text, { type: 'W', overrides: new Map() });
     expect(plain.rows[0]!.properties.map((p) => p.symbol)).toEqual(['A']);
-    const mapped = checkTable(text, { type: 'W', overrides: { 'I major': 'Ix:in4' } });
+    const mapped = checkTable(text, { type: 'W', overrides: new Map([['I major', 'Ix:in4']]) });
     expect(mapped.rows[0]!.properties.map((p) => p.symbol)).toEqual(['A', 'Ix']);
     expect(mapped.summary.rowsFlagged).toBe(0);
     // Stored mapping (plain data) reproduces the same reading without the override.

@@ -27,7 +27,7 @@ describe('the remembered-mapping key', () => {
 
 describe('reading a remembered mapping back', () => {
   const headers = ['Section', 'Kind', 'Overall depth', 'Ix (in4)'];
-  const mapping = mapColumns(headers, 'in', { 'Overall depth': 'd' });
+  const mapping = mapColumns(headers, 'in', new Map([['Overall depth', 'd']]));
 
   it('round-trips the mapping, the table unit and the shape type', () => {
     const text = rememberedText(headers, { mapping, unit: 'mm', type: 'W' });

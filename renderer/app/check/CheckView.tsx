@@ -118,7 +118,7 @@ export function CheckView({ host, onClose }: Props): ReactElement {
   const mapping = useMemo((): { ok: true; mapping: ColumnMapping } | { ok: false; message: string } | null => {
     if (!table) return null;
     try {
-      return { ok: true, mapping: mapColumns(table.headers, unit, edits, remembered ?? undefined) };
+      return { ok: true, mapping: mapColumns(table.headers, unit, new Map(Object.entries(edits)), remembered ?? undefined) };
     } catch (err) {
       return { ok: false, message: err instanceof MappingError ? viewMessage(err.message) : String(err) };
     }
@@ -128,10 +128,10 @@ export function CheckView({ host, onClose }: Props): ReactElement {
   const shownMapping = useMemo((): ColumnMapping | null => {
     if (!table || !mapping) return null;
     if (mapping.ok) return mapping.mapping;
-    const base = mapColumns(table.headers, unit, {}, remembered ?? undefined);
+    const base = mapColumns(table.headers, unit, new Map(), remembered ?? undefined);
     return {
       columns: base.columns.map((c) => {
-        const edit = edits[c.header];
+        const edit = (Object.hasOwn(edits, c.header) ? edits[c.header] : undefined);
         if (edit === undefined) return c;
         try {
           return { header: c.header, ...roleFromTarget(edit, unit, c.header) };
@@ -177,7 +177,7 @@ export function CheckView({ host, onClose }: Props): ReactElement {
     started.current = { headers: table.headers, unit, type: type === '' ? null : type };
     client.run(
       table.text,
-      { unit, ...(type !== '' ? { type } : {}), overrides: edits, ...(remembered ? { mapping: remembered } : {}), tolerances: tolerances.value, ...(ownLabels ? { readLabels: false } : {}) },
+      { unit, ...(type !== '' ? { type } : {}), overrides: new Map(Object.entries(edits)), ...(remembered ? { mapping: remembered } : {}), tolerances: tolerances.value, ...(ownLabels ? { readLabels: false } : {}) },
       table.rows,
     );
   };
@@ -384,9 +384,9 @@ function MappingTable({ table, mapping, edits, onColumn }: { table: Table; mappi
             const power = powerOf(symbol);
             const unitText = col ? unitTextOf(col) : '';
             const ownUnit = splitHeader(header).unitText;
-            const note = edits[header] !== undefined ? 'corrected' : col?.role === 'ignore' ? col.why : ownUnit !== null ? `unit from the header (${ownUnit})` : power !== null ? 'unit: the table unit' : '';
+            const note = (Object.hasOwn(edits, header) ? edits[header] : undefined) !== undefined ? 'corrected' : col?.role === 'ignore' ? col.why : ownUnit !== null ? `unit from the header (${ownUnit})` : power !== null ? 'unit: the table unit' : '';
             return (
-              <tr key={header} data-testid={`map-row-${i}`} className={col?.role === 'ignore' ? 'ignored' : edits[header] !== undefined ? 'corrected' : ''}>
+              <tr key={header} data-testid={`map-row-${i}`} className={col?.role === 'ignore' ? 'ignored' : (Object.hasOwn(edits, header) ? edits[header] : undefined) !== undefined ? 'corrected' : ''}>
                 <th scope="row">{header}</th>
                 <td>
                   <select data-testid={`map-target-${i}`} aria-label={`what column ${header} holds`} value={symbol} onChange={(e) => onColumn(header, e.target.value, unitText)}>
@@ -448,13 +448,19 @@ function Report({ result, millis, flaggedOnly, onFlaggedOnly, page, onPage, onEx
           <span className="big" data-testid="summary-rows-checked">
             {s.rowsChecked}
           </span>
-          rows checked
+          rows checked ({s.rowsPassed} pass)
         </div>
         <div className={s.rowsFlagged > 0 ? 'tile bad' : 'tile good'}>
           <span className="big" data-testid="summary-rows-flagged">
             {s.rowsFlagged}
           </span>
           rows flagged
+        </div>
+        <div className={s.rowsNotChecked > 0 ? 'tile bad' : 'tile'}>
+          <span className="big" data-testid="summary-rows-not-checked">
+            {s.rowsNotChecked}
+          </span>
+          rows not checked{s.rowsChecked === 0 ? ': nothing was checked, so nothing passed' : ''}
         </div>
         <div className="tile">
           <span className="big">{s.propertiesChecked}</span>
@@ -486,7 +492,7 @@ function Report({ result, millis, flaggedOnly, onFlaggedOnly, page, onPage, onEx
       </div>
       {result.ignoredColumns.length > 0 && (
         <details className="small muted">
-          <summary>{result.ignoredColumns.length} columns not checked</summary>
+          <summary>{result.ignoredColumns.length} columns not used: not known to the check, or known but not checked</summary>
           <ul>
             {result.ignoredColumns.map((c) => (
               <li key={c.header}>
@@ -555,8 +561,8 @@ function ReportRow({ row, symbols }: { row: RowCheck; symbols: readonly string[]
       <tr data-testid={`report-row-${row.row}`} data-flagged={row.flagged ? 'true' : 'false'} className={row.flagged ? 'flagged-row' : ''}>
         <td className="num">{row.row}</td>
         <th scope="row">{row.designation}</th>
-        <td>{row.family}</td>
-        <td className={row.flagged ? 'verdict bad' : 'verdict good'}>{row.flagged ? 'flagged' : 'pass'}</td>
+        <td title={row.familyFrom === 'designation' ? 'family read from the designation' : undefined}>{row.family ?? '?'}</td>
+        <td className={row.status === 'flagged' ? 'verdict bad' : row.status === 'pass' ? 'verdict good' : 'verdict muted'} data-testid={`status-${row.row}`}>{row.status}</td>
         {symbols.map((k) => {
           const p = row.properties.find((q) => q.symbol === k);
           if (!p) return <td key={k} className="muted">—</td>;
@@ -570,11 +576,11 @@ function ReportRow({ row, symbols }: { row: RowCheck; symbols: readonly string[]
           );
         })}
       </tr>
-      {row.findings.length > 0 && (
+      {(row.findings.length > 0 || row.notCheckedReason !== undefined) && (
         <tr className="findings-row" data-testid={`findings-${row.row}`}>
           <td />
           <td colSpan={symbols.length + 3} className="findings small">
-            {row.findings.join(' · ')}
+            {[...row.findings, ...(row.notCheckedReason !== undefined ? [`not checked: ${row.notCheckedReason}`] : [])].join(' · ')}
           </td>
         </tr>
       )}
