@@ -60,9 +60,10 @@ describe('a cold-formed product table', () => {
     expect(result.rows.filter((r) => r.flagged).map((r) => r.designation)).toEqual(['joist 10-2.5-68']);
   });
 
-  it('a lipped-channel row without a lip is named', () => {
+  it('a lipped-channel row without a lip is named, and is "not checked" (nothing could be compared), not flagged or passed', () => {
     const text = 'Designation,Type,Depth,Flange width,Thickness,A\njoist,LC,8,2.5,0.075,1.1\n';
     const result = checkTable(text, { tolerances: { default: 0.01 } });
-    expect(result.rows[0]!.findings.join(' ')).toContain('lip L');
+    expect(result.rows[0]!.status).toBe('not checked');
+    expect(result.rows[0]!.notCheckedReason).toContain('lip L');
   });
 });
