@@ -7,7 +7,7 @@
 import { useDeferredValue, useEffect, useMemo, useState, type ReactElement } from 'react';
 import type { SectionDocument } from '../../../core/document/types.ts';
 import { materialPiecesFromDocument } from '../../../core/materials/index.ts';
-import { COMMON_DEFLECTION_RATIOS, LIMIT_CAUTION, SUPPORTS, sectionMemberCheck, type SectionMemberInput, type Support } from '../../../core/member/index.ts';
+import { COMMON_DEFLECTION_RATIOS, LIMIT_CAUTION, STRESS_FACTOR_MEANING, SUPPORTS, sectionMemberCheck, type SectionMemberInput, type Support } from '../../../core/member/index.ts';
 import { convertLength, formatSig } from '../../../core/units/index.ts';
 import { parseNumber } from '../shell/numbers.ts';
 import type { MemberCase } from '../report/report-input.ts';
@@ -15,25 +15,29 @@ import type { MemberCase } from '../report/report-input.ts';
 const N_PER_KIP = 4448.2216152605; // exact by definition (1 lbf = 4.4482216152605 N)
 const SUPPORT_NAMES: Readonly<Record<Support, string>> = { simple: 'simply supported', cantilever: 'cantilever (fixed at left)', fixed: 'fixed at both ends', propped: 'propped cantilever' };
 
-function Plot({ xs, ys, label, unit, testid, flip }: { xs: readonly number[]; ys: readonly number[]; label: string; unit: string; testid: string; flip: boolean }): ReactElement {
+function Plot({ xs, ys, label, unit, testid, flip, note }: { xs: readonly number[]; ys: readonly number[]; label: string; unit: string; testid: string; flip: boolean; note?: string }): ReactElement {
   const w = 320;
-  const h = 70;
+  // A 16 px band on top holds the label (and the sign convention), so the curve never runs under it.
+  const band = 16;
+  const h = 70 + band;
   const max = Math.max(1e-300, ...ys.map((v) => Math.abs(v)));
   const x0 = xs[0] ?? 0;
   const span = (xs[xs.length - 1] ?? 1) - x0 || 1;
   // Downward deflection and sagging moment drawn below the beam line, as engineers sketch them.
-  const pts = xs.map((x, i) => `${(((x - x0) / span) * (w - 20) + 10).toFixed(1)},${(h / 2 + ((flip ? -1 : 1) * (ys[i] ?? 0) / max) * (h / 2 - 8)).toFixed(1)}`);
+  const mid = band + (h - band) / 2;
+  const half = (h - band) / 2 - 6;
+  const pts = xs.map((x, i) => `${(((x - x0) / span) * (w - 20) + 10).toFixed(1)},${(mid + ((flip ? -1 : 1) * (ys[i] ?? 0) / max) * half).toFixed(1)}`);
   const peak = ys.reduce((a, b) => (Math.abs(b) > Math.abs(a) ? b : a), 0);
   const k = ys.indexOf(peak);
   const px = (((xs[k] ?? 0) - x0) / span) * (w - 20) + 10;
-  const py = h / 2 + ((flip ? -1 : 1) * peak / max) * (h / 2 - 8);
+  const py = mid + ((flip ? -1 : 1) * peak / max) * half;
   return (
-    <svg width={w} height={h} data-testid={testid} role="img" aria-label={label} className="plot">
-      <line x1={10} y1={h / 2} x2={w - 10} y2={h / 2} stroke="#b9ae97" />
+    <svg width={w} height={h} data-testid={testid} role="img" aria-label={label} className="plot" data-peak-y={py.toFixed(1)} data-axis-y={mid.toFixed(1)}>
+      <line x1={10} y1={mid} x2={w - 10} y2={mid} stroke="#b9ae97" />
       <polyline points={pts.join(' ')} fill="none" stroke="#2f4257" strokeWidth={1.5} />
       <circle cx={px} cy={py} r={3} fill="#c0612b" />
       <text x={12} y={11} fontSize={10} fill="#51606e">
-        {label}: {formatSig(peak, 4)} {unit}
+        {label}: {formatSig(peak, 4)} {unit}{note !== undefined ? ` (${note})` : ''}
       </text>
     </svg>
   );
@@ -114,9 +118,18 @@ export function MemberPanel({ doc: current, valid, onCase }: { doc: SectionDocum
               ))}
             </tbody>
           </table>
-          {r.limit && <p className={r.limit.passes ? 'verdict ok' : 'verdict bad'}>{r.limit.passes ? 'Within' : 'Exceeds'} the L/{r.limit.ratio} limit (allowed {formatSig(lenOut(r.limit.allowed), 3)} {lu}).</p>}
-          <Plot xs={r.diagram.x.map(lenOut)} ys={r.diagram.deflection.map(lenOut)} label="deflected shape" unit={lu} testid="member-deflection-plot" flip />
-          <Plot xs={r.diagram.x.map(lenOut)} ys={r.diagram.moment.map(mom)} label="bending moment" unit={mu} testid="member-moment-plot" flip={false} />
+          <p className={r.verdict.passes ? 'verdict ok' : 'verdict bad'} data-testid="member-overall-verdict" data-passes={r.verdict.passes ? 'true' : 'false'}>{r.verdict.summary}</p>
+          <ul className="small" data-testid="member-criteria">
+            {r.verdict.criteria.map((c) => (
+              <li key={`${c.kind}${c.materialId ?? ''}`} className={c.status === 'fail' ? 'bad' : c.status === 'pass' ? 'ok' : 'muted'} data-testid="member-criterion" data-kind={c.kind} data-ratio={c.ratio === undefined ? '' : String(c.ratio)}>
+                {c.status === 'not checked' ? `not checked: ${c.label} (${c.reason ?? ''})` : `${c.status === 'fail' ? 'FAILS' : 'passes'}: ${c.label} at ${formatSig((c.ratio ?? NaN) * 100, 3)} % of its limit (${c.limitBasis})`}
+              </li>
+            ))}
+          </ul>
+          <p className="muted small">{STRESS_FACTOR_MEANING}</p>
+          {/* Deflection is downward positive: drawn below the beam line, so the shape sags under a downward load. */}
+          <Plot xs={r.diagram.x.map(lenOut)} ys={r.diagram.deflection.map(lenOut)} label="deflected shape" unit={lu} testid="member-deflection-plot" flip={false} note="downward drawn down" />
+          <Plot xs={r.diagram.x.map(lenOut)} ys={r.diagram.moment.map(mom)} label="bending moment" unit={mu} testid="member-moment-plot" flip={false} note="sagging + drawn below" />
           <p className="caution">{LIMIT_CAUTION}</p>
         </div>
       )}
