@@ -7,7 +7,8 @@
  */
 import { useMemo, useState, type ReactElement } from 'react';
 import type { Part, PolygonPart, SectionDocument, ShapePart } from '../../../core/document/types.ts';
-import { searchCatalogue, type CatalogueEntry, type Family } from '../../../core/catalogue/index.ts';
+import { findShapes, searchCatalogue, STEEL_LBFT_PER_IN2, type CatalogueEntry, type Family } from '../../../core/catalogue/index.ts';
+import { weightAgreement } from '../../../core/catalogue/measure.ts';
 import { defaultParams, getPartType, partTypes } from '../../../core/parts/index.ts';
 import type { ParamSpec } from '../../../core/parts/index.ts';
 import { localRegion } from '../../../core/section/index.ts';
@@ -49,12 +50,24 @@ export function polygonsOfShape(part: ShapePart, unit: LengthUnit, doc: SectionD
   });
 }
 
+/** Tabulated weight beside the weight computed from the rebuilt area (steel, 490 lb/ft³; HSS and Pipe at their nominal wall). */
+function weightText(e: CatalogueEntry): string {
+  if (e.nominalWeight === undefined) return '';
+  const a = weightAgreement(e);
+  const computed = a === undefined || !Number.isFinite(a.area) ? '' : `, computed ${formatSig(a.area * STEEL_LBFT_PER_IN2, 3)}`;
+  return ` · W ${formatSig(e.nominalWeight, 3)} lb/ft${computed}`;
+}
+
 export function PartsPalette({ editor, state, onPlaced }: { editor: Editor; state: EditorState; onPlaced?: () => void }): ReactElement {
   const unit = state.doc.unit;
   const [typeId, setTypeId] = useState('i-shape');
   const [text, setText] = useState('');
   const [family, setFamily] = useState<Family | ''>('');
-  const found = useMemo(() => (text.trim() === '' && family === '' ? [] : searchCatalogue({ text, ...(family ? { family } : {}), limit: 40 })), [text, family]);
+  // Typed text: closest matches first (lumber first for a lumber size); a family alone: catalogue order.
+  const found = useMemo(
+    () => (text.trim() === '' ? (family === '' ? [] : searchCatalogue({ family, limit: 40 })) : findShapes(text, undefined, 400).filter((e) => family === '' || e.family === family).slice(0, 40)),
+    [text, family],
+  );
 
   const addType = (): void => {
     const type = getPartType(typeId);
@@ -85,7 +98,16 @@ export function PartsPalette({ editor, state, onPlaced }: { editor: Editor; stat
       <div className="grid4">
         <label className="field" style={{ gridColumn: 'span 3' }}>
           <span>catalogue: designation</span>
-          <input data-testid="catalogue-search" value={text} placeholder="W14X90, HSS6X6, 2x10…" onChange={(e) => setText(e.target.value)} spellCheck={false} />
+          <input
+            data-testid="catalogue-search"
+            value={text}
+            placeholder="W14X90, HSS6X6, 2x10… (Enter adds the first)"
+            onChange={(e) => setText(e.target.value)}
+            onKeyDown={(e) => {
+              if (e.key === 'Enter' && found[0] !== undefined) place(found[0]);
+            }}
+            spellCheck={false}
+          />
         </label>
         <label className="field">
           <span>family</span>
@@ -106,7 +128,7 @@ export function PartsPalette({ editor, state, onPlaced }: { editor: Editor; stat
               <button type="button" data-testid={`catalogue-result-${i}`} title={`${e.source}. ${e.modelling.join(' ')}`} onClick={() => place(e)}>
                 <strong>{e.designation}</strong>
                 <span className="muted">
-                  d {formatSig(e.depth, 3)} in{e.nominalWeight !== undefined ? ` · ${formatSig(e.nominalWeight, 3)} lb/ft` : ''}
+                  d {formatSig(e.depth, 3)} in{weightText(e)}
                 </span>
               </button>
             </li>
