@@ -21,6 +21,7 @@ import { writeOutputFile } from '../output.ts';
 import { propertiesSheet } from '../../core/export/xlsx.ts';
 import { writeXlsxOutput } from '../xlsx.ts';
 import { materialPropsResults } from './member.ts';
+import { JOINT_FLAGS, JOINTS_NOTE, jointResults } from './joints-results.ts';
 
 export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'json', type: 'boolean', description: 'print one JSON object (keys below) instead of the table' },
@@ -33,6 +34,7 @@ export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'xlsx', type: 'string', value: 'OUT', description: 'also write the properties table as XLSX (numbers at full precision in plain powers of the section\'s unit, units in the headings, the caution in row 1)' },
   { name: 'dxf-parts', type: 'boolean', description: 'with --dxf: also each part laid flat in its own coordinates, with its holes, on a layer PART-<name> (for cutting)' },
   ...DXF_INPUT_FLAGS,
+  ...JOINT_FLAGS,
 ];
 
 /** The length dimension of every property (null: a pure number or an angle). */
@@ -121,7 +123,8 @@ function joined(...parts: readonly ExtraResults[]): ExtraResults {
 
 /** Results beyond the geometry, as JSON keys and table rows [symbol, value, unit, what]: net section, the E-weighted values of a document with materials, torsion. */
 function extraResults(file: string, section: LoadedSection, flags: FlagValues, io: CliIo, unit: LengthUnit): ExtraResults {
-  const materials = joined(netResults(section, unit), materialPropsResults(file, section, flags, io, unit));
+  const joints = section.doc === undefined ? { json: {}, rows: [], errors: [] } : jointResults(section.doc, flags, unit);
+  const materials = joined(netResults(section, unit), joints, materialPropsResults(file, section, flags, io, unit));
   if (flags.torsion !== true) return materials;
   const torsion = torsionResults(file, section, io, unit);
   return { json: { ...materials.json, ...torsion.json }, rows: [...materials.rows, ...torsion.rows], errors: [...materials.errors, ...torsion.errors] };
@@ -250,6 +253,8 @@ function table(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraRes
     '',
     ...lines,
     note,
+    ...((extra.json.warnings as readonly string[] | undefined) ?? []).map((w) => `WARNING: ${w}`),
+    ...(extra.json.shear !== undefined ? [JOINTS_NOTE] : []),
     `CAUTION: ${CAUTION}`,
     '',
   ].join('\n');

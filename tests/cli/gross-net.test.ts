@@ -69,3 +69,31 @@ describe('props: gross and net', () => {
     expect([bad.code, bad.err]).toEqual([2, `${file}: --cutout-role: expected PART=fastener-hole or PART=void (PART a part's name or id), got "hole 1=bolt"\n`]);
   });
 });
+
+describe('props --shear: the joints and their q', () => {
+  it('a welded I (flanges 300 × 20, web 10 × 560 mm) under 500 kN: q = V·Af·(d − tf)/2/Ix at each flange weld, with the weld leg and the note', async () => {
+    const file = join(dir, 'welded-i.json');
+    writeFileSync(file, JSON.stringify({
+      format: 'sectionsmith-section', version: 3, name: 'Welded I', unit: 'mm', materials: [], defaultMaterial: null,
+      sections: [{ id: 's1', name: 'Welded I', parts: [rect('top', 300, 20, 0, 290), rect('web', 10, 560, 0, 0), rect('bottom', 300, 20, 0, -290)] }],
+    }));
+    const r = await cli('props', file, '--shear', '500kN', '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.out) as { shear: { qUnit: string; note: string; joints: { parts: string[]; q: number; requiredLeg: number }[] }; joints: { length: number }[] };
+    // Gere & Timoshenko: q = V·Af·(d − tf)/2/Ix; Ix = 10·560³/12 + 2·(300·20³/12 + 6000·290²).
+    const Ix = (10 * 560 ** 3) / 12 + 2 * ((300 * 20 ** 3) / 12 + 6000 * 290 ** 2);
+    const q = (500_000 * 6000 * 580) / 2 / Ix;
+    expect(j.shear.qUnit).toBe('N/mm');
+    expect(j.joints.map((x) => x.length)).toEqual([10, 10]);
+    expect(j.shear.joints.map((x) => x.parts)).toEqual([['top', 'web'], ['web', 'bottom']]);
+    for (const x of j.shear.joints) expect(Math.abs(Math.abs(x.q) - q)).toBeLessThan(1e-9 * q);
+    // AISC 360-22 §J2.4, LRFD, E70 (482.63 MPa), fillets both sides: w = q/(2·0.75·0.60·0.707·FEXX).
+    expect(j.shear.joints[0]?.requiredLeg).toBeCloseTo(q / (2 * 0.75 * 0.6 * 0.707 * (70 * 6.894757293168361)), 9);
+    expect(j.shear.note).toContain('the local code governs');
+  });
+
+  it('a bad --shear names the flag', async () => {
+    const r = await cli('props', write(), '--shear', 'lots');
+    expect([r.code, r.err.trim().endsWith('--shear: "lots" is not a number with an optional unit')]).toEqual([2, true]);
+  });
+});
