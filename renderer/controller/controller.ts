@@ -80,6 +80,8 @@ export interface AppState {
   readonly asking: string | null;
   /** Parts on the clipboard (Copy, Cut), or 0. */
   readonly clipboardParts: number;
+  /** The host's recent files (File menu), newest first; read again when the menu opens. */
+  readonly recent: readonly { readonly name: string; readonly handle: string }[];
 }
 
 /** One timer source (window's in the app; fake ones in tests). */
@@ -155,6 +157,7 @@ export class AppController implements CommandTarget {
       torsion: { kind: 'idle' },
       asking: null,
       clipboardParts: 0,
+      recent: [],
     };
     this.torsionRunner = deps.torsion((torsion) => this.set({ torsion }));
     this.attach();
@@ -423,6 +426,15 @@ export class AppController implements CommandTarget {
       if (f) this.openText(f.text, f.name, f.handle);
     } catch (err) {
       this.error('Could not open the file. The current document is unchanged.', [errorText(err)]);
+    }
+  }
+
+  /** Read the host's recent-files list into the state (the File menu shows it). */
+  async refreshRecent(): Promise<void> {
+    try {
+      this.set({ recent: await this.host.recentFiles() });
+    } catch {
+      this.set({ recent: [] }); // the list is a convenience: without it the menu simply has none
     }
   }
 

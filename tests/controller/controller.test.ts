@@ -495,3 +495,21 @@ describe('mounting twice (React development mode mounts, unmounts and mounts aga
     expect(r.torsion.solved.at(-1)).toBe(r.c.editor.getState().doc);
   });
 });
+
+describe('recent files', () => {
+  it('reads the host list and opens an entry without a dialog', async () => {
+    const r = rig((h) => h.recent.set('h-7', { name: 'mezzanine.section.json', handle: 'h-7', text: EXAMPLE_TEXT }));
+    await r.c.refreshRecent();
+    expect(r.c.getState().recent).toEqual([{ name: 'mezzanine.section.json', handle: 'h-7' }]);
+    await r.c.openRecent('h-7', 'mezzanine.section.json');
+    expect(r.c.editor.getState().file).toEqual({ name: 'mezzanine.section.json', handle: 'h-7' });
+  });
+
+  it('says so when a recent file is gone, and keeps the current document', async () => {
+    const r = withPlate();
+    r.c.editor.markSaved({ name: 'a.section.json', handle: null });
+    await r.c.openRecent('h-gone', 'old.section.json');
+    expect(r.c.getState().banner?.title).toContain('old.section.json is no longer available');
+    expect(r.c.editor.getState().doc.parts).toHaveLength(1);
+  });
+});

@@ -13,7 +13,7 @@ import type { Diagnostic } from '../../../core/geometry/types.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
 import { COLOURS } from './palette.ts';
 import type { Overlays } from '../../controller/controller.ts';
-import { placeLabels, type LabelBox, type LabelRequest } from './labels.ts';
+import { placeLabels, scaleBar, type LabelBox, type LabelRequest } from './labels.ts';
 import { gridIndices, gridStep, toScreen, toSection, zoomAt, type View } from '../../controller/view.ts';
 import { formatSig } from '../../../core/units/index.ts';
 import { arcOfSegment, ringVertexCount } from '../../../core/geometry/ring.ts';
@@ -482,7 +482,8 @@ export function Canvas(props: Props): ReactElement {
   const stressParts = props.stress && (overlays.stress || overlays.kern) ? stressOverlay({ sv: props.stress, view, overlays, width: size.width, height: size.height }) : null;
   const resultParts = props.properties ? resultsOverlay({ p: props.properties, view, overlays, width: size.width, height: size.height, shearCentre: props.shearCentre ?? null }) : null;
   const requests = [...(resultParts?.labels ?? []), ...(stressParts?.labels ?? [])];
-  const { placed } = placeLabels(requests, [...(resultParts?.reserved ?? []), ...(stressParts?.reserved ?? [])], size.width, size.height);
+  const bar = scaleBar(view.scale, size.width, size.height);
+  const { placed } = placeLabels(requests, [...(resultParts?.reserved ?? []), ...(stressParts?.reserved ?? []), bar.box], size.width, size.height);
   const labelStyle = new Map(requests.map((r) => [r.id, r as LabelRequest & { fontSize?: number; colour?: string; style?: string }]));
 
   return (
@@ -493,6 +494,7 @@ export function Canvas(props: Props): ReactElement {
       tabIndex={0}
       data-view={JSON.stringify(view)}
       data-tool-state={state.tool.name}
+      data-scale-bar={`${bar.text} ${state.doc.unit} = ${bar.pixels} px`}
     >
       <Stage
         width={size.width}
@@ -572,6 +574,13 @@ export function Canvas(props: Props): ReactElement {
           <DiagnosticMarks diagnostics={props.diagnostics} view={view} />
         </Layer>
         <Layer listening={false}>
+          <Group x={bar.box.x} y={bar.box.y}>
+            <Rect width={bar.box.width} height={bar.box.height} fill={COLOURS.paper} opacity={0.85} cornerRadius={2} />
+            <Line points={[6, 18, 6 + bar.pixels, 18]} stroke={COLOURS.dimension} strokeWidth={2} />
+            <Line points={[6, 13, 6, 22]} stroke={COLOURS.dimension} strokeWidth={1} />
+            <Line points={[6 + bar.pixels, 13, 6 + bar.pixels, 22]} stroke={COLOURS.dimension} strokeWidth={1} />
+            <Text x={6} y={2} text={`${bar.text} ${state.doc.unit}`} fontSize={11} fill={COLOURS.dimension} />
+          </Group>
           {placed.map((l) => {
             const style = labelStyle.get(l.id);
             return (

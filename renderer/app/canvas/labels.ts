@@ -64,3 +64,18 @@ export function placeLabels(requests: readonly LabelRequest[], reserved: readonl
   }
   return { placed, leftOut };
 }
+
+/**
+ * A scale bar for the bottom-right corner: the round length (1, 2 or 5 × 10^k document units)
+ * whose drawn length is nearest 120 px, so the drawing's scale reads as a length, not a ratio.
+ */
+export function scaleBar(pixelsPerUnit: number, width: number, height: number): { pixels: number; text: string; box: LabelBox } {
+  const target = 120 / pixelsPerUnit;
+  const k = Math.floor(Math.log10(target));
+  let best = 10 ** k;
+  for (const m of [1, 2, 5, 10]) if (Math.abs(m * 10 ** k - target) < Math.abs(best - target)) best = m * 10 ** k;
+  const pixels = Math.round(best * pixelsPerUnit);
+  const text = String(Number(best.toPrecision(3)));
+  const boxWidth = Math.max(pixels + 12, 70);
+  return { pixels, text, box: { x: width - boxWidth - 10, y: height - 36, width: boxWidth, height: 28 } };
+}

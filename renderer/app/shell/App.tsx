@@ -99,6 +99,11 @@ export function App(): ReactElement {
           await controller.openGiven(await file.text(), file.name);
         }}
         title={`${state.dirty ? '• ' : ''}${docName}`}
+        recent={app.recent}
+        onOpenRecent={(handle, name) => void controller.openRecent(handle, name)}
+        onMenuOpen={(name) => {
+          if (name === 'File') void controller.refreshRecent();
+        }}
       />
       {banner && (
         <div className={`banner ${banner.kind}`} role={banner.kind === 'error' ? 'alert' : 'status'} data-testid={banner.kind === 'error' ? 'error-banner' : 'info-banner'}>

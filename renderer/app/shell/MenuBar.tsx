@@ -17,6 +17,11 @@ interface Props {
   readonly overlays: Overlays;
   readonly onOverlays: (o: Overlays) => void;
   readonly title: string;
+  /** Recent files (newest first) and what opening one does. */
+  readonly recent: readonly { readonly name: string; readonly handle: string }[];
+  readonly onOpenRecent: (handle: string, name: string) => void;
+  /** A menu is opening (the File menu reads the recent files then). */
+  readonly onMenuOpen?: (name: string) => void;
 }
 
 const OVERLAY_NAMES: readonly [keyof Overlays, string][] = [
@@ -61,7 +66,10 @@ export function MenuBar(props: Props): ReactElement {
 
   const menu = (name: string, children: ReactElement): ReactElement => (
     <div className="menu">
-      <button type="button" className={open === name ? 'menu-title open' : 'menu-title'} data-testid={`menu-${name.toLowerCase()}`} aria-haspopup="menu" aria-expanded={open === name} onClick={() => setOpen(open === name ? null : name)}>
+      <button type="button" className={open === name ? 'menu-title open' : 'menu-title'} data-testid={`menu-${name.toLowerCase()}`} aria-haspopup="menu" aria-expanded={open === name} onClick={() => {
+          if (open !== name) props.onMenuOpen?.(name);
+          setOpen(open === name ? null : name);
+        }}>
         {name}
       </button>
       {open === name && (
@@ -84,6 +92,29 @@ export function MenuBar(props: Props): ReactElement {
             <span>Open from a file picker…</span>
             <kbd />
           </button>
+          {props.recent.length > 0 && (
+            <>
+              <hr />
+              <span className="menu-note muted small">Recent</span>
+              {props.recent.map((r, i) => (
+                <button
+                  key={r.handle}
+                  type="button"
+                  role="menuitem"
+                  className="menu-item"
+                  data-testid={`menu-recent-${i}`}
+                  onClick={() => {
+                    setOpen(null);
+                    props.onOpenRecent(r.handle, r.name);
+                  }}
+                >
+                  <span>{r.name}</span>
+                  <kbd />
+                </button>
+              ))}
+              <hr />
+            </>
+          )}
           {item('save', 'Save')}
           {item('save-as', 'Save as…')}
           <hr />
