@@ -44,8 +44,13 @@ function keyInput(e: KeyboardEvent): Parameters<AppController['keyDown']>[0] {
   return { key: e.key, mod: e.ctrlKey || e.metaKey, shift: e.shiftKey, alt: e.altKey, typing };
 }
 
-export function App(): ReactElement {
-  const controller = useMemo(() => new AppController({ host: getHost(), exampleText, torsion: (onState) => new TorsionClient(onState) }), []);
+/** The app's controller: made once by main.tsx, outside React, so the document outlives any view. */
+export function createAppController(): AppController {
+  return new AppController({ host: getHost(), exampleText, torsion: (onState) => new TorsionClient(onState) });
+}
+
+export function App({ controller: given }: { readonly controller?: AppController } = {}): ReactElement {
+  const controller = useMemo(() => given ?? createAppController(), [given]);
   const editor = controller.editor;
   const state = useSyncExternalStore(editor.subscribe, editor.getState);
   const app = useSyncExternalStore(controller.subscribe, controller.getState);
