@@ -210,7 +210,13 @@ function torsionRows(section: LoadedSection, unit: LengthUnit, r: TorsionResult)
     ['meshElements', String(r.meshElements), '', '6-node triangles in the torsion mesh'],
     ['jRelativeError', formatSig(r.jRelativeError * 100, 2), '%', 'estimated error of J (refined mesh, arc chords, simplified outline)'],
   ];
-  if (r.components > 1) rows.push(['torsionComponents', String(r.components), '', 'separate pieces: each twists on its own, J values add']);
+  if (r.components > 1) {
+    // Pieces that twist on their own have no shared shear centre or warping constant.
+    rows.splice(1, 3, ['Cw, xs, ys', '—', '', 'none: the pieces are separate, so there is no shared shear centre or Cw']);
+    rows[0] = ['J', g(values.J), `${unit}⁴`, `torsion constant: sum over ${r.components} separate pieces (finite elements)`];
+    rows.push(['torsionComponents', String(r.components), '', 'separate pieces: each twists on its own, J values add']);
+    Object.assign(values, { Cw: null, xs: null, ys: null });
+  }
   const o = r.simplifiedOutline;
   if (!o) return { json: values, rows, errors: [] };
   const pct = (v: number): string => formatSig(v * 100, 2);

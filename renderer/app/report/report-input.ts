@@ -93,12 +93,18 @@ export function torsionTable(t: TorsionResult, unit: LengthUnit, display: Displa
     title: 'Torsion (finite elements)',
     columns: ['symbol', 'value', 'unit', 'meaning'],
     textColumns: [3],
-    rows: [
-      row('J', t.J, 'inertia', 'Saint-Venant torsion constant'),
-      row('Cw', t.Cw, 'warping', 'warping constant'),
-      row('xs', t.xs, 'length', 'shear centre x'),
-      row('ys', t.ys, 'length', 'shear centre y'),
-    ],
+    // Separate pieces twist on their own: J adds, and there is no shared shear centre or Cw.
+    rows: t.components > 1
+      ? [
+          row('J', t.J, 'inertia', `Saint-Venant torsion constant: sum over ${t.components} separate pieces`),
+          ['Cw, xs, ys', '—', '', 'none: the pieces are separate, so there is no shared shear centre or warping constant'],
+        ]
+      : [
+          row('J', t.J, 'inertia', 'Saint-Venant torsion constant'),
+          row('Cw', t.Cw, 'warping', 'warping constant'),
+          row('xs', t.xs, 'length', 'shear centre x'),
+          row('ys', t.ys, 'length', 'shear centre y'),
+        ],
   };
 }
 

@@ -21,12 +21,18 @@ interface Props {
 }
 
 function TorsionRows({ t, current, unit, display, sig }: { t: TorsionState; current: SectionDocument; unit: LengthUnit; display: DisplaySet; sig: number }): ReactElement {
-  const rows: [string, string, string, number, 'inertia' | 'warping' | 'length'][] = t.kind === 'done'
+  // Separate pieces twist on their own: J adds, and there is no shared shear centre or Cw.
+  const separate = t.kind === 'done' && t.result.components > 1;
+  const rows: (readonly [string, string, string, number, 'inertia' | 'warping' | 'length'])[] = t.kind === 'done'
     ? [
-        ['J', 'J', 'Saint-Venant torsion constant', t.result.J, 'inertia'],
-        ['Cw', 'Cw', 'warping constant', t.result.Cw, 'warping'],
-        ['xs', 'xs', 'shear centre x', t.result.xs, 'length'],
-        ['ys', 'ys', 'shear centre y', t.result.ys, 'length'],
+        ['J', 'J', separate ? 'Saint-Venant torsion constant: sum over the separate pieces' : 'Saint-Venant torsion constant', t.result.J, 'inertia'],
+        ...(separate
+          ? []
+          : ([
+              ['Cw', 'Cw', 'warping constant', t.result.Cw, 'warping'],
+              ['xs', 'xs', 'shear centre x', t.result.xs, 'length'],
+              ['ys', 'ys', 'shear centre y', t.result.ys, 'length'],
+            ] as const)),
       ]
     : [];
   const stale = t.kind === 'done' && t.doc !== current;
@@ -64,6 +70,13 @@ function TorsionRows({ t, current, unit, display, sig }: { t: TorsionState; curr
             </tr>
           );
         })}
+        {separate && t.kind === 'done' && (
+          <tr>
+            <td colSpan={4} className="warning" data-testid="torsion-separate">
+              {t.result.components} separate pieces: each twists on its own, so J is the sum of their J and the section has no shared shear centre or warping constant.
+            </td>
+          </tr>
+        )}
         {t.kind === 'done' && (
           <tr>
             <td colSpan={4} className="muted small" data-testid="torsion-info">

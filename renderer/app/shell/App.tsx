@@ -168,7 +168,7 @@ export function App({ controller: given }: { readonly controller?: AppController
             state={state}
             outlines={outlines}
             properties={p ?? results.stale}
-            shearCentre={torsion.kind === 'done' && torsion.doc === state.doc ? [torsion.result.xs, torsion.result.ys] : null}
+            shearCentre={torsion.kind === 'done' && torsion.doc === state.doc && torsion.result.components === 1 ? [torsion.result.xs, torsion.result.ys] : null}
             diagnostics={results.diagnostics}
             stress={stress?.ok && stressDoc === state.doc ? stress.view : null}
             overlays={overlays}
