@@ -16,6 +16,7 @@ export const CHANNELS = [
   { name: 'recent:list', direction: 'invoke' },
   { name: 'recovery:write', direction: 'invoke' },
   { name: 'recovery:read', direction: 'invoke' },
+  { name: 'recovery:discard', direction: 'invoke' },
   { name: 'table:open', direction: 'invoke' },
   { name: 'settings:read', direction: 'invoke' },
   { name: 'settings:write', direction: 'invoke' },

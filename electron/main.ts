@@ -39,8 +39,8 @@ let launchPath = documentPathFromArgv(process.argv, process.cwd(), process.defau
 let unsaved = false;
 let closeConfirmed = false;
 
-// The ID of the earlier single file until the renderer offers several copies (issue 18 §2).
-const recovery = createRecoveryStore(path.join(app.getPath('userData'), 'recovery'), 'work');
+// This window's own copy, under a fresh ID; copies of earlier windows are offered, never overwritten.
+const recovery = createRecoveryStore(path.join(app.getPath('userData'), 'recovery'));
 const recentListFile = path.join(app.getPath('userData'), 'recent-files.json');
 const settings = createSettingsStore(app.getPath('userData'));
 let recent: RecentFile[] = [];
@@ -168,7 +168,8 @@ function registerHandlers(): void {
   handle('dialog:confirm-discard', async (documentName) => (window ? confirmDiscard(window, documentName) : false));
   handle('recent:list', async () => recent);
   handle('recovery:write', async (text) => (text === null ? recovery.clear() : recovery.write(text)));
-  handle('recovery:read', async () => recovery.read());
+  handle('recovery:read', async () => recovery.leftBehind());
+  handle('recovery:discard', async (id) => recovery.discard(id));
   handle('table:open', async () => {
     if (!window) return null;
     const choice = await dialog.showOpenDialog(window, {

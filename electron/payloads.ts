@@ -6,6 +6,7 @@
 import * as v from 'valibot';
 import { validateDocument } from '../core/document/schema.ts';
 import type { Channel } from './channels.ts';
+import { isRecoveryId } from './recovery.ts';
 import { SETTING_KEY, SETTING_KEY_MAX, SETTING_VALUE_MAX } from './settings.ts';
 
 /** Largest text accepted over IPC or read from disk (a document of many thousand vertices is < 5 MB). */
@@ -58,6 +59,7 @@ export const PAYLOADS = {
   'recent:list': v.strictTuple([]),
   'recovery:write': v.strictTuple([v.nullable(text)]),
   'recovery:read': v.strictTuple([]),
+  'recovery:discard': v.strictTuple([v.pipe(v.string('a recovery copy ID'), v.check(isRecoveryId, 'a recovery copy ID (letters, digits and -)'))]),
   'table:open': v.strictTuple([]),
   'settings:read': v.strictTuple([settingKey]),
   'settings:write': v.strictTuple([settingKey, settingValue]),

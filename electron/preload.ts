@@ -7,7 +7,7 @@
  * Bundled to CommonJS (out/electron/preload.cjs) because sandboxed preloads cannot load ES modules.
  */
 import { contextBridge, ipcRenderer } from 'electron';
-import { HOST_COMMANDS, type Host, type HostCommand, type OpenedFile, type SaveResult } from '../renderer/host/host.ts';
+import { HOST_COMMANDS, type Host, type HostCommand, type OpenedFile, type RecoveryCopy, type SaveResult } from '../renderer/host/host.ts';
 import type { InvokeChannel, SendChannel } from './channels.ts';
 import { plainRemoteMessage } from './remote-error.ts';
 
@@ -28,7 +28,8 @@ const host: Host = {
   confirmDiscard: (documentName) => invoke<boolean>('dialog:confirm-discard', documentName),
   recentFiles: () => invoke<{ name: string; handle: string }[]>('recent:list'),
   writeRecovery: (text) => invoke<void>('recovery:write', text),
-  readRecovery: () => invoke<string | null>('recovery:read'),
+  readRecovery: () => invoke<RecoveryCopy[]>('recovery:read'),
+  discardRecovery: (id) => invoke<void>('recovery:discard', id),
   setTitle: (title) => send('window:set-title', title),
   setUnsaved: (unsaved) => send('window:set-unsaved', unsaved),
   openRecent: (handle) => invoke<OpenedFile | null>('document:open-recent', handle),

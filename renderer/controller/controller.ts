@@ -18,7 +18,7 @@ import { convertLength, defaultDisplaySet, plainDisplaySet, type DisplaySet, typ
 import { Editor } from '../editor/editor.ts';
 import { outlineBox, type Vec } from '../editor/geometry.ts';
 import { scaleDocumentLengths, uniquePartId } from '../editor/transforms.ts';
-import type { Host, HostCommand } from '../host/host.ts';
+import type { Host, HostCommand, RecoveryCopy } from '../host/host.ts';
 import { COMMANDS, isCommandId, type CommandId, type CommandTarget, type ShownView } from './commands.ts';
 import { documentFromText } from './files.ts';
 import { keyAction, type KeyInput } from './keymap.ts';
@@ -31,7 +31,8 @@ export const EXAMPLE_NAME = 'footbridge-box-girder.section.json';
 export const SEEN_EXAMPLE_SETTING = 'seenExample';
 export const DISPLAY_SETTING = 'displayUnits';
 export const FIGURES_SETTING = 'figures';
-export const RECOVERY_DELAY_MS = 1200;
+/** The recovery copy is written this long after a committed edit: one animation frame at 60 Hz. */
+export const RECOVERY_DELAY_MS = 16;
 export const TORSION_DELAY_MS = 400;
 /** Information notes clear themselves after this long; errors stay until dismissed. */
 export const NOTE_LIFETIME_MS = 6000;
@@ -68,7 +69,8 @@ export interface Banner {
 export interface AppState {
   readonly banner: Banner | null;
   /** Text of unsaved work from an earlier session, offered until answered. */
-  readonly recovery: string | null;
+  /** The recovery copy on offer now (others left behind wait their turn). */
+  readonly recovery: RecoveryCopy | null;
   readonly shown: ShownView | null;
   readonly view: View;
   readonly size: { readonly width: number; readonly height: number };
@@ -132,6 +134,8 @@ export class AppController implements CommandTarget {
   private wasDirty = false;
   private torsionTimer: unknown = null;
   private recoveryTimer: unknown = null;
+  /** Copies left by earlier windows, after the one on offer. */
+  private recoveryQueue: RecoveryCopy[] = [];
   private noteTimer: unknown = null;
   private answerDiscard: ((yes: boolean) => void) | null = null;
   private unsubscribeEditor: (() => void) | null = null;
@@ -259,23 +263,34 @@ export class AppController implements CommandTarget {
   }
 
   /**
-   * Recovery text shortly after each change; cleared when the work becomes clean again (saved,
-   * or undone back to the saved state). A fresh start never clears it: that text may be the
-   * previous session's, still on offer. While that offer is unanswered nothing is written, so
-   * the earlier work is not overwritten by new edits; answering it resumes writing at once.
+   * This window's recovery copy is written one frame after each committed edit (not during a
+   * drag: the gesture's end commits it), and flushed at once when the page is hidden or goes away
+   * (flushRecovery). It is cleared when the work becomes clean again (saved, or undone back to the
+   * saved state). Copies left by earlier windows are separate (host.readRecovery), so writing goes
+   * on while they are on offer and never touches them.
    */
   private scheduleRecovery(): void {
-    if (this.recoveryTimer !== null) this.timers.clear(this.recoveryTimer);
-    this.recoveryTimer = null;
-    if (this.state.recovery !== null) return;
     const st = this.editor.getState();
-    if (!st.dirty && !this.wasDirty) return;
-    this.recoveryTimer = this.timers.set(() => {
+    if (st.gesture || (!st.dirty && !this.wasDirty)) return;
+    // A pending write reads the state when it runs, so it is not restarted by a newer edit.
+    this.recoveryTimer ??= this.timers.set(() => {
       this.recoveryTimer = null;
-      const now = this.editor.getState();
-      this.wasDirty = now.dirty;
-      this.host.writeRecovery(now.dirty ? serialiseDocument(now.sectionFile) : null).catch((err: unknown) => this.error('Unsaved work could not be kept for recovery.', [errorText(err)]));
+      this.writeRecoveryNow();
     }, RECOVERY_DELAY_MS);
+  }
+
+  private writeRecoveryNow(): Promise<void> {
+    const now = this.editor.getState();
+    this.wasDirty = now.dirty;
+    return this.host.writeRecovery(now.dirty ? serialiseDocument(now.sectionFile) : null).catch((err: unknown) => this.error('Unsaved work could not be kept for recovery.', [errorText(err)]));
+  }
+
+  /** Write a pending recovery copy now (the page is being hidden or unloaded). */
+  flushRecovery(): void {
+    if (this.recoveryTimer === null) return;
+    this.timers.clear(this.recoveryTimer);
+    this.recoveryTimer = null;
+    void this.writeRecoveryNow();
   }
 
   // ---- notes --------------------------------------------------------------------------------
@@ -335,7 +350,8 @@ export class AppController implements CommandTarget {
         this.markExampleSeenIfShown();
       }
     }
-    if (left) this.set({ recovery: left });
+    this.recoveryQueue = [...left];
+    this.set({ recovery: this.recoveryQueue.shift() ?? null });
   }
 
   private async readSetting(key: string): Promise<string | null> {
@@ -503,20 +519,36 @@ export class AppController implements CommandTarget {
 
   // ---- recovery offer -----------------------------------------------------------------------
 
-  restoreRecovery(): void {
-    const text = this.state.recovery;
-    if (text === null) return;
-    const r = documentFromText(text, 'recovered work', this.editor.getState().doc.unit);
-    this.set({ recovery: null });
-    if (r.ok) this.loadDoc(r.file, null, true);
-    else this.error('The recovered work could not be read.', r.errors);
-    this.scheduleRecovery();
+  /**
+   * Restore the copy on offer into this window. Unsaved work here is not replaced without asking;
+   * the copy leaves the host only after this window's own copy holds it.
+   */
+  async restoreRecovery(): Promise<void> {
+    const copy = this.state.recovery;
+    if (copy === null) return;
+    const r = documentFromText(copy.text, 'recovered work', this.editor.getState().doc.unit);
+    if (!r.ok) {
+      this.error('The recovered work could not be read.', r.errors);
+      return;
+    }
+    if (!(await this.confirmDiscard()) || this.state.recovery !== copy) return;
+    this.loadDoc(r.file, null, true);
+    if (this.recoveryTimer !== null) this.timers.clear(this.recoveryTimer);
+    this.recoveryTimer = null;
+    await this.writeRecoveryNow();
+    this.nextRecoveryOffer();
+    await this.host.discardRecovery(copy.id).catch((err: unknown) => this.error('The restored copy could not be removed from recovery.', [errorText(err)]));
   }
 
   discardRecovery(): void {
-    this.set({ recovery: null });
-    this.host.writeRecovery(null).catch((err: unknown) => this.error('The recovery copy could not be removed.', [errorText(err)]));
-    this.scheduleRecovery();
+    const copy = this.state.recovery;
+    if (copy === null) return;
+    this.nextRecoveryOffer();
+    this.host.discardRecovery(copy.id).catch((err: unknown) => this.error('The recovery copy could not be removed.', [errorText(err)]));
+  }
+
+  private nextRecoveryOffer(): void {
+    this.set({ recovery: this.recoveryQueue.shift() ?? null });
   }
 
   // ---- commands -----------------------------------------------------------------------------

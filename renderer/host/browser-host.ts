@@ -8,12 +8,16 @@
  * Writes through a handle are committed when the writable stream closes (the browser writes a
  * swap file first), so a failed save leaves the old file as it was.
  *
- * Recovery text, the recent-files list and settings (under SETTINGS_PREFIX) live in localStorage;
- * handles in IndexedDB. Tables (openTable) are read through a picker or input limited to CSV/text.
+ * Recovery copies, the recent-files list and settings (under SETTINGS_PREFIX) live in localStorage;
+ * handles in IndexedDB. Each window (tab) keeps its own recovery copy under RECOVERY_PREFIX + its
+ * window ID (kept in sessionStorage, so a reload of the tab is the same window) and holds a Web
+ * Lock named after that ID for as long as it lives. readRecovery offers every other copy whose
+ * window holds no lock, i.e. whose window is gone; so no window overwrites or offers another live
+ * window's copy. The single key of earlier versions (RECOVERY_KEY) is offered as the copy "legacy". Tables (openTable) are read through a picker or input limited to CSV/text.
  * confirmDiscard uses window.confirm until the UI installs its own dialog (setConfirmDiscard).
  * While there are unsaved changes, leaving the page asks first (beforeunload).
  */
-import type { ExportFile, Host, OpenedFile, SaveResult } from './host.ts';
+import type { ExportFile, Host, OpenedFile, RecoveryCopy, SaveResult } from './host.ts';
 
 // The parts of the File System Access API we use (not yet in TypeScript's DOM library).
 interface PickerType { readonly description: string; readonly accept: Record<string, string[]> }
@@ -31,7 +35,14 @@ interface PickerWindow {
 }
 
 export const RECENT_KEY = 'sectionsmith.recentFiles';
+/** The one recovery key of earlier versions, offered as the copy with ID "legacy". */
 export const RECOVERY_KEY = 'sectionsmith.recovery';
+/** A window's copy: RECOVERY_PREFIX + window ID; when it was written: RECOVERY_TIME_PREFIX + window ID. */
+export const RECOVERY_PREFIX = 'sectionsmith.recovery.';
+export const RECOVERY_TIME_PREFIX = 'sectionsmith.recovery-time.';
+const WINDOW_ID_KEY = 'sectionsmith.window-id';
+const WINDOW_LOCK_PREFIX = 'sectionsmith-window-';
+const LEGACY_ID = 'legacy';
 export const SETTINGS_PREFIX = 'sectionsmith.setting.';
 const RECENT_LIMIT = 10;
 const HANDLE_DB = 'sectionsmith-file-handles';
@@ -56,6 +67,8 @@ export function createBrowserHost(win: Window & typeof globalThis = window): Bro
   const pickers = win as unknown as PickerWindow;
   const handles = new Map<string, FileHandle>();
   const store = handleStore(win);
+  const windowId = ownWindowId(win);
+  const windowLock = holdWindowLock(win, windowId);
   let ask = (documentName: string): Promise<boolean> =>
     Promise.resolve(win.confirm(`"${documentName || 'Untitled section'}" has unsaved changes. Discard them?`));
   let unsaved = false;
@@ -143,13 +156,43 @@ export function createBrowserHost(win: Window & typeof globalThis = window): Bro
     },
     async writeRecovery(text) {
       try {
-        if (text === null) win.localStorage.removeItem(RECOVERY_KEY);
-        else win.localStorage.setItem(RECOVERY_KEY, text);
+        if (text === null) {
+          win.localStorage.removeItem(RECOVERY_PREFIX + windowId);
+          win.localStorage.removeItem(RECOVERY_TIME_PREFIX + windowId);
+        } else {
+          win.localStorage.setItem(RECOVERY_PREFIX + windowId, text);
+          win.localStorage.setItem(RECOVERY_TIME_PREFIX + windowId, String(Date.now()));
+        }
       } catch (error) {
-        throw new Error(`Unsaved work could not be kept for recovery: ${storageReason(error)}.`);
+        // A copy that could not be replaced whole is removed rather than left stale.
+        if (text !== null) win.localStorage.removeItem(RECOVERY_PREFIX + windowId);
+        throw new Error(`Unsaved work could not be kept for recovery: ${storageReason(error)}. Save the document to keep it.`);
       }
     },
-    readRecovery: async () => win.localStorage.getItem(RECOVERY_KEY),
+    async readRecovery(): Promise<readonly RecoveryCopy[]> {
+      await windowLock;
+      const live = await liveWindows(win);
+      const copies: RecoveryCopy[] = [];
+      const legacy = win.localStorage.getItem(RECOVERY_KEY);
+      if (legacy) copies.push({ id: LEGACY_ID, text: legacy, savedAt: 0 });
+      for (let i = 0; i < win.localStorage.length; i += 1) {
+        const key = win.localStorage.key(i);
+        if (!key?.startsWith(RECOVERY_PREFIX)) continue;
+        const id = key.slice(RECOVERY_PREFIX.length);
+        if (id === windowId || live.has(id)) continue;
+        const text = win.localStorage.getItem(key);
+        if (text) copies.push({ id, text, savedAt: Number(win.localStorage.getItem(RECOVERY_TIME_PREFIX + id)) || 0 });
+      }
+      return copies.sort((a, b) => b.savedAt - a.savedAt);
+    },
+    async discardRecovery(id) {
+      if (id === windowId) throw new Error("This window's own recovery copy is cleared by writing null, not discarded.");
+      if (id === LEGACY_ID) win.localStorage.removeItem(RECOVERY_KEY);
+      else {
+        win.localStorage.removeItem(RECOVERY_PREFIX + id);
+        win.localStorage.removeItem(RECOVERY_TIME_PREFIX + id);
+      }
+    },
     setTitle(title) {
       win.document.title = title;
     },
@@ -276,4 +319,41 @@ function handleStore(win: Window): { put(id: string, handle: FileHandle): Promis
     put: async (id, handle) => void (await run('readwrite', (s) => s.put(handle, id))),
     get: async (id) => ((await run('readonly', (s) => s.get(id))) as FileHandle | undefined) ?? null,
   };
+}
+
+/** This tab's window ID: kept in sessionStorage, so a reload is the same window and finds its own copy. */
+function ownWindowId(win: Window & typeof globalThis): string {
+  try {
+    const kept = win.sessionStorage.getItem(WINDOW_ID_KEY);
+    if (kept && /^[\w-]{1,64}$/.test(kept) && kept !== LEGACY_ID) return kept;
+  } catch {
+    // no sessionStorage: a fresh ID each load
+  }
+  const id = `${Date.now().toString(36)}-${Array.from(win.crypto.getRandomValues(new Uint8Array(6)), (b) => b.toString(16).padStart(2, '0')).join('')}`;
+  try {
+    win.sessionStorage.setItem(WINDOW_ID_KEY, id);
+  } catch {
+    // not kept: a reload then offers this copy as left behind, which loses nothing
+  }
+  return id;
+}
+
+/** Holds the Web Lock that marks this window as alive until the page goes away; resolves once held. */
+function holdWindowLock(win: Window & typeof globalThis, id: string): Promise<void> {
+  const locks = win.navigator.locks as LockManager | undefined;
+  if (!locks) return Promise.resolve();
+  return new Promise<void>((held) => {
+    locks.request(`${WINDOW_LOCK_PREFIX}${id}`, { mode: 'exclusive' }, () => {
+      held();
+      return new Promise<void>(() => undefined); // released only when the page is gone
+    }).catch(() => held());
+  });
+}
+
+/** The IDs of windows alive now (holding their lock). Without Web Locks, none is known: every other copy is offered. */
+async function liveWindows(win: Window & typeof globalThis): Promise<Set<string>> {
+  const locks = win.navigator.locks as LockManager | undefined;
+  if (!locks) return new Set();
+  const state = await locks.query();
+  return new Set([...(state.held ?? []), ...(state.pending ?? [])].map((l) => l.name ?? '').filter((n) => n.startsWith(WINDOW_LOCK_PREFIX)).map((n) => n.slice(WINDOW_LOCK_PREFIX.length)));
 }

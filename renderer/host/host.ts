@@ -16,6 +16,14 @@ export interface SaveResult {
   readonly handle: string | null;
 }
 
+/** A recovery copy left by a window that did not end cleanly. */
+export interface RecoveryCopy {
+  readonly id: string;
+  readonly text: string;
+  /** When it was last written, ms since 1970 (0 when unknown). */
+  readonly savedAt: number;
+}
+
 export interface ExportFile {
   readonly suggestedName: string;
   readonly mimeType: string;
@@ -46,10 +54,16 @@ export interface Host {
   /** Ask before discarding unsaved changes; true = discard. */
   confirmDiscard(documentName: string): Promise<boolean>;
   recentFiles(): Promise<readonly { name: string; handle: string }[]>;
-  /** Write the unsaved document for crash recovery (debounced by the caller); null clears it. */
+  /**
+   * Write this window's own recovery copy of the unsaved document (debounced by the caller); null
+   * clears it. It never touches another window's copy. Throws an Error saying why when the copy
+   * cannot be kept (a full storage quota, a full disk).
+   */
   writeRecovery(text: string | null): Promise<void>;
-  /** Text left by a previous session that did not end cleanly, if any. */
-  readRecovery(): Promise<string | null>;
+  /** Copies left by windows that ended without saving (never this window's, never a live window's), newest first. */
+  readRecovery(): Promise<readonly RecoveryCopy[]>;
+  /** Remove one left-behind copy once the user has answered for it (restored here, or thrown away). */
+  discardRecovery(id: string): Promise<void>;
   setTitle(title: string): void;
   /** Tell the host whether there are unsaved changes (Electron asks before closing the window). */
   setUnsaved?(unsaved: boolean): void;

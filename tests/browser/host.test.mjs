@@ -131,8 +131,9 @@ export async function unsavedWorkIsOfferedBackInTheNextSession({ page, baseUrl, 
   await page.getByTestId('transform-delete').click();
   await page.waitForFunction((n) => document.querySelectorAll('[data-testid^="part-row-"]').length === n - 1, parts);
   // The recovery text is written shortly after the change (the app debounces it).
-  await page.waitForFunction(() => (localStorage.getItem('sectionsmith.recovery') ?? '').includes('sectionsmith-section'), null, { timeout: 10_000 });
-  // A second session in the same browser profile (the first one never saved).
+  await page.waitForFunction(() => Object.keys(localStorage).some((k) => k.startsWith('sectionsmith.recovery.') && (localStorage.getItem(k) ?? '').includes('sectionsmith-section')), null, { timeout: 10_000 });
+  // The window goes away without saving; the next session in the same browser profile is offered its work.
+  await page.close();
   const next = await context.newPage();
   await next.goto(baseUrl);
   await next.getByTestId('recovery-offer').waitFor({ timeout: 15_000 });

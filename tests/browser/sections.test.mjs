@@ -94,7 +94,8 @@ export async function unsavedAlternativesComeBackWholeFromRecovery({ page, baseU
   await typePlate(page, { b: 100, h: 200 });
   await areaBecomes(page, 100 * 200);
   // The recovery text (written shortly after the change) holds every section.
-  await page.waitForFunction(() => (localStorage.getItem('sectionsmith.recovery') ?? '').includes('Alternative 4'), null, { timeout: 10_000 });
+  await page.waitForFunction(() => Object.keys(localStorage).some((k) => k.startsWith('sectionsmith.recovery.') && (localStorage.getItem(k) ?? '').includes('Alternative 4')), null, { timeout: 10_000 });
+  await page.close(); // the window goes away without saving
   const next = await context.newPage();
   await next.goto(baseUrl);
   await next.getByTestId('recovery-offer').waitFor({ timeout: 15_000 });

@@ -58,27 +58,57 @@ describe('start-up', () => {
     expect(r.c.editor.getState().doc.unit).toBe('in');
   });
 
-  it('offers unsaved work of an earlier session; restoring loads it as unsaved', async () => {
+  it('offers unsaved work of an earlier session; restoring loads it as unsaved, keeps it in its own copy, then removes the old copy', async () => {
     const left = serialiseDocument({ ...newSectionFile('mm'), name: 'Mezzanine flitch beam' });
     const r = rig((h) => {
-      h.recovery = left;
+      h.left = [{ id: 'w1', text: left, savedAt: 1 }];
       h.settings.set(SEEN_EXAMPLE_SETTING, '1');
     });
     await r.c.start();
-    expect(r.c.getState().recovery).toBe(left);
-    r.c.restoreRecovery();
+    expect(r.c.getState().recovery).toEqual({ id: 'w1', text: left, savedAt: 1 });
+    await r.c.restoreRecovery();
     expect(r.c.getState().recovery).toBeNull();
     expect(r.c.editor.getState().sectionFile.name).toBe('Mezzanine flitch beam');
     expect(r.c.editor.getState().dirty).toBe(true);
+    expect(r.host.recovery).toBe(serialiseDocument(r.c.editor.getState().sectionFile));
+    expect(r.host.discarded).toEqual(['w1']);
   });
 
-  it('discarding the offer clears the recovery copy', async () => {
-    const r = rig((h) => (h.recovery = 'whatever was left'));
+  it('discarding the offer removes that copy only, and the next copy is offered', async () => {
+    const r = rig((h) => (h.left = [{ id: 'w2', text: 'newer', savedAt: 2 }, { id: 'w1', text: 'older', savedAt: 1 }]));
     await r.c.start();
+    expect(r.c.getState().recovery?.id).toBe('w2');
     r.c.discardRecovery();
     await settle();
-    expect(r.host.recovery).toBeNull();
+    expect(r.host.discarded).toEqual(['w2']);
+    expect(r.c.getState().recovery?.id).toBe('w1');
+    r.c.discardRecovery();
+    await settle();
     expect(r.c.getState().recovery).toBeNull();
+    expect(r.host.recoveryWrites).toEqual([]);
+  });
+
+  // Hardening finding 4: "Restore" replaced a 2-part unsaved document with the recovered 6-part one
+  // without asking.
+  it('Restore asks before replacing unsaved work; declining keeps the document and the offer', async () => {
+    const six = { ...newSectionFile('mm'), name: 'Six plates' };
+    const r = rig((h) => {
+      h.left = [{ id: 'w1', text: serialiseDocument(six), savedAt: 1 }];
+      h.settings.set(SEEN_EXAMPLE_SETTING, '1');
+      h.discardAnswer = false;
+    });
+    await r.c.start();
+    r.c.editor.addRectangle({ x: 0, y: 0, width: 10, height: 10 });
+    r.c.editor.addRectangle({ x: 20, y: 0, width: 10, height: 10 });
+    await r.c.restoreRecovery();
+    expect(r.host.discardAsked.length).toBe(1);
+    expect(r.c.editor.getState().doc.parts).toHaveLength(2);
+    expect(r.c.getState().recovery?.id).toBe('w1');
+    expect(r.host.discarded).toEqual([]);
+    r.host.discardAnswer = true;
+    await r.c.restoreRecovery();
+    expect(r.c.editor.getState().sectionFile.name).toBe('Six plates');
+    expect(r.host.discarded).toEqual(['w1']);
   });
 
   it('reads the display unit and figures from the host settings', async () => {
@@ -116,7 +146,8 @@ describe('background work and recovery', () => {
     expect(r.c.getState().torsion).toEqual({ kind: 'running', fraction: 0.5 });
   });
 
-  it('writes the recovery copy a moment after an edit and clears it when the work is saved', async () => {
+  it('writes the recovery copy one frame after an edit and clears it when the work is saved', async () => {
+    expect(RECOVERY_DELAY_MS).toBeLessThanOrEqual(17); // no later than the next frame at 60 Hz
     const r = withPlate();
     r.timers.advance(RECOVERY_DELAY_MS);
     await settle();
@@ -125,13 +156,41 @@ describe('background work and recovery', () => {
     expect(r.host.recovery).toBeNull();
   });
 
-  it('writes nothing while an earlier session’s work is still on offer', async () => {
-    const r = rig((h) => (h.recovery = 'earlier work'));
+  // Issue 18 §2: an edit made 300 ms before the page died was not in the recovery copy.
+  it('a pending edit is written at once when the page is hidden or goes away (flushRecovery)', async () => {
+    const r = withPlate();
+    r.c.flushRecovery();
+    await settle();
+    expect(r.host.recovery).toBe(serialiseDocument(r.c.editor.getState().sectionFile));
+    expect(r.host.recoveryWrites).toHaveLength(1);
+    r.timers.advance(10 * RECOVERY_DELAY_MS); // nothing left pending: no second write
+    await settle();
+    expect(r.host.recoveryWrites).toHaveLength(1);
+  });
+
+  // Hardening finding 4: while the offer was unanswered, new edits were not written to recovery.
+  it('keeps writing its own copy while an earlier copy is on offer, and never touches that copy', async () => {
+    const r = rig((h) => (h.left = [{ id: 'w1', text: 'earlier work', savedAt: 1 }]));
     await r.c.start();
     r.c.editor.addRectangle({ x: 0, y: 0, width: 10, height: 10 });
-    r.timers.advance(10 * RECOVERY_DELAY_MS);
+    r.timers.advance(RECOVERY_DELAY_MS);
     await settle();
-    expect(r.host.recoveryWrites).toEqual([]);
+    expect(r.host.recovery).toBe(serialiseDocument(r.c.editor.getState().sectionFile));
+    expect(r.host.left.map((c) => c.text)).toEqual(['earlier work']);
+    expect(r.host.discarded).toEqual([]);
+    expect(r.c.getState().recovery?.id).toBe('w1');
+  });
+
+  // Hardening finding 4: a full storage quota was an unhandled rejection with no banner.
+  it('a recovery copy that cannot be kept (storage full) shows an error banner and keeps the document', async () => {
+    const r = withPlate((h) => (h.recoveryFailure = 'Unsaved work could not be kept for recovery: the storage quota is full.'));
+    const parts = r.c.editor.getState().doc.parts.length;
+    r.timers.advance(RECOVERY_DELAY_MS);
+    await settle();
+    expect(r.c.getState().banner?.kind).toBe('error');
+    expect(r.c.getState().banner?.title).toBe('Unsaved work could not be kept for recovery.');
+    expect(r.c.getState().banner?.lines).toEqual(['Unsaved work could not be kept for recovery: the storage quota is full.']);
+    expect(r.c.editor.getState().doc.parts).toHaveLength(parts);
   });
 });
 

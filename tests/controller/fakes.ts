@@ -4,7 +4,7 @@ import { resolve } from 'node:path';
 import type { SectionDocument } from '../../core/document/types.ts';
 import { AppController, type Timers, type TorsionRunner } from '../../renderer/controller/controller.ts';
 import type { TorsionState } from '../../renderer/controller/torsion-client.ts';
-import type { ExportFile, Host, HostCommand, OpenedFile, SaveResult } from '../../renderer/host/host.ts';
+import type { ExportFile, Host, HostCommand, OpenedFile, RecoveryCopy, SaveResult } from '../../renderer/host/host.ts';
 
 export const EXAMPLE_TEXT = readFileSync(resolve(__dirname, '../../assets/examples/footbridge-box-girder.section.json'), 'utf8');
 
@@ -51,8 +51,14 @@ export class RecordingTorsion implements TorsionRunner {
 
 export interface FakeHost extends Host {
   readonly settings: Map<string, string>;
+  /** This window's own recovery copy. */
   recovery: string | null;
   readonly recoveryWrites: (string | null)[];
+  /** Copies left by earlier windows (what readRecovery offers), and the IDs discarded so far. */
+  left: RecoveryCopy[];
+  readonly discarded: string[];
+  /** When set, writeRecovery fails with this message (a full storage quota). */
+  recoveryFailure: string | null;
   readonly exported: ExportFile[];
   readonly saved: { handle: string | null; suggested: string | null; text: string }[];
   readonly titles: string[];
@@ -72,6 +78,9 @@ export function fakeHost(): FakeHost {
     settings: new Map(),
     recovery: null,
     recoveryWrites: [],
+    left: [],
+    discarded: [],
+    recoveryFailure: null,
     exported: [],
     saved: [],
     titles: [],
@@ -101,10 +110,15 @@ export function fakeHost(): FakeHost {
     recentFiles: async () => [...host.recent.entries()].map(([handle, f]) => ({ name: f.name, handle })),
     openRecent: async (handle) => host.recent.get(handle) ?? null,
     writeRecovery: async (text) => {
+      if (host.recoveryFailure !== null) throw new Error(host.recoveryFailure);
       host.recoveryWrites.push(text);
       host.recovery = text;
     },
-    readRecovery: async () => host.recovery,
+    readRecovery: async () => [...host.left],
+    discardRecovery: async (id) => {
+      host.discarded.push(id);
+      host.left = host.left.filter((c) => c.id !== id);
+    },
     setTitle: (t) => void host.titles.push(t),
     launchFile: async () => {
       const f = host.launch;

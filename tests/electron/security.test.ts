@@ -226,7 +226,7 @@ describe('IPC channels', () => {
   it('are one list of named verbs, each with a payload schema, and no generic pipe', () => {
     expect(CHANNELS.map((c) => c.name)).toEqual([
       'document:open', 'document:open-recent', 'document:launch-file', 'document:save', 'document:save-as',
-      'export:save', 'report:print-pdf', 'dialog:confirm-discard', 'recent:list', 'recovery:write', 'recovery:read',
+      'export:save', 'report:print-pdf', 'dialog:confirm-discard', 'recent:list', 'recovery:write', 'recovery:read', 'recovery:discard',
       'table:open', 'settings:read', 'settings:write',
       'window:set-title', 'window:set-unsaved', 'menu:command',
     ]);

@@ -70,8 +70,17 @@ export function App({ controller: given }: { readonly controller?: AppController
       if (controller.keyDown(keyInput(e))) e.preventDefault();
     };
     window.addEventListener('keydown', onKey);
+    // The last edit reaches the recovery copy even if the page dies right after it is hidden.
+    const flush = (): void => controller.flushRecovery();
+    const onVisibility = (): void => {
+      if (document.visibilityState === 'hidden') flush();
+    };
+    window.addEventListener('pagehide', flush);
+    document.addEventListener('visibilitychange', onVisibility);
     return () => {
       window.removeEventListener('keydown', onKey);
+      window.removeEventListener('pagehide', flush);
+      document.removeEventListener('visibilitychange', onVisibility);
       controller.dispose();
     };
   }, [controller]);
@@ -132,7 +141,7 @@ export function App({ controller: given }: { readonly controller?: AppController
             <button
               type="button"
               data-testid="recovery-restore"
-              onClick={() => controller.restoreRecovery()}
+              onClick={() => void controller.restoreRecovery()}
             >
               Restore it
             </button>
