@@ -208,3 +208,8 @@ export function formatSig(value: number, sig: number, options: FormatOptions = {
 export function formatQuantity(value: number, documentUnit: LengthUnit, display: DisplayUnit, sig = 4, options: FormatOptions = {}): { text: string; unit: string } {
   return { text: formatSig(toDisplay(value, documentUnit, display), sig, options), unit: display.label };
 }
+
+// ---------------------------------------------------------------------------------------------
+// Physical quantities (force, stress, moment …) and unit systems: see ./quantity.ts, ./systems.ts.
+export * from './quantity.ts';
+export * from './systems.ts';
