@@ -10,12 +10,12 @@ import { writeOutputFile } from '../output.ts';
 import { comparisonSheet } from '../../core/export/xlsx.ts';
 import { writeXlsxOutput } from '../xlsx.ts';
 import { reportHtml } from '../../core/report/index.ts';
-import { anyTarget, COLUMN_HEADINGS, COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, comparisonSvg, columnHeading, lightestMeeting, sortAlternatives, stiffnessRanking, type CompareColumn, type Comparison, type Pick, type Targets } from '../../core/compare/index.ts';
+import { anyTarget, COLUMN_HEADINGS, COMPARE_COLUMNS, CompareError, compareDocuments, comparisonCsv, comparisonSvg, columnHeading, columnUnit, columnValue, lightestMeeting, sharedLoadShown, sortAlternatives, stiffnessRanking, type Alternative, type CompareColumn, type Comparison, type Pick, type Targets } from '../../core/compare/index.ts';
 import { STRESS_FACTOR_MEANING } from '../../core/member/verdict.ts';
 import { allSectionViews, documentFromJson, parseDocument, type SectionDocument } from '../../core/document/index.ts';
 import { looksLikeDxf } from '../../core/dxf/index.ts';
 import { documentFromDxfText } from '../load.ts';
-import { formatSig, isLengthUnit } from '../../core/units/index.ts';
+import { formatSig, fromSI, isLengthUnit, readQuantity, unitSystem, type QuantityKind } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagValues } from '../command.ts';
 
 function positive(flag: string, text: string | boolean | undefined): number | undefined {
@@ -25,14 +25,47 @@ function positive(flag: string, text: string | boolean | undefined): number | un
   return v;
 }
 
+/** A positive quantity flag through core/units' one reader, in `unit` (bare numbers are read in `bare`). */
+function positiveQuantity(flag: string, text: string | boolean | undefined, kind: QuantityKind, bare: string, unit: string): number | undefined {
+  if (typeof text !== 'string') return undefined;
+  const r = readQuantity(text, { label: `--${flag}`, kind, unit: bare });
+  if (!r.ok) throw new CompareError(r.message);
+  if (!(r.si > 0)) throw new CompareError(`--${flag}: expected a positive value, got ${JSON.stringify(text)}`);
+  return fromSI(r.si, kind, unit);
+}
+
+/** A value as its column shows it (core keeps EIx, weight and deflections in SI). */
+const shown = (c: Comparison, k: CompareColumn, v: number | null): number | null => (v === null ? null : columnValue(k, v, c.unit));
+
+/** "span 6000 mm, uniform load 30 kN/m (of which live 10 kN/m)" in the comparison unit's system. */
+function beamWords(c: Comparison): string {
+  const load = sharedLoadShown(c);
+  if (c.beam === null || load === null) return '';
+  const g = (v: number): string => formatSig(v, 6);
+  return `simply supported span ${g(c.beam.span)} ${c.unit}, uniform load ${g(load.value)} ${load.unit}${load.live !== undefined ? ` (of which live ${g(load.live)} ${load.unit})` : ''}`;
+}
+
+/** Every value of the comparison in the unit its column states, and those units (for --json). */
+function shownComparison(c: Comparison, alternatives: readonly Alternative[]) {
+  const units = Object.fromEntries(COMPARE_COLUMNS.map((k) => [k, columnUnit(k, c.unit)]));
+  const load = sharedLoadShown(c);
+  const lineLoad = unitSystem(c.unit).units.lineLoad;
+  return {
+    ...c,
+    units: { ...units, 'beam.span': c.unit, 'beam.load': lineLoad, 'beam.live': lineLoad, ratios: '-' },
+    beam: c.beam === null || load === null ? null : { span: c.beam.span, load: load.value, ...(load.live !== undefined ? { live: load.live } : {}) },
+    alternatives: alternatives.map((a) => ({ ...a, values: Object.fromEntries(COMPARE_COLUMNS.map((k) => [k, shown(c, k, a.values[k])])) })),
+  };
+}
+
 function text(c: Comparison, order: readonly CompareColumn[], sortBy: CompareColumn, pick: Pick | null): string {
   const g = (v: number | null): string => (v === null ? '-' : formatSig(v, 4));
   const head = ['alternative', ...order.map((k) => columnHeading(k, c.unit))];
   const alts = sortAlternatives(c, sortBy);
-  const rows = alts.map((a) => [a.name, ...order.map((k) => `${g(a.values[k])} (${a.ratios[k] === null ? '-' : `${formatSig(a.ratios[k], 3)}×`})`)]);
+  const rows = alts.map((a) => [a.name, ...order.map((k) => `${g(shown(c, k, a.values[k]))} (${a.ratios[k] === null ? '-' : `${formatSig(a.ratios[k], 3)}×`})`)]);
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
   const line = (r: readonly string[]): string => r.map((v, i) => v.padEnd(widths[i]!)).join('  ');
-  const beam = c.beam === null ? '' : `; simply supported span ${c.beam.span} ${c.unit}, uniform load ${c.beam.load} N/m${c.beam.live !== undefined ? ` (of which live ${c.beam.live} N/m)` : ''}`;
+  const beam = c.beam === null ? '' : `; ${beamWords(c)}`;
   const out = [`${c.alternatives.length} alternatives; ratios (×) to "${c.baseline}"; sorted by ${COLUMN_HEADINGS[sortBy]}${beam}`, '', line(head), ...rows.map(line)];
   out.push('', `stiffness ranking by ${c.stiffnessColumn} (${c.stiffnessNote}): ${stiffnessRanking(c).map((a, i) => `${i + 1}. ${a.name}`).join(', ')}`);
   for (const a of c.alternatives) for (const n of a.notes) out.push(`  ${a.name}: ${n}`);
@@ -77,10 +110,12 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
   if (named.size < docs.length) return fail(`two sections in the same file share a name after all: ${docs.map((d) => JSON.stringify(d.name)).join(', ')}`);
   let xlsx: Promise<void> | null = null;
   try {
-    const span = positive('span', flags.span);
-    const load = positive('load', flags.load);
-    const live = positive('live', flags.live);
-    if ((span === undefined) !== (load === undefined)) return fail('--span and --load go together (span in the unit, load in N/m)');
+    // The span in the comparison unit (the first document's, or --unit); bare loads are N/m as before.
+    const unit = typeof flags.unit === 'string' && isLengthUnit(flags.unit) ? flags.unit : found[0]?.doc.unit ?? 'mm';
+    const span = positiveQuantity('span', flags.span, 'length', unit, unit);
+    const load = positiveQuantity('load', flags.load, 'lineLoad', 'N/m', 'N/m');
+    const live = positiveQuantity('live', flags.live, 'lineLoad', 'N/m', 'N/m');
+    if ((span === undefined) !== (load === undefined)) return fail('--span and --load go together (e.g. --span 6m --load 30kN/m)');
     if (live !== undefined && load === undefined) return fail('--live needs --span and --load (the live load is part of the total --load)');
     const factor = positive('stress-factor', flags['stress-factor']);
     const c = compareDocuments(docs, {
@@ -92,7 +127,7 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
     const numbers: [keyof Targets, string][] = [['minIx', 'min-ix'], ['minSx', 'min-sx'], ['minZx', 'min-zx'], ['minEIx', 'min-ei'], ['maxDepth', 'max-depth'], ['deflectionRatio', 'limit'], ['liveDeflectionRatio', 'live-limit']];
     const targets: Record<string, number | boolean> = {};
     for (const [key, flag] of numbers) {
-      const v = positive(flag, flags[flag]);
+      const v = flag === 'min-ei' ? positiveQuantity(flag, flags[flag], 'flexuralStiffness', 'N·m²', 'N·m²') : flag === 'max-depth' ? positiveQuantity(flag, flags[flag], 'length', unit, unit) : positive(flag, flags[flag]);
       if (v !== undefined) targets[key] = v;
     }
     if (flags.stress === true) targets.stressWithinLimit = true;
@@ -104,14 +139,14 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
       if (typeof flags.svg === 'string') writeOutputFile('svg', flags.svg, svg);
       if (typeof flags.report === 'string') {
         const g = (v: number | null): string => (v === null ? '-' : formatSig(v, 4));
-        const rows = sortAlternatives(c, sortBy).map((a) => [a.name, ...COMPARE_COLUMNS.map((k) => `${g(a.values[k])}${a.ratios[k] === null ? '' : ` (${formatSig(a.ratios[k], 3)}×)`}`)]);
+        const rows = sortAlternatives(c, sortBy).map((a) => [a.name, ...COMPARE_COLUMNS.map((k) => `${g(shown(c, k, a.values[k]))}${a.ratios[k] === null ? '' : ` (${formatSig(a.ratios[k], 3)}×)`}`)]);
         const targetRows = pick === null ? [] : pick.verdicts.map((v) => [v.name, v.meets ? (pick.choice?.name === v.name ? 'yes (lightest)' : 'yes') : 'no', v.failures.map((f) => f.message).join('; ')]);
-        const checks = c.beam === null ? [] : c.alternatives.map((a) => `${a.name}: midspan deflection ${g(a.values.deflection)} m, simply supported span ${c.beam!.span} ${c.unit}, uniform ${c.beam!.load} N/m`);
+        const checks = c.beam === null ? [] : c.alternatives.map((a) => `${a.name}: midspan deflection ${g(shown(c, 'deflection', a.values.deflection))} ${columnUnit('deflection', c.unit)}, ${beamWords(c)}`);
         const materials = docs.map((d) => `${d.name}: ${d.defaultMaterial ?? 'no default material'}${d.materials.length > 0 ? `; ${d.materials.map((m) => m.name).join(', ')}` : ''}`);
         writeOutputFile('report', flags.report, reportHtml({ title: `Comparison of ${c.alternatives.length} alternatives`, drawings: [svg], tables: [{ title: `Properties (ratios to "${c.baseline}"); stiffness by ${c.stiffnessColumn}: ${c.stiffnessNote}`, columns: ['alternative', ...COMPARE_COLUMNS.map((k) => columnHeading(k, c.unit))], rows }, ...(pick === null ? [] : [{ title: 'Targets', columns: ['alternative', 'meets every target', 'targets not met (by how much)'], rows: targetRows }])], materials, memberChecks: checks }));
       }
     }
-    if (flags.json === true) io.out(`${JSON.stringify({ ...c, alternatives: sortAlternatives(c, sortBy), stiffnessRanking: stiffnessRanking(c).map((a) => a.name), pick: pick === null ? null : { name: pick.choice?.name ?? null, by: pick.by, verdicts: pick.verdicts, failing: pick.failing } }, null, 2)}\n`);
+    if (flags.json === true) io.out(`${JSON.stringify({ ...shownComparison(c, sortAlternatives(c, sortBy)), stiffnessRanking: stiffnessRanking(c).map((a) => a.name), pick: pick === null ? null : { name: pick.choice?.name ?? null, by: pick.by, verdicts: pick.verdicts, failing: pick.failing } }, null, 2)}\n`);
     else io.out(text(c, COMPARE_COLUMNS, sortBy, pick));
   } catch (err) {
     if (err instanceof CompareError) return fail(err.message);
@@ -128,29 +163,34 @@ export const compareCommand: Command = {
     'Each FILE is a Sectionsmith document; each of its sections is one alternative, named by the',
     'section\'s name (one file with several sections compares them; a name found in more than',
     'one file gets "FILE: " in front). The table lists A, Ix, Iy, Sx (smaller fibre), Zx, Ix/A,',
-    'Sx/A, Zx/A, the overall depth and, for documents with materials, EIx (N·m²), weight (N/m) and,',
-    'with --span (in the unit) and --load (N/m, total; --live its live part), the largest',
-    'deflection (m) of a simply supported beam under total and live load and the bending stress',
+    'Sx/A, Zx/A, the overall depth and, for documents with materials, EIx, weight and, with --span',
+    'and --load (total; --live its live part), the largest deflection of a simply supported beam',
+    'under total and live load and the bending stress',
     'use (σ / limit) of the worst material; each with its ratio to --baseline (default: the first',
     'alternative). --sort COL orders the rows. Where the materials differ, stiffness is ranked by',
     'EIx, not by geometric Ix. Targets (--limit, --live-limit, --stress, --min-ix, --min-sx,',
     '--min-zx, --min-ei, --max-depth) pick the lightest alternative meeting every one (by weight',
     'when all have one, else by area); each other alternative is listed with the targets it fails',
     'and by how much.',
+    'Units follow the comparison unit: EIx, weight and deflections in kip·in², lb/ft and in for in/ft,',
+    'kN·m², kg/m and mm for mm/cm/m; --json says the unit of every column in "units". --span, --load,',
+    '--live, --max-depth and --min-ei take units (--span 6m or 20ft, --load 30kN/m or 2kip/ft,',
+    '--min-ei 40000kN*m2); bare numbers keep their old units (span and depth in the unit, loads in',
+    'N/m, EI in N·m²).',
     '--csv OUT writes the table as CSV; --svg OUT the outlines at one scale; --report OUT.html a printable report.',
   ].join('\n'),
   flags: [
     { name: 'baseline', type: 'string', value: 'NAME', description: 'the alternative (section name) the ratios refer to (default: the first)' },
     { name: 'sort', type: 'string', value: 'COL', description: `sort column: ${COMPARE_COLUMNS.join(', ')} (default A)` },
     { name: 'unit', type: 'string', value: 'U', description: 'length unit of the table (default: the first document\'s)' },
-    { name: 'span', type: 'string', value: 'L', description: 'shared simply supported span, in the unit' },
-    { name: 'load', type: 'string', value: 'W', description: 'shared uniform load, N/m' },
-    { name: 'live', type: 'string', value: 'W', description: 'the live part of --load, N/m (for the live-load deflection)' },
+    { name: 'span', type: 'string', value: 'L', description: 'shared simply supported span, e.g. 6m, 20ft (bare: the unit)' },
+    { name: 'load', type: 'string', value: 'W', description: 'shared uniform load, total, e.g. 30kN/m, 2kip/ft (bare: N/m)' },
+    { name: 'live', type: 'string', value: 'W', description: 'the live part of --load, e.g. 10kN/m (bare: N/m; for the live-load deflection)' },
     { name: 'stress-factor', type: 'string', value: 'F', description: 'bending stress limit = F × strength basis (fy; reference Fb for wood); default 1' },
     { name: 'min-ix', type: 'string', value: 'X', description: 'target: Ix at least X (unit^4)' },
     { name: 'min-sx', type: 'string', value: 'X', description: 'target: Sx (smaller fibre) at least X (unit^3)' },
     { name: 'min-zx', type: 'string', value: 'X', description: 'target: Zx at least X (unit^3)' },
-    { name: 'min-ei', type: 'string', value: 'X', description: 'target: EIx at least X (N·m^2)' },
+    { name: 'min-ei', type: 'string', value: 'X', description: 'target: EIx at least X, e.g. 40000kN*m2 (bare: N·m^2)' },
     { name: 'max-depth', type: 'string', value: 'X', description: 'target: overall depth at most X (unit)' },
     { name: 'limit', type: 'string', value: 'N', description: 'target: deflection under total load at most span/N (e.g. 240 or 360)' },
     { name: 'live-limit', type: 'string', value: 'N', description: 'target: deflection under live load at most span/N (e.g. 360); needs --live' },

@@ -2,31 +2,31 @@
  * `sectionsmith member FILE --span L --support S [--point P [--at A]] [--uniform W] [--E VALUE] …`:
  * a beam check of the section in FILE (core/member), with its stiffness from core/materials.
  *
- * Units (stated in --help): lengths (--span, --at) in the document unit (GeoJSON: --unit);
- * forces, line loads, moduli and densities take a unit suffix (10kN, 2kN/m, 29000ksi,
- * 490lb/ft3) or, without one, the default of the document's unit system: N, N per document
- * unit, MPa and kg/m3 for mm, cm and m; lbf, lbf per document unit, psi and lb/ft3 for in and ft.
- * Output: lengths in the document unit, forces in N or lbf, moments in force × document unit,
- * stresses in MPa or psi (the same system), EI in force × unit². Computation runs in SI.
+ * Input: every flag that is a quantity goes through core/units' one reader (readQuantity), so
+ * `--span 20ft`, `--span 6.1m`, `--span 13'-9"`, `--uniform 30kN/m`, `--point 2kip`, `--E 29000ksi`
+ * and `--density 490lb/ft3` all work. A bare number keeps the unit --help states: lengths in the
+ * document unit; N, N per document unit, MPa and kg/m3 for mm, cm and m documents; lbf, lbf per
+ * document unit, psi and lb/ft3 for in and ft documents.
+ * Output (text and JSON) in the document's unit system (core/units/systems.ts): span and positions
+ * in the document unit, deflections in mm or in, forces kN or kip, line loads kN/m or kip/ft,
+ * moments kN·m or kip·ft, stresses MPa or ksi, EI kN·m² or kip·in². The JSON names the unit of
+ * every key in "units". Computation runs in SI.
  */
 import { compositeProperties, type MaterialPiece } from '../../core/materials/composite.ts';
 import { materialPiecesFromDocument } from '../../core/materials/document.ts';
 import { documentReferenceModulus } from '../../core/materials/reference.ts';
-import {
-  densityToKgPerM3, FORCE_UNITS, forceToNewtons, newtonsTo, parseQuantity, pascalsTo, QuantityError,
-  STRESS_UNITS, stressToPascals, type DensityUnit, type ForceUnit, type StressUnit,
-} from '../../core/materials/quantities.ts';
+import { FORCE_UNITS, forceToNewtons, parseQuantity, QuantityError, STRESS_UNITS, stressToPascals, type DensityUnit, type ForceUnit, type StressUnit } from '../../core/materials/quantities.ts';
 import type { MaterialSI } from '../../core/materials/schema.ts';
 import { SUPPORTS, type Support } from '../../core/member/beam.ts';
 import { CAUTION as MEMBER_CAUTION, type MemberResult } from '../../core/member/check.ts';
 import { COMMON_LIVE_RATIO, COMMON_TOTAL_RATIO, DEFLECTION_LIMIT_MEANING, STRESS_FACTOR_MEANING, type Criterion, type StressLimits } from '../../core/member/verdict.ts';
 import { sectionMemberCheck } from '../../core/member/section-member.ts';
-import { convertLength, formatSig, isLengthUnit, LENGTH_UNITS, type LengthUnit } from '../../core/units/index.ts';
+import { convertLength, formatSig, fromSI, parseQuantityOrThrow, unitSystem, type LengthUnit, type QuantityKind, type UnitSystem } from '../../core/units/index.ts';
 import { EXIT_BAD_INPUT, EXIT_FLAGGED, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
 import { DXF_INPUT_FLAGS, dxfReadOptions, loadSectionArgument, type LoadedSection } from '../load.ts';
 
 export const MEMBER_FLAGS: readonly FlagSpec[] = [
-  { name: 'span', type: 'string', value: 'L', description: 'span, in the document unit (required); a cantilever\'s length' },
+  { name: 'span', type: 'string', value: 'L', description: 'span (required), e.g. 6000, 6m, 20ft, 13\'-9"; a bare number is in the document unit; a cantilever\'s length' },
   { name: 'support', type: 'string', value: 'S', description: 'simple | cantilever | fixed | propped (required)' },
   { name: 'point', type: 'string', value: 'P', description: 'point load, downward; N, kN, lbf or kip (default N metric, lbf in/ft)' },
   { name: 'at', type: 'string', value: 'A', description: 'position of the point load from the left (fixed) end, document unit; default midspan (cantilever: the free end)' },
@@ -60,12 +60,16 @@ interface OutputUnits {
 const imperial = (u: LengthUnit): boolean => u === 'in' || u === 'ft';
 const outputUnits = (u: LengthUnit): OutputUnits => (imperial(u) ? { length: u, force: 'lbf', stress: 'psi', density: 'lb/ft3' } : { length: u, force: 'N', stress: 'MPa', density: 'kg/m3' });
 
-function lengthFlag(flags: FlagValues, name: string): number | undefined {
+/** A quantity flag in SI (m, N, N/m, Pa, kg/m³), or undefined when absent; QuantityError names the flag. */
+export function quantityFlag(flags: FlagValues, name: string, kind: QuantityKind, bareUnit: string): number | undefined {
   const text = flags[name];
-  if (text === undefined || typeof text === 'boolean') return undefined;
-  const value = Number(text);
-  if (text.trim() === '' || !Number.isFinite(value)) throw new UsageError(`--${name}: expected a number in the document unit, got ${JSON.stringify(text)}`);
-  return value;
+  return typeof text !== 'string' ? undefined : parseQuantityOrThrow(text, { label: `--${name}`, kind, unit: bareUnit });
+}
+
+/** A length flag (20ft, 6m, 13'-9", or a bare number in the document unit) in the document unit. */
+function lengthFlag(flags: FlagValues, name: string, unit: LengthUnit): number | undefined {
+  const m = quantityFlag(flags, name, 'length', unit);
+  return m === undefined ? undefined : convertLength(m, 'm', unit);
 }
 
 function stringFlag(flags: FlagValues, name: string): string | undefined {
@@ -73,20 +77,15 @@ function stringFlag(flags: FlagValues, name: string): string | undefined {
   return typeof v === 'string' ? v : undefined;
 }
 
-/** A line load "2kN/m" → N per metre; a bare number is the default force per document unit. */
-function lineLoadNPerM(text: string, units: OutputUnits): number {
-  const [forcePart = '', lengthPart] = text.split('/');
-  const force = parseQuantity(forcePart, FORCE_UNITS, units.force, '--uniform');
-  const per: LengthUnit = lengthPart === undefined ? units.length : (lengthPart.trim() as LengthUnit);
-  if (!isLengthUnit(per)) throw new UsageError(`--uniform: unknown length unit "${lengthPart}" in "${text}"; use one of ${LENGTH_UNITS.join(', ')}`);
-  // Force per `per` → per metre: divide by the length of one `per` in metres.
-  return forceToNewtons(force.value, force.unit) / convertLength(1, per, 'm');
+/** A line load "2kN/m", "300lbf/ft" → N per metre; a bare number is the default force per document unit. */
+function lineLoadNPerM(flags: FlagValues, name: string, units: OutputUnits): number | undefined {
+  return quantityFlag(flags, name, 'lineLoad', `${units.force}/${units.length}`);
 }
 
-function densityKgPerM3(text: string, units: OutputUnits): number {
-  const q = parseQuantity(text, ['kg/m3', 'lb/ft3'] as const, units.density, '--density');
-  if (q.value < 0) throw new UsageError(`--density: must not be negative, got ${text}`);
-  return densityToKgPerM3(q.value, q.unit);
+function densityKgPerM3(flags: FlagValues, units: OutputUnits): number | undefined {
+  const rho = quantityFlag(flags, 'density', 'density', units.density === 'kg/m3' ? 'kg/m³' : 'lb/ft³');
+  if (rho !== undefined && rho < 0) throw new UsageError(`--density: must not be negative, got ${stringFlag(flags, 'density') ?? ''}`);
+  return rho;
 }
 
 interface Pieces {
@@ -100,9 +99,9 @@ function piecesFor(section: LoadedSection, flags: FlagValues, units: OutputUnits
     const e = parseQuantity(eText, STRESS_UNITS, units.stress, '--E');
     const E = stressToPascals(e.value, e.unit);
     if (!(E > 0 && Number.isFinite(E))) throw new UsageError(`--E: the modulus must be positive and finite in pascals, got ${eText}`);
-    const rho = stringFlag(flags, 'density');
+    const rho = densityKgPerM3(flags, units);
     // No strength is known for a bare modulus: first yield and strength ratios are not reported.
-    const material: MaterialSI = { id: '--E', name: `E = ${eText}`, kind: 'other', E, G: E / 2.6, density: rho === undefined ? NaN : densityKgPerM3(rho, units), fy: NaN, strengthBasis: 'yield' };
+    const material: MaterialSI = { id: '--E', name: `E = ${eText}`, kind: 'other', E, G: E / 2.6, density: rho ?? NaN, fy: NaN, strengthBasis: 'yield' };
     return { pieces: [{ region: section.region, material, label: 'section' }], from: '--E' };
   }
   const doc = section.doc;
@@ -162,7 +161,7 @@ function stressLimitsOf(flags: FlagValues, lists: FlagLists, pieces: readonly Ma
 
 function pointLoad(flags: FlagValues, force: string, atFlag: string, span: number, support: string, units: OutputUnits): { P: number; a: number }[] {
   const text = stringFlag(flags, force);
-  const at = lengthFlag(flags, atFlag);
+  const at = lengthFlag(flags, atFlag, units.length);
   if (at !== undefined && text === undefined) throw new UsageError(`--${atFlag} needs --${force}`);
   if (at !== undefined && (at < 0 || at > span)) throw new UsageError(`--${atFlag}: ${at} is outside the span 0…${span} (document unit)`);
   if (text === undefined) return [];
@@ -172,17 +171,16 @@ function pointLoad(flags: FlagValues, force: string, atFlag: string, span: numbe
 
 function runCheck(section: LoadedSection, pieces: Pieces, flags: FlagValues, units: OutputUnits, lists: FlagLists): MemberReport {
   const u = section.unit;
-  const span = lengthFlag(flags, 'span');
-  if (span === undefined) throw new UsageError('--span is required (a length in the document unit)');
+  const span = lengthFlag(flags, 'span', u);
+  if (span === undefined) throw new UsageError('--span is required (e.g. 6000 in the document unit, or 6m, 20ft)');
   const support = stringFlag(flags, 'support');
   if (support === undefined || !(SUPPORTS as readonly string[]).includes(support)) throw new UsageError(`--support: expected ${SUPPORTS.join(', ')}, got ${JSON.stringify(support ?? '')}`);
   if (!(span > 0)) throw new UsageError(`--span: expected a positive length, got ${span}`);
   const points = pointLoad(flags, 'point', 'at', span, support, units);
-  const uniformText = stringFlag(flags, 'uniform');
-  const uniform = uniformText === undefined ? 0 : lineLoadNPerM(uniformText, units);
+  const uniform = lineLoadNPerM(flags, 'uniform', units) ?? 0;
   const livePoints = pointLoad(flags, 'live-point', 'live-at', span, support, units);
   const liveText = stringFlag(flags, 'live');
-  const liveUniform = liveText === undefined ? 0 : lineLoadNPerM(liveText, units);
+  const liveUniform = lineLoadNPerM(flags, 'live', units) ?? 0;
   const limitRatio = ratioFlag(flags, 'limit', COMMON_TOTAL_RATIO);
   const liveLimitRatio = ratioFlag(flags, 'live-limit', COMMON_LIVE_RATIO);
   const selfWeight = flags['self-weight'] === true;
@@ -199,17 +197,30 @@ function runCheck(section: LoadedSection, pieces: Pieces, flags: FlagValues, uni
   };
 }
 
-/** SI result values → the output system. */
-function converters(units: OutputUnits) {
-  const len = (metres: number): number => convertLength(metres, 'm', units.length);
-  const force = (n: number): number => newtonsTo(n, units.force);
+/** SI result values → the document's unit system (core/units/systems.ts). */
+function converters(s: UnitSystem) {
   return {
-    len,
-    force,
-    moment: (nm: number): number => force(nm) * convertLength(1, 'm', units.length),
-    lineLoad: (nPerM: number): number => force(nPerM) / convertLength(1, 'm', units.length),
-    stress: (pa: number): number => pascalsTo(pa, units.stress),
-    EI: (nm2: number): number => force(nm2) * convertLength(1, 'm', units.length, 2),
+    len: (metres: number): number => fromSI(metres, 'length', s.length),
+    deflection: (metres: number): number => fromSI(metres, 'length', s.deflection),
+    force: (n: number): number => fromSI(n, 'force', s.units.force),
+    moment: (nm: number): number => fromSI(nm, 'moment', s.units.moment),
+    lineLoad: (nPerM: number): number => fromSI(nPerM, 'lineLoad', s.units.lineLoad),
+    stress: (pa: number): number => fromSI(pa, 'stress', s.units.stress),
+    EI: (nm2: number): number => fromSI(nm2, 'flexuralStiffness', s.units.flexuralStiffness),
+  };
+}
+
+/** The unit of every key of the member JSON ("a.b" for nested keys, "stresses[].x" for list items). */
+export function memberJsonUnits(s: UnitSystem): Record<string, string> {
+  const l = s.length, d = s.deflection, u = s.units;
+  return {
+    span: l, EI: u.flexuralStiffness, deflectionMax: d, deflectionAt: l, spanOverDeflection: '-', momentMax: u.moment, momentAt: l,
+    'momentSagging.value': u.moment, 'momentSagging.at': l, 'momentHogging.value': u.moment, 'momentHogging.at': l,
+    reactionLeft: u.force, momentLeft: u.moment, uniformTotal: u.lineLoad, selfWeight: u.lineLoad,
+    'stresses[].maxTension': u.stress, 'stresses[].maxTensionAt.x': l, 'stresses[].maxTensionAt.y': l,
+    'stresses[].maxCompression': u.stress, 'stresses[].maxCompressionAt.x': l, 'stresses[].maxCompressionAt.y': l, 'stresses[].strengthRatio': '-',
+    'limit.ratio': '-', 'limit.limitLength': l, 'limit.allowed': d, liveDeflectionMax: d, 'shearMax.value': u.force, 'shearMax.at': l,
+    'verdict.criteria[].demand': `${d} for deflections, ${u.stress} for stresses`, 'verdict.criteria[].limit': `${d} for deflections, ${u.stress} for stresses`, 'verdict.criteria[].ratio': '-',
   };
 }
 
@@ -217,33 +228,33 @@ type Converters = ReturnType<typeof converters>;
 
 /** A criterion's demand and limit in the output units (length for deflections, stress for stresses). */
 function criterionJson(c: Criterion, k: Converters): Record<string, unknown> {
-  const to = (v: number | undefined): number | undefined => (v === undefined ? undefined : c.kind.startsWith('deflection') ? k.len(v) : k.stress(v));
+  const to = (v: number | undefined): number | undefined => (v === undefined ? undefined : c.kind.startsWith('deflection') ? k.deflection(v) : k.stress(v));
   return { criterion: c.label, kind: c.kind, status: c.status, demand: to(c.demand), limit: to(c.limit), ratio: c.ratio, limitBasis: c.limitBasis, ...(c.reason !== undefined ? { reason: c.reason } : {}) };
 }
 
-function criterionLine(c: Criterion, k: Converters, units: OutputUnits): string {
+function criterionLine(c: Criterion, k: Converters, s: UnitSystem): string {
   const g = (v: number): string => formatSig(v, 4);
-  const unit = c.kind.startsWith('deflection') ? units.length : units.stress;
-  const to = (v: number): number => (c.kind.startsWith('deflection') ? k.len(v) : k.stress(v));
+  const unit = c.kind.startsWith('deflection') ? s.deflection : s.units.stress;
+  const to = (v: number): number => (c.kind.startsWith('deflection') ? k.deflection(v) : k.stress(v));
   if (c.status === 'not checked') return `  NOT CHECKED  ${c.label}: ${c.reason ?? ''}`;
   const ratio = c.ratio === undefined ? '-' : `${formatSig(c.ratio * 100, 3)} %`;
   return `  ${c.status === 'pass' ? 'pass       ' : 'FAIL       '}  ${c.label}: ${g(to(c.demand ?? NaN))} ${unit} of ${g(to(c.limit ?? NaN))} ${unit} (${c.limitBasis}) = ${ratio}`;
 }
 
 function reportJson(file: string, r: MemberReport): Record<string, unknown> {
-  const k = converters(r.units);
+  const system = unitSystem(r.units.length);
+  const k = converters(system);
   const res = r.result;
-  const f = r.units.force, l = r.units.length;
   return {
     file,
     caution: MEMBER_CAUTION,
-    units: { length: l, force: f, moment: `${f}·${l}`, lineLoad: `${f}/${l}`, stress: r.units.stress, EI: `${f}·${l}²` },
+    units: memberJsonUnits(system),
     convention: 'x from the left end (the fixed end for cantilever and propped); loads and deflections downward positive; sagging moment positive; stresses tension positive',
     support: r.support,
     span: r.span,
     stiffnessFrom: r.stiffnessFrom,
     EI: k.EI(r.EI),
-    deflectionMax: k.len(res.deflectionMax),
+    deflectionMax: k.deflection(res.deflectionMax),
     deflectionAt: k.len(res.deflectionAt),
     spanOverDeflection: res.spanOverDeflection,
     momentMax: k.moment(res.momentMax),
@@ -260,8 +271,8 @@ function reportJson(file: string, r: MemberReport): Record<string, unknown> {
       maxCompression: k.stress(s.maxCompression), maxCompressionAt: { x: k.len(s.maxCompressionAt.x), y: k.len(s.maxCompressionAt.y) },
       ...(s.strengthRatio !== undefined ? { strengthRatio: s.strengthRatio, strengthRatioOf: s.strengthLabel } : {}),
     })),
-    ...(res.limit !== undefined ? { limit: { ratio: res.limit.ratio, limitLength: k.len(res.limit.limitLength), allowed: k.len(res.limit.allowed), passes: res.limit.passes, verdict: res.limit.verdict } } : {}),
-    ...(res.liveDeflectionMax !== undefined ? { liveDeflectionMax: k.len(res.liveDeflectionMax) } : {}),
+    ...(res.limit !== undefined ? { limit: { ratio: res.limit.ratio, limitLength: k.len(res.limit.limitLength), allowed: k.deflection(res.limit.allowed), passes: res.limit.passes, verdict: res.limit.verdict } } : {}),
+    ...(res.liveDeflectionMax !== undefined ? { liveDeflectionMax: k.deflection(res.liveDeflectionMax) } : {}),
     shearMax: { value: k.force(res.shearMax.value), at: k.len(res.shearMax.at) },
     verdict: {
       passes: res.verdict.passes,
@@ -277,20 +288,21 @@ function reportJson(file: string, r: MemberReport): Record<string, unknown> {
 }
 
 function reportText(file: string, r: MemberReport): string {
-  const k = converters(r.units);
+  const system = unitSystem(r.units.length);
+  const k = converters(system);
   const res = r.result;
-  const f = r.units.force, l = r.units.length, s = r.units.stress;
+  const l = system.length, d = system.deflection, su = system.units, s = su.stress;
   const g = (v: number): string => formatSig(v, 5);
   const lines = [
-    `${file}: ${r.support} span ${g(r.span)} ${l}, EI = ${g(k.EI(r.EI))} ${f}·${l}² (from ${r.stiffnessFrom})`,
-    `  maximum deflection   ${g(k.len(res.deflectionMax))} ${l} at x = ${g(k.len(res.deflectionAt))} ${l}  (span/${g(res.spanOverDeflection)})`,
-    `  maximum moment       ${g(k.moment(res.momentMax))} ${f}·${l} at x = ${g(k.len(res.momentAt))} ${l}`,
-    `  uniform load total   ${g(k.lineLoad(res.uniformTotal))} ${f}/${l}${r.selfWeight !== undefined ? ` (self-weight ${g(k.lineLoad(r.selfWeight))} included)` : ''}`,
+    `${file}: ${r.support} span ${g(r.span)} ${l}, EI = ${g(k.EI(r.EI))} ${su.flexuralStiffness} (from ${r.stiffnessFrom})`,
+    `  maximum deflection   ${g(k.deflection(res.deflectionMax))} ${d} at x = ${g(k.len(res.deflectionAt))} ${l}  (span/${g(res.spanOverDeflection)})`,
+    `  maximum moment       ${g(k.moment(res.momentMax))} ${su.moment} at x = ${g(k.len(res.momentAt))} ${l}`,
+    `  uniform load total   ${g(k.lineLoad(res.uniformTotal))} ${su.lineLoad}${r.selfWeight !== undefined ? ` (self-weight ${g(k.lineLoad(r.selfWeight))} included)` : ''}`,
     ...res.stresses.map((st) => `  ${st.name}: tension ${g(k.stress(st.maxTension))} ${s}, compression ${g(k.stress(st.maxCompression))} ${s}${st.strengthRatio !== undefined ? `, ${g(st.strengthRatio)} × its ${st.strengthLabel ?? 'strength'}` : ''}`),
   ];
-  if (res.liveDeflectionMax !== undefined) lines.push(`  live-load deflection ${g(k.len(res.liveDeflectionMax))} ${l}`);
-  lines.push(`  maximum shear        ${g(k.force(Math.abs(res.shearMax.value)))} ${f} at x = ${g(k.len(res.shearMax.at))} ${l}`);
-  lines.push('', `verdict: ${res.verdict.summary}`, ...res.verdict.criteria.map((c) => criterionLine(c, k, r.units)));
+  if (res.liveDeflectionMax !== undefined) lines.push(`  live-load deflection ${g(k.deflection(res.liveDeflectionMax))} ${d}`);
+  lines.push(`  maximum shear        ${g(k.force(Math.abs(res.shearMax.value)))} ${su.force} at x = ${g(k.len(res.shearMax.at))} ${l}`);
+  lines.push('', `verdict: ${res.verdict.summary}`, ...res.verdict.criteria.map((c) => criterionLine(c, k, system)));
   lines.push('', `Deflection limits: ${DEFLECTION_LIMIT_MEANING}.`, `Stress limits: ${STRESS_FACTOR_MEANING}`);
   lines.push('', ...res.cautions.map((c) => `CAUTION: ${c}`), '');
   return lines.join('\n');
@@ -331,13 +343,15 @@ export const memberCommand: Command = {
     'The stiffness EIx is the E-weighted one of the document\'s materials; --E gives one modulus to',
     'the whole shape instead (required for GeoJSON or a document without materials).',
     '',
-    'Units: --span and --at in the document unit. Forces, line loads, moduli and densities take a',
-    'unit suffix (10kN, 2.5kN/m, 300lbf/ft, 200GPa, 29000ksi, 7850kg/m3, 490lb/ft3); without one they',
-    'are in N, N per document unit, MPa, kg/m3 for mm/cm/m documents, and in lbf, lbf per document',
-    'unit, psi, lb/ft3 for in/ft documents. Results use the same system: lengths in the document',
-    'unit, forces N or lbf, moments force·unit, stresses MPa or psi.',
+    'Units: every quantity may carry its unit: --span 6m, 20ft or 13\'-9"; --point 10kN or 2kip;',
+    '--uniform 2.5kN/m or 300lbf/ft; --E 200GPa or 29000ksi; --density 7850kg/m3 or 490lb/ft3. A bare',
+    'number is read as before: --span and --at in the document unit; N, N per document unit, MPa and',
+    'kg/m3 for mm/cm/m documents; lbf, lbf per document unit, psi and lb/ft3 for in/ft documents.',
+    'Results follow the document\'s unit system: span and positions in the document unit, deflections',
+    'in mm (in for in/ft), forces kN (kip), line loads kN/m (kip/ft), moments kN·m (kip·ft), stresses',
+    'MPa (ksi), EI kN·m² (kip·in²).',
     '',
-    'With --json: file, caution, units, convention, support, span, stiffnessFrom, EI, deflectionMax,',
+    'With --json: file, caution, units (the unit of every key), convention, support, span, stiffnessFrom, EI, deflectionMax,',
     'deflectionAt, spanOverDeflection, momentMax, momentAt, momentSagging, momentHogging,',
     'reactionLeft, momentLeft, uniformTotal, selfWeight (with --self-weight), stresses (per',
     'material), limit (ratio, limitLength, allowed, passes, verdict), liveDeflectionMax, shearMax,',
@@ -367,74 +381,67 @@ export const memberCommand: Command = {
 
 export interface MaterialPropsResults {
   readonly json: Record<string, unknown>;
+  readonly units: Record<string, string>;
   readonly rows: readonly (readonly [string, string, string, string])[];
   readonly errors: readonly string[];
 }
 
 /**
- * E-weighted results of a document with materials, in the report's length unit and the force
- * system of that unit (N or lbf): EA (force), EIx, EIy, EIxy, EI1, EI2 (force·unit²), the
- * E-weighted centroid, transformed area and second moments (to E_ref), mass (kg/m) and weight
- * per length (lb/ft for in/ft, N/m otherwise), and each part's modular ratio. `--eref VALUE`
+ * E-weighted results of a document with materials, in the report's length unit and its unit
+ * system (core/units/systems.ts): EA (kN or kip), EIx, EIy, EIxy, EI1, EI2 (kN·m² or kip·in²), the
+ * E-weighted centroid, transformed area and second moments (to E_ref), mass and weight per length
+ * (kg/m, or lb/ft for in/ft), and each part's modular ratio; `units` names the unit of each key. `--eref VALUE`
  * (stress with unit suffix) overrides the reference modulus. Nothing is added for a shape
  * without materials; --eref then is an error.
  */
 export function materialPropsResults(file: string, section: LoadedSection, flags: FlagValues, io: CliIo, reportUnit: LengthUnit): MaterialPropsResults {
-  const none: MaterialPropsResults = { json: {}, rows: [], errors: [] };
+  const none: MaterialPropsResults = { json: {}, units: {}, rows: [], errors: [] };
+  const fail = (errors: string[]): MaterialPropsResults => ({ json: {}, units: {}, rows: [], errors });
   const erefText = stringFlag(flags, 'eref');
-  const units = outputUnits(reportUnit);
-  const noMaterials = (why: string): MaterialPropsResults => (erefText === undefined ? none : { json: {}, rows: [], errors: [`${file}: --eref: ${why}`] });
+  const system = unitSystem(reportUnit);
+  const noMaterials = (why: string): MaterialPropsResults => (erefText === undefined ? none : fail([`${file}: --eref: ${why}`]));
   const doc = section.doc;
   if (doc === undefined) return noMaterials('GeoJSON has no materials');
   if (doc.parts.every((p) => p.material === null) && doc.defaultMaterial === null) return noMaterials('the document has no materials assigned');
   const found = materialPiecesFromDocument(doc);
   const problems = [...found.issues, ...found.diagnostics.map((d) => d.message)];
-  if (problems.length > 0) return { json: {}, rows: [], errors: problems.map((p) => `${file}: ${p}`) };
+  if (problems.length > 0) return fail(problems.map((p) => `${file}: ${p}`));
   // --eref overrides the document's stored choice (referenceModulus), which overrides the first part's E.
   const stored = documentReferenceModulus(doc);
-  if (!stored.ok) return { json: {}, rows: [], errors: [`${file}: ${stored.message}`] };
+  if (!stored.ok) return fail([`${file}: ${stored.message}`]);
   let eRef: number | undefined = stored.eRef;
   try {
-    if (erefText !== undefined) {
-      const q = parseQuantity(erefText, STRESS_UNITS, units.stress, '--eref');
-      eRef = stressToPascals(q.value, q.unit);
-      if (!(eRef > 0)) return { json: {}, rows: [], errors: [`--eref: the reference modulus must be positive, got ${erefText}`] };
-    }
+    eRef = quantityFlag(flags, 'eref', 'stress', outputUnits(reportUnit).stress) ?? eRef;
+    if (erefText !== undefined && !(eRef !== undefined && eRef > 0)) return fail([`--eref: the reference modulus must be positive, got ${erefText}`]);
   } catch (err) {
-    if (err instanceof QuantityError) return { json: {}, rows: [], errors: [err.message] };
+    if (err instanceof QuantityError) return fail([err.message]);
     throw err;
   }
   const c = compositeProperties(found.pieces, section.unit, eRef);
   const erefFrom = erefText !== undefined ? '--eref' : stored.from === 'material' ? `the document's choice: ${stored.materialName ?? 'a material'}` : stored.from === 'typed' ? "the document's typed value" : 'first part';
-  const k = converters(units);
   const L = (v: number, p = 1): number => convertLength(v, section.unit, reportUnit, p);
-  const weight = imperial(reportUnit) ? c.weightPerLengthLbPerFt : c.weightPerLength;
-  const weightUnit = imperial(reportUnit) ? 'lbf/ft' : 'N/m';
-  const f = units.force, u = reportUnit;
+  const su = system.units, u = reportUnit;
+  const EI = (v: number): number => fromSI(v, 'flexuralStiffness', su.flexuralStiffness);
   const values = {
-    EA: k.force(c.EA), EIx: k.EI(c.EIx), EIy: k.EI(c.EIy), EIxy: k.EI(c.EIxy), EI1: k.EI(c.EI1), EI2: k.EI(c.EI2), thetaEIDeg: c.thetaDeg,
-    cxE: L(c.cx), cyE: L(c.cy), eRef: pascalsTo(c.eRef, units.stress),
+    EA: fromSI(c.EA, 'axialStiffness', su.axialStiffness), EIx: EI(c.EIx), EIy: EI(c.EIy), EIxy: EI(c.EIxy), EI1: EI(c.EI1), EI2: EI(c.EI2), thetaEIDeg: c.thetaDeg,
+    cxE: L(c.cx), cyE: L(c.cy), eRef: fromSI(c.eRef, 'stress', su.stress),
     transformedArea: L(c.transformedArea, 2), transformedIx: L(c.transformedIx, 4), transformedIy: L(c.transformedIy, 4),
-    massPerLength: c.massPerLength, weightPerLength: weight,
+    massPerLength: fromSI(c.massPerLength, 'massPerLength', su.massPerLength), weightPerLength: fromSI(c.weightPerLength, 'weightPerLength', su.weightPerLength),
+  };
+  const units: Record<string, string> = {
+    EA: su.axialStiffness, EIx: su.flexuralStiffness, EIy: su.flexuralStiffness, EIxy: su.flexuralStiffness, EI1: su.flexuralStiffness, EI2: su.flexuralStiffness, thetaEIDeg: 'deg',
+    cxE: u, cyE: u, eRef: su.stress, transformedArea: `${u}²`, transformedIx: `${u}⁴`, transformedIy: `${u}⁴`, massPerLength: su.massPerLength, weightPerLength: su.weightPerLength, 'materials[].n': '-',
   };
   const g = (v: number): string => formatSig(v, 6, { grouping: ',' });
-  const rows: (readonly [string, string, string, string])[] = [
-    ['EA', g(values.EA), f, 'axial stiffness Σ E_i A_i'],
-    ['EIx', g(values.EIx), `${f}·${u}²`, 'bending stiffness about the E-weighted centroid, x'],
-    ['EIy', g(values.EIy), `${f}·${u}²`, 'bending stiffness, y'],
-    ['EIxy', g(values.EIxy), `${f}·${u}²`, 'E-weighted product (+∫E·XY dA)'],
-    ['EI1', g(values.EI1), `${f}·${u}²`, 'major principal bending stiffness'],
-    ['EI2', g(values.EI2), `${f}·${u}²`, 'minor principal bending stiffness'],
-    ['thetaEIDeg', g(values.thetaEIDeg), 'deg', 'angle of the EI1 axis, CCW from +x'],
-    ['cxE', g(values.cxE), u, 'E-weighted centroid x'], ['cyE', g(values.cyE), u, 'E-weighted centroid y'],
-    ['eRef', g(values.eRef), units.stress, `reference modulus (${erefFrom})`],
-    ['transformedArea', g(values.transformedArea), `${u}²`, 'transformed area EA / E_ref'],
-    ['transformedIx', g(values.transformedIx), `${u}⁴`, 'transformed Ix = EIx / E_ref'],
-    ['transformedIy', g(values.transformedIy), `${u}⁴`, 'transformed Iy = EIy / E_ref'],
-    ['massPerLength', g(values.massPerLength), 'kg/m', 'mass per length Σ ρ_i A_i'],
-    ['weightPerLength', g(values.weightPerLength), weightUnit, 'weight per length'],
-  ];
+  const what: Readonly<Record<keyof typeof values, string>> = {
+    EA: 'axial stiffness Σ E_i A_i', EIx: 'bending stiffness about the E-weighted centroid, x', EIy: 'bending stiffness, y', EIxy: 'E-weighted product (+∫E·XY dA)',
+    EI1: 'major principal bending stiffness', EI2: 'minor principal bending stiffness', thetaEIDeg: 'angle of the EI1 axis, CCW from +x',
+    cxE: 'E-weighted centroid x', cyE: 'E-weighted centroid y', eRef: `reference modulus (${erefFrom})`,
+    transformedArea: 'transformed area EA / E_ref', transformedIx: 'transformed Ix = EIx / E_ref', transformedIy: 'transformed Iy = EIy / E_ref',
+    massPerLength: 'mass per length Σ ρ_i A_i', weightPerLength: su.weightPerLength === 'kg/m' ? 'weight per length, as mass per length (kg/m)' : 'weight per length',
+  };
+  const rows: (readonly [string, string, string, string])[] = (Object.keys(values) as (keyof typeof values)[]).map((key) => [key, g(values[key]), units[key] ?? '', what[key]]);
   const materials = c.pieces.map((p, i) => ({ part: p.label, material: found.pieces[i]!.material.name, n: p.n }));
   for (const m of materials) rows.push([`n ${m.part}`, g(m.n), '', `modular ratio E_i / E_ref (${m.material})`]);
-  return { json: { ...values, materialUnits: { EA: f, EI: `${f}·${u}²`, eRef: units.stress, massPerLength: 'kg/m', weightPerLength: weightUnit }, materials }, rows, errors: [] };
+  return { json: { ...values, materials }, units, rows, errors: [] };
 }

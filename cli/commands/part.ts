@@ -7,7 +7,7 @@
  * Units: TYPE dimensions are read in --unit (default in) and the results are reported in it;
  * lumber's b and d are nominal inch sizes whatever the unit. A designation's dimensions are the
  * catalogue's (inches); --unit only changes the reporting unit.
- * The JSON keys of the properties are those of `props` (propertiesInUnit, PROPERTY_QUANTITY).
+ * The JSON keys of the properties are those of `props` (propertiesInUnit, from the property catalogue).
  * The readable table is a small formatter of its own: props' table is private to its file.
  */
 import { partFromDesignation, type CatalogueEntry } from '../../core/catalogue/index.ts';
@@ -21,7 +21,8 @@ import { sectionProperties } from '../../core/properties/index.ts';
 import type { SectionProperties } from '../../core/properties/types.ts';
 import { convertLength, defaultDisplaySet, formatSig, isLengthUnit, QUANTITY_POWER, toDisplay, type LengthUnit } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
-import { PROPERTY_QUANTITY, propertiesInUnit } from './props.ts';
+import { catalogueFor, PROPERTY_CATALOGUE, shownValue } from '../../core/properties/catalogue.ts';
+import { propertiesInUnit, propertyUnits } from './props.ts';
 
 export const PART_FLAGS: readonly FlagSpec[] = [
   { name: 'designation', type: 'string', value: 'NAME', description: 'a catalogue designation (AISC v15.0 shape such as W14X90, or lumber such as 2x10) instead of TYPE' },
@@ -86,14 +87,13 @@ function describe(request: Request): string {
 
 function table(request: Request, p: SectionProperties, unit: LengthUnit): string {
   const display = defaultDisplaySet(unit);
-  const rows = (Object.keys(PROPERTY_QUANTITY) as (keyof SectionProperties)[]).map((key): [string, string, string] => {
-    const value = p[key];
-    const q = PROPERTY_QUANTITY[key];
-    if (typeof value === 'boolean') return [key, value ? 'yes' : 'no', ''];
-    if (q === null) return [key, formatSig(value, 6), key === 'thetaDeg' ? 'deg' : ''];
-    const shown = toDisplay(convertLength(value, request.unit, unit, QUANTITY_POWER[q]), unit, display[q]);
-    return [key, formatSig(shown, 6, { grouping: ',' }), display[q].label];
+  const rows = catalogueFor('cli', PROPERTY_CATALOGUE).map((row): [string, string, string] => {
+    const value = shownValue(row.kind, p[row.key], p);
+    if (row.kind === 'angle' || row.kind === 'ratio') return [row.key, formatSig(value, 6), row.kind === 'angle' ? 'deg' : ''];
+    const shown = toDisplay(convertLength(value, request.unit, unit, QUANTITY_POWER[row.kind]), unit, display[row.kind]);
+    return [row.key, formatSig(shown, 6, { grouping: ',' }), display[row.kind].label];
   });
+  rows.push(['isotropic', p.isotropic ? 'yes' : 'no', '']);
   const w0 = Math.max(...rows.map((r) => r[0].length));
   const w1 = Math.max(...rows.map((r) => r[1].length));
   const notes = [...(request.entry?.modelling.map((m) => `  modelling: ${m}`) ?? []), ...(request.entry?.caveats.map((c) => `  NOTE: ${c}`) ?? [])];
@@ -120,6 +120,7 @@ function json(request: Request, p: SectionProperties, unit: LengthUnit): string 
     caution: CAUTION,
     convention: 'Ixy = +∫XY dA about the centroid; angles in degrees counter-clockwise from +x; lengths in "unit", areas unit², moduli unit³, second moments unit⁴',
     ...propertiesInUnit(p, request.unit, unit),
+    units: propertyUnits(unit),
   };
   return `${JSON.stringify(body, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;
 }

@@ -13,6 +13,7 @@ import { compositeTorsionAnalysis, MeshInputError, MeshRefinementError, TorsionS
 import { builtInMaterial, documentMaterials, materialPiecesFromDocument, pascalsTo } from '../../core/materials/index.ts';
 import type { SectionDocument } from '../../core/document/types.ts';
 import type { NetSectionProperties } from '../../core/properties/index.ts';
+import { catalogueFor, PROPERTY_CATALOGUE, shownValue, type CatalogueKind } from '../../core/properties/catalogue.ts';
 import { convertLength, defaultDisplaySet, formatSig, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
 import { cutParts, sectionDxf } from '../../core/dxf/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
@@ -37,50 +38,36 @@ export const PROPS_FLAGS: readonly FlagSpec[] = [
   ...JOINT_FLAGS,
 ];
 
-/** The length dimension of every property (null: a pure number or an angle). */
-export const PROPERTY_QUANTITY: Readonly<Record<keyof SectionProperties, Quantity | null>> = {
-  area: 'area', cx: 'length', cy: 'length', Ix: 'inertia', Iy: 'inertia', Ixy: 'inertia', Ip: 'inertia', I1: 'inertia', I2: 'inertia',
-  thetaDeg: null, isotropic: null, rx: 'length', ry: 'length', r1: 'length', r2: 'length',
-  xMin: 'length', xMax: 'length', yMin: 'length', yMax: 'length',
-  SxTop: 'modulus', SxBottom: 'modulus', SyLeft: 'modulus', SyRight: 'modulus',
-  S1Plus: 'modulus', S1Minus: 'modulus', S2Plus: 'modulus', S2Minus: 'modulus',
-  Zx: 'modulus', Zy: 'modulus', Z1: 'modulus', Z2: 'modulus', pnaY: 'length', pnaX: 'length',
-  shapeFactorX: null, shapeFactorY: null,
-};
-
-/** Table rows: symbol, what it is. Every property appears once. */
-const TABLE: readonly (readonly [keyof SectionProperties, string])[] = [
-  ['area', 'area'],
-  ['cx', 'centroid x'], ['cy', 'centroid y'],
-  ['Ix', 'second moment about centroidal x'], ['Iy', 'second moment about centroidal y'], ['Ixy', 'product of inertia (+∫XY dA)'],
-  ['Ip', 'polar moment Ix + Iy (not J)'],
-  ['I1', 'major principal moment'], ['I2', 'minor principal moment'], ['thetaDeg', 'angle of axis 1, CCW from +x'],
-  ['rx', 'radius of gyration about x'], ['ry', 'radius of gyration about y'], ['r1', 'radius of gyration, axis 1'], ['r2', 'radius of gyration, axis 2'],
-  ['SxTop', 'elastic modulus, x axis, top fibre'], ['SxBottom', 'elastic modulus, x axis, bottom fibre'],
-  ['SyLeft', 'elastic modulus, y axis, left fibre'], ['SyRight', 'elastic modulus, y axis, right fibre'],
-  ['S1Plus', 'elastic modulus, axis 1, + side'], ['S1Minus', 'elastic modulus, axis 1, − side'],
-  ['S2Plus', 'elastic modulus, axis 2, + side'], ['S2Minus', 'elastic modulus, axis 2, − side'],
-  ['Zx', 'plastic modulus about x'], ['Zy', 'plastic modulus about y'], ['Z1', 'plastic modulus, axis 1'], ['Z2', 'plastic modulus, axis 2'],
-  ['pnaY', 'plastic neutral axis y (bending about x)'], ['pnaX', 'plastic neutral axis x (bending about y)'],
-  ['shapeFactorX', 'shape factor Zx / Sx,min'], ['shapeFactorY', 'shape factor Zy / Sy,min'],
-  ['xMin', 'extent x min'], ['xMax', 'extent x max'], ['yMin', 'extent y min'], ['yMax', 'extent y max'],
-];
-
 const SIGNIFICANT = 6;
 
-/** Every property in `unit` (from the section's own unit), keys as in SectionProperties. */
+/** The unit of a catalogue kind in plain powers of `unit` (JSON and the plain table). */
+export function kindUnit(kind: CatalogueKind, unit: LengthUnit): string {
+  return kind === 'angle' ? 'deg' : kind === 'ratio' ? '-' : QUANTITY_POWER[kind] === 1 ? unit : `${unit}${['', '', '²', '³', '⁴', '', '⁶'][QUANTITY_POWER[kind]] ?? ''}`;
+}
+
+/**
+ * Every catalogue property in `unit` (from the section's own unit), keys as in SectionProperties,
+ * rounding residue as 0 (core/properties/catalogue.ts); `isotropic` as it is.
+ */
 export function propertiesInUnit(p: SectionProperties, from: LengthUnit, to: LengthUnit): Record<string, number | boolean> {
   const out: Record<string, number | boolean> = {};
-  for (const key of Object.keys(PROPERTY_QUANTITY) as (keyof SectionProperties)[]) {
-    const q = PROPERTY_QUANTITY[key];
-    const value = p[key];
-    out[key] = q === null || typeof value !== 'number' ? value : convertLength(value, from, to, QUANTITY_POWER[q]);
+  for (const row of catalogueFor('cli', PROPERTY_CATALOGUE)) {
+    const value = shownValue(row.kind, p[row.key], p);
+    out[row.key] = row.kind === 'angle' || row.kind === 'ratio' ? value : convertLength(value, from, to, QUANTITY_POWER[row.kind]);
   }
+  out.isotropic = p.isotropic;
   return out;
+}
+
+/** The unit of every key propertiesInUnit writes. */
+export function propertyUnits(unit: LengthUnit): Record<string, string> {
+  return Object.fromEntries([...catalogueFor('cli', PROPERTY_CATALOGUE).map((r) => [r.key, kindUnit(r.kind, unit)]), ['isotropic', '-']]);
 }
 
 interface ExtraResults {
   readonly json: Record<string, unknown>;
+  /** The unit of every key in `json` ('-' for pure numbers), where given. */
+  readonly units?: Record<string, string>;
   readonly rows: readonly (readonly [string, string, string, string])[];
   /** Bad input found while computing them (exit code 2). */
   readonly errors: readonly string[];
@@ -102,7 +89,7 @@ const NET_ROWS: readonly (readonly [keyof NetSectionProperties, string, Quantity
 /** Net-section rows and the JSON "net" object, where fastener holes exist. */
 function netResults(section: LoadedSection, unit: LengthUnit): ExtraResults {
   const net = section.net;
-  if (net === undefined) return { json: { fastenerHoles: 0 }, rows: [], errors: [] };
+  if (net === undefined) return { json: { fastenerHoles: 0 }, units: { fastenerHoles: '-' }, rows: [], errors: [] };
   const display = defaultDisplaySet(unit);
   const values: Record<string, number> = {};
   const rows = NET_ROWS.map(([key, symbol, q, what]) => {
@@ -118,7 +105,7 @@ function netResults(section: LoadedSection, unit: LengthUnit): ExtraResults {
 }
 
 function joined(...parts: readonly ExtraResults[]): ExtraResults {
-  return { json: Object.assign({}, ...parts.map((p) => p.json)) as Record<string, unknown>, rows: parts.flatMap((p) => p.rows), errors: parts.flatMap((p) => p.errors) };
+  return { json: Object.assign({}, ...parts.map((p) => p.json)) as Record<string, unknown>, units: Object.assign({}, ...parts.map((p) => p.units)) as Record<string, string>, rows: parts.flatMap((p) => p.rows), errors: parts.flatMap((p) => p.errors) };
 }
 
 /** Results beyond the geometry, as JSON keys and table rows [symbol, value, unit, what]: net section, the E-weighted values of a document with materials, torsion. */
@@ -127,7 +114,7 @@ function extraResults(file: string, section: LoadedSection, flags: FlagValues, i
   const materials = joined(netResults(section, unit), joints, materialPropsResults(file, section, flags, io, unit));
   if (flags.torsion !== true) return materials;
   const torsion = torsionResults(file, section, io, unit);
-  return { json: { ...materials.json, ...torsion.json }, rows: [...materials.rows, ...torsion.rows], errors: [...materials.errors, ...torsion.errors] };
+  return { json: { ...materials.json, ...torsion.json }, units: { ...materials.units, ...torsion.units }, rows: [...materials.rows, ...torsion.rows], errors: [...materials.errors, ...torsion.errors] };
 }
 
 /** The pieces of a document whose visible parts use more than one material, each with its G (Pa). */
@@ -161,14 +148,14 @@ function torsionMaterials(doc: SectionDocument): TorsionMaterials | { readonly e
 /** --torsion: core/torsion on the section's region; a document of several materials is G-weighted (G_ref: the first part's material). */
 function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: LengthUnit): ExtraResults {
   const composite = section.doc !== undefined ? torsionMaterials(section.doc) : null;
-  if (composite !== null && 'errors' in composite) return { json: {}, rows: [], errors: composite.errors.map((e) => `${file}: --torsion: ${e}`) };
+  if (composite !== null && 'errors' in composite) return { json: {}, units: {}, rows: [], errors: composite.errors.map((e) => `${file}: --torsion: ${e}`) };
   let r: TorsionResult;
   try {
     r = composite ? compositeTorsionAnalysis(composite.pieces).result : torsionConstants(section.region);
   } catch (err) {
     // Bad geometry, or a mesh/solver cap reached: say which, never a stack trace.
     if (err instanceof MeshInputError || err instanceof MeshRefinementError || err instanceof TorsionSolveError) {
-      return { json: {}, rows: [], errors: [`${file}: --torsion: ${err.message}`] };
+      return { json: {}, units: {}, rows: [], errors: [`${file}: --torsion: ${err.message}`] };
     }
     throw err;
   }
@@ -195,12 +182,13 @@ function withMaterialRows(out: ExtraResults, c: TorsionMaterials, section: Loade
   const spread = Math.max(...ratios) / Math.min(...ratios) - 1;
   if (spread > 0.01) rows.push(['weighting', 'G', '', 'shear centre and Cw are G-weighted; the materials differ in E/G (Poisson ratio), so E-weighting would move them']);
   const json = { GJ, GJUnit: `${force}·${unit}²`, gRef: shown(c.gRef), shearModulusUnit: stress, shearModuli: c.moduli.map((m) => ({ material: m.id, G: shown(m.G), from: m.from })) };
-  return { json: { ...out.json, ...json }, rows: [...out.rows, ...rows], errors: out.errors };
+  return { json: { ...out.json, ...json }, units: { ...out.units, GJ: `${force}·${unit}²`, gRef: stress, 'shearModuli[].G': stress }, rows: [...out.rows, ...rows], errors: out.errors };
 }
 
 function torsionRows(section: LoadedSection, unit: LengthUnit, r: TorsionResult): ExtraResults {
-  const L = (v: number, power: number): number => convertLength(v, section.unit, unit, power);
   const g = (v: number): string => formatSig(v, SIGNIFICANT, { grouping: ',' });
+  const L = (v: number, power: number): number => convertLength(v, section.unit, unit, power);
+  const units: Record<string, string> = { J: `${unit}⁴`, Cw: `${unit}⁶`, xs: unit, ys: unit, meshElements: '-', jRelativeError: '-', torsionComponents: '-' };
   const values = { J: L(r.J, 4), Cw: L(r.Cw, 6), xs: L(r.xs, 1), ys: L(r.ys, 1), meshElements: r.meshElements, jRelativeError: r.jRelativeError, torsionComponents: r.components };
   const rows: (readonly [string, string, string, string])[] = [
     ['J', g(values.J), `${unit}⁴`, 'torsion constant (finite elements)'],
@@ -218,7 +206,7 @@ function torsionRows(section: LoadedSection, unit: LengthUnit, r: TorsionResult)
     Object.assign(values, { Cw: null, xs: null, ys: null });
   }
   const o = r.simplifiedOutline;
-  if (!o) return { json: values, rows, errors: [] };
+  if (!o) return { json: values, units, rows, errors: [] };
   const pct = (v: number): string => formatSig(v * 100, 2);
   rows.push(
     ['torsionOutline', `${o.inputPoints} → ${o.meshPoints}`, 'points', 'dense outline simplified for the torsion mesh only (exact properties use every point)'],
@@ -227,7 +215,7 @@ function torsionRows(section: LoadedSection, unit: LengthUnit, r: TorsionResult)
     ['torsionDeltaIy', pct(o.deltaIy), '%', 'change of Iy of the meshed outline'],
     ['torsionDeltaJ', pct(o.jChange), '%', 'estimated change of J from the simplification (in jRelativeError)'],
   );
-  return { json: { ...values, torsionOutline: o }, rows, errors: [] };
+  return { json: { ...values, torsionOutline: o }, units: { ...units, torsionOutline: 'points; deltas as fractions' }, rows, errors: [] };
 }
 
 function describeInput(s: LoadedSection): string {
@@ -239,13 +227,12 @@ function describeInput(s: LoadedSection): string {
 
 function table(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResults): string {
   const display = defaultDisplaySet(unit);
-  const rows: (readonly [string, string, string, string])[] = TABLE.map(([key, what]) => {
-    const value = s.properties[key];
-    const q = PROPERTY_QUANTITY[key];
-    if (typeof value === 'boolean') return [key, value ? 'yes' : 'no', '', what];
-    if (q === null) return [key, formatSig(value, SIGNIFICANT), key === 'thetaDeg' ? 'deg' : '', what];
-    const shown = toDisplay(convertLength(value, s.unit, unit, QUANTITY_POWER[q]), unit, display[q]);
-    return [key, formatSig(shown, SIGNIFICANT, { grouping: ',' }), display[q].label, what];
+  const p = s.properties;
+  const rows: (readonly [string, string, string, string])[] = catalogueFor('cli', PROPERTY_CATALOGUE).map((row) => {
+    const value = shownValue(row.kind, p[row.key], p);
+    if (row.kind === 'angle' || row.kind === 'ratio') return [row.key, formatSig(value, SIGNIFICANT), row.kind === 'angle' ? 'deg' : '', row.meaning];
+    const shown = toDisplay(convertLength(value, s.unit, unit, QUANTITY_POWER[row.kind]), unit, display[row.kind]);
+    return [row.key, formatSig(shown, SIGNIFICANT, { grouping: ',' }), display[row.kind].label, row.meaning];
   });
   rows.push(...extra.rows);
   const w0 = Math.max(...rows.map((r) => r[0].length));
@@ -276,6 +263,7 @@ function json(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResu
     ...(s.kind === 'document' ? { section: s.name, parts: s.parts, hiddenParts: s.hiddenParts } : {}),
     ...propertiesInUnit(s.properties, s.unit, unit),
     ...extra.json,
+    units: { ...propertyUnits(unit), ...extra.units },
   };
   // Non-finite numbers have no JSON form; say null rather than writing invalid JSON.
   return `${JSON.stringify(body, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;

@@ -17,6 +17,8 @@
  *
  * Units: `unit` for lengths (area unit², moduli unit³, Ix unit⁴, depth unit); EIx N·m², weight
  *   N/m, deflection m (SI, as core/member returns them); the span in `unit`, loads in N/m.
+ *   Every view shows EIx, weight and deflections in the unit system of `unit` through ./csv.ts
+ *   (columnUnit, columnValue): kip·in², lb/ft, in or kN·m², kg/m, mm.
  */
 import type { SectionDocument } from '../document/types.ts';
 import { regionBounds } from '../geometry/bounds.ts';

@@ -4,5 +4,5 @@
  * modules beside it import compare.ts directly, never this barrel.
  */
 export * from './compare.ts';
-export { comparisonCsv, columnHeading, columnUnit } from './csv.ts';
+export { comparisonCsv, columnHeading, columnUnit, columnValue, sharedLoadShown } from './csv.ts';
 export { comparisonSvg } from './svg.ts';

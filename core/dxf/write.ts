@@ -21,7 +21,7 @@ import { DxfWriter, Line, LWPolylineFlags, Units, point3d, type LWPolylineVertex
 import type { Polygon, Region, Ring } from '../geometry/types.ts';
 import { regionBounds } from '../geometry/index.ts';
 import type { SectionProperties } from '../properties/types.ts';
-import { displayedValue, DRAWING_TABLE_KEYS, PROPERTY_ROWS } from '../export/rows.ts';
+import { catalogueFor, PROPERTY_CATALOGUE, shownValue } from '../properties/catalogue.ts';
 import { defaultDisplaySet, formatSig, toDisplay, type DisplaySet, type LengthUnit } from '../units/index.ts';
 
 export interface DxfCutPart {
@@ -135,12 +135,10 @@ function addProperties(dxf: DxfWriter, input: DxfExportInput, p: SectionProperti
       y -= 1.6 * h;
     };
     line(`${input.name}: section properties (${input.unit})`);
-    for (const key of DRAWING_TABLE_KEYS) {
-      const row = PROPERTY_ROWS.find((r) => r.key === key);
-      if (!row) continue;
-      const shown = displayedValue(row, p);
-      const value = row.quantity === null ? shown : toDisplay(shown, input.unit, display[row.quantity]);
-      const unitText = row.quantity === null ? (row.plainUnit === '-' ? '' : 'deg') : display[row.quantity].label;
+    for (const row of catalogueFor('drawing', PROPERTY_CATALOGUE)) {
+      const shown = shownValue(row.kind, p[row.key], p);
+      const value = row.kind === 'angle' || row.kind === 'ratio' ? shown : toDisplay(shown, input.unit, display[row.kind]);
+      const unitText = row.kind === 'angle' ? 'deg' : row.kind === 'ratio' ? '' : display[row.kind].label;
       line(`${row.symbol} = ${formatSig(value, 4)} ${unitText}`.trim());
     }
     line(`CAUTION: ${input.caution}`);

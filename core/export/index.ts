@@ -1,4 +1,3 @@
 /** Exports of a section as text: an SVG drawing (svg.ts) and a CSV of its properties (csv.ts). */
 export { sectionSvg, escapeXml, ringPathData, type SvgInput } from './svg.ts';
-export { propertiesCsv, csvTextCell, csvNumberCell, type CsvInput } from './csv.ts';
-export { PROPERTY_ROWS, DRAWING_TABLE_KEYS, type PropertyRow } from './rows.ts';
+export { propertiesCsv, csvTextCell, csvNumberCell, csvUnit, type CsvInput } from './csv.ts';

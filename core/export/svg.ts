@@ -12,7 +12,7 @@
  * Text: every piece of user text (names) is XML-escaped, and characters XML 1.0 forbids are
  * replaced by U+FFFD, so the file is well-formed whatever the names hold.
  * Numbers in the table use 4 significant figures in the display units, round-off residue shown
- * as 0 (rows.ts displayedValue); the full-precision numbers are in the CSV export.
+ * as 0 (core/properties/catalogue.ts shownValue); the full-precision numbers are in the CSV export.
  */
 import type { Region, Ring } from '../geometry/types.ts';
 import { CAUTION } from '../member/check.ts';
@@ -20,7 +20,9 @@ import type { SectionProperties } from '../properties/types.ts';
 import type { SectionResult } from '../section/index.ts';
 import { defaultDisplaySet, formatSig, toDisplay, type DisplaySet } from '../units/index.ts';
 import type { LengthUnit } from '../units/types.ts';
-import { displayedValue, DRAWING_TABLE_KEYS, PROPERTY_ROWS } from './rows.ts';
+import { catalogueFor, PROPERTY_CATALOGUE, shownValue } from '../properties/catalogue.ts';
+
+const DRAWING_TABLE = catalogueFor('drawing', PROPERTY_CATALOGUE);
 
 export interface SvgInput {
   readonly name: string;
@@ -163,12 +165,10 @@ function axesMarkup(p: SectionProperties, frame: Frame): string[] {
 
 function tableMarkup(p: SectionProperties, unit: LengthUnit, display: DisplaySet): string[] {
   const out = [`<g id="properties" font-size="12">`, `<text x="${TABLE_X}" y="${TOP}" font-weight="bold">Section properties</text>`];
-  DRAWING_TABLE_KEYS.forEach((key, i) => {
-    const row = PROPERTY_ROWS.find((r) => r.key === key);
-    if (!row) return;
-    const shown = displayedValue(row, p);
-    const value = row.quantity === null ? shown : toDisplay(shown, unit, display[row.quantity]);
-    const unitText = row.quantity === null ? (row.plainUnit === '-' ? '' : '°') : display[row.quantity].label;
+  DRAWING_TABLE.forEach((row, i) => {
+    const shown = shownValue(row.kind, p[row.key], p);
+    const value = row.kind === 'angle' || row.kind === 'ratio' ? shown : toDisplay(shown, unit, display[row.kind]);
+    const unitText = row.kind === 'angle' ? '°' : row.kind === 'ratio' ? '' : display[row.kind].label;
     const y = TOP + (i + 1.5) * ROW;
     out.push(
       `<text x="${TABLE_X}" y="${px(y)}">${escapeXml(row.symbol)}</text>`,
@@ -187,7 +187,7 @@ export function sectionSvg(input: SvgInput): string {
   const box = p ? { xMin: p.xMin, xMax: p.xMax, yMin: p.yMin, yMax: p.yMax } : regionBox(section.parts.map((c) => c.region));
   const frame = frameFor(box);
   const lines: string[] = [];
-  const tableRows = p ? DRAWING_TABLE_KEYS.length + 2 : 0;
+  const tableRows = p ? DRAWING_TABLE.length + 2 : 0;
   const partsTop = TOP + tableRows * ROW + 16;
   const bottom = Math.max(TOP + DRAW + 24, partsTop + (section.parts.length + 1) * ROW);
   const height = bottom + 40;

@@ -14,12 +14,11 @@
  */
 import type { TableCheck } from '../check/table.ts';
 import { CHECKED_PROPERTIES } from '../check/columns.ts';
-import { columnHeading } from '../compare/csv.ts';
+import { columnHeading, columnValue } from '../compare/csv.ts';
 import { COLUMN_HEADINGS, COMPARE_COLUMNS, stiffnessRanking, type Comparison, type Pick } from '../compare/compare.ts';
 import { CAUTION } from '../member/check.ts';
-import { QUANTITY_POWER } from '../units/index.ts';
-import type { CsvInput } from './csv.ts';
-import { PROPERTY_ROWS } from './rows.ts';
+import { catalogueFor, PROPERTY_CATALOGUE, shownValue, TORSION_CATALOGUE } from '../properties/catalogue.ts';
+import { csvUnit, type CsvInput } from './csv.ts';
 
 export type SheetCell = { readonly kind: 'number'; readonly value: number } | { readonly kind: 'text'; readonly value: string } | null;
 
@@ -43,16 +42,21 @@ function withCaution(sheet: string, caution: string, header: readonly string[], 
 export function propertiesSheet(input: CsvInput): SheetTable {
   const header = ['section', 'unit'];
   const values: SheetCell[] = [text(input.name), text(input.unit)];
-  for (const row of PROPERTY_ROWS) {
-    const unit = row.quantity === null ? (row.plainUnit ?? '-') : unitLabel(input.unit, QUANTITY_POWER[row.quantity]);
-    header.push(`${row.key} [${unit}]`);
-    values.push(num(input.properties[row.key]));
+  const p = input.properties;
+  for (const row of catalogueFor('csv', PROPERTY_CATALOGUE)) {
+    header.push(`${row.key} [${csvUnit(row.kind, input.unit)}]`);
+    values.push(num(shownValue(row.kind, p[row.key], p)));
   }
   header.push('isotropic');
-  values.push(text(input.properties.isotropic ? 'true' : 'false'));
-  if (input.torsion) {
-    header.push(`J [${unitLabel(input.unit, 4)}]`, `Cw [${unitLabel(input.unit, 6)}]`);
-    values.push(num(input.torsion.J), num(input.torsion.Cw));
+  values.push(text(p.isotropic ? 'true' : 'false'));
+  const t = input.torsion;
+  if (t) {
+    for (const row of catalogueFor('csv', TORSION_CATALOGUE)) {
+      const v = t[row.key];
+      if (v === undefined) continue;
+      header.push(`${row.key} [${csvUnit(row.kind, input.unit)}]`);
+      values.push(num(shownValue(row.kind, v, p)));
+    }
   }
   return withCaution('Properties', CAUTION, header, [values]);
 }
@@ -67,7 +71,7 @@ export function comparisonSheet(c: Comparison, pick: Pick | null = null): SheetT
   const rows = c.alternatives.map((a) => {
     const verdict = pick?.verdicts.find((v) => v.name === a.name);
     return [
-      text(a.name), ...COMPARE_COLUMNS.flatMap((k) => [num(a.values[k]), num(a.ratios[k])]), num(rank.get(a.name)),
+      text(a.name), ...COMPARE_COLUMNS.flatMap((k) => [num(a.values[k] === null ? null : columnValue(k, a.values[k], c.unit)), num(a.ratios[k])]), num(rank.get(a.name)),
       ...(pick !== null ? [text(verdict?.meets === true ? (pick.choice?.name === a.name ? 'yes (lightest)' : 'yes') : 'no'), text(verdict?.failures.map((f) => f.message).join('; ') ?? '')] : []),
       text([...a.notes, ...(c.stiffnessColumn === 'EIx' ? [c.stiffnessNote] : [])].join('; ')),
     ];

@@ -4,6 +4,7 @@
  * deflection of a simply supported beam under uniform load, 5·w·L⁴ / (384·E·I) (Roark, Table 8.1
  * case 2e), with E = 29,000 ksi for ASTM A992 steel (AISC Specification, common practice).
  */
+import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { compareDocuments, comparisonCsv, lightestMeeting, sortAlternatives } from '../../core/compare/index.ts';
 import type { SectionDocument } from '../../core/document/index.ts';
@@ -48,7 +49,15 @@ describe('compare alternatives', () => {
     expect(pick.failing).toHaveLength(1);
     expect(pick.failing[0]).toMatch(/^c: /);
     const csv = comparisonCsv(c);
-    expect(csv.split('\r\n')[0]).toContain('deflection, total load (max) [m]');
+    // A metric comparison: EIx in kN·m², weight in kg/m, deflection in mm (core/units/systems.ts).
+    // Parsed by papaparse (headings hold commas, so they are quoted).
+    const [head = [], first = []] = Papa.parse<string[]>(csv.trim()).data;
+    const deflection = head.find((h) => h.startsWith('deflection, total load (max) ['));
+    expect(deflection).toBe('deflection, total load (max) [mm]');
+    expect(head.some((h) => h.startsWith('EIx') && h.endsWith('[kN*m^2]'))).toBe(true);
+    expect(head.some((h) => h.startsWith('weight') && h.endsWith('[kg/m]'))).toBe(true);
+    const dA = (5 * 2000 * 6 ** 4) / (384 * E * ((10 * 300 ** 3) / 12 / 1e12)); // m, plate a
+    expect(Number(first[head.indexOf(deflection!)]) / (dA * 1000) - 1).toBeCloseTo(0, 6);
     expect(csv).toContain('licensed engineer');
   });
 });

@@ -5,7 +5,7 @@ import path from 'node:path';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { csvNumberCell, csvTextCell, propertiesCsv } from '../../core/export/csv.ts';
-import { PROPERTY_ROWS } from '../../core/export/rows.ts';
+import { PROPERTY_CATALOGUE } from '../../core/properties/catalogue.ts';
 import type { SectionDocument } from '../../core/document/types.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
 import { circle, document, rectangle } from './sections.ts';
@@ -47,7 +47,7 @@ describe('CSV export', () => {
     const doc = document('gusset with hole', [rectangle('p', 'gusset', 4, 6), circle('h', 'hole', 1.3, 0.7, -1.1, 'subtract')]);
     const properties = sectionFromDocument(doc).properties;
     const row = parsed(csvOf(doc));
-    for (const r of PROPERTY_ROWS) {
+    for (const r of PROPERTY_CATALOGUE) {
       const header = Object.keys(row).find((h) => h.startsWith(`${r.key} [`)) ?? '';
       expect(Number(row[header])).toBe(properties?.[r.key]);
     }
@@ -62,7 +62,7 @@ describe('CSV export', () => {
       const cli = path.join(import.meta.dirname, '..', '..', 'cli', 'sectionsmith.mjs');
       const json = JSON.parse(execFileSync(process.execPath, [cli, 'props', file, '--json'], { encoding: 'utf8' })) as Record<string, unknown>;
       const row = parsed(csvOf(doc));
-      for (const r of PROPERTY_ROWS) {
+      for (const r of PROPERTY_CATALOGUE) {
         const header = Object.keys(row).find((h) => h.startsWith(`${r.key} [`)) ?? '';
         expect([r.key, Number(row[header])]).toEqual([r.key, json[r.key]]);
       }

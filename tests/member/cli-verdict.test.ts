@@ -47,13 +47,13 @@ describe('sectionsmith member: the verdict covers every criterion', () => {
     expect(r.out).toMatch(/default factor 1 is the strength itself/);
   });
 
-  it('--json: verdict.criteria carry demand, limit (ksi → psi output) and ratio; the bending ratio is 1.82 within 1.5 %', () => {
+  it('--json: verdict.criteria carry demand, limit (ksi, the inch document\'s stress unit) and ratio; the bending ratio is 1.82 within 1.5 %', () => {
     const r = run({ 'w.json': w14x90 }, ['w.json'], { span: '360', support: 'simple', uniform: `${overload}kip/in`, json: true });
     const j = JSON.parse(r.out) as { verdict: { passes: boolean; governing: string; criteria: { kind: string; ratio: number; limit: number }[] } };
     expect(j.verdict.passes).toBe(false);
     const bending = j.verdict.criteria.find((c) => c.kind === 'bending')!;
     expect(Math.abs(bending.ratio / 1.82 - 1)).toBeLessThan(0.015);
-    expect(bending.limit).toBeCloseTo(50_000, 6); // 1 × fy, psi
+    expect(bending.limit).toBeCloseTo(50, 9); // 1 × fy, ksi
   });
 
   it('a light load passes every criterion: exit 0; live L/360 and total L/240 both judged when --live is given', () => {

@@ -34,7 +34,8 @@ describe('sectionsmith member (command line)', () => {
     expect(rel(j.deflectionMax as number, refValue(refs, 'beam_deflection', 'simply_supported_centre_load'))).toBeLessThan(1e-12);
     expect(rel(j.deflectionAt as number, 3000)).toBeLessThan(1e-12);
     expect(rel(j.spanOverDeflection as number, 6000 / 5.625)).toBeLessThan(1e-12);
-    expect(rel(j.momentMax as number, (20_000 * 6000) / 4)).toBeLessThan(1e-12); // P L / 4 in N·mm
+    expect(rel(j.momentMax as number, (20 * 6) / 4)).toBeLessThan(1e-12); // P L / 4 = 30 kN·m (a metric document reports kN·m)
+    expect((j.units as Record<string, string>).momentMax).toBe('kN·m');
     expect(j.caution).toMatch(/licensed engineer/);
     const limit = j.limit as { allowed: number; passes: boolean };
     expect(rel(limit.allowed, refValue(refs, 'beam_deflection', 'limit_L_over_360'))).toBeLessThan(1e-12);
@@ -76,12 +77,15 @@ describe('sectionsmith member (command line)', () => {
     expect(r.err).toBe('');
     const j = JSON.parse(r.out) as Record<string, unknown>;
     const EI = 1.6e6 * 610.7734375; // lbf·in²
-    expect(rel(j.EI as number, EI)).toBeLessThan(1e-12);
+    const units = j.units as Record<string, string>;
+    expect([units.EI, units.deflectionMax, units.momentMax, units['stresses[].maxTension']]).toEqual(['kip·in²', 'in', 'kip·ft', 'ksi']);
+    expect(rel(j.EI as number, EI / 1000)).toBeLessThan(1e-12);
     expect(rel(j.deflectionMax as number, (1000 * 168 ** 3) / (48 * EI))).toBeLessThan(1e-12);
-    expect((j.units as { stress: string }).stress).toBe('psi');
-    // plate stress n·M·c/I_tr = 18.125 · 42000 · 4.5 / 610.7734375 psi
+    // P L / 4 = 1000 lbf · 168 in / 4 = 42000 lbf·in = 3.5 kip·ft
+    expect(rel(j.momentMax as number, 3.5)).toBeLessThan(1e-12);
+    // plate stress n·M·c/I_tr = 18.125 · 42000 · 4.5 / 610.7734375 psi, in ksi
     const plate = (j.stresses as { material: string; maxTension: number }[]).find((s) => s.material.startsWith('plate'))!;
-    expect(rel(plate.maxTension, (18.125 * 42_000 * 4.5) / 610.7734375)).toBeLessThan(1e-12);
+    expect(rel(plate.maxTension, (18.125 * 42_000 * 4.5) / 610.7734375 / 1000)).toBeLessThan(1e-12);
   });
 
   it('without a modulus a GeoJSON shape is refused with a message naming --E', () => {

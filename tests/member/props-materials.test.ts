@@ -23,17 +23,18 @@ const strip = JSON.stringify({
 });
 
 describe('sectionsmith props with materials (bimaterial strip; methods note §6 values)', () => {
-  it('adds EA = 1.7e8 N, EIx in N·mm², y_E = 190/17 mm, mass 6.625 kg/m and weight g·m N/m', () => {
+  it('adds EA = 1.7e5 kN, EIx in kN·m², y_E = 190/17 mm, mass 6.625 kg/m and weight as mass 6.625 kg/m, each key with its unit', () => {
     const r = run(strip, { json: true });
     expect(r.err).toBe('');
-    const j = JSON.parse(r.out) as Record<string, number>;
-    expect(rel(j.EA!, 1.7e8)).toBeLessThan(1e-12);
+    const j = JSON.parse(r.out) as Record<string, number> & { units: Record<string, string> };
+    expect(rel(j.EA!, 1.7e5)).toBeLessThan(1e-12); // 1.7e8 N
     const yE = 190 / 17;
-    const EIx = 200_000 * (50 * 1000 / 12 + 500 * (5 - yE) ** 2) + 70_000 * (50 * 8000 / 12 + 1000 * (20 - yE) ** 2);
-    expect(rel(j.EIx!, EIx)).toBeLessThan(1e-12);
+    const EIx = 200_000 * (50 * 1000 / 12 + 500 * (5 - yE) ** 2) + 70_000 * (50 * 8000 / 12 + 1000 * (20 - yE) ** 2); // N·mm²
+    expect(rel(j.EIx!, EIx / 1e9)).toBeLessThan(1e-12); // 1 kN·m² = 1e9 N·mm²
     expect(rel(j.cyE!, yE)).toBeLessThan(1e-12);
     expect(rel(j.massPerLength!, 6.625)).toBeLessThan(1e-12);
-    expect(rel(j.weightPerLength!, 6.625 * 9.80665)).toBeLessThan(1e-12);
+    expect(rel(j.weightPerLength!, 6.625)).toBeLessThan(1e-12);
+    expect([j.units.EA, j.units.EIx, j.units.cyE, j.units.massPerLength, j.units.weightPerLength, j.units.eRef, j.units.Ix, j.units.area]).toEqual(['kN', 'kN·m²', 'mm', 'kg/m', 'kg/m', 'MPa', 'mm⁴', 'mm²']);
     expect(rel(j.transformedArea!, 850)).toBeLessThan(1e-12); // E_ref = steel (first part)
   });
 
@@ -51,8 +52,8 @@ describe('sectionsmith props with materials (bimaterial strip; methods note §6 
 
   it('the table shows EA and weightPerLength rows with units, and the caution', () => {
     const r = run(strip, {});
-    expect(r.out).toMatch(/EA\s+170,000,000\s+N/);
-    expect(r.out).toMatch(/weightPerLength\s+64\.969\d*\s+N\/m/);
+    expect(r.out).toMatch(/EA\s+170,000\s+kN/);
+    expect(r.out).toMatch(/weightPerLength\s+6\.625\d*\s+kg\/m/);
     expect(r.out).toMatch(/licensed engineer/);
   });
 });

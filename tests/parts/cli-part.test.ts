@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { partCommand, parseDimension } from '../../cli/commands/part.ts';
-import { PROPERTY_QUANTITY } from '../../cli/commands/props.ts';
+import { PROPERTY_CATALOGUE } from '../../core/properties/catalogue.ts';
 import { CAUTION } from '../../cli/command.ts';
 
 async function run(positionals: string[], flags: Record<string, string | boolean> = {}): Promise<{ code: number; out: string; err: string }> {
@@ -32,7 +32,8 @@ describe('sectionsmith part', () => {
 
   it('round-bar d=2: JSON has every props key, Ix = πd⁴/64 = π/4 (Gere & Timoshenko, App. D) and the caution', async () => {
     const j = await runJson(['round-bar', 'd=2']);
-    for (const key of Object.keys(PROPERTY_QUANTITY)) expect(j, key).toHaveProperty(key);
+    for (const key of [...PROPERTY_CATALOGUE.map((r) => r.key), 'isotropic']) expect(j, key).toHaveProperty(key);
+    expect((j['units'] as Record<string, string>)['Ix']).toBe('in⁴');
     expect(Math.abs((j['Ix'] as number) / (Math.PI / 4) - 1)).toBeLessThan(1e-12);
     expect(j['caution']).toBe(CAUTION);
     expect(j['part']).toBe('round-bar');

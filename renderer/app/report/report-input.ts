@@ -11,8 +11,8 @@
  * Pure: no DOM, no clock (the caller passes the date).
  */
 import type { SectionDocument } from '../../../core/document/types.ts';
-import { PROPERTY_ROWS, sectionSvg } from '../../../core/export/index.ts';
-import { displayedValue } from '../../../core/export/rows.ts';
+import { sectionSvg } from '../../../core/export/index.ts';
+import { shownValue as withoutResidue } from '../../../core/properties/catalogue.ts';
 import { materialPiecesFromDocument, newtonsTo, pascalsTo, type ForceUnit, type StressUnit } from '../../../core/materials/index.ts';
 import { LIMIT_CAUTION, sectionMemberCheck, type SectionMemberInput, type Support } from '../../../core/member/index.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
@@ -65,9 +65,8 @@ export function forceUnitsFor(unit: LengthUnit): ForceUnits {
 const SUPPORT_WORDS: Readonly<Record<Support, string>> = { simple: 'simply supported', cantilever: 'cantilever fixed at the left end', fixed: 'fixed at both ends', propped: 'propped cantilever' };
 
 function shownValue(row: ResultRow, p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): [string, string] {
-  const propertyRow = PROPERTY_ROWS.find((r) => r.key === row.key);
   const raw = p[row.key];
-  const value = propertyRow ? displayedValue(propertyRow, p) : typeof raw === 'number' ? raw : NaN;
+  const value = typeof raw === 'number' ? withoutResidue(row.quantity, raw, p) : NaN;
   if (row.quantity === 'angle') return [formatSig(value, sig), 'deg'];
   if (row.quantity === 'ratio') return [formatSig(value, sig), '–'];
   const d = display[row.quantity];
