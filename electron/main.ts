@@ -100,6 +100,7 @@ const EXPORT_FILTERS: Readonly<Record<string, { name: string; extensions: string
   'text/html': { name: 'HTML report', extensions: ['html'] },
   'application/json': { name: 'JSON', extensions: ['json'] },
   'text/plain': { name: 'Text', extensions: ['txt'] },
+  'application/dxf': { name: 'DXF drawing', extensions: ['dxf'] },
 };
 
 function registerHandlers(): void {
@@ -109,7 +110,7 @@ function registerHandlers(): void {
       title: 'Open a section',
       defaultPath: defaultFolder(),
       properties: ['openFile'],
-      filters: [{ name: 'Sectionsmith section or GeoJSON', extensions: ['json', 'geojson'] }, { name: 'All files', extensions: ['*'] }],
+      filters: [{ name: 'Sectionsmith section, GeoJSON or DXF drawing', extensions: ['json', 'geojson', 'dxf'] }, { name: 'All files', extensions: ['*'] }],
     });
     const chosen = choice.filePaths[0];
     return choice.canceled || !chosen ? null : readDocumentFile(chosen);

@@ -31,7 +31,7 @@ const settingKey = v.pipe(
 const settingValue = v.nullable(v.pipe(v.string('text or null'), v.maxLength(SETTING_VALUE_MAX, `a setting of at most ${SETTING_VALUE_MAX} characters`)));
 const shortText = v.pipe(v.string('text'), v.maxLength(500, 'text of at most 500 characters'));
 
-export const EXPORT_MIME_TYPES = ['image/svg+xml', 'text/csv', 'text/html', 'application/json', 'text/plain'] as const;
+export const EXPORT_MIME_TYPES = ['image/svg+xml', 'text/csv', 'text/html', 'application/json', 'text/plain', 'application/dxf'] as const;
 
 /** A report of core/report: a whole HTML document, and never a script (the PDF window runs none either). */
 const reportHtml = v.pipe(

@@ -16,6 +16,7 @@ export interface CommandTarget {
   openLaunchFile(): Promise<void>;
   save(as: boolean): Promise<void>;
   exportAs(kind: 'svg' | 'csv'): Promise<void>;
+  exportDxf(): Promise<void>;
   zoomBy(factor: number): void;
   fit(): void;
   show(view: ShownView): void;
@@ -53,6 +54,7 @@ export const COMMANDS = {
   'save-as': { label: 'Save as…', run: (t) => t.save(true) },
   'export-svg': { label: 'Export drawing (SVG)…', run: (t) => t.exportAs('svg') },
   'export-csv': { label: 'Export properties (CSV)…', run: (t) => t.exportAs('csv') },
+  'export-dxf': { label: 'Export drawing for CAD and cutting (DXF)…', run: (t) => t.exportDxf() },
   compare: { label: 'Compare alternatives…', run: (t) => t.show('compare') },
   'print-report': { label: 'Print report…', run: (t) => t.show('print-report') },
   'check-table': { label: 'Check a section table (CSV)…', run: (t) => t.show('check-table') },

@@ -21,6 +21,8 @@ import { scaleDocumentLengths, uniquePartId } from '../editor/transforms.ts';
 import type { Host, HostCommand, RecoveryCopy } from '../host/host.ts';
 import { COMMANDS, isCommandId, type CommandId, type CommandTarget, type ShownView } from './commands.ts';
 import { documentFromText } from './files.ts';
+import { documentFromDxf, importDxf, looksLikeDxf, sectionDxf, cutParts, summariseDxf, type DxfSummary } from '../../core/dxf/index.ts';
+import { CAUTION } from '../../core/member/check.ts';
 import { keyAction, type KeyInput } from './keymap.ts';
 import { createResultsCache, shapeOutlineResolver, type Results } from './results.ts';
 import type { TorsionState } from './torsion-client.ts';
@@ -84,6 +86,21 @@ export interface AppState {
   readonly clipboardParts: number;
   /** The host's recent files (File menu), newest first; read again when the menu opens. */
   readonly recent: readonly { readonly name: string; readonly handle: string }[];
+  /** A DXF drawing waiting for the user's choices (unit, layers, parts) before it is imported, or null. */
+  readonly dxf: DxfPrompt | null;
+}
+
+/** What the DXF import dialog shows and the user chooses; the open document is untouched until Import. */
+export interface DxfPrompt {
+  readonly name: string;
+  readonly text: string;
+  readonly summary: DxfSummary;
+  /** The drawing's unit: the file's ($INSUNITS) when it has one, else the user's choice. */
+  readonly unit: LengthUnit;
+  readonly layers: readonly string[];
+  readonly grouping: 'parts' | 'one';
+  /** Why the last Import failed (entity, handle, layer, what is wrong), if it did. */
+  readonly errors: readonly string[];
 }
 
 /** One timer source (window's in the app; fake ones in tests). */
@@ -162,6 +179,7 @@ export class AppController implements CommandTarget {
       asking: null,
       clipboardParts: 0,
       recent: [],
+      dxf: null,
     };
     this.torsionRunner = deps.torsion((torsion) => this.set({ torsion }));
     this.attach();
@@ -413,8 +431,55 @@ export class AppController implements CommandTarget {
     answer?.(yes);
   }
 
+  /**
+   * A DXF drawing: read its unit and layers, and ask (the shell's DXF dialog) which layers, which
+   * unit when the file has none, and one part per loop or loops united; nothing changes until Import.
+   */
+  openDxf(text: string, name: string): boolean {
+    const s = summariseDxf(text);
+    if (!s.ok) {
+      this.error(`Could not open ${name}. The current document is unchanged.`, [s.message]);
+      return false;
+    }
+    const unit = s.summary.unit ?? this.editor.getState().doc.unit;
+    this.set({ dxf: { name, text, summary: s.summary, unit, layers: s.summary.layers.map((l) => l.name), grouping: 'parts', errors: [] } });
+    return true;
+  }
+
+  /** The user changed a choice in the DXF dialog. */
+  chooseDxf(patch: Partial<Pick<DxfPrompt, 'unit' | 'layers' | 'grouping'>>): void {
+    const d = this.state.dxf;
+    if (d) this.set({ dxf: { ...d, ...patch, errors: [] } });
+  }
+
+  cancelDxf(): void {
+    this.set({ dxf: null });
+  }
+
+  /** Import the drawing with the choices made; errors stay in the dialog and the document is unchanged. */
+  importChosenDxf(): boolean {
+    const d = this.state.dxf;
+    if (!d) return false;
+    if (d.layers.length === 0) {
+      this.set({ dxf: { ...d, errors: ['Choose at least one layer.'] } });
+      return false;
+    }
+    const all = d.layers.length === d.summary.layers.length;
+    const r = importDxf(d.text, { unit: d.unit, grouping: d.grouping, ...(all ? {} : { layers: d.layers }) });
+    if (!r.ok) {
+      this.set({ dxf: { ...d, errors: r.errors.map((e) => e.message) } });
+      return false;
+    }
+    const made = documentFromDxf(r.value, d.name.replace(/\.dxf$/i, '') || 'Imported drawing', d.grouping);
+    this.set({ dxf: null });
+    this.loadDoc(made.file, { name: d.name, handle: null });
+    this.note(`Imported ${d.name}: ${made.file.sections[0]?.parts.length ?? 0} part(s), unit ${r.value.unit}`, [...r.value.notes, ...made.notes]);
+    return true;
+  }
+
   /** Open text as a document; bad text leaves the current document as it was and says why. */
   openText(text: string, name: string, handle: string | null): boolean {
+    if (/\.dxf$/i.test(name) || looksLikeDxf(text)) return this.openDxf(text, name);
     const r = documentFromText(text, name, this.editor.getState().doc.unit);
     if (!r.ok) {
       this.error(`Could not open ${name}. The current document is unchanged.`, r.errors);
@@ -490,6 +555,24 @@ export class AppController implements CommandTarget {
       this.note(`Saved ${r.name}`);
     } catch (err) {
       this.error('The document was not saved.', [errorText(err)]);
+    }
+  }
+
+  /** The section as a DXF drawing: outline, each part laid flat for cutting, centroid, axes and a property table with the caution. */
+  async exportDxf(): Promise<void> {
+    const st = this.editor.getState();
+    const section = sectionFromDocument(st.doc);
+    if (!section.properties) {
+      this.error('Nothing was exported: the section has no valid properties.', section.diagnostics.map((d) => d.message));
+      return;
+    }
+    const base = (st.file?.name ?? st.doc.name).replace(/\.(section\.json|geojson|json|dxf)$/i, '').replace(/[^\w.-]+/g, '-') || 'section';
+    const text = sectionDxf({ name: st.doc.name, unit: st.doc.unit, region: section.region, properties: section.properties, parts: cutParts(st.doc), centroid: true, axes: true, table: true, caution: CAUTION });
+    const file = { suggestedName: `${base}.dxf`, mimeType: 'application/dxf', text };
+    try {
+      if (await this.host.exportFile(file)) this.note(`Exported ${file.suggestedName}`, ['Layers: SECTION (outline), PART-… (each part laid flat, for cutting), CENTROID, PRINCIPAL-AXES, PROPERTIES (with the caution).']);
+    } catch (err) {
+      this.error(`Export of ${file.suggestedName} failed.`, [errorText(err)]);
     }
   }
 

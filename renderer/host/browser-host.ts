@@ -47,7 +47,7 @@ export const SETTINGS_PREFIX = 'sectionsmith.setting.';
 const RECENT_LIMIT = 10;
 const HANDLE_DB = 'sectionsmith-file-handles';
 
-const DOCUMENT_TYPES: PickerType[] = [{ description: 'Sectionsmith section or GeoJSON', accept: { 'application/json': ['.json', '.geojson'] } }];
+const DOCUMENT_TYPES: PickerType[] = [{ description: 'Sectionsmith section or GeoJSON', accept: { 'application/json': ['.json', '.geojson'] } }, { description: 'DXF drawing', accept: { 'application/dxf': ['.dxf'] } }];
 const TABLE_TYPES: PickerType[] = [{ description: 'Table of shapes (CSV)', accept: { 'text/csv': ['.csv'], 'text/plain': ['.txt'] } }];
 const SAVE_TYPES: PickerType[] = [{ description: 'Sectionsmith section', accept: { 'application/json': ['.json'] } }];
 const EXPORT_TYPES: Readonly<Record<string, PickerType>> = {
@@ -56,6 +56,7 @@ const EXPORT_TYPES: Readonly<Record<string, PickerType>> = {
   'text/html': { description: 'HTML report', accept: { 'text/html': ['.html'] } },
   'application/json': { description: 'JSON', accept: { 'application/json': ['.json'] } },
   'text/plain': { description: 'Text', accept: { 'text/plain': ['.txt'] } },
+  'application/dxf': { description: 'DXF drawing', accept: { 'application/dxf': ['.dxf'] } },
 };
 
 export interface BrowserHost extends Host {
@@ -261,7 +262,7 @@ function download(win: Window & typeof globalThis, name: string, mimeType: strin
   win.setTimeout(() => win.URL.revokeObjectURL(url), 60_000);
 }
 
-function openWithInput(win: Window, accept = '.json,.geojson,application/json,application/geo+json'): Promise<OpenedFile | null> {
+function openWithInput(win: Window, accept = '.json,.geojson,.dxf,application/json,application/geo+json'): Promise<OpenedFile | null> {
   return new Promise((resolve, reject) => {
     const input = win.document.createElement('input');
     input.type = 'file';

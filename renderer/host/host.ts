@@ -36,7 +36,7 @@ export interface ExportFile {
  * the user had used its own buttons or keys.
  */
 export const HOST_COMMANDS = [
-  'new', 'open', 'save', 'save-as', 'export-svg', 'export-csv', 'compare', 'print-report', 'check-table',
+  'new', 'open', 'save', 'save-as', 'export-svg', 'export-csv', 'export-dxf', 'compare', 'print-report', 'check-table',
   'undo', 'redo', 'delete', 'zoom-in', 'zoom-out', 'zoom-fit', 'open-example', 'open-launch-file',
 ] as const;
 export type HostCommand = (typeof HOST_COMMANDS)[number];

@@ -10,6 +10,9 @@ import { COMMAND_IDS, type CommandId } from '../../renderer/controller/commands.
 import { DISPLAY_SETTING, EXAMPLE_NAME, NOTE_LIFETIME_MS, RECOVERY_DELAY_MS, SEEN_EXAMPLE_SETTING, TORSION_DELAY_MS } from '../../renderer/controller/controller.ts';
 import { KEY_BINDINGS, type KeyInput } from '../../renderer/controller/keymap.ts';
 import { EXAMPLE_TEXT, rig, settle, type Rig } from './fakes.ts';
+import { importDxf } from '../../core/dxf/index.ts';
+import { sectionProperties } from '../../core/properties/index.ts';
+import { readFileSync } from 'node:fs';
 
 const key = (k: string, o: Partial<KeyInput> = {}): KeyInput => ({ key: k, mod: false, shift: false, alt: false, typing: false, ...o });
 
@@ -376,6 +379,17 @@ const COMMAND_CASES: Record<CommandId, () => Promise<void>> = {
     expect(r.host.exported[0]?.suggestedName).toBe('Untitled-section.csv');
     expect(r.host.exported[0]?.mimeType).toBe('text/csv');
   },
+  async 'export-dxf'() {
+    const r = withPlate();
+    await r.c.run('export-dxf');
+    const file = r.host.exported[0];
+    expect(file?.suggestedName).toBe('Untitled-section.dxf');
+    expect(file?.mimeType).toBe('application/dxf');
+    // Read back through the importer: the 100 × 20 plate, A = b·h = 2000 (exact arithmetic).
+    const back = importDxf(file?.text ?? '', { layers: ['SECTION'] });
+    expect(back.ok && sectionProperties(back.value.polygons.map((p) => ({ outer: p.outer, holes: p.holes }))).area).toBe(2000);
+    expect(file?.text).toContain('PART-');
+  },
   async compare() {
     const r = rig();
     await r.c.run('compare');
@@ -526,6 +540,49 @@ const COMMAND_CASES: Record<CommandId, () => Promise<void>> = {
     expect(placed(r)).toEqual([['part-1', 0, -10]]);
   },
 };
+
+describe('opening a DXF drawing', () => {
+  const dxf = (name: string): string => readFileSync(new URL(`../fixtures/dxf/${name}`, import.meta.url), 'utf8');
+
+  it('asks for layers and unit first, and leaves the document untouched until Import', () => {
+    const r = withPlate();
+    const before = r.c.editor.getState().doc;
+    expect(r.c.openText(dxf('two-layers.dxf'), 'plates.dxf', 'h-9')).toBe(true);
+    const prompt = r.c.getState().dxf;
+    expect(prompt?.summary.layers.map((l) => l.name)).toEqual(['FLANGE', 'OTHER', 'WEB']);
+    expect(prompt?.unit).toBe('mm');
+    expect(r.c.editor.getState().doc).toBe(before);
+    r.c.chooseDxf({ layers: ['FLANGE', 'WEB'], grouping: 'one' });
+    expect(r.c.importChosenDxf()).toBe(true);
+    const doc = r.c.editor.getState().doc;
+    expect(doc.unit).toBe('mm');
+    expect(doc.parts).toHaveLength(1);
+    // Imported, not opened: saving it is a Save As (no handle to write a DXF back to).
+    expect(r.c.editor.getState().file?.handle).toBeNull();
+    expect(r.c.getState().dxf).toBeNull();
+  });
+
+  it('a drawing without a unit takes the unit chosen in the dialog', () => {
+    const r = rig();
+    r.c.openText(dxf('error-no-unit.dxf'), 'plain.dxf', null);
+    expect(r.c.getState().dxf?.summary.unit).toBeNull();
+    r.c.chooseDxf({ unit: 'in' });
+    expect(r.c.importChosenDxf()).toBe(true);
+    expect(r.c.editor.getState().doc.unit).toBe('in');
+  });
+
+  it('an import error stays in the dialog, naming the entity, and the document is unchanged', () => {
+    const r = withPlate();
+    const before = r.c.editor.getState().doc;
+    r.c.openText(dxf('error-open-chain.dxf'), 'open.dxf', null);
+    expect(r.c.importChosenDxf()).toBe(false);
+    expect(r.c.getState().dxf?.errors[0]).toMatch(/LINE handle [0-9A-F]+ on layer "PROFILE".*does not close/);
+    expect(r.c.editor.getState().doc).toBe(before);
+    r.c.cancelDxf();
+    expect(r.c.getState().dxf).toBeNull();
+    expect(r.c.editor.getState().doc).toBe(before);
+  });
+});
 
 describe('every command by id', () => {
   for (const id of COMMAND_IDS) it(id, () => COMMAND_CASES[id]());

@@ -15,6 +15,7 @@ import { Canvas } from '../canvas/Canvas.tsx';
 import { EntryPanel, SelectionPanel } from '../parts/EntryPanel.tsx';
 import { MenuBar } from './MenuBar.tsx';
 import { ShortcutSheet } from './ShortcutSheet.tsx';
+import { DxfImportDialog } from './DxfImportDialog.tsx';
 import { PartsPanel } from '../parts/PartsPanel.tsx';
 import { PartsPalette } from '../parts/PartsPalette.tsx';
 import { ResultsPanel } from '../results/ResultsPanel.tsx';
@@ -170,7 +171,20 @@ export function App({ controller: given }: { readonly controller?: AppController
           <PartsPalette editor={editor} state={state} onPlaced={() => controller.fit()} />
           <EntryPanel editor={editor} state={state} />
         </aside>
-        <main className="drawing">
+        <main
+          className="drawing"
+          data-testid="drawing-drop"
+          onDragOver={(e) => {
+            if (e.dataTransfer.types.includes('Files')) e.preventDefault();
+          }}
+          onDrop={(e) => {
+            // A file dropped on the drawing opens as if chosen with File → Open (a DXF asks for layers and unit first).
+            const file = e.dataTransfer.files[0];
+            if (!file) return;
+            e.preventDefault();
+            void file.text().then((text) => controller.openGiven(text, file.name));
+          }}
+        >
           <SectionsBar editor={editor} state={state} />
           <Canvas
             editor={editor}
@@ -254,6 +268,7 @@ export function App({ controller: given }: { readonly controller?: AppController
       {app.shown === 'check-table' && <CheckView host={getHost()} onClose={() => controller.show(null)} />}
       {app.shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} fileTitle={state.sectionFile.name} display={display} sig={app.sig} torsion={torsion} member={memberCase} onClose={() => controller.show(null)} />}
       {app.shown === 'shortcuts' && <ShortcutSheet onClose={() => controller.show(null)} />}
+      {app.dxf !== null && <DxfImportDialog prompt={app.dxf} controller={controller} />}
       {app.asking !== null && (
         <div className="modal-back">
           <div className="modal" role="dialog" aria-modal="true" data-testid="confirm-discard">

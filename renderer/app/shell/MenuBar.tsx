@@ -120,6 +120,7 @@ export function MenuBar(props: Props): ReactElement {
           <hr />
           {item('export-svg', 'Export drawing (SVG)…')}
           {item('export-csv', 'Export properties (CSV)…')}
+          {item('export-dxf', 'Export drawing for CAD and cutting (DXF)…')}
           <hr />
           {item('compare', 'Compare alternatives…')}
           {item('print-report', 'Print report…')}
@@ -183,7 +184,7 @@ export function MenuBar(props: Props): ReactElement {
         ref={fileInput}
         className="file-input"
         type="file"
-        accept=".json,.geojson,application/json"
+        accept=".json,.geojson,.dxf,application/json"
         data-testid="open-document"
         onChange={(e) => {
           const f = e.target.files?.[0];
