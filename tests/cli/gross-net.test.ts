@@ -94,6 +94,6 @@ describe('props --shear: the joints and their q', () => {
 
   it('a bad --shear names the flag', async () => {
     const r = await cli('props', write(), '--shear', 'lots');
-    expect([r.code, r.err.trim().endsWith('--shear: "lots" is not a number with an optional unit')]).toEqual([2, true]);
+    expect([r.code, r.err.trim().startsWith('--shear: "lots" is not a number')]).toEqual([2, true]);
   });
 });
