@@ -129,9 +129,9 @@ export async function aColumnCorrectedByDropdownIsUsedRememberedAndSavedForTheCo
   const rows = cells();
   const keep = ['label', 'shape_type', 'd_in', 'bf_in', 'tw_in', 'tf_in', 'kdes_in', 'A_in2', 'Ix_in4'];
   const idx = keep.map((h) => rows[0].indexOf(h));
-  const table = Papa.unparse([['label', 'shape_type', 'Overall depth', ...keep.slice(3)], ...rows.slice(1).filter((r) => /^W\d/.test(r[0])).map((r) => idx.map((i) => r[i]))]);
+  const table = Papa.unparse([['label', 'shape_type', 'Column 3', ...keep.slice(3)], ...rows.slice(1).filter((r) => /^W\d/.test(r[0])).map((r) => idx.map((i) => r[i]))]);
   await importTable(page, 'w-renamed.csv', table);
-  check((await page.getByTestId('map-target-2').inputValue()) === 'ignore', '"Overall depth" is not detected');
+  check((await page.getByTestId('map-target-2').inputValue()) === 'ignore', '"Column 3" is not detected');
   const before = await runCheck(page);
   check(before.flagged === 7, `without d no W row can be built: 7 flagged, got ${JSON.stringify(before)}`);
   await page.getByTestId('map-target-2').selectOption('d');
@@ -144,8 +144,8 @@ export async function aColumnCorrectedByDropdownIsUsedRememberedAndSavedForTheCo
   // The mapping saved as JSON is the command line's --mapping file: the same table passes there too.
   const saved = await downloadText(page, artifactsDir, () => page.getByTestId('check-save-mapping').click());
   check(saved.name === 'w-renamed-mapping.json', `mapping file name, got ${saved.name}`);
-  const depth = JSON.parse(saved.text).columns.find((c) => c.header === 'Overall depth');
-  check(depth?.role === 'dimension' && depth.symbol === 'd' && depth.unit === 'in', `saved mapping reads "Overall depth" as d in inches, got ${JSON.stringify(depth)}`);
+  const depth = JSON.parse(saved.text).columns.find((c) => c.header === 'Column 3');
+  check(depth?.role === 'dimension' && depth.symbol === 'd' && depth.unit === 'in', `saved mapping reads "Column 3" as d in inches, got ${JSON.stringify(depth)}`);
   const csv = path.join(artifactsDir, 'w-renamed.csv');
   writeFileSync(csv, table);
   const cli = spawnSync('node', [path.join(here, '..', '..', 'cli', 'sectionsmith.mjs'), 'check', csv, '--mapping', saved.file, '--tolerance', '1.5%', '--tolerance', 'A=1%'], { encoding: 'utf8' });
@@ -157,7 +157,7 @@ export async function aColumnCorrectedByDropdownIsUsedRememberedAndSavedForTheCo
   await page.getByTestId('menu-file').waitFor({ timeout: 20_000 });
   await menuItem(page, 'File', 'check-table');
   await importTable(page, 'w-renamed-again.csv', table);
-  check((await page.getByTestId('map-target-2').inputValue()) === 'd', 'the remembered mapping reads "Overall depth" as d');
+  check((await page.getByTestId('map-target-2').inputValue()) === 'd', 'the remembered mapping reads "Column 3" as d');
   await page.getByTestId('check-forget').click();
   check((await page.getByTestId('map-target-2').inputValue()) === 'ignore', 'forgetting returns to detection');
 }
@@ -167,11 +167,12 @@ export async function badTablesGetAMessageNamingTheRowAndColumn({ page, baseUrl 
   await importTable(page, 'nan.csv', corrupted([['W8X31', 'A_in2', 'abc']]));
   const r = await runCheck(page);
   check(/row 1 \(W8X31\), column "A_in2": "abc" is not a number/.test(r.error ?? ''), `non-numeric cell named, got ${JSON.stringify(r)}`);
-  // No type column and no type chosen: the message says to choose one.
+  // No type column: each row's family comes from its designation (W…, HP…, L…), and the
+  // published rows pass at the families' default tolerances, as on the command line.
   const noType = Papa.unparse(cells().map((row) => row.filter((_, i) => i !== 1)));
   await importTable(page, 'no-type.csv', noType);
   const t = await runCheck(page);
-  check(/no type column/.test(t.error ?? '') && /choose the shape type/.test(t.error ?? ''), `missing type named, got ${JSON.stringify(t)}`);
+  check(t.error === undefined && t.checked === 23 && t.flagged === 0, `families from the designations, all 23 published rows pass, got ${JSON.stringify(t)}`);
   // An unterminated quote is refused at import, naming the CSV problem.
   const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByTestId('check-import').click()]);
   await chooser.setFiles({ name: 'quote.csv', mimeType: 'text/csv', buffer: Buffer.from('label,shape_type,A_in2\n"W8X31,W,9.13\n') });

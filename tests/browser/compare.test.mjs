@@ -89,7 +89,7 @@ export async function comparisonExportsCsvAndSvgWithTheCautionAndPrintsAReport({
   await twoPlates(page, baseUrl);
   const csv = await downloadText(page, artifactsDir, () => page.getByTestId('compare-export-csv').click());
   check(csv.name.endsWith('-comparison.csv'), `CSV name: got ${csv.name}`);
-  check(csv.text.split('\r\n')[0].includes('Ix [mm^4]'), 'CSV header has Ix with its unit');
+  check(csv.text.split('\r\n')[0].includes('Ix (geometric) [mm^4]'), 'CSV header has Ix, says which Ix it is, with its unit');
   check(csv.text.includes('Deep plate 50 x 400') && /licensed engineer/.test(csv.text), 'CSV has both rows and the caution');
   // Ix of 50 × 400 at full precision in mm⁴: 50·400³/12 = 266666666.66…
   const deepLine = csv.text.split('\r\n').find((l) => l.startsWith('Deep plate'));
@@ -117,7 +117,7 @@ export async function comparisonReportPrintsWithBothTablesWholeAndTheCaution({ p
   const flat = (t) => t.normalize('NFKC').replace(/\s+/g, '');
   check(pages.length <= 3, `comparison report: expected at most 3 pages, got ${pages.length}`);
   check(flat(pages.at(-1).text).includes(flat('verify with a licensed engineer and the local building code, which govern.')), 'caution on the last page');
-  for (const title of ['Properties (ratio to', 'Efficiency, stiffness, weight and deflection', 'Targets']) {
+  for (const title of ['Properties (ratio to', 'Efficiency, stiffness, weight, deflection and stress', 'Targets']) {
     check(pages.some((p) => flat(p.text).includes(flat(title))), `comparison report has "${title}"`);
   }
 }

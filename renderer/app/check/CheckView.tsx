@@ -8,7 +8,7 @@
  */
 import { useEffect, useMemo, useRef, useState, type ReactElement } from 'react';
 import {
-  CAUTION, CHECKED_PROPERTIES, DEFAULT_TOLERANCE, MappingError, mapColumns, parseTable, parseTolerances, roleFromTarget, splitHeader, TABLE_FAMILIES, TableInputError, tableCheckCsv,
+  CAUTION, CHECKED_PROPERTIES, MappingError, mapColumns, parseTable, parseTolerances, roleFromTarget, splitHeader, TABLE_FAMILIES, TableInputError, tableCheckCsv,
   type ColumnMapping, type RowCheck, type TableCheck, type TableFamily, type Tolerances,
 } from '../../../core/check/index.ts';
 import { formatSig, LENGTH_UNITS, type LengthUnit } from '../../../core/units/index.ts';
@@ -36,9 +36,13 @@ interface Props {
   readonly onClose: () => void;
 }
 
-/** Tolerance text of the view: "1%" for the default, "Zx=2%, MC:Iy=7%" for the rest (core/check tolerance.ts). */
+/**
+ * Tolerance text of the view: empty for each family's own default (as the command line with no
+ * --tolerance: the defaults under which the published AISC rows pass), "1.5%" for one base for
+ * all, "Zx=2%, MC:Iy=7%" for the rest (core/check tolerance.ts).
+ */
 function tolerancesOf(base: string, extra: string): Tolerances {
-  const specs = [base.trim() === '' ? `${DEFAULT_TOLERANCE * 100}%` : base.trim(), ...extra.split(/[,;]/).map((s) => s.trim()).filter((s) => s !== '')];
+  const specs = [...(base.trim() === '' ? [] : [base.trim()]), ...extra.split(/[,;]/).map((s) => s.trim()).filter((s) => s !== '')];
   return parseTolerances(specs);
 }
 
@@ -47,7 +51,7 @@ export function CheckView({ host, onClose }: Props): ReactElement {
   const [importError, setImportError] = useState<{ title: string; message: string } | null>(null);
   const [unit, setUnit] = useState<LengthUnit>('in');
   const [type, setType] = useState<TableFamily | ''>('');
-  const [baseTolerance, setBaseTolerance] = useState('1%');
+  const [baseTolerance, setBaseTolerance] = useState('');
   const [extraTolerance, setExtraTolerance] = useState('');
   const [ownLabels, setOwnLabels] = useState(false);
   const [remembered, setRemembered] = useState<ColumnMapping | null>(null);
@@ -277,7 +281,7 @@ export function CheckView({ host, onClose }: Props): ReactElement {
               </label>
               <label>
                 Tolerance
-                <input data-testid="check-tolerance" value={baseTolerance} size={5} onChange={(e) => setBaseTolerance(e.target.value)} />
+                <input data-testid="check-tolerance" value={baseTolerance} size={5} placeholder="per family" onChange={(e) => setBaseTolerance(e.target.value)} />
               </label>
               <label className="wide">
                 Per property (and family)
