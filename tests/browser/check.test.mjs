@@ -133,7 +133,8 @@ export async function aColumnCorrectedByDropdownIsUsedRememberedAndSavedForTheCo
   await importTable(page, 'w-renamed.csv', table);
   check((await page.getByTestId('map-target-2').inputValue()) === 'ignore', '"Column 3" is not detected');
   const before = await runCheck(page);
-  check(before.flagged === 7, `without d no W row can be built: 7 flagged, got ${JSON.stringify(before)}`);
+  const notChecked = Number(await page.getByTestId('summary-rows-not-checked').innerText());
+  check(before.checked === 0 && before.flagged === 0 && notChecked === 7, `without d no W row can be built: all 7 not checked (with the reason), none passed or flagged, got ${JSON.stringify(before)}, not checked ${notChecked}`);
   await page.getByTestId('map-target-2').selectOption('d');
   check((await page.getByTestId('map-unit-2').inputValue()) === 'in', 'a corrected dimension takes the table unit, in');
   await page.getByTestId('check-tolerance').fill('1.5%');
@@ -149,7 +150,7 @@ export async function aColumnCorrectedByDropdownIsUsedRememberedAndSavedForTheCo
   const csv = path.join(artifactsDir, 'w-renamed.csv');
   writeFileSync(csv, table);
   const cli = spawnSync('node', [path.join(here, '..', '..', 'cli', 'sectionsmith.mjs'), 'check', csv, '--mapping', saved.file, '--tolerance', '1.5%', '--tolerance', 'A=1%'], { encoding: 'utf8' });
-  check(cli.status === 0 && /7 rows checked, 0 flagged/.test(cli.stdout), `sectionsmith check --mapping with the saved file: exit ${cli.status}, ${cli.stdout.split('\n')[0]} ${cli.stderr}`);
+  check(cli.status === 0 && /7 rows: 7 pass, 0 flagged/.test(cli.stdout), `sectionsmith check --mapping with the saved file: exit ${cli.status}, ${cli.stdout.split('\n')[0]} ${cli.stderr}`);
   await page.getByTestId('check-tolerance').fill('2%');
   await page.getByTestId('check-stale').waitFor();
   // A new visit (same browser storage): the correction comes back for the same headers.
