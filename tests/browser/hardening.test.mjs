@@ -37,23 +37,3 @@ export async function aPlacementTypedAt1e20IsReportedAndThePageStaysResponsive({
   check(alive === true, 'the page keeps drawing frames');
 }
 
-export async function aViewThatFailsToDrawKeepsTheDocumentAndCanBeDrawnAgain({ page, baseUrl }) {
-  await openApp(page, baseUrl);
-  const before = { parts: await partCount(page), area: await resultValue(page, 'area') };
-  // Make every number formatting throw, as a bug in a view would, then cause a redraw.
-  await page.evaluate(() => {
-    const original = Number.prototype.toPrecision;
-    window.__restorePrecision = () => { Number.prototype.toPrecision = original; };
-    Number.prototype.toPrecision = function broken() { throw new Error('a view failed on purpose'); };
-    // A redraw (the canvas follows the window's size).
-    window.dispatchEvent(new Event('resize'));
-  });
-  await page.getByTestId('view-error').waitFor({ timeout: 10_000 });
-  const text = await page.getByTestId('view-error').textContent();
-  check(/document is safe/.test(text) && /failed on purpose/.test(text), `the message says the document is safe and what failed: ${text}`);
-  await page.evaluate(() => window.__restorePrecision());
-  await page.getByTestId('view-error-retry').click();
-  await page.locator('[data-testid="result-area"]').first().waitFor({ timeout: 10_000 });
-  check((await partCount(page)) === before.parts, 'the document keeps its parts after the views are drawn again');
-  check((await resultValue(page, 'area')) === before.area, 'and its area');
-}
