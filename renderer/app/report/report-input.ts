@@ -12,15 +12,14 @@
  */
 import type { SectionDocument } from '../../../core/document/types.ts';
 import { sectionSvg } from '../../../core/export/index.ts';
-import { shownValue as withoutResidue } from '../../../core/properties/catalogue.ts';
 import { materialPiecesFromDocument, newtonsTo, pascalsTo, type ForceUnit, type StressUnit } from '../../../core/materials/index.ts';
 import { LIMIT_CAUTION, sectionMemberCheck, type SectionMemberInput, type Support } from '../../../core/member/index.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
 import type { ReportInput, ReportTable } from '../../../core/report/index.ts';
 import { sectionFromDocument } from '../../../core/section/index.ts';
 import type { TorsionResult } from '../../../core/torsion/types.ts';
-import { convertLength, formatSig, toDisplay, type DisplaySet, type LengthUnit } from '../../../core/units/index.ts';
-import { RESULT_GROUPS, type ResultRow } from '../results/result-rows.ts';
+import { convertLength, formatSig, type DisplaySet, type LengthUnit } from '../../../core/units/index.ts';
+import { propertyGroups, torsionRows } from '../results/result-rows.ts';
 
 /** The member panel's load case: span and positions in `unit`, forces in N, line loads in N/m. */
 export interface MemberCase {
@@ -64,21 +63,13 @@ export function forceUnitsFor(unit: LengthUnit): ForceUnits {
 
 const SUPPORT_WORDS: Readonly<Record<Support, string>> = { simple: 'simply supported', cantilever: 'cantilever fixed at the left end', fixed: 'fixed at both ends', propped: 'propped cantilever' };
 
-function shownValue(row: ResultRow, p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): [string, string] {
-  const raw = p[row.key];
-  const value = typeof raw === 'number' ? withoutResidue(row.quantity, raw, p) : NaN;
-  if (row.quantity === 'angle') return [formatSig(value, sig), 'deg'];
-  if (row.quantity === 'ratio') return [formatSig(value, sig), '–'];
-  const d = display[row.quantity];
-  return [formatSig(toDisplay(value, unit, d), sig), d.label];
-}
-
-/** The results panel's groups as report tables (three tables, so none is longer than a page). */
+/** The catalogue's report groups as report tables (three tables, so none is longer than a page). */
 export function propertyTables(p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): ReportTable[] {
   const columns = ['symbol', 'value', 'unit', 'meaning'];
   const textColumns = [3];
+  const groups = propertyGroups('report', p, unit, display, sig);
   const rows = (titles: readonly string[]): string[][] =>
-    RESULT_GROUPS.filter((g) => titles.includes(g.title)).flatMap((g) => g.rows.map((row) => [row.symbol, ...shownValue(row, p, unit, display, sig), `${g.title.toLowerCase()}: ${row.label}`]));
+    groups.filter((g) => titles.includes(g.title)).flatMap((g) => g.rows.map((row) => [row.symbol, row.text, row.unit, `${g.title.toLowerCase()}: ${row.meaning}`]));
   return [
     { title: 'Area, centroid, second moments and radii of gyration', columns, rows: rows(['Area and centroid', 'Second moments about the centroid', 'Principal axes', 'Radii of gyration']), textColumns },
     { title: 'Elastic and plastic moduli', columns, rows: rows(['Elastic section moduli', 'Plastic']), textColumns },
@@ -86,24 +77,15 @@ export function propertyTables(p: SectionProperties, unit: LengthUnit, display: 
   ];
 }
 
-export function torsionTable(t: TorsionResult, unit: LengthUnit, display: DisplaySet, sig: number): ReportTable {
-  const row = (symbol: string, value: number, q: 'inertia' | 'warping' | 'length', meaning: string): string[] => [symbol, formatSig(toDisplay(value, unit, display[q]), sig), display[q].label, meaning];
+/** The catalogue's torsion rows; separate pieces get J only, with a row saying why. */
+export function torsionTable(t: TorsionResult, p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): ReportTable {
+  const rows = torsionRows('report', t, p, unit, display, sig).map((r) => [r.symbol, r.text, r.unit, r.meaning]);
   return {
     title: 'Torsion (finite elements)',
     columns: ['symbol', 'value', 'unit', 'meaning'],
     textColumns: [3],
     // Separate pieces twist on their own: J adds, and there is no shared shear centre or Cw.
-    rows: t.components > 1
-      ? [
-          row('J', t.J, 'inertia', `Saint-Venant torsion constant: sum over ${t.components} separate pieces`),
-          ['Cw, xs, ys', '—', '', 'none: the pieces are separate, so there is no shared shear centre or warping constant'],
-        ]
-      : [
-          row('J', t.J, 'inertia', 'Saint-Venant torsion constant'),
-          row('Cw', t.Cw, 'warping', 'warping constant'),
-          row('xs', t.xs, 'length', 'shear centre x'),
-          row('ys', t.ys, 'length', 'shear centre y'),
-        ],
+    rows: t.components > 1 ? [...rows, ['Cw, xs, ys', '—', '', 'none: the pieces are separate, so there is no shared shear centre or warping constant']] : rows,
   };
 }
 
@@ -166,7 +148,7 @@ export function sectionReportInput(o: SectionReportOptions): SectionReport {
   const p = section.properties;
   if (p === null) return { ok: false, errors: section.diagnostics.length > 0 ? section.diagnostics.map((d) => d.message) : ['the section has no area: draw or open a section first'] };
   const tables = propertyTables(p, o.doc.unit, o.display, o.sig);
-  if (o.torsion) tables.splice(2, 0, torsionTable(o.torsion, o.doc.unit, o.display, o.sig));
+  if (o.torsion) tables.splice(2, 0, torsionTable(o.torsion, p, o.doc.unit, o.display, o.sig));
   return {
     ok: true,
     input: {

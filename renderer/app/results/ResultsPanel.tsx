@@ -7,7 +7,7 @@ import type { NetSectionProperties } from '../../../core/properties/index.ts';
 import type { Results } from '../../controller/results.ts';
 import type { TorsionState } from '../../controller/torsion-client.ts';
 import type { SectionDocument } from '../../../core/document/types.ts';
-import { RESULT_GROUPS, type ResultRow } from './result-rows.ts';
+import { propertyGroups, torsionRows } from './result-rows.ts';
 import { CAUTION } from '../../../core/member/check.ts';
 
 interface Props {
@@ -20,21 +20,10 @@ interface Props {
   readonly current: SectionDocument;
 }
 
-function TorsionRows({ t, current, unit, display, sig }: { t: TorsionState; current: SectionDocument; unit: LengthUnit; display: DisplaySet; sig: number }): ReactElement {
+function TorsionRows({ t, current, p, unit, display, sig }: { t: TorsionState; current: SectionDocument; p: SectionProperties; unit: LengthUnit; display: DisplaySet; sig: number }): ReactElement {
   // Separate pieces twist on their own: J adds, and there is no shared shear centre or Cw.
   const separate = t.kind === 'done' && t.result.components > 1;
-  const rows: (readonly [string, string, string, number, 'inertia' | 'warping' | 'length'])[] = t.kind === 'done'
-    ? [
-        ['J', 'J', separate ? 'Saint-Venant torsion constant: sum over the separate pieces' : 'Saint-Venant torsion constant', t.result.J, 'inertia'],
-        ...(separate
-          ? []
-          : ([
-              ['Cw', 'Cw', 'warping constant', t.result.Cw, 'warping'],
-              ['xs', 'xs', 'shear centre x', t.result.xs, 'length'],
-              ['ys', 'ys', 'shear centre y', t.result.ys, 'length'],
-            ] as const)),
-      ]
-    : [];
+  const rows = t.kind === 'done' ? torsionRows('panel', t.result, p, unit, display, sig) : [];
   const stale = t.kind === 'done' && t.doc !== current;
   return (
     <table data-testid="torsion" data-state={t.kind}>
@@ -57,19 +46,16 @@ function TorsionRows({ t, current, unit, display, sig }: { t: TorsionState; curr
             <td colSpan={4} className="error">not computed: {t.message}</td>
           </tr>
         )}
-        {rows.map(([key, symbol, label, value, q]) => {
-          const d = display[q];
-          return (
-            <tr key={key} title={label} className={stale ? 'stale' : ''}>
-              <th scope="row">{symbol}</th>
-              <td className="value" data-testid={`result-${key}`} data-value={String(value)}>
-                {formatSig(toDisplay(value, unit, d), sig)}
-              </td>
-              <td className="unit">{d.label}</td>
-              <td className="label">{label}</td>
-            </tr>
-          );
-        })}
+        {rows.map((row) => (
+          <tr key={row.key} title={row.meaning} className={stale ? 'stale' : ''}>
+            <th scope="row">{row.symbol}</th>
+            <td className="value" data-testid={`result-${row.key}`} data-value={String(row.raw)}>
+              {row.text}
+            </td>
+            <td className="unit">{row.unit}</td>
+            <td className="label">{row.meaning}</td>
+          </tr>
+        ))}
         {separate && t.kind === 'done' && (
           <tr>
             <td colSpan={4} className="warning" data-testid="torsion-separate">
@@ -127,26 +113,6 @@ function NetRows({ net, holes, unit, display, sig }: { net: NetSectionProperties
   );
 }
 
-/**
- * Round-off residue (a centroid at 1e-14 mm on a symmetric section) reads as 0 on screen: a value
- * is shown as 0 when it is below 1e-9 of the section's own size in that dimension. The data-value
- * attribute keeps the full number.
- */
-function cleaned(row: ResultRow, value: number, p: SectionProperties): number {
-  const size = Math.max(p.xMax - p.xMin, p.yMax - p.yMin);
-  const scale: Record<ResultRow['quantity'], number> = {
-    length: size, area: p.area, modulus: size ** 3, inertia: p.Ip, warping: size ** 6, angle: 90, ratio: 1,
-  };
-  return Math.abs(value) < 1e-9 * scale[row.quantity] ? 0 : value;
-}
-
-function shown(row: ResultRow, value: number, unit: LengthUnit, display: DisplaySet, sig: number): { text: string; unit: string } {
-  if (row.quantity === 'angle') return { text: formatSig(value, sig), unit: '°' };
-  if (row.quantity === 'ratio') return { text: formatSig(value, sig), unit: '' };
-  const d = display[row.quantity];
-  return { text: formatSig(toDisplay(value, unit, d), sig), unit: d.label };
-}
-
 export function ResultsPanel({ results, unit, display, sig, torsion, current }: Props): ReactElement {
   const p = results.properties ?? results.stale;
   const stale = !results.properties && !!results.stale;
@@ -183,30 +149,25 @@ export function ResultsPanel({ results, unit, display, sig, torsion, current }: 
       {!p && results.diagnostics.length === 0 && <p className="muted">Draw or open a section to see its properties.</p>}
       {p && (
         <div className={stale ? 'result-table stale' : 'result-table'}>
-          {RESULT_GROUPS.map((g) => (
+          {propertyGroups('panel', p, unit, display, sig).map((g) => (
             <table key={g.title}>
               <caption>{g.title}</caption>
               <tbody>
-                {g.rows.map((row) => {
-                  const value = p[row.key];
-                  if (typeof value !== 'number') return null;
-                  const s = shown(row, cleaned(row, value, p), unit, display, sig);
-                  return (
-                    <tr key={row.key} title={row.label}>
-                      <th scope="row">{row.symbol}</th>
-                      <td className="value" data-testid={`result-${row.key}`} data-value={String(value)}>
-                        {s.text}
-                      </td>
-                      <td className="unit">{s.unit}</td>
-                      <td className="label">{row.label}</td>
-                    </tr>
-                  );
-                })}
+                {g.rows.map((row) => (
+                  <tr key={row.key} title={row.meaning}>
+                    <th scope="row">{row.symbol}</th>
+                    <td className="value" data-testid={`result-${row.key}`} data-value={String(row.raw)}>
+                      {row.text}
+                    </td>
+                    <td className="unit">{row.unit}</td>
+                    <td className="label">{row.meaning}</td>
+                  </tr>
+                ))}
               </tbody>
             </table>
           ))}
           {results.properties && results.net && <NetRows net={results.net} holes={results.fastenerHoles} unit={unit} display={display} sig={sig} />}
-          {results.properties && <TorsionRows t={torsion} current={current} unit={unit} display={display} sig={sig} />}
+          {results.properties && <TorsionRows t={torsion} current={current} p={results.properties} unit={unit} display={display} sig={sig} />}
         </div>
       )}
     </section>

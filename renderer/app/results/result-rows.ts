@@ -1,92 +1,60 @@
 /**
- * What the results panel shows: each SectionProperties key (the same keys as
- * `sectionsmith props --json`) with its trade symbol, a plain description and its dimension.
+ * The rows the results panel and the printed report show, read from the one property catalogue
+ * (core/properties/catalogue.ts): this file only formats them. Which properties a view lists,
+ * their symbols, meanings, groups and kinds all come from the catalogue, so adding a property
+ * there adds it here.
+ *
+ * Units: values in the document's length unit in; shown in the display set given (core/units),
+ * angles in degrees, ratios without a unit. Rounding residue (below 1e-9 of the kind's natural
+ * scale for this section) is shown as 0 (catalogue `shownValue`); `raw` keeps the full number.
  */
+import { catalogueFor, catalogueGroups, PROPERTY_CATALOGUE, residueScale, TORSION_CATALOGUE, type CatalogueEntry, type CatalogueKind, type TorsionKey } from '../../../core/properties/catalogue.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
-import type { Quantity } from '../../../core/units/index.ts';
+import { formatSig, toDisplay, zeroWithinRounding, type DisplaySet, type LengthUnit } from '../../../core/units/index.ts';
 
-export type RowQuantity = Quantity | 'angle' | 'ratio';
-
-export interface ResultRow {
-  readonly key: keyof SectionProperties;
+export interface ShownRow {
+  readonly key: string;
   readonly symbol: string;
-  readonly label: string;
-  readonly quantity: RowQuantity;
+  readonly meaning: string;
+  /** The full-precision value, in the document unit (the panel's data-value). */
+  readonly raw: number;
+  readonly text: string;
+  readonly unit: string;
 }
 
-export interface ResultGroup {
+export interface ShownGroup {
   readonly title: string;
-  readonly rows: readonly ResultRow[];
+  readonly rows: readonly ShownRow[];
 }
 
-export const RESULT_GROUPS: readonly ResultGroup[] = [
-  {
-    title: 'Area and centroid',
-    rows: [
-      { key: 'area', symbol: 'A', label: 'area', quantity: 'area' },
-      { key: 'cx', symbol: 'x̄', label: 'centroid x', quantity: 'length' },
-      { key: 'cy', symbol: 'ȳ', label: 'centroid y', quantity: 'length' },
-    ],
-  },
-  {
-    title: 'Second moments about the centroid',
-    rows: [
-      { key: 'Ix', symbol: 'Ix', label: 'about the x axis', quantity: 'inertia' },
-      { key: 'Iy', symbol: 'Iy', label: 'about the y axis', quantity: 'inertia' },
-      { key: 'Ixy', symbol: 'Ixy', label: 'product, +∫XY dA', quantity: 'inertia' },
-      { key: 'Ip', symbol: 'Ip', label: 'polar, Ix + Iy (not J)', quantity: 'inertia' },
-    ],
-  },
-  {
-    title: 'Principal axes',
-    rows: [
-      { key: 'I1', symbol: 'I1', label: 'major', quantity: 'inertia' },
-      { key: 'I2', symbol: 'I2', label: 'minor', quantity: 'inertia' },
-      { key: 'thetaDeg', symbol: 'θ', label: 'axis 1 from +x, CCW', quantity: 'angle' },
-    ],
-  },
-  {
-    title: 'Radii of gyration',
-    rows: [
-      { key: 'rx', symbol: 'rx', label: '√(Ix/A)', quantity: 'length' },
-      { key: 'ry', symbol: 'ry', label: '√(Iy/A)', quantity: 'length' },
-      { key: 'r1', symbol: 'r1', label: 'major', quantity: 'length' },
-      { key: 'r2', symbol: 'r2', label: 'minor', quantity: 'length' },
-    ],
-  },
-  {
-    title: 'Elastic section moduli',
-    rows: [
-      { key: 'SxTop', symbol: 'Sx top', label: 'Ix / (ymax − ȳ)', quantity: 'modulus' },
-      { key: 'SxBottom', symbol: 'Sx bot', label: 'Ix / (ȳ − ymin)', quantity: 'modulus' },
-      { key: 'SyLeft', symbol: 'Sy left', label: 'Iy / (x̄ − xmin)', quantity: 'modulus' },
-      { key: 'SyRight', symbol: 'Sy right', label: 'Iy / (xmax − x̄)', quantity: 'modulus' },
-      { key: 'S1Plus', symbol: 'S1 +', label: 'about axis 1, + side', quantity: 'modulus' },
-      { key: 'S1Minus', symbol: 'S1 −', label: 'about axis 1, − side', quantity: 'modulus' },
-      { key: 'S2Plus', symbol: 'S2 +', label: 'about axis 2, + side', quantity: 'modulus' },
-      { key: 'S2Minus', symbol: 'S2 −', label: 'about axis 2, − side', quantity: 'modulus' },
-    ],
-  },
-  {
-    title: 'Plastic',
-    rows: [
-      { key: 'Zx', symbol: 'Zx', label: 'plastic modulus, x', quantity: 'modulus' },
-      { key: 'Zy', symbol: 'Zy', label: 'plastic modulus, y', quantity: 'modulus' },
-      { key: 'Z1', symbol: 'Z1', label: 'about axis 1', quantity: 'modulus' },
-      { key: 'Z2', symbol: 'Z2', label: 'about axis 2', quantity: 'modulus' },
-      { key: 'pnaY', symbol: 'y PNA', label: 'plastic neutral axis (x bending)', quantity: 'length' },
-      { key: 'pnaX', symbol: 'x PNA', label: 'plastic neutral axis (y bending)', quantity: 'length' },
-      { key: 'shapeFactorX', symbol: 'Zx/Sx', label: 'shape factor, x', quantity: 'ratio' },
-      { key: 'shapeFactorY', symbol: 'Zy/Sy', label: 'shape factor, y', quantity: 'ratio' },
-    ],
-  },
-  {
-    title: 'Extents',
-    rows: [
-      { key: 'xMin', symbol: 'xmin', label: 'leftmost', quantity: 'length' },
-      { key: 'xMax', symbol: 'xmax', label: 'rightmost', quantity: 'length' },
-      { key: 'yMin', symbol: 'ymin', label: 'lowest', quantity: 'length' },
-      { key: 'yMax', symbol: 'ymax', label: 'highest', quantity: 'length' },
-    ],
-  },
-];
+/** One value of a catalogue kind as text and unit label: residue to 0, then the display unit. */
+export function shownQuantity(kind: CatalogueKind, value: number, scale: number, unit: LengthUnit, display: DisplaySet, sig: number): { text: string; unit: string } {
+  const v = zeroWithinRounding(value, scale);
+  if (kind === 'angle') return { text: formatSig(v, sig), unit: '°' };
+  if (kind === 'ratio') return { text: formatSig(v, sig), unit: '' };
+  const d = display[kind];
+  return { text: formatSig(toDisplay(v, unit, d), sig), unit: d.label };
+}
+
+function row<K extends string>(entry: CatalogueEntry<K>, value: number, p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): ShownRow {
+  const s = shownQuantity(entry.kind, value, residueScale(entry.kind, p), unit, display, sig);
+  return { key: entry.key, symbol: entry.symbol, meaning: entry.meaning, raw: value, text: s.text, unit: s.unit };
+}
+
+/** The section properties a view lists, by catalogue group, formatted. */
+export function propertyGroups(view: 'panel' | 'report', p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): ShownGroup[] {
+  return catalogueGroups(catalogueFor(view, PROPERTY_CATALOGUE)).map((g) => ({ title: g.title, rows: g.entries.map((e) => row(e, p[e.key], p, unit, display, sig)) }));
+}
+
+/**
+ * The torsion rows a view lists: J always; Cw and the shear centre only for one connected piece
+ * (separate pieces twist on their own, so J adds and there is no shared shear centre or Cw).
+ */
+export function torsionRows(view: 'panel' | 'report', t: Readonly<Record<TorsionKey, number>> & { readonly components: number }, p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): ShownRow[] {
+  return catalogueFor(view, TORSION_CATALOGUE)
+    .filter((e) => t.components <= 1 || e.key === 'J')
+    .map((e) => {
+      const r = row(e, t[e.key], p, unit, display, sig);
+      return e.key === 'J' && t.components > 1 ? { ...r, meaning: `Saint-Venant torsion constant: sum over ${t.components} separate pieces` } : r;
+    });
+}
