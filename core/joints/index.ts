@@ -8,3 +8,5 @@ export { partOverlaps, partsActingTogether, OVERLAP_AREA_RATIO, SEPARATE_PIECES_
 export { separateTorsion, type GroupTorsion, type SeparateTorsion } from './torsion.ts';
 export { jointShearFlows, type JointShearFlow, type ShearFlowResult, type ShearLoads, type TransformedSection } from './shear-flow.ts';
 export { fastenerPitch, filletCapacityPerLength, intermittentFillet, minimumFilletLeg, requiredFilletLeg, FILLET_OMEGA, FILLET_PHI, type DesignMethod } from './weld.ts';
+export { shearStressAt, shearStresses, shearStressProfile, SHEAR_CUTS_METHOD, type CutOrientation, type JointShear, type PartShear, type ShearCut, type ShearProfile, type ShearStressResult } from './shear-stress.ts';
+export { plyShares, PLY_SHARE_NOTE, type PlyShare, type PlyShares } from './ply-share.ts';

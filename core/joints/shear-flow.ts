@@ -26,7 +26,7 @@
 import type { SectionDocument } from '../document/types.ts';
 import { BooleanError, differenceRegions } from '../geometry/index.ts';
 import type { Region } from '../geometry/types.ts';
-import { builtInMaterial, documentMaterials } from '../materials/index.ts';
+import { builtInMaterial, documentMaterials, materialInSI } from '../materials/index.ts';
 import { regionIntegrals, vertexBoxCentre } from '../properties/index.ts';
 import type { RawIntegrals } from '../properties/types.ts';
 import { isFastenerHole, partLabel } from '../section/index.ts';
@@ -75,21 +75,30 @@ export interface ShearFlowResult {
   readonly warnings: readonly string[];
 }
 
-interface PartMaterial {
+export interface PartMaterial {
   readonly index: number;
   readonly label: string;
+  /** Modular ratio E / E_ref (1 when no part has a material). */
   readonly n: number;
+  /** Young's modulus in Pa, or null when the part has no material. */
+  readonly E: number | null;
+  /** The part's own gross material (later parts and voids cut out, fastener holes kept), document unit. */
+  readonly region: Region;
   readonly raw: RawIntegrals;
 }
 
-/** Each visible add part's own gross material (later parts and voids win) with its modular ratio. */
-function partMaterials(doc: SectionDocument, parts: ReturnType<typeof partsActingTogether>['composition']['parts']): { list: PartMaterial[]; warnings: string[] } {
+/**
+ * Each visible add part's own gross material (later parts and voids win) with its modular ratio.
+ * E is taken in pascals (each material's own stress unit converted, core/materials materialInSI),
+ * so a steel plate typed in ksi and a timber ply typed in psi are weighted correctly.
+ */
+export function partMaterials(doc: SectionDocument, parts: ReturnType<typeof partsActingTogether>['composition']['parts']): { list: PartMaterial[]; warnings: string[] } {
   const { materials } = documentMaterials(doc);
   const warnings: string[] = [];
   const E = parts.map((p) => {
     const id = p.part.material ?? doc.defaultMaterial;
     const m = id === null ? undefined : (materials.get(id) ?? builtInMaterial(id));
-    return m === undefined ? null : m.E;
+    return m === undefined ? null : materialInSI(m).E;
   });
   const eRef = E.find((e) => e !== null) ?? null;
   const regions: Region[] = parts.map((p, k) => {
@@ -110,12 +119,12 @@ function partMaterials(doc: SectionDocument, parts: ReturnType<typeof partsActin
     if (p.part.operation !== 'add' || (regions[k] as Region).length === 0) return;
     const e = E[k] ?? null;
     if (eRef !== null && e === null) warnings.push(`part "${partLabel(p.part, p.index)}" has no material: taken with E_ref in the transformed section`);
-    list.push({ index: k, label: partLabel(p.part, p.index), n: eRef === null || e === null ? 1 : e / eRef, raw: regionIntegrals(regions[k] as Region, ox, oy) });
+    list.push({ index: k, label: partLabel(p.part, p.index), n: eRef === null || e === null ? 1 : e / eRef, E: e, region: regions[k] as Region, raw: regionIntegrals(regions[k] as Region, ox, oy) });
   });
   return { list, warnings };
 }
 
-function transformed(list: readonly PartMaterial[]): TransformedSection & { ox: number; oy: number } {
+export function transformed(list: readonly PartMaterial[]): TransformedSection & { ox: number; oy: number } {
   let A = 0, Sx = 0, Sy = 0, Ixx = 0, Iyy = 0, Ixy = 0;
   for (const p of list) {
     A += p.n * p.raw.A;

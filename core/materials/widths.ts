@@ -36,7 +36,8 @@ function ringCrossings(ring: Ring, c: number): number[] | null {
   return xs;
 }
 
-function widthAt(region: Region, c: number): number | null {
+/** Sorted x of every crossing of the line y = c with the region's rings (material between alternate crossings), or null when c passes through a segment end. */
+export function regionCrossingsAt(region: Region, c: number): number[] | null {
   const xs: number[] = [];
   for (const p of region) {
     for (const ring of [p.outer, ...p.holes]) {
@@ -45,7 +46,12 @@ function widthAt(region: Region, c: number): number | null {
       xs.push(...r);
     }
   }
-  xs.sort((a, b) => a - b);
+  return xs.sort((a, b) => a - b);
+}
+
+function widthAt(region: Region, c: number): number | null {
+  const xs = regionCrossingsAt(region, c);
+  if (xs === null) return null;
   let w = 0;
   for (let k = 0; k + 1 < xs.length; k += 2) w += (xs[k + 1] as number) - (xs[k] as number);
   return w;
