@@ -33,6 +33,7 @@ import { invariant } from '../invariant.ts';
 import { TorsionCancelledError } from './errors.ts';
 import { pieceLocator } from './pieces.ts';
 import type { TorsionOptions, TorsionResult } from './types.ts';
+import { snapShearCentre, materialGroups } from './symmetry.ts';
 import { bandOrdered, childTriangles, nodalGradient, prolongate, quadraticMesh, solveWarping, type QuadraticMesh, type WarpingSolution } from './warping.ts';
 
 export { TorsionCancelledError, TorsionSolveError } from './errors.ts';
@@ -152,7 +153,7 @@ function geometryChangeOfJ(simplification: MeshSimplification | null, q: Quadrat
 const RUN = 6;
 
 export function torsionAnalysis(region: Region, options: TorsionOptions = {}): TorsionAnalysis {
-  return analysis(region, options, undefined);
+  return analysis(region, options, undefined, [region]);
 }
 
 /** A piece of one material for compositeTorsionAnalysis: its region and shear modulus (any unit, the same for all). */
@@ -191,10 +192,11 @@ export function compositeTorsionAnalysis(pieces: readonly ShearPiece[], options:
     }
     return w;
   };
-  return analysis(pieces.flatMap((p) => p.region), options, weigh);
+  return analysis(pieces.flatMap((p) => p.region), options, weigh, materialGroups(pieces));
 }
 
-function analysis(region: Region, options: TorsionOptions, weigh: ((xy: Float64Array, triangles: Int32Array) => Float64Array) | undefined): TorsionAnalysis {
+/** `groups`: the region of each material (one G), for the symmetry test of the shear centre (symmetry.ts). */
+function analysis(region: Region, options: TorsionOptions, weigh: ((xy: Float64Array, triangles: Int32Array) => Float64Array) | undefined, groups: readonly Region[]): TorsionAnalysis {
   const layers = checkedOption('layers', options.layers ?? defaultLayers, 1, 64);
   const tolerance = checkedOption('tolerance', options.tolerance ?? 1e-10, 1e-15, 1e-3);
   const maxIterations = Math.floor(checkedOption('maxIterations', options.maxIterations ?? 20_000, 1, 10_000_000));
@@ -259,15 +261,17 @@ function analysis(region: Region, options: TorsionOptions, weigh: ((xy: Float64A
     // Δφ²/3 is the measured full-circle deficit (docs/methods.md §7.8); ×1.25 makes it an upper estimate.
     const chordError = (1.25 * base.maxChordSweep * base.maxChordSweep) / 3;
     const simplified = base.simplification;
+    const jRelativeError = feError + chordError + level.geometryChange.bound;
+    const centre = snapShearCentre(groups, { xs: solveF.xs, ys: solveF.ys, xsCoarse: solveC.xs, ysCoarse: solveC.ys, relativeError: jRelativeError });
     const result: TorsionResult = {
       J: solveF.J,
       Cw: solveF.Cw,
-      xs: solveF.xs,
-      ys: solveF.ys,
+      xs: centre.xs,
+      ys: centre.ys,
       meshElements: fine.elements.length / 6,
       meshNodes: fine.xy.length / 2,
       iterations: solveF.iterations,
-      jRelativeError: feError + chordError + level.geometryChange.bound,
+      jRelativeError,
       components: solveF.components,
       simplifiedOutline: simplified
         ? { inputPoints: simplified.inputPoints, meshPoints: simplified.keptPoints, deltaArea: simplified.deltaArea, deltaIx: simplified.deltaIx, deltaIy: simplified.deltaIy, jChange: level.geometryChange.change }
