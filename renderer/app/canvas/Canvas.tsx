@@ -15,7 +15,10 @@ import { COLOURS } from './palette.ts';
 import type { Overlays } from '../../controller/controller.ts';
 import { placeLabels, scaleBar, type LabelBox, type LabelRequest } from './labels.ts';
 import { gridIndices, gridStep, toScreen, toSection, zoomAt, type View } from '../../controller/view.ts';
-import { formatSig } from '../../../core/units/index.ts';
+import { formatSig, type LengthUnit } from '../../../core/units/index.ts';
+import { formatDimension } from '../../../core/units/dimension.ts';
+import { label } from './label-request.ts';
+import { selectionDimensionOverlay } from './DimensionLines.tsx';
 import { arcOfSegment, ringVertexCount } from '../../../core/geometry/ring.ts';
 import type { Region } from '../../../core/geometry/types.ts';
 import { stressAt } from '../../../core/stress/index.ts';
@@ -151,19 +154,7 @@ interface OverlayParts {
   readonly reserved: LabelBox[];
 }
 
-let measureContext: CanvasRenderingContext2D | null = null;
-/** A label of `text` at `fontSize` (Konva's default Arial), with 2 px of padding round it. */
-function label(id: string, text: string, anchor: Vec, offsets: readonly (readonly [number, number])[], priority: number, fontSize = 11, colour = '', style = ''): LabelRequest & { fontSize: number; colour: string; style: string } {
-  measureContext ??= document.createElement('canvas').getContext('2d');
-  let w = text.length * fontSize * 0.6;
-  if (measureContext) {
-    measureContext.font = `${style} ${fontSize}px Arial`;
-    w = measureContext.measureText(text).width;
-  }
-  return { id, text, anchor, offsets, width: Math.ceil(w) + 4, height: fontSize + 4, priority, fontSize, colour, style };
-}
-
-function resultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: SectionProperties; view: View; overlays: Overlays; width: number; height: number; shearCentre: readonly [number, number] | null }): OverlayParts {
+function resultsOverlay({ p, view, overlays, width, height, shearCentre, unit }: { p: SectionProperties; view: View; overlays: Overlays; width: number; height: number; shearCentre: readonly [number, number] | null; unit: LengthUnit }): OverlayParts {
   const c = toScreen(view, [p.cx, p.cy]);
   const far = Math.hypot(width, height);
   const items: ReactElement[] = [];
@@ -197,8 +188,8 @@ function resultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: 
     const xo = c[0] + 14;
     items.push(<Line key="ft" points={[xo, top[1], xo, c[1]]} stroke={COLOURS.dimension} strokeWidth={1} pointerLength={5} />);
     items.push(<Line key="fb" points={[xo + 8, c[1], xo + 8, bottom[1]]} stroke={COLOURS.dimension} strokeWidth={1} />);
-    labels.push(label('fibre-top', `c top ${formatSig(p.yMax - p.cy, 4)}`, [xo, (top[1] + c[1]) / 2], [[4, -7]], 6, 11, COLOURS.dimension));
-    labels.push(label('fibre-bottom', `c bottom ${formatSig(p.cy - p.yMin, 4)}`, [xo + 8, (bottom[1] + c[1]) / 2], [[4, -7]], 6, 11, COLOURS.dimension));
+    labels.push(label('fibre-top', `c top ${formatDimension(p.yMax - p.cy, unit)}`, [xo, (top[1] + c[1]) / 2], [[4, -7]], 6, 11, COLOURS.dimension));
+    labels.push(label('fibre-bottom', `c bottom ${formatDimension(p.cy - p.yMin, unit)}`, [xo + 8, (bottom[1] + c[1]) / 2], [[4, -7]], 6, 11, COLOURS.dimension));
   }
   if (overlays.dimensions) {
     const a = toScreen(view, [p.xMin, p.yMin]);
@@ -208,14 +199,13 @@ function resultsOverlay({ p, view, overlays, width, height, shearCentre }: { p: 
     items.push(<Line key="dw" points={[a[0], yb, b[0], yb]} stroke={COLOURS.dimension} strokeWidth={1} />);
     items.push(<Line key="dwa" points={[a[0], a[1] + 4, a[0], yb + 4]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
     items.push(<Line key="dwb" points={[b[0], a[1] + 4, b[0], yb + 4]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
-    const wText = tick(Number((p.xMax - p.xMin).toPrecision(6)));
-    labels.push(label('width', wText, [(a[0] + b[0]) / 2, yb], [[-(wText.length * 3.3), 3]], 1, 11, COLOURS.dimension));
+    const wLabel = label('width', formatDimension(p.xMax - p.xMin, unit), [(a[0] + b[0]) / 2, yb], [], 1, 11, COLOURS.dimension);
+    labels.push({ ...wLabel, offsets: [[-wLabel.width / 2, 3]] });
     items.push(<Line key="dh" points={[xl, a[1], xl, b[1]]} stroke={COLOURS.dimension} strokeWidth={1} />);
     items.push(<Line key="dha" points={[a[0] - 4, a[1], xl - 4, a[1]]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
     items.push(<Line key="dhb" points={[a[0] - 4, b[1], xl - 4, b[1]]} stroke={COLOURS.dimension} strokeWidth={0.8} />);
-    const hText = tick(Number((p.yMax - p.yMin).toPrecision(6)));
-    items.push(<Text key="dhl" x={xl - 16} y={(a[1] + b[1]) / 2 + 24} rotation={-90} text={hText} fontSize={11} fill={COLOURS.dimension} />);
-    reserved.push({ x: xl - 17, y: (a[1] + b[1]) / 2 + 24 - hText.length * 7, width: 15, height: hText.length * 7 });
+    const hLabel = label('height', formatDimension(p.yMax - p.yMin, unit), [xl, (a[1] + b[1]) / 2], [], 1, 11, COLOURS.dimension);
+    labels.push({ ...hLabel, offsets: [[-hLabel.width - 3, -hLabel.height / 2]] });
   }
   if (overlays.centroid) {
     items.push(
@@ -361,6 +351,7 @@ function stressOverlay({ sv, view, overlays, width, height }: { sv: StressView; 
 
 function InteractionOverlay({ state, outlines, view }: { state: EditorState; outlines: readonly PartOutline[]; view: View }): ReactElement {
   const items: ReactElement[] = [];
+  const unit = state.doc.unit;
   const tool = state.tool;
   if (state.toolId === 'vertex') {
     for (const part of state.doc.parts) {
@@ -391,11 +382,11 @@ function InteractionOverlay({ state, outlines, view }: { state: EditorState; out
     const a = toScreen(view, d.a);
     const b = toScreen(view, d.b);
     items.push(<Rect key="dr" x={Math.min(a[0], b[0])} y={Math.min(a[1], b[1])} width={Math.abs(b[0] - a[0])} height={Math.abs(b[1] - a[1])} stroke={COLOURS.draft} dash={[5, 3]} strokeWidth={1.5} />);
-    items.push(<Text key="drt" x={Math.max(a[0], b[0]) + 6} y={Math.max(a[1], b[1]) + 4} text={`${formatSig(Math.abs(d.b[0] - d.a[0]), 5)} × ${formatSig(Math.abs(d.b[1] - d.a[1]), 5)}`} fontSize={12} fill={COLOURS.draft} />);
+    items.push(<Text key="drt" x={Math.max(a[0], b[0]) + 6} y={Math.max(a[1], b[1]) + 4} text={`${formatDimension(Math.abs(d.b[0] - d.a[0]), unit)} × ${formatDimension(Math.abs(d.b[1] - d.a[1]), unit)}`} fontSize={12} fill={COLOURS.draft} />);
   } else if (d?.kind === 'circle') {
     const c = toScreen(view, d.centre);
     items.push(<Circle key="dc" x={c[0]} y={c[1]} radius={d.radius * view.scale} stroke={COLOURS.draft} dash={[5, 3]} strokeWidth={1.5} />);
-    items.push(<Text key="dct" x={c[0] + d.radius * view.scale + 6} y={c[1]} text={`⌀ ${formatSig(2 * d.radius, 5)}`} fontSize={12} fill={COLOURS.draft} />);
+    items.push(<Text key="dct" x={c[0] + d.radius * view.scale + 6} y={c[1]} text={`⌀ ${formatDimension(2 * d.radius, unit)}`} fontSize={12} fill={COLOURS.draft} />);
   } else if (d?.kind === 'polygon' && d.points.length > 0) {
     const pts = d.cursor ? [...d.points, d.cursor] : d.points;
     items.push(<Line key="dp" points={flat(view, pts)} stroke={COLOURS.draft} strokeWidth={1.5} dash={[5, 3]} />);
@@ -480,8 +471,9 @@ export function Canvas(props: Props): ReactElement {
 
   // Overlays, then their labels placed together so none covers another or the stress legend.
   const stressParts = props.stress && (overlays.stress || overlays.kern) ? stressOverlay({ sv: props.stress, view, overlays, width: size.width, height: size.height }) : null;
-  const resultParts = props.properties ? resultsOverlay({ p: props.properties, view, overlays, width: size.width, height: size.height, shearCentre: props.shearCentre ?? null }) : null;
-  const requests = [...(resultParts?.labels ?? []), ...(stressParts?.labels ?? [])];
+  const resultParts = props.properties ? resultsOverlay({ p: props.properties, view, overlays, width: size.width, height: size.height, shearCentre: props.shearCentre ?? null, unit: state.doc.unit }) : null;
+  const dimParts = overlays.dimensions ? selectionDimensionOverlay(state.doc.parts, outlines, state.selection, state.doc.unit, view) : { items: [], labels: [] };
+  const requests = [...(resultParts?.labels ?? []), ...dimParts.labels, ...(stressParts?.labels ?? [])];
   const bar = scaleBar(view.scale, size.width, size.height);
   const { placed } = placeLabels(requests, [...(resultParts?.reserved ?? []), ...(stressParts?.reserved ?? []), bar.box], size.width, size.height);
   const labelStyle = new Map(requests.map((r) => [r.id, r as LabelRequest & { fontSize?: number; colour?: string; style?: string }]));
@@ -571,6 +563,7 @@ export function Canvas(props: Props): ReactElement {
         )}
         <Layer listening={false}>
           {resultParts?.items}
+          {dimParts.items}
           <DiagnosticMarks diagnostics={props.diagnostics} view={view} />
         </Layer>
         <Layer listening={false}>

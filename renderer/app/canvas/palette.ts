@@ -17,6 +17,7 @@ export const COLOURS = {
   principal: '#3d6f3a',
   pna: '#a8741a',
   dimension: '#51606e',
+  selectionDimension: '#9a4a1f',
   diagnostic: '#c42b2b',
   rulerBack: '#ebe6da',
   rulerText: '#51606e',
