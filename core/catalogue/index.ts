@@ -20,10 +20,10 @@ import type { Diagnostic } from '../geometry/types.ts';
 import { getPartType } from '../parts/index.ts';
 import { DRESSED_SIZES } from '../parts/lumber-sizes.ts';
 import { DOUBLE_L_ROWS, HSSC_ROWS, HSSR_ROWS, I_ROWS, L_ROWS, PIPE_ROWS, type Row } from './data/aisc-v15.ts';
-import { angleRadii, flangedPart } from './conventions.ts';
+import { angleRadii, flangedPart, HALF_FILLET_FAMILIES } from './conventions.ts';
 import { publishedCaveats } from './caveats.ts';
 
-export { angleRadii, flangedPart, MC_SLOPE, STEEL_LBFT_PER_IN2, type FlangedDims, type FlangedGiven, type FlangedPart } from './conventions.ts';
+export { angleRadii, flangedPart, HALF_FILLET_FAMILIES, MC_SLOPE, STEEL_LBFT_PER_IN2, type FlangedDims, type FlangedGiven, type FlangedPart } from './conventions.ts';
 
 export type Family = 'W' | 'M' | 'S' | 'HP' | 'C' | 'MC' | 'WT' | 'MT' | 'ST' | 'L' | '2L' | 'HSS' | 'Pipe' | 'lumber' | 'user';
 
@@ -66,7 +66,7 @@ const HSS_NOTE = 'design wall thickness tdes (0.93·tnom, as tabulated) is used 
 /** What the family rule of core/catalogue/conventions.ts did, in words, for one flanged entry. */
 function flangedNote(type: string, slopeRule: string, params: Readonly<Record<string, number>>): string {
   const atWeb = params['slope'] === undefined ? 'tf' : 'flange thickness at the web';
-  const fillet = type === 'M' || type === 'MT' ? `r = (kdes − ${atWeb})/2 (fitted: M kdes is the detailing k)` : `r = kdes − ${atWeb}`;
+  const fillet = HALF_FILLET_FAMILIES.has(type) ? `r = (kdes − ${atWeb})/2 (fitted: ${type} kdes is the detailing k)` : `r = kdes − ${atWeb}`;
   const toe = params['rt'] === undefined ? 'toes sharp' : 'toe radius rt = 0.4·tf (fitted)';
   const average = params['slope'] === undefined ? '' : '; tf is the average thickness at mid-outstand';
   return `${slopeRule}${average}; ${fillet} (AISC publishes no radius); ${toe}`;
@@ -80,7 +80,7 @@ function flangedEntry(row: Row): CatalogueEntry {
   return { designation, family: type, source: AISC_SOURCE, nominalWeight: W, depth: d, dimensions: { d, bf, tw, tf, kdes, ...(WGi === null ? {} : { WGi }) }, shape, params, modelling, caveats: publishedCaveats(designation), userDefined: false };
 }
 
-const ANGLE_NOTE = 'root radius r = (kdes − t)/2, toe radius rt = r/2 (fitted: the database states no radii, and kdes of angles is the detailing k)';
+const ANGLE_NOTE = 'root radius r = 3/4·(kdes − t), toe radius rt = r/2 (fitted: the database states no radii, and kdes of angles is the detailing k)';
 
 /**
  * An angle's thickness from its label's fraction when the printed t is that fraction rounded

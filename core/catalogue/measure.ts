@@ -16,7 +16,7 @@
  */
 import { regionIntegrals } from '../properties/integrals.ts';
 import { getPartType } from '../parts/index.ts';
-import { STEEL_LBFT_PER_IN2 } from './conventions.ts';
+import { ANGLE_ROOT_SHARE, HALF_FILLET_FAMILIES, STEEL_LBFT_PER_IN2 } from './conventions.ts';
 import type { CatalogueEntry, Family } from './index.ts';
 
 export const AREA_TOLERANCE = 0.01;
@@ -138,4 +138,56 @@ export function provenWeightInconsistency(entry: CatalogueEntry, family: readonl
     return `the published dimensions with no fillet and the largest toe roundings still give A = ${least.toFixed(3)} in², ${((least / agreement.areaFromWeight - 1) * 100).toFixed(1)} % above W ${entry.nominalWeight} lb/ft ÷ (490/144) = ${agreement.areaFromWeight.toFixed(3)} in²`;
   }
   return undefined;
+}
+
+/** The largest root radius the published k allows for an entry (k − the thickness at the web or leg), in. */
+function largestRoot(entry: CatalogueEntry): number | undefined {
+  const r = entry.params['r'];
+  if (r === undefined || TOES[entry.shape] === undefined) return undefined;
+  if (entry.family === 'L' || entry.family === '2L') return r / ANGLE_ROOT_SHARE;
+  return HALF_FILLET_FAMILIES.has(entry.family) ? 2 * r : r;
+}
+
+function areaWith(entry: CatalogueEntry, change: Readonly<Record<string, number>>): number {
+  const built = getPartType(entry.shape)?.region({ ...entry.params, ...change });
+  return built === undefined || built.diagnostics.length > 0 ? Number.NaN : regionIntegrals(built.region).A;
+}
+
+const pct = (x: number): string => `${x >= 0 ? '+' : '−'}${Math.abs(x * 100).toFixed(2)} %`;
+const inches = (x: number): string => `${Number(x.toFixed(3))} in`;
+
+/**
+ * Why a row is outside tolerance of its published weight, in words, or undefined when it is
+ * within. In order:
+ * - a proven published inconsistency (provenWeightInconsistency);
+ * - the published weight is above the most area the published k allows (largest root fillet,
+ *   r = k − thickness, and sharp toes): a published inconsistency;
+ * - else a geometry that meets W exists, and the reason names the root radius that would meet it
+ *   with the family's slope and toes (found by bisection: the area grows with r), so the row's
+ *   kdes does not give its fillet as the family rule reads it — our miss, not the table's.
+ */
+export function weightMissReason(entry: CatalogueEntry, family: readonly CatalogueEntry[]): string | undefined {
+  const a = weightAgreement(entry);
+  if (a === undefined || a.within) return undefined;
+  const proven = provenWeightInconsistency(entry, family);
+  if (proven !== undefined) return `published inconsistency: ${proven}`;
+  const rMax = largestRoot(entry);
+  if (rMax === undefined) return 'not reproduced by the family rule (our miss)';
+  const most = areaWith(entry, { r: rMax, rt: 0 });
+  if (most / a.areaFromWeight - 1 < -a.tolerance) {
+    return `published inconsistency: even the largest root fillet the published k allows (r = ${inches(rMax)}) with sharp toes gives A = ${most.toFixed(3)} in², ${pct(most / a.areaFromWeight - 1)} from W ${entry.nominalWeight} lb/ft ÷ (490/144) = ${a.areaFromWeight.toFixed(3)} in²`;
+  }
+  const rule = entry.params['r'] ?? 0;
+  const target = a.areaFromWeight;
+  let lo = 0;
+  let hi = rMax;
+  const at0 = areaWith(entry, { r: 0 });
+  if (at0 > target) return `our miss: with no root fillet and the family's toes the area is still ${pct(at0 / target - 1)} from W ÷ (490/144); only rounding the toes more than the family rule does would meet it`;
+  if (areaWith(entry, { r: hi }) < target) return `our miss: the family's toe roundings keep the area below W ÷ (490/144) whatever the root fillet (up to k − thickness = ${inches(rMax)}); smaller toe roundings would meet it`;
+  for (let i = 0; i < 40; i++) {
+    const mid = (lo + hi) / 2;
+    if (areaWith(entry, { r: mid }) < target) lo = mid;
+    else hi = mid;
+  }
+  return `our miss: the family rule's root fillet r = ${inches(rule)} gives A ${pct(a.relative)} from W ÷ (490/144); r = ${inches((lo + hi) / 2)} (within the k − thickness = ${inches(rMax)} the published k allows) would meet W, so this row's k does not give its fillet as the rule reads it`;
 }

@@ -5,7 +5,7 @@
  * for every catalogue entry, so the two cannot drift apart):
  *   flanged families — the slopes, root fillets and toe radii of core/catalogue/conventions.ts
  *     (docs/catalogue-conventions.md);
- *   L — root radius (kdes − t)/2 and toe radius r/2 when kdes is given (sharp otherwise), the
+ *   L — root radius 3/4·(kdes − t) and toe radius r/2 when kdes is given (sharp otherwise), the
  *     thickness from the label's fraction when the printed t is that fraction rounded; the
  *     longer leg b along y.
  *   HSS (rectangular) — design wall tdes, outside corner radius 2·tdes.
@@ -18,7 +18,7 @@
  *   the label's nominal OD, which is read in inches and used only for inch tables).
  */
 import { publishedCaveats } from '../catalogue/caveats.ts';
-import { angleRadii, angleThickness, flangedPart } from '../catalogue/index.ts';
+import { angleRadii, angleThickness, flangedPart, HALF_FILLET_FAMILIES } from '../catalogue/index.ts';
 import type { LengthUnit } from '../units/types.ts';
 
 /** The shape families a table row may name (AISC type codes). */
@@ -137,12 +137,12 @@ export function tablePart(family: TableFamily, dims: Readonly<Record<string, num
     const byRule = angleRadii(t, dims['kdes']);
     const r = dims['r'] ?? byRule.r;
     const rt = dims['rt'] ?? (dims['r'] === undefined ? byRule.rt : 0);
-    const radii = dims['r'] !== undefined ? 'root radius r as given' : dims['kdes'] !== undefined ? 'root radius (kdes − t)/2, toe radius r/2' : 'sharp root and toes (no kdes)';
+    const radii = dims['r'] !== undefined ? 'root radius r as given' : dims['kdes'] !== undefined ? 'root radius 3/4·(kdes − t), toe radius r/2' : 'sharp root and toes (no kdes)';
     // Published d is the shorter leg; the tabulated x axis has the longer leg b vertical (core/catalogue).
     return { ok: true, part: { shape: 'angle', params: { d: dims['b']!, b: dims['d']!, t, r, rt }, modelling: withCaveats(`angle: ${radii}, longer leg along y`, designation, 'L') } };
   }
   const { shape, params, slopeRule } = flangedPart(family, dims as Record<'d' | 'bf' | 'tw' | 'tf' | 'kdes', number>, { slope: dims['slope'], r: dims['r'], rt: dims['rt'] });
-  const rule = dims['r'] !== undefined ? 'r as given' : family === 'M' || family === 'MT' ? 'r = (kdes − flange thickness at the web)/2' : 'r = kdes − flange thickness at the web';
+  const rule = dims['r'] !== undefined ? 'r as given' : HALF_FILLET_FAMILIES.has(family) ? 'r = (kdes − flange thickness at the web)/2' : 'r = kdes − flange thickness at the web';
   const toe = params['rt'] === undefined ? '' : dims['rt'] !== undefined ? ', toe radius as given' : ', toe radius 0.4·tf';
   return { ok: true, part: { shape, params, modelling: withCaveats(`${family}: ${slopeRule}${params['slope'] === undefined ? '' : ', tf average'}, ${rule}${toe}`, designation, family) } };
 }
