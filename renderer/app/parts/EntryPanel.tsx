@@ -1,8 +1,10 @@
 /**
  * Typed, exact input: plates, rounds and outline points by their numbers, the selected part's
- * own dimensions, and transforms of the selection. Values are in the document unit.
+ * own dimensions, and transforms of the selection. Values are in the document unit; lengths may
+ * carry their own ("4 in", "13'-9\""), read by core/units readQuantity; defaults follow the unit
+ * (entry-model.ts).
  */
-import { useState, type ReactElement } from 'react';
+import { useEffect, useRef, useState, type ReactElement } from 'react';
 import type { Part } from '../../../core/document/types.ts';
 import type { Editor, EditorState } from '../../editor/editor.ts';
 import { parseNumber } from '../shell/numbers.ts';
@@ -10,20 +12,24 @@ import { ShapeParameters } from './PartsPalette.tsx';
 import { materialChoices } from '../materials/MaterialsPanel.tsx';
 import { withPartMaterial } from '../materials/material-form.ts';
 import type { LengthUnit } from '../../../core/units/index.ts';
+import { entryDefaults, fieldsForUnit, readEntryLength } from './entry-model.ts';
 import type { CommandId } from '../../controller/commands.ts';
 
 type Fields = Record<string, string>;
 
-function useFields(initial: Fields): [Fields, (k: string, v: string) => void] {
+function useFields(initial: Fields): [Fields, (k: string, v: string) => void, (fn: (old: Fields) => Fields) => void] {
   const [f, setF] = useState(initial);
-  return [f, (k, v) => setF((old) => ({ ...old, [k]: v }))];
+  return [f, (k, v) => setF((old) => ({ ...old, [k]: v })), setF];
 }
 
-/** Parse named fields; report the first bad one. */
-function read(f: Fields, keys: readonly [string, string][], onError: (m: string) => void): Record<string, number> | null {
+/** Fields that hold a plain number; every other field is a length (core/units readQuantity, bare numbers in the document unit). */
+const PLAIN_NUMBERS = new Set(['rotate-angle', 'array-count']);
+
+/** Parse named fields (lengths in the document unit); report the first bad one. */
+function read(f: Fields, keys: readonly [string, string][], onError: (m: string) => void, unit: LengthUnit): Record<string, number> | null {
   const out: Record<string, number> = {};
   for (const [k, label] of keys) {
-    const r = parseNumber(f[k] ?? '', label);
+    const r = PLAIN_NUMBERS.has(k) ? parseNumber(f[k] ?? '', label) : readEntryLength(f[k] ?? '', label, unit);
     if (!r.ok) {
       onError(r.message);
       return null;
@@ -46,7 +52,7 @@ function Field({ id, label, f, set, title }: { id: string; label: string; f: Fie
 function SelectedPart({ editor, part, unit }: { editor: Editor; part: Part; unit: LengthUnit }): ReactElement {
   const [error, setError] = useState('');
   const commit = (label: string, text: string, apply: (v: number) => Part | null): void => {
-    const r = parseNumber(text, label);
+    const r = readEntryLength(text, label, unit);
     if (!r.ok) return setError(r.message);
     const next = apply(r.value);
     if (!next) return setError(`${label} must be greater than zero`);
@@ -114,29 +120,33 @@ function SelectedPart({ editor, part, unit }: { editor: Editor; part: Part; unit
 
 export function EntryPanel({ editor, state }: { editor: Editor; state: EditorState }): ReactElement {
   const unit = state.doc.unit;
-  const [f, set] = useFields({
-    'rect-width': '100', 'rect-height': '200', 'rect-x': '0', 'rect-y': '0',
-    'circle-diameter': '20', 'circle-x': '0', 'circle-y': '0',
-    'point-x': '0', 'point-y': '0',
-  });
+  const [f, set, replace] = useFields(entryDefaults(unit));
+  // A new document unit: defaults follow it, typed sizes keep their physical value (entry-model.ts).
+  const shownUnit = useRef(unit);
+  useEffect(() => {
+    if (shownUnit.current === unit) return;
+    const from = shownUnit.current;
+    shownUnit.current = unit;
+    replace((old) => fieldsForUnit(old, from, unit));
+  }, [unit, replace]);
   const [error, setError] = useState('');
   const draft = state.tool.draft;
   const drafted = draft?.kind === 'polygon' ? draft.points.length : 0;
 
   const addRect = (operation: 'add' | 'subtract'): void => {
-    const v = read(f, [['rect-width', 'width b'], ['rect-height', 'height h'], ['rect-x', 'centre x'], ['rect-y', 'centre y']], setError);
+    const v = read(f, [['rect-width', 'width b'], ['rect-height', 'height h'], ['rect-x', 'centre x'], ['rect-y', 'centre y']], setError, unit);
     if (!v) return;
     if (!((v['rect-width'] as number) > 0 && (v['rect-height'] as number) > 0)) return setError('a plate needs a width and a height greater than zero');
     editor.addRectangle({ width: v['rect-width'] as number, height: v['rect-height'] as number, x: v['rect-x'] as number, y: v['rect-y'] as number, operation });
   };
   const addCircle = (operation: 'add' | 'subtract'): void => {
-    const v = read(f, [['circle-diameter', 'diameter d'], ['circle-x', 'centre x'], ['circle-y', 'centre y']], setError);
+    const v = read(f, [['circle-diameter', 'diameter d'], ['circle-x', 'centre x'], ['circle-y', 'centre y']], setError, unit);
     if (!v) return;
     if (!((v['circle-diameter'] as number) > 0)) return setError('a round needs a diameter greater than zero');
     editor.addCircle({ diameter: v['circle-diameter'] as number, x: v['circle-x'] as number, y: v['circle-y'] as number, operation });
   };
   const addPoint = (): void => {
-    const v = read(f, [['point-x', 'point x'], ['point-y', 'point y']], setError);
+    const v = read(f, [['point-x', 'point x'], ['point-y', 'point y']], setError, unit);
     if (v) editor.typedPoint([v['point-x'] as number, v['point-y'] as number]);
   };
 
@@ -214,7 +224,7 @@ export function SelectionPanel({ editor, state, run }: { editor: Editor; state: 
   const selectedPart = sel.length === 1 ? state.doc.parts.find((p) => p.id === sel[0]) : undefined;
   const transform = (keys: [string, string][], fn: (v: Record<string, number>) => void): void => {
     setError('');
-    const v = read(f, keys, setError);
+    const v = read(f, keys, setError, unit);
     if (v) fn(v);
   };
   if (sel.length === 0) return null;
