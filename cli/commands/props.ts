@@ -22,7 +22,8 @@ import { writeOutputFile } from '../output.ts';
 import { propertiesSheet } from '../../core/export/xlsx.ts';
 import { writeXlsxOutput } from '../xlsx.ts';
 import { materialPropsResults } from './member.ts';
-import { JOINT_FLAGS, JOINTS_NOTE, jointResults } from './joints-results.ts';
+import { JOINT_FLAGS, JOINTS_NOTE, jointResults, regionPiecesResults, withTorsionPieces } from './joints-results.ts';
+import { torsionByJointGroups, type SeparateTorsion } from '../../core/joints/index.ts';
 
 export const PROPS_FLAGS: readonly FlagSpec[] = [
   { name: 'json', type: 'boolean', description: 'print one JSON object (keys below) instead of the table' },
@@ -110,7 +111,7 @@ function joined(...parts: readonly ExtraResults[]): ExtraResults {
 
 /** Results beyond the geometry, as JSON keys and table rows [symbol, value, unit, what]: net section, the E-weighted values of a document with materials, torsion. */
 function extraResults(file: string, section: LoadedSection, flags: FlagValues, io: CliIo, unit: LengthUnit): ExtraResults {
-  const joints = section.doc === undefined ? { json: {}, rows: [], errors: [] } : jointResults(section.doc, flags, unit);
+  const joints = section.doc === undefined ? regionPiecesResults(section.region) : jointResults(section.doc, flags, unit);
   const materials = joined(netResults(section, unit), joints, materialPropsResults(file, section, flags, io, unit));
   if (flags.torsion !== true) return materials;
   const torsion = torsionResults(file, section, io, unit);
@@ -150,16 +151,19 @@ function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: L
   const composite = section.doc !== undefined ? torsionMaterials(section.doc) : null;
   if (composite !== null && 'errors' in composite) return { json: {}, units: {}, rows: [], errors: composite.errors.map((e) => `${file}: --torsion: ${e}`) };
   let r: TorsionResult;
+  let grouped: SeparateTorsion | null = null;
   try {
-    r = composite ? compositeTorsionAnalysis(composite.pieces).result : torsionConstants(section.region);
+    // Parts joined only by joints marked "not connected" (or apart) twist separately (core/joints).
+    grouped = section.doc !== undefined ? torsionByJointGroups(section.doc) : null;
+    r = grouped !== null ? grouped.combined : composite ? compositeTorsionAnalysis(composite.pieces).result : torsionConstants(section.region);
   } catch (err) {
     // Bad geometry, or a mesh/solver cap reached: say which, never a stack trace.
-    if (err instanceof MeshInputError || err instanceof MeshRefinementError || err instanceof TorsionSolveError) {
+    if (err instanceof MeshInputError || err instanceof MeshRefinementError || err instanceof TorsionSolveError || err instanceof RangeError) {
       return { json: {}, units: {}, rows: [], errors: [`${file}: --torsion: ${err.message}`] };
     }
     throw err;
   }
-  const out = torsionRows(section, unit, r);
+  const out = withTorsionPieces(torsionRows(section, unit, r), grouped, section.unit, unit);
   return composite ? withMaterialRows(out, composite, section, unit, r) : out;
 }
 

@@ -5,7 +5,7 @@
  */
 export { findJoints, jointKindText, jointSettingFor, jointTolerance, JOINT_TOLERANCE_RATIO, type ContactSegment, type Joint } from './contacts.ts';
 export { partOverlaps, partsActingTogether, OVERLAP_AREA_RATIO, SEPARATE_PIECES_NOTE, type ActingGroup, type ActingGroups, type PartOverlap } from './groups.ts';
-export { separateTorsion, type GroupTorsion, type SeparateTorsion } from './torsion.ts';
+export { separateTorsion, torsionByJointGroups, type GroupTorsion, type SeparateTorsion } from './torsion.ts';
 export { jointShearFlows, type JointShearFlow, type ShearFlowResult, type ShearLoads, type TransformedSection } from './shear-flow.ts';
 export { fastenerPitch, filletCapacityPerLength, intermittentFillet, minimumFilletLeg, requiredFilletLeg, FILLET_OMEGA, FILLET_PHI, type DesignMethod } from './weld.ts';
 export { shearStressAt, shearStresses, shearStressProfile, SHEAR_CUTS_METHOD, type CutOrientation, type JointShear, type PartShear, type ShearCut, type ShearProfile, type ShearStressResult } from './shear-stress.ts';
