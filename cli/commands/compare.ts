@@ -127,7 +127,11 @@ function runCompare(positionals: readonly string[], flags: FlagValues, io: CliIo
     const numbers: [keyof Targets, string][] = [['minIx', 'min-ix'], ['minSx', 'min-sx'], ['minZx', 'min-zx'], ['minEIx', 'min-ei'], ['maxDepth', 'max-depth'], ['deflectionRatio', 'limit'], ['liveDeflectionRatio', 'live-limit']];
     const targets: Record<string, number | boolean> = {};
     for (const [key, flag] of numbers) {
-      const v = flag === 'min-ei' ? positiveQuantity(flag, flags[flag], 'flexuralStiffness', 'N·m²', 'N·m²') : flag === 'max-depth' ? positiveQuantity(flag, flags[flag], 'length', unit, unit) : positive(flag, flags[flag]);
+      const v = flag === 'min-ei' ? positiveQuantity(flag, flags[flag], 'flexuralStiffness', 'N·m²', 'N·m²')
+        : flag === 'max-depth' ? positiveQuantity(flag, flags[flag], 'length', unit, unit)
+        : flag === 'min-ix' ? positiveQuantity(flag, flags[flag], 'inertia', `${unit}⁴`, `${unit}⁴`)
+        : flag === 'min-sx' || flag === 'min-zx' ? positiveQuantity(flag, flags[flag], 'modulus', `${unit}³`, `${unit}³`)
+        : positive(flag, flags[flag]);
       if (v !== undefined) targets[key] = v;
     }
     if (flags.stress === true) targets.stressWithinLimit = true;
@@ -174,8 +178,9 @@ export const compareCommand: Command = {
     'and by how much.',
     'Units follow the comparison unit: EIx, weight and deflections in kip·in², lb/ft and in for in/ft,',
     'kN·m², kg/m and mm for mm/cm/m; --json says the unit of every column in "units". --span, --load,',
-    '--live, --max-depth and --min-ei take units (--span 6m or 20ft, --load 30kN/m or 2kip/ft,',
-    '--min-ei 40000kN*m2); bare numbers keep their old units (span and depth in the unit, loads in',
+    '--live, --max-depth, --min-ix, --min-sx, --min-zx and --min-ei take units (--span 6m or 20ft,',
+    '--load 30kN/m or 2kip/ft, --min-ix 500in4 or 2.1e8mm4, --min-sx 60in3, --min-ei 40000kN*m2);',
+    'bare numbers keep their old units (span and depth in the unit, Ix in unit^4, Sx and Zx in unit^3, loads in',
     'N/m, EI in N·m²).',
     '--csv OUT writes the table as CSV; --svg OUT the outlines at one scale; --report OUT.html a printable report.',
   ].join('\n'),
@@ -187,11 +192,11 @@ export const compareCommand: Command = {
     { name: 'load', type: 'string', value: 'W', description: 'shared uniform load, total, e.g. 30kN/m, 2kip/ft (bare: N/m)' },
     { name: 'live', type: 'string', value: 'W', description: 'the live part of --load, e.g. 10kN/m (bare: N/m; for the live-load deflection)' },
     { name: 'stress-factor', type: 'string', value: 'F', description: 'bending stress limit = F × strength basis (fy; reference Fb for wood); default 1' },
-    { name: 'min-ix', type: 'string', value: 'X', description: 'target: Ix at least X (unit^4)' },
-    { name: 'min-sx', type: 'string', value: 'X', description: 'target: Sx (smaller fibre) at least X (unit^3)' },
-    { name: 'min-zx', type: 'string', value: 'X', description: 'target: Zx at least X (unit^3)' },
+    { name: 'min-ix', type: 'string', value: 'X', description: 'target: Ix at least X, e.g. 500in4 or 2.1e8mm4 (bare: unit^4)' },
+    { name: 'min-sx', type: 'string', value: 'X', description: 'target: Sx (smaller fibre) at least X, e.g. 60in3 (bare: unit^3)' },
+    { name: 'min-zx', type: 'string', value: 'X', description: 'target: Zx at least X, e.g. 1000cm3 (bare: unit^3)' },
     { name: 'min-ei', type: 'string', value: 'X', description: 'target: EIx at least X, e.g. 40000kN*m2 (bare: N·m^2)' },
-    { name: 'max-depth', type: 'string', value: 'X', description: 'target: overall depth at most X (unit)' },
+    { name: 'max-depth', type: 'string', value: 'X', description: 'target: overall depth at most X, e.g. 12in or 300mm (bare: unit)' },
     { name: 'limit', type: 'string', value: 'N', description: 'target: deflection under total load at most span/N (e.g. 240 or 360)' },
     { name: 'live-limit', type: 'string', value: 'N', description: 'target: deflection under live load at most span/N (e.g. 360); needs --live' },
     { name: 'stress', type: 'boolean', description: 'target: bending stress at most its limit in every material (needs --span and --load)' },

@@ -4,7 +4,8 @@
  * standard part. All numbers come from core (core/parts, core/catalogue, core/properties); this
  * file parses arguments, converts units for output (core/units) and lays out text.
  *
- * Units: TYPE dimensions are read in --unit (default in) and the results are reported in it;
+ * Units: TYPE dimensions are read in --unit (default in), or in their own unit (d=14in, through
+ * core/units readQuantity), and the results are reported in --unit;
  * lumber's b and d are nominal inch sizes whatever the unit. A designation's dimensions are the
  * catalogue's (inches); --unit only changes the reporting unit.
  * The JSON keys of the properties are those of `props` (propertiesInUnit, from the property catalogue).
@@ -19,7 +20,7 @@ import { writeOutputFile } from '../output.ts';
 import { getPartType, partTypes, shapeRegion } from '../../core/parts/index.ts';
 import { sectionProperties } from '../../core/properties/index.ts';
 import type { SectionProperties } from '../../core/properties/types.ts';
-import { convertLength, defaultDisplaySet, formatSig, isLengthUnit, QUANTITY_POWER, toDisplay, type LengthUnit } from '../../core/units/index.ts';
+import { convertLength, defaultDisplaySet, formatSig, fromSI, isLengthUnit, QUANTITY_POWER, readQuantity, toDisplay, type LengthUnit } from '../../core/units/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagSpec, type FlagValues } from '../command.ts';
 import { catalogueFor, PROPERTY_CATALOGUE, shownValue } from '../../core/properties/catalogue.ts';
 import { propertiesInUnit, propertyUnits } from './props.ts';
@@ -27,7 +28,7 @@ import { propertiesInUnit, propertyUnits } from './props.ts';
 export const PART_FLAGS: readonly FlagSpec[] = [
   { name: 'designation', type: 'string', value: 'NAME', description: 'a catalogue designation (AISC v15.0 shape such as W14X90, or lumber such as 2x10) instead of TYPE' },
   { name: 'json', type: 'boolean', description: 'print one JSON object (the keys of props) instead of the table' },
-  { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m of the dimensions and the results (default in)' },
+  { name: 'unit', type: 'string', value: 'U', description: 'length unit in|ft|mm|cm|m of bare-number dimensions and of the results (default in); a dimension may carry its own unit (d=14in)' },
   { name: 'points', type: 'string', value: 'FILE', description: 'with TYPE outline: the outline\'s points, one x y per line (tab, semicolon, comma or space separated; header optional)' },
   { name: 'third', type: 'string', value: 'bulge|radius', description: 'with --points: what a third column is, when its header does not say (bulge = tan(sweep/4); radius of a minor arc, + counter-clockwise)' },
   { name: 'dxf', type: 'string', value: 'OUT', description: 'also write the part as a DXF drawing (outline on layer SECTION, centroid, principal axes, property table with the caution)' },
@@ -40,6 +41,22 @@ export function parseDimension(text: string): number {
   const fraction = /^(\d+)\/(\d+)$/.exec(text);
   if (fraction !== null) return Number(fraction[1]) / Number(fraction[2]);
   return /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(text) ? Number(text) : Number.NaN;
+}
+
+/**
+ * One `key=value` dimension: a length through core/units readQuantity (a bare number in --unit,
+ * or with its own unit: d=14in, tw=3/8", d=355.6mm, d=1'-2"), returned in --unit; slopes, counts
+ * and lumber's nominal inch sizes are plain numbers and take no unit.
+ */
+export function readParameter(key: string, text: string, quantity: 'length' | 'ratio' | 'count' | 'nominal-in', unit: LengthUnit): { ok: true; value: number } | { ok: false; message: string } {
+  if (quantity !== 'length') {
+    const value = parseDimension(text);
+    const what = quantity === 'nominal-in' ? 'a nominal size in inches (e.g. 2 or 10)' : quantity === 'count' ? 'a whole number' : 'a plain ratio (rise over run)';
+    return Number.isFinite(value) ? { ok: true, value } : { ok: false, message: `${key}=${text}: ${key} is ${what}, written as a number with no unit (0.75, 3/4 or 1-1/2)` };
+  }
+  const r = readQuantity(text, { label: key, kind: 'length', unit });
+  if (!r.ok) return { ok: false, message: `${key}=${text}: ${r.message.replace(/^[^:]*: /, '')}` };
+  return { ok: true, value: r.unit === unit ? r.value : fromSI(r.si, 'length', unit) };
 }
 
 interface Request {
@@ -61,9 +78,11 @@ function parseTypeRequest(positionals: readonly string[], unit: LengthUnit): Par
   const params: Record<string, number> = Object.create(null) as Record<string, number>;
   for (const pair of pairs) {
     const m = /^([A-Za-z_][A-Za-z0-9_]*)=(.+)$/.exec(pair);
-    if (m === null) return { ok: false, message: `"${pair}" is not key=value (e.g. d=14 or t=3/4)` };
-    const value = parseDimension(m[2]!);
-    if (!Number.isFinite(value)) return { ok: false, message: `${m[1]}=${m[2]}: not a number (write 0.75, 3/4 or 1-1/2)` };
+    if (m === null) return { ok: false, message: `"${pair}" is not key=value (e.g. d=14, d=14in or t=3/4)` };
+    const spec = type.params.find((p) => p.key === m[1]);
+    const read = readParameter(m[1]!, m[2]!, spec?.quantity ?? 'length', unit);
+    if (!read.ok) return { ok: false, message: read.message };
+    const value = read.value;
     if (Object.hasOwn(params, m[1]!)) return { ok: false, message: `${m[1]} is given twice` };
     params[m[1]!] = value;
   }
@@ -190,7 +209,9 @@ export const partCommand: Command = {
   usage: 'part TYPE key=value … [--json] [--unit U] [--dxf OUT]  |  part --designation NAME [--json] [--unit U] [--dxf OUT]  |  part outline --points FILE [--third bulge|radius] [--unit U]',
   description: [
     'TYPE is a part type and each key=value one of its dimensions by trade symbol; values may be',
-    'decimals or fractions (t=3/4, d=1-1/2). Optional dimensions are marked "?" (rect-tube r',
+    'decimals or fractions (t=3/4, d=1-1/2). A bare number is in --unit (default in); a length may',
+    'carry its own unit (d=14in, d=355.6mm, tw=3/8", d=1\'-2"), converted to --unit. Slopes, ply',
+    'counts and lumber\'s nominal sizes take no unit. Optional dimensions are marked "?" (rect-tube r',
     'defaults to 2t; root and toe radii to 0; slope is rise over run, 2:12 = 0.1667):',
     ...typeLines(),
     '',

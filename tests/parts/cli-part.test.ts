@@ -68,7 +68,7 @@ describe('sectionsmith part', () => {
   it('exits 2 naming the problem: unknown type, bad value, impossible dimensions, unknown designation', async () => {
     const cases: [string[], Record<string, string>, string][] = [
       [['hexagon'], {}, 'no part type "hexagon"'],
-      [['plate', 'b=twelve', 't=1'], {}, 'b=twelve: not a number'],
+      [['plate', 'b=twelve', 't=1'], {}, 'b=twelve: "twelve" is not a number'],
       [['plate', 'b'], {}, '"b" is not key=value'],
       [['i-shape', 'd=1.5', 'bf=2', 'tw=0.2', 'tf=0.9'], {}, 'tf = 0.9 is not less than half of d = 1.5'],
       [[], { designation: 'W14X91' }, 'no catalogue entry "W14X91"'],
