@@ -10,11 +10,11 @@
  */
 import type { SectionProperties } from '../../core/properties/types.ts';
 import { compositeTorsionAnalysis, MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type ShearPiece, type TorsionResult } from '../../core/torsion/index.ts';
-import { builtInMaterial, documentMaterials, materialPiecesFromDocument, pascalsTo } from '../../core/materials/index.ts';
+import { builtInMaterial, documentMaterials, materialPiecesFromDocument } from '../../core/materials/index.ts';
 import type { SectionDocument } from '../../core/document/types.ts';
 import type { NetSectionProperties } from '../../core/properties/index.ts';
-import { catalogueFor, PROPERTY_CATALOGUE, shownValue, type CatalogueKind } from '../../core/properties/catalogue.ts';
-import { convertLength, defaultDisplaySet, formatSig, QUANTITY_POWER, toDisplay, type LengthUnit, type Quantity } from '../../core/units/index.ts';
+import { catalogueFor, PROPERTY_CATALOGUE, shownValue, TORSION_CATALOGUE, type CatalogueKind } from '../../core/properties/catalogue.ts';
+import { convertLength, defaultDisplaySet, formatSig, fromSI, QUANTITY_POWER, toDisplay, unitSystem, type LengthUnit, type Quantity } from '../../core/units/index.ts';
 import { cutParts, sectionDxf } from '../../core/dxf/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
 import { DXF_INPUT_FLAGS, dxfReadOptions, loadSectionArgument, type LoadedSection } from '../load.ts';
@@ -169,43 +169,41 @@ function torsionResults(file: string, section: LoadedSection, io: CliIo, unit: L
 
 /** GJ, G_ref and each material's G with its origin, for a section of several materials. */
 function withMaterialRows(out: ExtraResults, c: TorsionMaterials, section: LoadedSection, unit: LengthUnit, r: TorsionResult): ExtraResults {
-  const imperialUnit = unit === 'in' || unit === 'ft';
-  const stress = imperialUnit ? 'ksi' : 'GPa';
-  const force = imperialUnit ? 'lbf' : 'N';
-  // G in force per unit²: Pa = N/m², psi = lbf/in².
-  const perUnit2 = imperialUnit ? pascalsTo(c.gRef, 'psi') * convertLength(1, unit, 'in', 1) ** 2 : c.gRef * convertLength(1, unit, 'm', 1) ** 2;
-  const GJ = perUnit2 * convertLength(r.J, section.unit, unit, 4);
+  // The document's unit system (core/units): GJ as a stiffness (kip·in², kN·m²), G as a stress (ksi, MPa).
+  const system = unitSystem(unit);
+  const stress = system.units.stress;
+  const stiffness = system.units.flexuralStiffness;
+  const GJ = fromSI(c.gRef * convertLength(r.J, section.unit, 'm', 4), 'flexuralStiffness', stiffness);
   const g = (v: number): string => formatSig(v, SIGNIFICANT, { grouping: ',' });
-  const shown = (pa: number): number => pascalsTo(pa, stress);
+  const shown = (pa: number): number => fromSI(pa, 'stress', stress);
   const rows: (readonly [string, string, string, string])[] = [
-    ['GJ', g(GJ), `${force}·${unit}²`, `torsional stiffness Σ G_i J_i (J above is GJ / G_ref)`],
+    ['GJ', g(GJ), stiffness, `torsional stiffness Σ G_i J_i (J above is GJ / G_ref)`],
     ['Gref', g(shown(c.gRef)), stress, `reference shear modulus: ${c.gRefName} (the first part's material)`],
     ...c.moduli.map((m) => ['G', g(shown(m.G)), stress, `${m.name}: ${m.from}`] as const),
   ];
   const ratios = c.moduli.map((m) => m.eOverG);
   const spread = Math.max(...ratios) / Math.min(...ratios) - 1;
   if (spread > 0.01) rows.push(['weighting', 'G', '', 'shear centre and Cw are G-weighted; the materials differ in E/G (Poisson ratio), so E-weighting would move them']);
-  const json = { GJ, GJUnit: `${force}·${unit}²`, gRef: shown(c.gRef), shearModulusUnit: stress, shearModuli: c.moduli.map((m) => ({ material: m.id, G: shown(m.G), from: m.from })) };
-  return { json: { ...out.json, ...json }, units: { ...out.units, GJ: `${force}·${unit}²`, gRef: stress, 'shearModuli[].G': stress }, rows: [...out.rows, ...rows], errors: out.errors };
+  const json = { GJ, GJUnit: stiffness, gRef: shown(c.gRef), shearModulusUnit: stress, shearModuli: c.moduli.map((m) => ({ material: m.id, G: shown(m.G), from: m.from })) };
+  return { json: { ...out.json, ...json }, units: { ...out.units, GJ: stiffness, gRef: stress, 'shearModuli[].G': stress }, rows: [...out.rows, ...rows], errors: out.errors };
 }
 
 function torsionRows(section: LoadedSection, unit: LengthUnit, r: TorsionResult): ExtraResults {
   const g = (v: number): string => formatSig(v, SIGNIFICANT, { grouping: ',' });
   const L = (v: number, power: number): number => convertLength(v, section.unit, unit, power);
-  const units: Record<string, string> = { J: `${unit}⁴`, Cw: `${unit}⁶`, xs: unit, ys: unit, meshElements: '-', jRelativeError: '-', torsionComponents: '-' };
-  const values = { J: L(r.J, 4), Cw: L(r.Cw, 6), xs: L(r.xs, 1), ys: L(r.ys, 1), meshElements: r.meshElements, jRelativeError: r.jRelativeError, torsionComponents: r.components };
+  // J, Cw, xs, ys from the property catalogue (symbol, kind, meaning), rounding residue as 0.
+  const entries = catalogueFor('cli', TORSION_CATALOGUE);
+  const units: Record<string, string> = { ...Object.fromEntries(entries.map((e) => [e.key, kindUnit(e.kind, unit)])), meshElements: '-', jRelativeError: '-', torsionComponents: '-' };
+  const values: Record<string, number | null> = { ...Object.fromEntries(entries.map((e) => [e.key, e.kind === 'angle' || e.kind === 'ratio' ? r[e.key] : L(shownValue(e.kind, r[e.key], section.properties), QUANTITY_POWER[e.kind])])), meshElements: r.meshElements, jRelativeError: r.jRelativeError, torsionComponents: r.components };
   const rows: (readonly [string, string, string, string])[] = [
-    ['J', g(values.J), `${unit}⁴`, 'torsion constant (finite elements)'],
-    ['Cw', g(values.Cw), `${unit}⁶`, 'warping constant about the shear centre'],
-    ['xs', g(values.xs), unit, 'shear centre x (Trefftz)'],
-    ['ys', g(values.ys), unit, 'shear centre y (Trefftz)'],
+    ...entries.map((e) => [e.key, g(values[e.key] ?? NaN), kindUnit(e.kind, unit), e.meaning] as const),
     ['meshElements', String(r.meshElements), '', '6-node triangles in the torsion mesh'],
     ['jRelativeError', formatSig(r.jRelativeError * 100, 2), '%', 'estimated error of J (refined mesh, arc chords, simplified outline)'],
   ];
   if (r.components > 1) {
     // Pieces that twist on their own have no shared shear centre or warping constant.
     rows.splice(1, 3, ['Cw, xs, ys', '—', '', 'none: the pieces are separate, so there is no shared shear centre or Cw']);
-    rows[0] = ['J', g(values.J), `${unit}⁴`, `torsion constant: sum over ${r.components} separate pieces (finite elements)`];
+    rows[0] = ['J', g(values.J ?? NaN), `${unit}⁴`, `torsion constant: sum over ${r.components} separate pieces (finite elements)`];
     rows.push(['torsionComponents', String(r.components), '', 'separate pieces: each twists on its own, J values add']);
     Object.assign(values, { Cw: null, xs: null, ys: null });
   }
@@ -267,7 +265,7 @@ function json(file: string, s: LoadedSection, unit: LengthUnit, extra: ExtraResu
     ...(s.kind === 'document' ? { section: s.name, parts: s.parts, hiddenParts: s.hiddenParts } : {}),
     ...propertiesInUnit(s.properties, s.unit, unit),
     ...extra.json,
-    units: { ...propertyUnits(unit), ...extra.units },
+    units: { ...propertyUnits(unit), ...(s.kind === 'document' ? { parts: '-', hiddenParts: '-' } : {}), ...extra.units },
   };
   // Non-finite numbers have no JSON form; say null rather than writing invalid JSON.
   return `${JSON.stringify(body, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;

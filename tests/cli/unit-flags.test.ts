@@ -93,3 +93,21 @@ describe('compare --min-ix, --min-sx and --min-zx take units', () => {
     expect((await run(compareCommand, ['alts.json'], { 'min-zx': '5in4' }, alternatives)).err).toMatch(/--min-zx: "5in4" is a second moment of area.*not a section modulus/);
   });
 });
+
+describe('props --json says the unit of every number (issue 11 item 3)', () => {
+  it('a flitch beam of two materials in inches, with --torsion: every numeric key has its unit, stiffnesses in kip·in², G in ksi', async () => {
+    const { propsCommand } = await import('../../cli/commands/props.ts');
+    const { builtInMaterial } = await import('../../core/materials/library.ts');
+    const part = (id: string, w: number, h: number, x: number, material: string | null) => ({ ...rect(id, w, h), placement: { x, y: 0, rotationDeg: 0, mirror: false }, material });
+    const flitch = JSON.stringify({
+      format: 'sectionsmith-section', version: 2, name: 'mezzanine flitch beam', unit: 'in', materials: [builtInMaterial('df-l-no2'), builtInMaterial('astm-a36')], defaultMaterial: 'df-l-no2',
+      sections: [{ id: 's', name: 'flitch', parts: [part('left', 1.5, 9.25, -1, null), part('plate', 0.5, 9, 0, 'astm-a36'), part('right', 1.5, 9.25, 1, null)] }],
+    });
+    const r = await run(propsCommand, ['flitch.json'], { json: true, torsion: true }, flitch);
+    expect(r.err).toBe('');
+    const j = JSON.parse(r.out) as Record<string, unknown> & { units: Record<string, string> };
+    const missing = Object.entries(j).filter(([k, v]) => typeof v === 'number' && !Object.hasOwn(j.units, k)).map(([k]) => k);
+    expect(missing).toEqual([]);
+    expect([j.units.EIx, j.units.GJ, j.units.gRef, j.units.weightPerLength]).toEqual(['kip·in²', 'kip·in²', 'ksi', 'lb/ft']);
+  });
+});

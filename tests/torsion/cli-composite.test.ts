@@ -34,29 +34,29 @@ describe('props --torsion on a section of two materials', () => {
   const gSteel = 200_000 / 2.6;
   const exactJ = (Math.PI / 2) * (37 ** 4 - 23 ** 4) + (12_000 / gSteel) * (Math.PI / 2) * 23 ** 4;
 
-  it('--json: J = Σ G_i J_i / G_ref within 0.1 %, GJ = G_ref·J in N·mm², each G with its origin', () => {
+  it('--json: J = Σ G_i J_i / G_ref within 0.1 %, GJ = G_ref·J in kN·m² and each G in MPa (the metric unit system), each G with its origin', () => {
     const r = run(doc, { json: true, torsion: true });
     expect(r.err).toBe('');
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out) as { J: number; GJ: number; GJUnit: string; gRef: number; shearModulusUnit: string; shearModuli: { material: string; G: number; from: string }[] };
     expect(Math.abs(j.J / exactJ - 1)).toBeLessThan(1e-3);
-    expect(j.shearModulusUnit).toBe('GPa');
-    expect(j.gRef).toBeCloseTo(gSteel / 1000, 9);
-    // N·mm² = MPa × mm⁴.
-    expect(j.GJUnit).toBe('N·mm²');
-    expect(j.GJ / (gSteel * j.J) - 1).toBeCloseTo(0, 12);
+    expect(j.shearModulusUnit).toBe('MPa');
+    expect(j.gRef).toBeCloseTo(gSteel, 9);
+    // MPa × mm⁴ = N·mm² = 1e-9 kN·m² (SI prefixes, exact).
+    expect(j.GJUnit).toBe('kN·m²');
+    expect(j.GJ / ((gSteel * j.J) / 1e9) - 1).toBeCloseTo(0, 12);
     expect(j.shearModuli).toEqual([
-      { material: 'steel', G: expect.closeTo(gSteel / 1000, 9) as unknown as number, from: 'from E and ν = 0.3: G = E/(2(1 + ν))' },
-      { material: 'fill', G: 12, from: 'typed' },
+      { material: 'steel', G: expect.closeTo(gSteel, 9) as unknown as number, from: 'from E and ν = 0.3: G = E/(2(1 + ν))' },
+      { material: 'fill', G: 12_000, from: 'typed' },
     ]);
   });
 
   it('the table names GJ, G_ref and each material\'s G, and notes that the materials differ in E/G', () => {
     const r = run(doc, { torsion: true });
     expect(r.code).toBe(0);
-    expect(r.out).toMatch(/GJ\s+\S+\s+N·mm²\s+torsional stiffness/);
-    expect(r.out).toMatch(/Gref\s+76\.923\d*\s+GPa\s+reference shear modulus: steel/);
-    expect(r.out).toMatch(/G\s+12\.0*\s+GPa\s+fill: typed/);
+    expect(r.out).toMatch(/GJ\s+\S+\s+kN·m²\s+torsional stiffness/);
+    expect(r.out).toMatch(/Gref\s+76,923\.\d*\s+MPa\s+reference shear modulus: steel/);
+    expect(r.out).toMatch(/G\s+12,000\.?\d*\s+MPa\s+fill: typed/);
     expect(r.out).toMatch(/G-weighted; the materials differ in E\/G/);
   });
 });
