@@ -220,7 +220,7 @@ export function memberJsonUnits(s: UnitSystem): Record<string, string> {
     'stresses[].maxTension': u.stress, 'stresses[].maxTensionAt.x': l, 'stresses[].maxTensionAt.y': l,
     'stresses[].maxCompression': u.stress, 'stresses[].maxCompressionAt.x': l, 'stresses[].maxCompressionAt.y': l, 'stresses[].strengthRatio': '-',
     'limit.ratio': '-', 'limit.limitLength': l, 'limit.allowed': d, liveDeflectionMax: d, 'shearMax.value': u.force, 'shearMax.at': l,
-    'verdict.criteria[].demand': `${d} for deflections, ${u.stress} for stresses`, 'verdict.criteria[].limit': `${d} for deflections, ${u.stress} for stresses`, 'verdict.criteria[].ratio': '-',
+    'verdict.criteria[].demand': `${d} for deflections, ${u.stress} for stresses`, 'verdict.criteria[].limit': `${d} for deflections, ${u.stress} for stresses`, 'verdict.criteria[].ratio': '-', 'deflectionSearch.iterations': '-', 'deflectionSearch.residual': '-',
   };
 }
 
