@@ -139,14 +139,20 @@ export function jointSettingFor(settings: readonly JointSetting[] | undefined, i
 export function findJoints(doc: SectionDocument, parts: readonly ComposedPart[]): Joint[] {
   const tol = jointTolerance(parts);
   const metal = partMetal(doc, parts);
-  const segs = parts.map((p) => (p.part.operation === 'add' ? straightSegments(p.region) : []));
+  // Segments are listed only for parts that have a neighbour within reach (a lone part's outline may be large).
+  const segs = new Map<number, Seg[]>();
+  const segsOf = (k: number): Seg[] => {
+    let s = segs.get(k);
+    if (s === undefined) segs.set(k, (s = straightSegments((parts[k] as ComposedPart).region)));
+    return s;
+  };
   const joints: Joint[] = [];
   for (let a = 0; a < parts.length; a++) {
     for (let b = a + 1; b < parts.length; b++) {
       const pa = parts[a] as ComposedPart, pb = parts[b] as ComposedPart;
       if (pa.part.operation !== 'add' || pb.part.operation !== 'add' || !boxesNear(pa.region, pb.region, tol)) continue;
       const segments: ContactSegment[] = [];
-      for (const p of segs[a] ?? []) for (const q of segs[b] ?? []) {
+      for (const p of segsOf(a)) for (const q of segsOf(b)) {
         const c = contactOf(p, q, tol);
         if (c) segments.push(c);
       }

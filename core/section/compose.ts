@@ -363,8 +363,24 @@ function combineParts(parts: readonly ComposedPart[], docName: string): Combinin
   return state;
 }
 
+/**
+ * Compositions by document object: a document is never changed in place (every edit makes a new
+ * one), so the several readers of one document in one command (properties, materials, joints,
+ * exports) share one composition instead of validating and combining a large outline again.
+ */
+const compositions = new WeakMap<SectionDocument, Composition>();
+
 /** The document's visible parts combined into one region (gross) and, with fastener holes, the net region, with every problem found. */
 export function regionFromDocument(doc: SectionDocument): Composition {
+  let composition = compositions.get(doc);
+  if (composition === undefined) {
+    composition = composeDocument(doc);
+    compositions.set(doc, composition);
+  }
+  return composition;
+}
+
+function composeDocument(doc: SectionDocument): Composition {
   const parts: ComposedPart[] = [];
   const diagnostics: Diagnostic[] = [];
   let hiddenParts = 0;
