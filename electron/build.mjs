@@ -3,6 +3,7 @@
 // `node electron/build.mjs` runs it; electron/launch.mjs imports `buildDesktop`.
 import { build as esbuild } from 'esbuild';
 import { build as viteBuild } from 'vite';
+import { existsSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -14,6 +15,42 @@ export const WEB_ROOT = process.env.SECTIONSMITH_WEB_OUT ? path.resolve(process.
 
 export async function buildRenderer() {
   await viteBuild({ configFile: path.join(ROOT, 'renderer', 'vite.config.ts'), logLevel: 'error', build: { outDir: WEB_ROOT } });
+}
+
+// What the browser build is made from: its sources, the engine, the example documents, and the
+// installed packages (through the lock file).
+const BUILD_INPUT_FOLDERS = ['renderer', 'core', path.join('assets', 'examples')];
+const BUILD_INPUT_FILES = ['package.json', 'package-lock.json', 'tsconfig.json'];
+const BUILD_STAMP = '.sectionsmith-inputs.json';
+
+/** Path, size and mtime of every input file, in a fixed order. */
+function buildInputs() {
+  const out = [];
+  const visit = (relative) => {
+    const full = path.join(ROOT, relative);
+    const stat = statSync(full, { throwIfNoEntry: false });
+    if (stat === undefined) return;
+    if (stat.isDirectory()) {
+      for (const name of readdirSync(full).sort()) visit(path.join(relative, name));
+    } else out.push(`${relative} ${stat.size} ${stat.mtimeMs}`);
+  };
+  for (const f of [...BUILD_INPUT_FOLDERS, ...BUILD_INPUT_FILES]) visit(f);
+  return out;
+}
+
+/**
+ * Builds the browser app unless WEB_ROOT already holds a build of exactly these inputs (every
+ * file's size and mtime, recorded beside the build). Resolves true when it built. A changed,
+ * added or removed file rebuilds; SECTIONSMITH_REBUILD=1 always does.
+ */
+export async function buildRendererIfChanged() {
+  const inputs = JSON.stringify(buildInputs());
+  const stamp = path.join(WEB_ROOT, BUILD_STAMP);
+  if (process.env.SECTIONSMITH_REBUILD !== '1' && existsSync(path.join(WEB_ROOT, 'index.html')) && existsSync(stamp) && readFileSync(stamp, 'utf8') === inputs) return false;
+  rmSync(stamp, { force: true });
+  await buildRenderer();
+  writeFileSync(stamp, inputs);
+  return true;
 }
 
 export async function buildElectron() {

@@ -122,6 +122,11 @@ export interface ControllerDeps {
   /** Makes the torsion runner, given where to report its state. */
   readonly torsion: (onState: (s: TorsionState) => void) => TorsionRunner;
   readonly timers?: Timers;
+  /**
+   * false: the example file gets no automatic torsion while it is open as the example (browser
+   * tests, `?example-torsion=off`, spare the CPU its solve takes); every other document gets it.
+   */
+  readonly exampleTorsion?: boolean;
 }
 
 const isLengthParam = (shape: string, key: string): boolean => {
@@ -143,6 +148,9 @@ export class AppController implements CommandTarget {
   private pendingFit = true;
   /** The example was loaded and waits to be seen (marked seen once the canvas has shown it). */
   private exampleWaiting = false;
+  private readonly exampleTorsion: boolean;
+  /** The open-file record the example was loaded with (the editor keeps it until New, Open or Save). */
+  private exampleOpenFile: { name: string; handle: null } | null = null;
   private clipboard: readonly Part[] = [];
   private pasteCount = 0;
   private lastDoc: SectionDocument | null = null;
@@ -162,6 +170,7 @@ export class AppController implements CommandTarget {
   constructor(deps: ControllerDeps) {
     this.host = deps.host;
     this.exampleText = deps.exampleText;
+    this.exampleTorsion = deps.exampleTorsion ?? true;
     this.timers = deps.timers ?? { set: (fn, ms) => globalThis.setTimeout(fn, ms), clear: (h) => globalThis.clearTimeout(h as ReturnType<typeof setTimeout>) };
     const holder: { ed: Editor | null } = { ed: null };
     const resolver = shapeOutlineResolver(() => holder.ed?.getState().doc.unit ?? 'mm');
@@ -273,6 +282,7 @@ export class AppController implements CommandTarget {
     this.torsionRunner.cancel();
     const st = this.editor.getState();
     if (st.gesture || !this.results(st.doc).properties) return;
+    if (!this.exampleTorsion && st.file !== null && st.file === this.exampleOpenFile) return;
     const doc = st.doc;
     this.torsionTimer = this.timers.set(() => {
       this.torsionTimer = null;
@@ -363,7 +373,7 @@ export class AppController implements CommandTarget {
     else if (seen === null) {
       const ex = this.exampleFile();
       if (ex) {
-        this.loadDoc(ex, { name: EXAMPLE_NAME, handle: null });
+        this.loadDoc(ex, (this.exampleOpenFile = { name: EXAMPLE_NAME, handle: null }));
         this.exampleWaiting = true;
         this.markExampleSeenIfShown();
       }
@@ -534,7 +544,7 @@ export class AppController implements CommandTarget {
   async openExample(): Promise<void> {
     if (!(await this.confirmDiscard())) return;
     const ex = this.exampleFile();
-    if (ex) this.loadDoc(ex, { name: EXAMPLE_NAME, handle: null });
+    if (ex) this.loadDoc(ex, (this.exampleOpenFile = { name: EXAMPLE_NAME, handle: null }));
   }
 
   async openLaunchFile(): Promise<void> {

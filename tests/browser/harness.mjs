@@ -1,4 +1,4 @@
-// Browser test harness: builds the web app once, serves dist/web on 127.0.0.1 with the desktop
+// Browser test harness: builds the web app once (reused while its inputs are unchanged), serves dist/web on 127.0.0.1 with the desktop
 // app's own CSP (electron/window-options.ts, so a CSP break shows up here too), and drives
 // Chromium through playwright-core (tests/browser/browser.mjs says which one). Each test gets a
 // fresh browser context (empty storage, downloads accepted) and fails on an uncaught page error or
@@ -6,7 +6,7 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { buildRenderer, ROOT } from '../../electron/build.mjs';
+import { buildRendererIfChanged, ROOT } from '../../electron/build.mjs';
 import { serveWebBuild } from '../../electron/serve-web.mjs';
 import { launchTestBrowser } from './browser.mjs';
 
@@ -16,7 +16,9 @@ export const TEST_TIMEOUT_MS = 60_000;
 /** Builds, serves and launches; returns what the tests need and a stop function. */
 export async function startHarness() {
   // The build and the browser's launch (its first unpacking, for the packaged one) overlap.
-  const [launched, built] = await Promise.allSettled([launchTestBrowser(), buildRenderer()]);
+  // An unchanged build is reused (electron/build.mjs buildRendererIfChanged).
+  const buildStarted = performance.now();
+  const [launched, built] = await Promise.allSettled([launchTestBrowser(), buildRendererIfChanged().then((did) => ({ did, ms: Math.round(performance.now() - buildStarted) }))]);
   if (built.status === 'rejected') {
     if (launched.status === 'fulfilled') await launched.value.browser.close();
     throw built.reason;
@@ -24,7 +26,7 @@ export async function startHarness() {
   if (launched.status === 'rejected') throw launched.reason;
   const { browser, name, launchMs } = launched.value;
   const server = await serveWebBuild({ port: 4317 });
-  console.log(`browser: ${name}, launched in ${launchMs} ms`);
+  console.log(`browser: ${name}, launched in ${launchMs} ms; web app ${built.value.did ? `built in ${built.value.ms} ms` : 'unchanged since its last build, reused'}`);
   mkdirSync(ARTIFACTS, { recursive: true });
   return {
     browser,
@@ -86,9 +88,19 @@ export function check(condition, message) {
 
 // ---- helpers shared by the host tests ----
 
-/** Opens the app and waits until the results panel shows an area. */
-export async function openApp(page, baseUrl) {
-  await page.goto(baseUrl);
+/**
+ * The app's address for a test. The example opened on first start is not solved for torsion
+ * (`?example-torsion=off`): its solve takes seconds of CPU that most tests never look at. Pass
+ * { exampleTorsion: true } where a test reads the example's J, Cw or shear centre; any other
+ * document (File › New, then parts) is solved as always.
+ */
+export function appUrl(baseUrl, { exampleTorsion = false } = {}) {
+  return exampleTorsion ? baseUrl : `${baseUrl}?example-torsion=off`;
+}
+
+/** Opens the app (see appUrl for the options) and waits until the results panel shows an area. */
+export async function openApp(page, baseUrl, options = {}) {
+  await page.goto(appUrl(baseUrl, options));
   await page.locator('[data-testid="result-area"]').first().waitFor({ timeout: 20_000 });
 }
 

@@ -42,7 +42,7 @@ export async function reportOfATypedPlateTabulatesClosedFormValuesInDisplayUnits
 }
 
 export async function exampleReportPrintsToFewA4PagesWithEveryTableWholeAndTheCautionOnTheFirstAndLastPage({ page, baseUrl, artifactsDir, context }) {
-  await openApp(page, baseUrl);
+  await openApp(page, baseUrl, { exampleTorsion: true });
   // Wait for the finite-element torsion of the example, so the report has J, Cw and the mesh note.
   await page.locator('[data-testid="torsion"][data-state="done"]').waitFor({ timeout: 45_000 });
   await menuItem(page, 'File', 'print-report');

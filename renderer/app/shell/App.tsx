@@ -47,7 +47,9 @@ function keyInput(e: KeyboardEvent): Parameters<AppController['keyDown']>[0] {
 
 /** The app's controller: made once by main.tsx, outside React, so the document outlives any view. */
 export function createAppController(): AppController {
-  return new AppController({ host: getHost(), exampleText, torsion: (onState) => new TorsionClient(onState) });
+  // `?example-torsion=off` (browser tests): the example opened at start is not solved for torsion.
+  const exampleTorsion = new URLSearchParams(globalThis.location?.search ?? '').get('example-torsion') !== 'off';
+  return new AppController({ host: getHost(), exampleText, torsion: (onState) => new TorsionClient(onState), exampleTorsion });
 }
 
 export function App({ controller: given }: { readonly controller?: AppController } = {}): ReactElement {
