@@ -2,7 +2,7 @@
  * The drawing. Konva handlers only translate pointer events into editor calls (STYLE.md §8);
  * layers are separate (§11): grid and rulers, document shapes, results overlay, interaction overlay.
  */
-import { useEffect, useRef, useState, type ReactElement } from 'react';
+import { useEffect, useRef, useState, type ReactElement, type ReactNode } from 'react';
 import { Stage, Layer, Line, Circle, Shape, Text, Group, Rect, Label, Tag } from 'react-konva';
 import type Konva from 'konva';
 import type { Editor, EditorState } from '../../editor/editor.ts';
@@ -38,6 +38,8 @@ interface Props {
   /** Stresses of the current document under the stress panel's forces, when computed. */
   readonly stress?: StressView | null;
   readonly overlays: Overlays;
+  /** Layers of other features (each a react-konva Layer in a file of its own), drawn under the interaction layer. */
+  readonly layers?: ReactNode;
   readonly view: View;
   readonly onView: (v: View) => void;
   readonly onSize: (w: number, h: number) => void;
@@ -584,6 +586,7 @@ export function Canvas(props: Props): ReactElement {
             );
           })}
         </Layer>
+        {props.layers}
         <Layer listening={false}>
           <InteractionOverlay state={state} outlines={outlines} view={view} />
         </Layer>

@@ -1,6 +1,8 @@
 /** The part list: names, add or subtract, visibility, order; selection synced with the canvas. */
 import type { ReactElement } from 'react';
 import type { Editor, EditorState } from '../../editor/editor.ts';
+import { CutoutRoleSelect } from '../joints/JointsPanel.tsx';
+import { operationToggled } from '../joints/joints-model.ts';
 
 export function PartsPanel({ editor, state }: { editor: Editor; state: EditorState }): ReactElement {
   const parts = state.doc.parts;
@@ -24,11 +26,12 @@ export function PartsPanel({ editor, state }: { editor: Editor; state: EditorSta
                 <span className="muted kind">{p.type === 'shape' ? (p.designation ?? p.shape) : p.type === 'rectangle' ? 'plate' : p.type === 'circle' ? 'round' : 'outline'}</span>
               </button>
               <span className="row-actions">
+                {p.operation === 'subtract' && <CutoutRoleSelect editor={editor} id={p.id} role={p.cutoutRole ?? 'void'} testId={`part-role-${i}`} />}
                 <button
                   type="button"
                   title={p.operation === 'add' ? 'Make this part a cut-out' : 'Make this part solid'}
                   data-testid={`part-operation-${i}`}
-                  onClick={() => editor.updatePart(p.id, 'Change add/subtract', (q) => ({ ...q, operation: q.operation === 'add' ? 'subtract' : 'add' }))}
+                  onClick={() => editor.updatePart(p.id, 'Change add/subtract', operationToggled)}
                 >
                   {p.operation === 'add' ? 'cut' : 'solid'}
                 </button>

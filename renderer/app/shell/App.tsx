@@ -26,6 +26,9 @@ import { CheckView } from '../check/CheckView.tsx';
 import { CompareView } from '../compare/CompareView.tsx';
 import { SectionsBar } from '../sections/SectionsBar.tsx';
 import { SectionReport } from '../report/ReportView.tsx';
+import { JointsNotes, JointsPanel } from '../joints/JointsPanel.tsx';
+import { JointsLayer } from '../joints/JointsLayer.tsx';
+import { JointsStore } from '../joints/joints-store.ts';
 import type { MemberCase } from '../report/report-input.ts';
 import { computeStress, type ForceTexts } from '../stress/stress.ts';
 import exampleText from '../../../assets/examples/footbridge-box-girder.section.json?raw';
@@ -65,6 +68,7 @@ export function App({ controller: given }: { readonly controller?: AppController
   const display = controller.display();
   const { overlays, torsion, banner, recovery, view } = app;
   const docName = controller.documentName();
+  const joints = useMemo(() => new JointsStore(), [controller]);
 
   useEffect(() => {
     void controller.start();
@@ -197,6 +201,7 @@ export function App({ controller: given }: { readonly controller?: AppController
             diagnostics={results.diagnostics}
             stress={stress?.ok && stressDoc === state.doc ? stress.view : null}
             overlays={overlays}
+            layers={<JointsLayer doc={state.doc} view={view} store={joints} />}
             view={view}
             onView={(v) => controller.setView(v)}
             onSize={(w, h) => controller.setSize(w, h)}
@@ -248,6 +253,8 @@ export function App({ controller: given }: { readonly controller?: AppController
             <p className="muted small">Changing the document unit converts every length exactly, so the section stays the same physical size. The display unit changes only how results read.</p>
           </div>
           <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={app.sig} torsion={torsion} current={state.doc} />
+          <JointsNotes doc={state.doc} />
+          <JointsPanel editor={editor} doc={state.doc} store={joints} />
           <MaterialsPanel editor={editor} doc={state.doc} valid={!!results.properties} display={display} />
           <StressPanel
             doc={state.doc}
