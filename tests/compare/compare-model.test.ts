@@ -83,3 +83,46 @@ describe('compare view model', () => {
     expect(uniqueNames([plate('a', 1, 1, null), plate('a', 1, 1, null), plate(' ', 1, 1, null)]).map((e) => e.name)).toEqual(['a', 'a (2)', 'Untitled section']);
   });
 });
+
+describe('compare view in the document\'s unit system (issue 11: an inch comparison report said "uniform load 4.378 kN/m" with densities in kg/m³)', () => {
+  const inch = (name: string, b: number, h: number) => plate(name, b, h, 'astm-a992', 'in');
+
+  it('an inch comparison typed "20 ft" and "30 kN/m": the report says 2.056 kip/ft (30000 · 0.3048 / 4448.2216152605), densities 490 lb/ft³, weight in lb/ft', () => {
+    const m = compareModel([inch('4 x 12', 4, 12), inch('4 x 10', 4, 10)], { ...DEFAULT_INPUTS, span: '20 ft', load: '30 kN/m' }, defaultDisplaySet('in'));
+    expect(m.ok).toBe(true);
+    if (!m.ok) return;
+    expect(m.inputErrors).toEqual([]);
+    expect(m.comparison.beam?.span).toBeCloseTo(240, 12);
+    expect(m.comparison.beam?.load).toBeCloseTo(30000, 9);
+    const report = comparisonReportInput(m, 4);
+    const checks = report.memberChecks?.join(' ') ?? '';
+    expect(checks).toContain(`uniform load ${((30000 * 0.3048) / 4448.2216152605).toFixed(3)} kip/ft`);
+    expect(checks).not.toMatch(/kN\/m/);
+    // A992: 490 lb/ft³ (AISC Manual, common practice, from memory).
+    expect(report.materials?.join(' ')).toMatch(/density 490\.?0* lb\/ft³/);
+    expect(report.materials?.join(' ')).not.toMatch(/kg\/m³/);
+    const w = m.columns.find((c) => c.key === 'weight')!;
+    // 490 lb/ft³ × 48/144 ft² = 163.33 lb/ft.
+    expect(w.toShown(m.rows.find((r) => r.name === '4 x 12')!.values.weight!) / ((490 * 48) / 144) - 1).toBeCloseTo(0, 12);
+  });
+
+  it('a metric comparison shows weight in kg/m and EIx in kN·m²; targets typed with units: "3e7 mm4", "1 ft", "8000 kN*m2"', () => {
+    const m = compareModel([plate('light', 10, 300, 'astm-a992'), plate('heavy', 20, 300, 'astm-a992')], { ...DEFAULT_INPUTS, minIx: '3e7 mm4', maxDepth: '1 ft', minEI: '8000 kN*m2' }, mm);
+    expect(m.ok).toBe(true);
+    if (!m.ok) return;
+    expect(m.inputErrors).toEqual([]);
+    const w = m.columns.find((c) => c.key === 'weight')!;
+    const ei = m.columns.find((c) => c.key === 'EIx')!;
+    expect([w.unit, ei.unit]).toEqual(['kg/m', 'kN·m²']);
+    // 10 × 300 mm of 490 lb/ft³ steel: 490 × 0.45359237 / 0.3048³ kg/m³ × 0.003 m².
+    expect(w.toShown(m.rows.find((r) => r.name === 'light')!.values.weight!) / (((490 * 0.45359237) / 0.3048 ** 3) * 0.003) - 1).toBeCloseTo(0, 12);
+    // Ix: light 2.25e7, heavy 4.5e7 mm⁴; EIx = E · I: light 4484 kN·m², heavy 8967 kN·m² (E = 29000 ksi); depth 300 mm < 304.8 mm.
+    expect(m.lightest).toBe('heavy');
+    expect(m.verdicts.find((v) => v.name === 'light')?.reasons.join(' ')).toMatch(/Ix 22\.50 10⁶ mm⁴ is below the 30 10⁶ mm⁴ asked for/);
+  });
+
+  it('a force typed as the span is refused naming the box and the text', () => {
+    const m = compareModel([plate('a', 10, 100, 'astm-a992')], { ...DEFAULT_INPUTS, span: '6 kN', load: '2' }, mm);
+    expect(m.ok && m.inputErrors.join(' ')).toMatch(/span \(mm\): "6 kN" is a force, not a length/);
+  });
+});

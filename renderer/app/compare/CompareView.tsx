@@ -13,7 +13,7 @@ import { comparisonSvg } from '../../../core/compare/index.ts';
 import { allSectionViews } from '../../../core/document/index.ts';
 import type { DisplaySet, LengthUnit } from '../../../core/units/index.ts';
 import { getHost } from '../../host/index.ts';
-import { comparisonFiles, comparisonReportInput, compareModel, DEFAULT_INPUTS, nextSort, shownNumber, shownRatio, type CompareEntry, type CompareInputs } from './compare-model.ts';
+import { compareUnits, comparisonFiles, comparisonReportInput, compareModel, DEFAULT_INPUTS, nextSort, shownNumber, shownRatio, type CompareEntry, type CompareInputs } from './compare-model.ts';
 import { documentFromText } from '../../controller/files.ts';
 import { fileStem } from '../report/report-input.ts';
 import { ReportView, sameDisplay, today, useStable } from '../report/ReportView.tsx';
@@ -41,7 +41,7 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
   const model = useMemo(() => compareModel(entries, inputs, units), [entries, inputs, units]);
   const set = (k: keyof CompareInputs, v: string): void => setInputs((o) => ({ ...o, [k]: v }));
   const unit: LengthUnit = model.ok ? model.comparison.unit : (entries[0]?.doc.unit ?? 'mm');
-  const inch = unit === 'in' || unit === 'ft';
+  const cu = compareUnits(unit);
 
   useEffect(() => {
     const onKey = (e: KeyboardEvent): void => {
@@ -122,7 +122,7 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
             <input data-testid="compare-span" value={inputs.span} placeholder="none" onChange={(e) => set('span', e.target.value)} />
           </label>
           <label className="field">
-            <span>uniform load ({inch ? 'kip/ft' : 'kN/m'})</span>
+            <span>uniform load ({cu.lineLoad})</span>
             <input data-testid="compare-load" value={inputs.load} placeholder="none" onChange={(e) => set('load', e.target.value)} />
           </label>
           <label className="field">
@@ -134,7 +134,7 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
             <input data-testid="compare-ratio" list="compare-ratios" value={inputs.ratio} placeholder="none" onChange={(e) => set('ratio', e.target.value)} />
           </label>
           <label className="field">
-            <span>live part of the load ({inch ? 'kip/ft' : 'kN/m'})</span>
+            <span>live part of the load ({cu.lineLoad})</span>
             <input data-testid="compare-live" value={inputs.live} placeholder="none" onChange={(e) => set('live', e.target.value)} />
           </label>
           <label className="field">
@@ -150,7 +150,7 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
             <input data-testid="compare-min-zx" value={inputs.minZx} placeholder="none" onChange={(e) => set('minZx', e.target.value)} />
           </label>
           <label className="field">
-            <span>target EIx ≥ ({inch ? 'kip·in²' : 'kN·m²'})</span>
+            <span>target EIx ≥ ({cu.flexuralStiffness})</span>
             <input data-testid="compare-min-ei" value={inputs.minEI} placeholder="none" onChange={(e) => set('minEI', e.target.value)} />
           </label>
           <label className="field">

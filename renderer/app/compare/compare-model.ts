@@ -5,18 +5,21 @@
  * editor's display units, sorting by any column, targets (Ix ≥ X, deflection ≤ span/n) with the
  * lightest passing alternative and, for each other one, the reason it fails.
  *
- * Units: the comparison works in the length unit of the first alternative (`unit`). The span is
- * typed in that unit; the uniform load in kN/m (kip/ft for inch and foot work); the Ix target in
- * the display unit of second moments. EI is shown in kN·m² (kip·in²), weight in kN/m (lb/ft),
- * deflection in the display length unit. Alternatives whose geometry is invalid are left out
- * and listed with the reason.
+ * Units: the comparison works in the length unit of the first alternative (`unit`), and forces,
+ * EI and weights in that unit's system (core/units unitSystem: kip/ft, kip·in², lb/ft for inch
+ * and foot work; kN/m, kN·m², kg/m for mm, cm and m). Every typed box reads through core/units
+ * readQuantity: a bare number is in the unit the box shows (span in `unit`, load in the system's
+ * line-load unit, the Ix, Sx and Zx targets in the display units of the section's properties,
+ * EIx in the system's unit, depth in the display length unit); a number with its own unit
+ * ("20 ft", "30 kN/m", "500 in4") is converted. Deflection is shown in the display length unit.
+ * Alternatives whose geometry is invalid are left out and listed with the reason.
  */
 import { anyTarget, COLUMN_HEADINGS, COMPARE_COLUMNS, compareDocuments, CompareError, comparisonCsv, comparisonSvg, lightestMeeting, sortAlternatives, stiffnessRanking, type Alternative, type CompareColumn, type Comparison, type Pick, type TargetFailure, type Targets } from '../../../core/compare/index.ts';
 import { STRESS_FACTOR_MEANING } from '../../../core/member/verdict.ts';
 import type { SectionDocument } from '../../../core/document/types.ts';
 import type { ReportInput, ReportTable } from '../../../core/report/index.ts';
 import { sectionFromDocument } from '../../../core/section/index.ts';
-import { convertLength, formatSig, fromDisplay, toDisplay, type DisplaySet, type LengthUnit, type Quantity } from '../../../core/units/index.ts';
+import { convertLength, formatSig, fromDisplay, fromSI, KINDS, readQuantity, toDisplay, toSI, unitSystem, type DisplaySet, type LengthUnit, type Quantity, type QuantityKind } from '../../../core/units/index.ts';
 import { parseNumber } from '../shell/numbers.ts';
 import { materialLines } from '../report/report-input.ts';
 
@@ -92,13 +95,15 @@ export type CompareModel =
       readonly stressMeaning: string;
     };
 
-const inchWork = (u: LengthUnit): boolean => u === 'in' || u === 'ft';
-const N_PER_KIP = 4448.2216152605; // exact: 1 lbf = 4.4482216152605 N
-const N_PER_LBF = 4.4482216152605;
+/** The units the view's force-like boxes and columns use for a comparison in `unit`. */
+export function compareUnits(unit: LengthUnit): { lineLoad: string; flexuralStiffness: string; weightPerLength: string } {
+  const s = unitSystem(unit).units;
+  return { lineLoad: s.lineLoad, flexuralStiffness: s.flexuralStiffness, weightPerLength: s.weightPerLength };
+}
 
 /** The column list with the units the view shows. */
 export function compareColumns(unit: LengthUnit, display: DisplaySet): ColumnInfo[] {
-  const inch = inchWork(unit);
+  const u = compareUnits(unit);
   const q = (quantity: Quantity, v: number, power = 1): number => toDisplay(v, unit, display[quantity]) * power;
   const info: Record<CompareColumn, Omit<ColumnInfo, 'key'>> = {
     A: { symbol: 'A', meaning: 'area', unit: display.area.label, toShown: (v) => q('area', v) },
@@ -111,12 +116,8 @@ export function compareColumns(unit: LengthUnit, display: DisplaySet): ColumnInf
     SxPerA: { symbol: COLUMN_HEADINGS.SxPerA, meaning: 'elastic strength per area', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, unit, display.length.lengthUnit) },
     ZxPerA: { symbol: 'Zx/A', meaning: 'plastic strength per area', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, unit, display.length.lengthUnit) },
     depth: { symbol: COLUMN_HEADINGS.depth, meaning: 'overall depth of the section (top to bottom)', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, unit, display.length.lengthUnit) },
-    EIx: inch
-      ? { symbol: COLUMN_HEADINGS.EIx, meaning: 'bending stiffness, each material with its own E', unit: 'kip·in²', toShown: (v) => v / N_PER_KIP / 0.0254 ** 2 }
-      : { symbol: COLUMN_HEADINGS.EIx, meaning: 'bending stiffness, each material with its own E', unit: 'kN·m²', toShown: (v) => v / 1000 },
-    weight: inch
-      ? { symbol: 'w', meaning: 'weight per length', unit: 'lb/ft', toShown: (v) => (v * 0.3048) / N_PER_LBF }
-      : { symbol: 'w', meaning: 'weight per length', unit: 'kN/m', toShown: (v) => v / 1000 },
+    EIx: { symbol: COLUMN_HEADINGS.EIx, meaning: 'bending stiffness, each material with its own E', unit: u.flexuralStiffness, toShown: (v) => fromSI(v, 'flexuralStiffness', u.flexuralStiffness) },
+    weight: { symbol: 'w', meaning: 'weight per length', unit: u.weightPerLength, toShown: (v) => fromSI(v, 'weightPerLength', u.weightPerLength) },
     deflection: { symbol: 'δ total', meaning: 'largest deflection of the shared beam under the total load', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, 'm', display.length.lengthUnit) },
     liveDeflection: { symbol: 'δ live', meaning: 'largest deflection of the shared beam under the live load alone', unit: display.length.lengthUnit, toShown: (v) => convertLength(v, 'm', display.length.lengthUnit) },
     stressUse: { symbol: 'σ/limit', meaning: 'bending stress use of the worst material: stress / (factor × strength basis)', unit: '%', toShown: (v) => v * 100 },
@@ -142,6 +143,28 @@ function typed(text: string, what: string, positive = true): Typed {
   if (!r.ok) return { value: null, error: r.message };
   if (positive && !(r.value > 0)) return { value: null, error: `${what}: enter a number greater than 0, got ${text.trim()}` };
   return { value: r.value, error: null };
+}
+
+type TypedQuantity = { value: number | null; si: number | null; error: string | null };
+/**
+ * A typed quantity box: a bare number is in the unit the box shows (`bareToSI`), text with a unit
+ * goes through core/units readQuantity; `value` is in the box's unit, `si` in SI.
+ */
+function typedQuantity(text: string, what: string, kind: QuantityKind, bareToSI: (v: number) => number, siToShown: (si: number) => number, positive = true): TypedQuantity {
+  if (text.trim() === '') return { value: null, si: null, error: null };
+  const bare = parseNumber(text, what);
+  let value: number, si: number;
+  if (bare.ok) {
+    value = bare.value;
+    si = bareToSI(value);
+  } else {
+    const r = readQuantity(text, { label: what, kind, unit: KINDS[kind].si });
+    if (!r.ok) return { value: null, si: null, error: r.message };
+    si = r.si;
+    value = siToShown(si);
+  }
+  if (positive ? !(si > 0) : !(si >= 0)) return { value: null, si: null, error: `${what}: enter a value ${positive ? 'greater than' : 'of at least'} 0, got ${text.trim()}` };
+  return { value, si, error: null };
 }
 
 interface ShownTargets {
@@ -208,27 +231,28 @@ export function compareModel(entries: readonly CompareEntry[], inputs: CompareIn
   });
   if (valid.length === 0) return { ok: false, errors: ['nothing to compare: no alternative has a valid section'], excluded };
   const unit = valid[0]!.doc.unit;
-  const inch = inchWork(unit);
-  const span = typed(inputs.span, `span (${unit})`);
-  const load = typed(inputs.load, `uniform load (${inch ? 'kip/ft' : 'kN/m'})`);
-  const minIxTyped = typed(inputs.minIx, `Ix target (${display.inertia.label})`);
+  const u = compareUnits(unit);
+  const length = (shown: LengthUnit) => [(v: number): number => convertLength(v, shown, 'm'), (si: number): number => convertLength(si, 'm', shown)] as const;
+  const section = (q: 'inertia' | 'modulus', power: number) => [(v: number): number => convertLength(fromDisplay(v, unit, display[q]), unit, 'm', power), (si: number): number => toDisplay(convertLength(si, 'm', unit, power), unit, display[q])] as const;
+  const system = (kind: QuantityKind, shown: string) => [(v: number): number => toSI(v, kind, shown), (si: number): number => fromSI(si, kind, shown)] as const;
+  const span = typedQuantity(inputs.span, `span (${unit})`, 'length', ...length(unit));
+  const load = typedQuantity(inputs.load, `uniform load (${u.lineLoad})`, 'lineLoad', ...system('lineLoad', u.lineLoad));
+  const minIxTyped = typedQuantity(inputs.minIx, `Ix target (${display.inertia.label})`, 'inertia', ...section('inertia', 4));
   const ratioTyped = typed(inputs.ratio, 'deflection target span/n');
-  const liveTyped = typed(inputs.live, `live part of the load (${inch ? 'kip/ft' : 'kN/m'})`, false);
+  const liveTyped = typedQuantity(inputs.live, `live part of the load (${u.lineLoad})`, 'lineLoad', ...system('lineLoad', u.lineLoad), false);
   const liveRatioTyped = typed(inputs.liveRatio, 'live-load deflection target span/n');
-  const minSxTyped = typed(inputs.minSx, `Sx target (${display.modulus.label})`);
-  const minZxTyped = typed(inputs.minZx, `Zx target (${display.modulus.label})`);
-  const minEITyped = typed(inputs.minEI, `EIx target (${inch ? 'kip·in²' : 'kN·m²'})`);
-  const maxDepthTyped = typed(inputs.maxDepth, `depth limit (${display.length.lengthUnit})`);
+  const minSxTyped = typedQuantity(inputs.minSx, `Sx target (${display.modulus.label})`, 'modulus', ...section('modulus', 3));
+  const minZxTyped = typedQuantity(inputs.minZx, `Zx target (${display.modulus.label})`, 'modulus', ...section('modulus', 3));
+  const minEITyped = typedQuantity(inputs.minEI, `EIx target (${u.flexuralStiffness})`, 'flexuralStiffness', ...system('flexuralStiffness', u.flexuralStiffness));
+  const maxDepthTyped = typedQuantity(inputs.maxDepth, `depth limit (${display.length.lengthUnit})`, 'length', ...length(display.length.lengthUnit));
   const factorTyped = typed(inputs.stressFactor, 'stress limit factor');
   const all = [span, load, minIxTyped, ratioTyped, liveTyped, liveRatioTyped, minSxTyped, minZxTyped, minEITyped, maxDepthTyped, factorTyped];
   const inputErrors = all.map((x) => x.error).filter((e): e is string => e !== null);
-  if (liveTyped.value !== null && load.value !== null && !(liveTyped.value >= 0 && liveTyped.value <= load.value)) inputErrors.push(`live part of the load: must be between 0 and the total load ${load.value}, got ${liveTyped.value}`);
+  if (liveTyped.si !== null && load.si !== null && !(liveTyped.si <= load.si)) inputErrors.push(`live part of the load: must be between 0 and the total load ${formatSig(load.value ?? NaN, 4)} ${u.lineLoad}, got ${formatSig(liveTyped.value ?? NaN, 4)} ${u.lineLoad}`);
   if ((span.value === null) !== (load.value === null) && span.error === null && load.error === null) inputErrors.push('the shared beam needs both a span and a uniform load');
-  // kN/m → N/m ×1000; kip/ft → N/m × 4448.2216152605 / 0.3048 (exact factors).
-  const loadNPerM = load.value === null ? null : load.value * (inch ? N_PER_KIP / 0.3048 : 1000);
-  const perLoad = inch ? N_PER_KIP / 0.3048 : 1000;
-  const liveNPerM = liveTyped.value === null || load.value === null || !(liveTyped.value <= load.value) ? null : liveTyped.value * perLoad;
-  const beam = span.value !== null && loadNPerM !== null ? { span: span.value, load: loadNPerM, ...(liveNPerM !== null ? { live: liveNPerM } : {}) } : null;
+  const spanInUnit = span.si === null ? null : convertLength(span.si, 'm', unit);
+  const liveNPerM = liveTyped.si === null || load.si === null || !(liveTyped.si <= load.si) ? null : liveTyped.si;
+  const beam = spanInUnit !== null && load.si !== null ? { span: spanInUnit, load: load.si, ...(liveNPerM !== null ? { live: liveNPerM } : {}) } : null;
   const docs = valid.map((e) => ({ ...e.doc, name: e.name }));
   const baseline = inputs.baseline !== null && valid.some((e) => e.name === inputs.baseline) ? inputs.baseline : valid[0]!.name;
   let comparison: Comparison;
@@ -239,12 +263,12 @@ export function compareModel(entries: readonly CompareEntry[], inputs: CompareIn
     throw err;
   }
   const columns = compareColumns(unit, display);
-  const minIx = minIxTyped.value === null ? null : fromDisplay(minIxTyped.value, unit, display.inertia);
-  const minSx = minSxTyped.value === null ? null : fromDisplay(minSxTyped.value, unit, display.modulus);
-  const minZx = minZxTyped.value === null ? null : fromDisplay(minZxTyped.value, unit, display.modulus);
-  // kN·m² → N·m² × 1000; kip·in² → N·m² × 4448.2216152605 · 0.0254² (exact factors).
-  const minEIx = minEITyped.value === null ? null : minEITyped.value * (inch ? N_PER_KIP * 0.0254 ** 2 : 1000);
-  const maxDepth = maxDepthTyped.value === null ? null : convertLength(maxDepthTyped.value, display.length.lengthUnit, unit);
+  const inUnit = (si: number | null, power: number): number | null => (si === null ? null : convertLength(si, 'm', unit, power));
+  const minIx = inUnit(minIxTyped.si, 4);
+  const minSx = inUnit(minSxTyped.si, 3);
+  const minZx = inUnit(minZxTyped.si, 3);
+  const minEIx = minEITyped.si;
+  const maxDepth = inUnit(maxDepthTyped.si, 1);
   const ratio = ratioTyped.value;
   const liveRatio = liveRatioTyped.value;
   const targets: Targets = {
@@ -295,6 +319,12 @@ export function comparisonFiles(m: Extract<CompareModel, { ok: true }>, stem: st
   };
 }
 
+/** A line load (N/m) in the comparison unit's system, with its unit: "2.000 kip/ft", "30.00 kN/m". */
+function beamLoad(nPerM: number, unit: LengthUnit): string {
+  const lu = compareUnits(unit).lineLoad;
+  return `${formatSig(fromSI(nPerM, 'lineLoad', lu), 4)} ${lu}`;
+}
+
 /** The comparison as a report: outlines, the table with ratios, the targets and verdicts, materials, shared-beam results. */
 export function comparisonReportInput(m: Extract<CompareModel, { ok: true }>, sig: number, date?: string): ReportInput {
   const c = m.comparison;
@@ -310,7 +340,7 @@ export function comparisonReportInput(m: Extract<CompareModel, { ok: true }>, si
   if (m.targetsSet) tables.push({ title: 'Targets', columns: ['alternative', 'meets every target', 'targets not met (by how much)'], textColumns: [1, 2], rows: m.verdicts.map((v) => [v.name, v.passes ? 'yes' : 'no', v.reasons.join('; ')]) });
   const d = m.columns.find((k) => k.key === 'deflection')!;
   const checks = c.beam === null ? [] : [
-    `Shared beam: simply supported, span ${formatSig(c.beam.span, 4)} ${c.unit}, uniform load ${formatSig(c.beam.load / 1000, 4)} kN/m${c.beam.live !== undefined ? ` (live part ${formatSig(c.beam.live / 1000, 4)} kN/m)` : ''}, self-weight not included; deflection 5wL⁴/(384 EI) at midspan.`,
+    `Shared beam: simply supported, span ${formatSig(c.beam.span, 4)} ${c.unit}, uniform load ${beamLoad(c.beam.load, c.unit)}${c.beam.live !== undefined ? ` (live part ${beamLoad(c.beam.live, c.unit)})` : ''}, self-weight not included; deflection 5wL⁴/(384 EI) at midspan.`,
     ...m.rows.map((a) => `${a.name}: midspan deflection ${shownNumber(a.values.deflection, d, sig)} ${a.values.deflection === null ? `(${a.notes.join('; ')})` : d.unit}${a.stress.length > 0 ? `; bending stress use ${a.stress.map((u) => `${u.material} ${u.ratio === undefined ? 'not checked' : `${formatSig(u.ratio * 100, 3)} %`}`).join(', ')}` : ''}.`),
     `Stress limits: ${m.stressMeaning}`,
   ];

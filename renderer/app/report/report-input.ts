@@ -18,7 +18,7 @@ import type { SectionProperties } from '../../../core/properties/types.ts';
 import type { ReportInput, ReportTable } from '../../../core/report/index.ts';
 import { sectionFromDocument } from '../../../core/section/index.ts';
 import type { TorsionResult } from '../../../core/torsion/types.ts';
-import { convertLength, formatSig, type DisplaySet, type LengthUnit } from '../../../core/units/index.ts';
+import { convertLength, formatSig, fromSI, unitSystem, type DisplaySet, type LengthUnit } from '../../../core/units/index.ts';
 import { propertyGroups, torsionRows } from '../results/result-rows.ts';
 
 /** The member panel's load case: span and positions in `unit`, forces in N, line loads in N/m. */
@@ -97,11 +97,13 @@ export function materialLines(doc: SectionDocument): string[] {
   const found = materialPiecesFromDocument(doc);
   if (found.issues.length > 0 || found.pieces.length === 0) return [`Materials are incomplete, so no stiffness or weight is reported: ${found.issues.join('; ') || 'no material pieces'}.`];
   const u = forceUnitsFor(doc.unit);
+  // Densities in the document's unit system (lb/ft³ or kg/m³, core/units).
+  const density = unitSystem(doc.unit).units.density;
   const s = (pa: number): string => `${formatSig(pascalsTo(pa, u.stress), 4)} ${u.stress}`;
   return found.pieces.map((piece, i) => {
     const m = piece.material;
     const strength = Number.isFinite(m.fy) ? `, ${m.strengthBasis === 'yield' ? 'fy' : m.strengthBasis === 'tensile' ? 'tensile strength' : 'reference Fb'} = ${s(m.fy)}` : '';
-    return `${piece.label ?? `piece ${i + 1}`}: ${m.name}; E = ${s(m.E)}, G = ${s(m.G)}, density ${formatSig(m.density, 4)} kg/m³${strength}`;
+    return `${piece.label ?? `piece ${i + 1}`}: ${m.name}; E = ${s(m.E)}, G = ${s(m.G)}, density ${formatSig(fromSI(m.density, 'density', density), 4)} ${density}${strength}`;
   });
 }
 
