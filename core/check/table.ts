@@ -20,7 +20,8 @@
  * Tolerances: DEFAULT_TOLERANCES (per family and property, with the reasoning beside them);
  *   a tolerance the user gives wins over every built-in one at its level or less specific.
  * Cost: rows are parsed one at a time (papaparse step mode) and checked as they arrive: linear
- *   in the rows, at most MAX_TABLE_ROWS.
+ *   in the rows, at most MAX_TABLE_ROWS (or options.maxRows). checkTableRows hands each row on
+ *   without keeping it; a distinct part is computed once per check (PROPERTY_CACHE_SIZE).
  * Rows are numbered from 1 for the first row below the header (blank lines are not counted).
  */
 import Papa from 'papaparse';
@@ -350,6 +351,22 @@ export function catalogueFindings(designation: string, family: TableFamily, dims
 
 /** Checks every row of a table given as CSV text. Throws TableInputError on bad input. */
 export function checkTable(text: string, options: CheckOptions = {}): TableCheck {
+  const rows: RowCheck[] = [];
+  const s = checkTableRows(text, options, (r) => rows.push(r));
+  return { unit: s.unit, mapping: s.mapping, rows, summary: s.summary, ignoredColumns: s.ignoredColumns, caution: s.caution };
+}
+
+/** How many distinct shapes one check keeps computed properties for (a table repeating a shape computes it once). */
+export const PROPERTY_CACHE_SIZE = 4096;
+
+/**
+ * Checks every row as it is read and hands each result to `onRow` without keeping it: the cost
+ * is linear in the rows and the memory is bounded by the summary (one worst deviation per
+ * property) and PROPERTY_CACHE_SIZE computed shapes, whatever the length of the table. Rows whose
+ * part (shape, parameters, unit) was computed before reuse its exact properties. Throws
+ * TableInputError on bad input, naming the row and column.
+ */
+export function checkTableRows(text: string, options: CheckOptions, onRow: (row: RowCheck) => void): Omit<TableCheck, 'rows'> {
   const unit = options.unit ?? 'in';
   const tolerances = options.tolerances ?? DEFAULT_TOLERANCES;
   const readLabels = options.readLabels ?? unit === 'in';
@@ -358,7 +375,8 @@ export function checkTable(text: string, options: CheckOptions = {}): TableCheck
   let mapping: ColumnMapping | null = null;
   let headers: string[] = [];
   let designationAt = -1, typeAt = -1;
-  const results: RowCheck[] = [];
+  const summary = new Summary();
+  const cache: PropertyCache = new Map();
   streamTable(text, (h) => {
     headers = h;
     mapping = mapColumns(h, unit, options.overrides, options.mapping);
@@ -368,13 +386,29 @@ export function checkTable(text: string, options: CheckOptions = {}): TableCheck
     typeAt = cols.findIndex((c) => c.role === 'type');
     if (!cols.some((c) => c.role === 'property')) throw new TableInputError(`no property column to check (e.g. A, Ix, Sx, Zx, rx with a unit such as Ix_in4 or "Ix [mm^4]"): name one with --map COLUMN=Ix`);
   }, (cells, row) => {
-    results.push(checkCells(cells, row, headers, mapping!, designationAt, typeAt, unit, tolerances, readLabels, options.type));
+    const result = checkCells(cells, row, headers, mapping!, designationAt, typeAt, unit, tolerances, readLabels, options.type, cache);
+    summary.add(result);
+    onRow(result);
     options.onProgress?.(row, Math.max(row, estimate));
   }, options.maxRows ?? MAX_TABLE_ROWS);
-  return summarise(unit, mapping!, results);
+  return summary.result(unit, mapping!);
 }
 
-function checkCells(cells: readonly string[], row: number, headers: readonly string[], mapping: ColumnMapping, designationAt: number, typeAt: number, unit: LengthUnit, tolerances: Tolerances, readLabels: boolean, given: TableFamily | undefined): RowCheck {
+type PropertyCache = Map<string, ReturnType<typeof sectionProperties> | readonly string[]>;
+
+/** The exact properties of a part, or its diagnostics, computed once per distinct part of a check. */
+function partProperties(shape: string, params: Readonly<Record<string, number>>, unit: LengthUnit, cache: PropertyCache): ReturnType<typeof sectionProperties> | readonly string[] {
+  const key = `${shape}|${unit}|${Object.entries(params).map(([k, v]) => `${k}=${v}`).join(',')}`;
+  const known = cache.get(key);
+  if (known !== undefined) return known;
+  const region = shapeRegion(shape, params, unit);
+  const value = region.diagnostics.length > 0 ? region.diagnostics.map((d) => d.message) : sectionProperties(region.region);
+  if (cache.size >= PROPERTY_CACHE_SIZE) cache.clear();
+  cache.set(key, value);
+  return value;
+}
+
+function checkCells(cells: readonly string[], row: number, headers: readonly string[], mapping: ColumnMapping, designationAt: number, typeAt: number, unit: LengthUnit, tolerances: Tolerances, readLabels: boolean, given: TableFamily | undefined, cache: PropertyCache): RowCheck {
   const designation = (cells[designationAt] ?? '').trim();
   const at = (header: string): string => `row ${row}${designation === '' ? '' : ` (${designation})`}, column "${header}"`;
   if (cells.length > headers.length) throw new TableInputError(`row ${row}${designation === '' ? '' : ` (${designation})`}: ${cells.length} cells, but the header has ${headers.length} columns`);
@@ -397,10 +431,10 @@ function checkCells(cells: readonly string[], row: number, headers: readonly str
     const reason = `no family: no type column${typeAt >= 0 ? ' value' : ''}, no --type, and the designation does not start with ${TABLE_FAMILIES.join(', ')}`;
     return { row, designation, family: null, familyFrom, part: null, properties: [], findings: [], status: 'not checked', notCheckedReason: reason, flagged: false };
   }
-  return checkRow(row, designation, family, familyFrom, dims, tabulated, unit, tolerances, readLabels);
+  return checkRow(row, designation, family, familyFrom, dims, tabulated, unit, tolerances, readLabels, cache);
 }
 
-function checkRow(row: number, designation: string, family: TableFamily, familyFrom: RowCheck['familyFrom'], dims: Record<string, number>, tabulated: readonly { symbol: string; value: number }[], unit: LengthUnit, tolerances: Tolerances, readLabels: boolean): RowCheck {
+function checkRow(row: number, designation: string, family: TableFamily, familyFrom: RowCheck['familyFrom'], dims: Record<string, number>, tabulated: readonly { symbol: string; value: number }[], unit: LengthUnit, tolerances: Tolerances, readLabels: boolean, cache: PropertyCache): RowCheck {
   const findings: string[] = [];
   const built = tablePart(family, dims, designation, unit);
   let properties: PropertyCheck[] = [];
@@ -413,11 +447,10 @@ function checkRow(row: number, designation: string, family: TableFamily, familyF
     else findings.push(`cannot build the shape: ${built.message}`);
   } else {
     part = built.part;
-    const region = shapeRegion(built.part.shape, built.part.params, unit);
-    if (region.diagnostics.length > 0) {
-      findings.push(`cannot build the shape: ${region.diagnostics.map((d) => d.message).join('; ')}`);
+    const p = partProperties(built.part.shape, built.part.params, unit, cache);
+    if (isDiagnostics(p)) {
+      findings.push(`cannot build the shape: ${p.join('; ')}`);
     } else {
-      const p = sectionProperties(region.region);
       area = p.area;
       properties = tabulated.map(({ symbol, value }) => {
         const computed = computedValue(symbol, p);
@@ -440,33 +473,51 @@ function checkRow(row: number, designation: string, family: TableFamily, familyF
   return { row, designation, family, familyFrom, part, properties, findings, status, ...(status === 'not checked' ? { notCheckedReason } : {}), flagged: status === 'flagged' };
 }
 
-function summarise(unit: LengthUnit, mapping: ColumnMapping, rows: readonly RowCheck[]): TableCheck {
-  const worstBy = new Map<string, WorstDeviation>();
-  let propertiesChecked = 0;
-  let propertiesFlagged = 0;
-  for (const r of rows) {
+function isDiagnostics(p: ReturnType<typeof sectionProperties> | readonly string[]): p is readonly string[] {
+  return Array.isArray(p);
+}
+
+/** The summary of a check, added to one row at a time (nothing per row is kept). */
+class Summary {
+  private readonly worstBy = new Map<string, WorstDeviation>();
+  private propertiesChecked = 0;
+  private propertiesFlagged = 0;
+  private rowsPassed = 0;
+  private rowsFlagged = 0;
+  private rowsNotChecked = 0;
+  private rowsRead = 0;
+
+  add(r: RowCheck): void {
+    this.rowsRead++;
+    if (r.status === 'pass') this.rowsPassed++;
+    else if (r.status === 'flagged') this.rowsFlagged++;
+    else this.rowsNotChecked++;
     for (const p of r.properties) {
-      propertiesChecked++;
-      if (p.flagged) propertiesFlagged++;
-      const prev = worstBy.get(p.symbol);
-      if (prev === undefined || Math.abs(p.deviation) > Math.abs(prev.deviation)) worstBy.set(p.symbol, { row: r.row, designation: r.designation, symbol: p.symbol, deviation: p.deviation, flagged: p.flagged });
+      this.propertiesChecked++;
+      if (p.flagged) this.propertiesFlagged++;
+      const prev = this.worstBy.get(p.symbol);
+      if (prev === undefined || Math.abs(p.deviation) > Math.abs(prev.deviation)) this.worstBy.set(p.symbol, { row: r.row, designation: r.designation, symbol: p.symbol, deviation: p.deviation, flagged: p.flagged });
     }
   }
-  const worst = [...worstBy.values()].sort((a, b) => Math.abs(b.deviation) - Math.abs(a.deviation));
-  const ignoredColumns = mapping.columns.flatMap((c) => (c.role === 'ignore' ? [{ header: c.header, why: c.why }] : []));
-  return {
-    unit,
-    mapping,
-    rows,
-    summary: {
-      rowsChecked: rows.filter((r) => r.status !== 'not checked').length,
-      rowsPassed: rows.filter((r) => r.status === 'pass').length,
-      rowsFlagged: rows.filter((r) => r.status === 'flagged').length,
-      rowsNotChecked: rows.filter((r) => r.status === 'not checked').length,
-      rowsRead: rows.length,
-      propertiesChecked, propertiesFlagged, worst,
-    },
-    ignoredColumns,
-    caution: CAUTION,
-  };
+
+  result(unit: LengthUnit, mapping: ColumnMapping): Omit<TableCheck, 'rows'> {
+    const worst = [...this.worstBy.values()].sort((a, b) => Math.abs(b.deviation) - Math.abs(a.deviation));
+    const ignoredColumns = mapping.columns.flatMap((c) => (c.role === 'ignore' ? [{ header: c.header, why: c.why }] : []));
+    return {
+      unit,
+      mapping,
+      summary: {
+        rowsChecked: this.rowsPassed + this.rowsFlagged,
+        rowsPassed: this.rowsPassed,
+        rowsFlagged: this.rowsFlagged,
+        rowsNotChecked: this.rowsNotChecked,
+        rowsRead: this.rowsRead,
+        propertiesChecked: this.propertiesChecked,
+        propertiesFlagged: this.propertiesFlagged,
+        worst,
+      },
+      ignoredColumns,
+      caution: CAUTION,
+    };
+  }
 }

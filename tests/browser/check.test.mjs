@@ -159,6 +159,20 @@ export async function aColumnCorrectedByDropdownIsUsedRememberedAndSavedForTheCo
   await menuItem(page, 'File', 'check-table');
   await importTable(page, 'w-renamed-again.csv', table);
   check((await page.getByTestId('map-target-2').inputValue()) === 'd', 'the remembered mapping reads "Column 3" as d');
+  // Issue 13: the same table with two columns added (Sx, and a notes column) keeps the correction,
+  // and the view names the columns the remembered mapping did not know.
+  const sx = rows[0].indexOf('Sx_in3');
+  const wider = Papa.unparse([['label', 'shape_type', 'Column 3', ...keep.slice(3), 'Sx_in3', 'Notes'], ...rows.slice(1).filter((r) => /^W\d/.test(r[0])).map((r) => [...idx.map((i) => r[i]), r[sx], 'from the mill'])]);
+  await importTable(page, 'w-renamed-wider.csv', wider);
+  check((await page.getByTestId('map-target-2').inputValue()) === 'd', 'with columns added, the remembered mapping still reads "Column 3" as d');
+  const wideNote = await page.getByTestId('check-remember-note').innerText();
+  check(/9 of these 11 columns/.test(wideNote) && /"Sx_in3"/.test(wideNote) && /"Notes"/.test(wideNote), `the note names the columns it did not know, got "${wideNote}"`);
+  check((await page.getByTestId('map-row-9').getAttribute('data-new-column')) === 'true' && (await page.getByTestId('map-row-2').getAttribute('data-new-column')) === null, 'the new columns are marked in the mapping, the known ones are not');
+  check((await page.getByTestId('map-target-9').inputValue()) === 'Sx', 'the added Sx_in3 column is read from its header');
+  const wide = await runCheck(page);
+  check(wide.checked === 7 && wide.flagged === 0, `the wider table passes with the reused mapping, got ${JSON.stringify(wide)}`);
+  await importTable(page, 'w-renamed-again.csv', table);
+  check((await page.getByTestId('map-target-2').inputValue()) === 'd', 'the narrower table still finds its own mapping');
   await page.getByTestId('check-forget').click();
   check((await page.getByTestId('map-target-2').inputValue()) === 'ignore', 'forgetting returns to detection');
 }

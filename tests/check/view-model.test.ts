@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { mapColumns, roleFromTarget } from '../../core/check/index.ts';
-import { fnv1a, mappingKey, powerOf, readRemembered, rememberedText, symbolOf, targetChoices, targetText, unitChoices, unitTextOf, viewMessage } from '../../renderer/app/check/check-model.ts';
+import { fnv1a, mappingKey, newColumns, powerOf, readRemembered, rememberedIndex, rememberedText, rememberedWithin, symbolOf, targetChoices, targetText, unitChoices, unitTextOf, viewMessage } from '../../renderer/app/check/check-model.ts';
 
 describe('the remembered-mapping key', () => {
   it('FNV-1a 32-bit gives the published test vectors: "" → 811c9dc5, "a" → e40c292c, "foobar" → bf9cf968 (Fowler–Noll–Vo reference test suite, from memory)', () => {
@@ -41,6 +41,45 @@ describe('reading a remembered mapping back', () => {
     expect(readRemembered(headers, text.replace('"unit":"in"', '"unit":"furlong"'))).toBeNull();
     expect(readRemembered(headers, text.replace('"symbol":"d"', '"symbol":"zz"'))).toBeNull();
     expect(readRemembered(headers, null)).toBeNull();
+  });
+});
+
+describe('a remembered mapping reused when columns are added (issue 13, table check)', () => {
+  const headers = ['Section', 'Kind', 'Overall depth', 'Ix (in4)'];
+  const wider = ['Section', 'Kind', 'Overall depth', 'Flange width bf (in)', 'Ix (in4)', 'Notes'];
+
+  it('what was seen: the mapping corrected for a table is found again once a column is added, and the added columns are named', () => {
+    const index = rememberedIndex(null, headers);
+    // The exact signature changes with the added columns, so the key alone finds nothing ...
+    expect(mappingKey(wider)).not.toBe(mappingKey(headers));
+    // ... but the index lists the remembered table whose every column the wider one still has.
+    expect(rememberedWithin(wider, index)).toEqual([headers]);
+    expect(newColumns(wider, headers)).toEqual(['Flange width bf (in)', 'Notes']);
+    // The remembered roles apply to the known columns; the new ones are read from their headers.
+    const mapping = mapColumns(headers, 'in', new Map([['Overall depth', 'd']]));
+    const again = mapColumns(wider, 'in', new Map(), readRemembered(headers, rememberedText(headers, { mapping, unit: 'in', type: null }))!.mapping);
+    expect(again.columns.find((c) => c.header === 'Overall depth')).toMatchObject({ role: 'dimension', symbol: 'd' });
+    expect(again.columns.find((c) => c.header === 'Flange width bf (in)')).toMatchObject({ role: 'dimension', symbol: 'bf' });
+  });
+
+  it('a table that lost a remembered column, or another table, does not take it; the widest match comes first; the index keeps 30 tables, most recent first', () => {
+    let index = rememberedIndex(null, headers);
+    index = rememberedIndex(index, ['Section', 'Kind']);
+    expect(rememberedWithin(['Section', 'Overall depth', 'Ix (in4)', 'extra'], index)).toEqual([]);
+    expect(rememberedWithin(wider, index)).toEqual([headers, ['Section', 'Kind']]);
+    // The exact signature is found by its own key, never as a match of itself.
+    expect(rememberedWithin(headers, index)).toEqual([['Section', 'Kind']]);
+    for (let i = 0; i < 40; i++) index = rememberedIndex(index, [`t${i}`]);
+    const kept = JSON.parse(index) as string[][];
+    expect(kept.length).toBe(30);
+    expect(kept[0]).toEqual(['t39']);
+    // Remembering a table again moves it to the front, once.
+    const again = JSON.parse(rememberedIndex(index, ['t20'])) as string[][];
+    expect(again[0]).toEqual(['t20']);
+    expect(again.filter((h) => h[0] === 't20').length).toBe(1);
+    // A damaged index is read as empty, never a reason to refuse the table.
+    expect(rememberedWithin(wider, '{not json')).toEqual([]);
+    expect(JSON.parse(rememberedIndex('{not json', headers))).toEqual([headers]);
   });
 });
 

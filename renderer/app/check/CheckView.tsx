@@ -14,7 +14,7 @@ import {
 import { formatSig, LENGTH_UNITS, type LengthUnit } from '../../../core/units/index.ts';
 import type { Host } from '../../host/host.ts';
 import { CheckClient, type CheckState } from './check-client.ts';
-import { mappingKey, powerOf, readRemembered, rememberedText, symbolOf, targetChoices, targetText, unitChoices, unitTextOf, viewMessage } from './check-model.ts';
+import { MAPPING_INDEX_KEY, mappingKey, newColumns, powerOf, readRemembered, rememberedIndex, rememberedText, rememberedWithin, symbolOf, targetChoices, targetText, unitChoices, unitTextOf, viewMessage, type RememberedCheck } from './check-model.ts';
 import './check-view.css';
 
 const PAGE = 100;
@@ -55,6 +55,9 @@ export function CheckView({ host, onClose }: Props): ReactElement {
   const [extraTolerance, setExtraTolerance] = useState('');
   const [ownLabels, setOwnLabels] = useState(false);
   const [remembered, setRemembered] = useState<ColumnMapping | null>(null);
+  // The headers the remembered mapping was made for (fewer than the table's when columns were added), and the columns it did not know.
+  const [rememberedFrom, setRememberedFrom] = useState<readonly string[] | null>(null);
+  const [unknownColumns, setUnknownColumns] = useState<readonly string[]>([]);
   const [rememberNote, setRememberNote] = useState<string | null>(null);
   const [edits, setEdits] = useState<Record<string, string>>({});
   const [state, setState] = useState<CheckState>({ kind: 'idle' });
@@ -69,8 +72,14 @@ export function CheckView({ host, onClose }: Props): ReactElement {
         setState(next);
         const run = started.current;
         if (next.kind !== 'done' || !run || !host.writeSetting) return;
-        host.writeSetting(mappingKey(run.headers), rememberedText(run.headers, { mapping: next.result.mapping, unit: run.unit, type: run.type })).then(
-          () => setRememberNote('This mapping is remembered for tables with the same headers.'),
+        const write = host.writeSetting.bind(host);
+        const remember = async (): Promise<void> => {
+          await write(mappingKey(run.headers), rememberedText(run.headers, { mapping: next.result.mapping, unit: run.unit, type: run.type }));
+          const index = (await host.readSetting?.(MAPPING_INDEX_KEY).catch(() => null)) ?? null;
+          await write(MAPPING_INDEX_KEY, rememberedIndex(index, run.headers));
+        };
+        remember().then(
+          () => setRememberNote('This mapping is remembered for tables with the same headers, and for tables with these columns and more.'),
           (err: unknown) => setRememberNote(`The mapping could not be remembered: ${err instanceof Error ? err.message : String(err)}`),
         );
       }),
@@ -108,15 +117,40 @@ export function CheckView({ host, onClose }: Props): ReactElement {
     }
     setImportError(null);
     setEdits({});
-    const stored = readRemembered(parsed.headers, (await host.readSetting?.(mappingKey(parsed.headers)).catch(() => null)) ?? null);
+    const found = await findRemembered(parsed.headers);
+    const stored = found?.remembered ?? null;
     setRemembered(stored?.mapping ?? null);
+    setRememberedFrom(found?.headers ?? null);
+    const unknown = found ? newColumns(parsed.headers, found.headers) : [];
+    setUnknownColumns(unknown);
     if (stored) {
       setUnit(stored.unit);
       setType(stored.type ?? '');
     }
-    setRememberNote(stored ? 'The column mapping last used for a table with these headers is applied.' : null);
+    setRememberNote(
+      !found
+        ? null
+        : unknown.length === 0
+          ? 'The column mapping last used for a table with these headers is applied.'
+          : `The column mapping remembered for a table with ${found.headers.length} of these ${parsed.headers.length} columns is applied. Columns it did not know (read from their headers; check them below): ${unknown.map((h) => `"${h}"`).join(', ')}.`,
+    );
     setTable({ name: file.name, text: file.text, headers: parsed.headers, rows: parsed.rows.length, firstRow: parsed.rows[0] ?? [] });
   };
+
+  /**
+   * The mapping remembered for exactly these headers, else the one remembered for the widest
+   * table whose every column this one still has (columns were added); null when none.
+   */
+  async function findRemembered(headers: readonly string[]): Promise<{ headers: readonly string[]; remembered: RememberedCheck } | null> {
+    const read = async (key: string): Promise<string | null> => (await host.readSetting?.(key).catch(() => null)) ?? null;
+    const exact = readRemembered(headers, await read(mappingKey(headers)));
+    if (exact) return { headers: headers.map((h) => h.trim()), remembered: exact };
+    for (const narrower of rememberedWithin(headers, await read(MAPPING_INDEX_KEY))) {
+      const stored = readRemembered(narrower, await read(mappingKey(narrower)));
+      if (stored) return { headers: narrower, remembered: stored };
+    }
+    return null;
+  }
 
   // The mapping the check will use: the user's corrections, then the remembered mapping, then detection.
   const mapping = useMemo((): { ok: true; mapping: ColumnMapping } | { ok: false; message: string } | null => {
@@ -161,6 +195,8 @@ export function CheckView({ host, onClose }: Props): ReactElement {
     if (remembered) {
       // Remembered columns carry the unit they were read in; with another table unit they are detected afresh.
       setRemembered(null);
+      setRememberedFrom(null);
+      setUnknownColumns([]);
       setRememberNote('The table unit changed, so the remembered mapping is set aside; the next check remembers the new one.');
     }
   };
@@ -188,8 +224,10 @@ export function CheckView({ host, onClose }: Props): ReactElement {
 
   const forget = async (): Promise<void> => {
     if (!table) return;
-    await host.writeSetting?.(mappingKey(table.headers), null).catch(() => undefined);
+    await host.writeSetting?.(mappingKey(rememberedFrom ?? table.headers), null).catch(() => undefined);
     setRemembered(null);
+    setRememberedFrom(null);
+    setUnknownColumns([]);
     setEdits({});
     setRememberNote('The remembered mapping is forgotten; the columns are read afresh.');
   };
@@ -297,7 +335,7 @@ export function CheckView({ host, onClose }: Props): ReactElement {
                 {tolerances.message}
               </div>
             )}
-            <MappingTable table={table} mapping={shownMapping} edits={edits} onColumn={setColumn} />
+            <MappingTable table={table} mapping={shownMapping} edits={edits} unknown={unknownColumns} onColumn={setColumn} />
             {!mapping.ok && (
               <div className="check-error" role="alert" data-testid="check-mapping-error">
                 {mapping.message}
@@ -367,7 +405,7 @@ export function CheckView({ host, onClose }: Props): ReactElement {
   );
 }
 
-function MappingTable({ table, mapping, edits, onColumn }: { table: Table; mapping: ColumnMapping | null; edits: Readonly<Record<string, string>>; onColumn: (header: string, symbol: string, unitText: string) => void }): ReactElement {
+function MappingTable({ table, mapping, edits, unknown, onColumn }: { table: Table; mapping: ColumnMapping | null; edits: Readonly<Record<string, string>>; unknown: readonly string[]; onColumn: (header: string, symbol: string, unitText: string) => void }): ReactElement {
   const groups = targetChoices();
   return (
     <div className="check-scroll mapping">
@@ -388,9 +426,12 @@ function MappingTable({ table, mapping, edits, onColumn }: { table: Table; mappi
             const power = powerOf(symbol);
             const unitText = col ? unitTextOf(col) : '';
             const ownUnit = splitHeader(header).unitText;
-            const note = (Object.hasOwn(edits, header) ? edits[header] : undefined) !== undefined ? 'corrected' : col?.role === 'ignore' ? col.why : ownUnit !== null ? `unit from the header (${ownUnit})` : power !== null ? 'unit: the table unit' : '';
+            const corrected = (Object.hasOwn(edits, header) ? edits[header] : undefined) !== undefined;
+            const reading = corrected ? 'corrected' : col?.role === 'ignore' ? col.why : ownUnit !== null ? `unit from the header (${ownUnit})` : power !== null ? 'unit: the table unit' : '';
+            const isNew = !corrected && unknown.includes(header.trim());
+            const note = isNew ? `new: not in the remembered mapping, read from its header${reading === '' ? '' : `; ${reading}`}` : reading;
             return (
-              <tr key={header} data-testid={`map-row-${i}`} className={col?.role === 'ignore' ? 'ignored' : (Object.hasOwn(edits, header) ? edits[header] : undefined) !== undefined ? 'corrected' : ''}>
+              <tr key={header} data-testid={`map-row-${i}`} data-new-column={isNew ? 'true' : undefined} className={col?.role === 'ignore' ? 'ignored' : corrected ? 'corrected' : isNew ? 'new-column' : ''}>
                 <th scope="row">{header}</th>
                 <td>
                   <select data-testid={`map-target-${i}`} aria-label={`what column ${header} holds`} value={symbol} onChange={(e) => onColumn(header, e.target.value, unitText)}>

@@ -61,6 +61,50 @@ export function readRemembered(headers: readonly string[], text: string | null):
   }
 }
 
+/** The settings key of the index of remembered header signatures (most recent first). */
+export const MAPPING_INDEX_KEY = `${MAPPING_KEY_PREFIX}index`;
+/** How many remembered tables the index keeps. */
+export const MAPPING_INDEX_SIZE = 30;
+
+function readIndex(text: string | null): string[][] {
+  if (text === null) return [];
+  try {
+    const value: unknown = JSON.parse(text);
+    if (!Array.isArray(value)) return [];
+    return value.filter((h): h is string[] => Array.isArray(h) && h.every((x) => typeof x === 'string'));
+  } catch {
+    return []; // a damaged index is read as empty, never a reason to refuse the table
+  }
+}
+
+/**
+ * The index text after remembering a table with these headers: its signature first, once, then
+ * the others most recent first, at most MAPPING_INDEX_SIZE. The index lets a table with columns
+ * added find the mapping remembered for the narrower one (its exact key has changed).
+ */
+export function rememberedIndex(previous: string | null, headers: readonly string[]): string {
+  const trimmed = headers.map((h) => h.trim());
+  const same = (h: readonly string[]): boolean => h.length === trimmed.length && h.every((x, i) => x === trimmed[i]);
+  return JSON.stringify([trimmed, ...readIndex(previous).filter((h) => !same(h))].slice(0, MAPPING_INDEX_SIZE));
+}
+
+/**
+ * The remembered header signatures whose every column this table still has (columns were added),
+ * widest first; the table's own signature is left out (its own key finds it).
+ */
+export function rememberedWithin(headers: readonly string[], indexText: string | null): string[][] {
+  const present = new Set(headers.map((h) => h.trim()));
+  return readIndex(indexText)
+    .filter((h) => h.length < present.size && h.every((x) => present.has(x)))
+    .sort((a, b) => b.length - a.length);
+}
+
+/** The columns of a table that a mapping remembered for `known` headers did not know, in table order. */
+export function newColumns(headers: readonly string[], known: readonly string[]): string[] {
+  const seen = new Set(known.map((h) => h.trim()));
+  return headers.map((h) => h.trim()).filter((h) => !seen.has(h));
+}
+
 /** A dropdown choice: the role's target text and its label. */
 export interface Choice {
   readonly value: string;
