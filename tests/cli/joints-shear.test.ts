@@ -71,7 +71,7 @@ describe('props --shear: τmax per part and at the joints, every key with its un
     expect(r.code).toBe(0);
     const web = r.out.split('\n').find((l) => /^\s+τmax\s/.test(l) && l.includes('web:'));
     expect(web).toContain(`${tauWeb.toPrecision(4)}  MPa`);
-    expect(r.out).toMatch(/τ joint\s+\S+\s+MPa\s+top \| web: on the joint plane/);
+    expect(r.out).toMatch(/τ joint\s+\S+\s+MPa\s+J1 top \| web: on the joint plane/);
     expect(r.out).toContain('the local code governs');
     expect(r.out).toContain('CAUTION:');
   });
