@@ -19,6 +19,7 @@ import {
   type ContactSegment, type DesignMethod, type ShearLoads,
 } from '../joints/index.ts';
 import { convertLength, convertQuantity, isImperial, unitSystem, type LengthUnit } from '../units/index.ts';
+import { csvNumberCell, csvTextCell } from './csv.ts';
 
 export const JOINTS_NOTE = 'Weld and fastener numbers: capacities are your inputs or the cited clauses (AISC 360-22 §J2.4, Table J2.4); the local code governs.';
 
@@ -241,4 +242,63 @@ export function jointsExport(input: JointsExportInput): JointsExport | null {
       }
     : null;
   return { unit, units: u, warnings: acting.warnings, pieces: acting.groups.length, joints, plies, shear, notes: shear ? [JOINTS_NOTE] : [] };
+}
+
+const cells = (row: readonly (string | number | null)[]): string => row.map((v) => (typeof v === 'number' ? csvNumberCell(v) : csvTextCell(v ?? ''))).join(',');
+
+/**
+ * The joints as CSV blocks to follow the properties rows (core/export/csv.ts): a blank line, then
+ * a joints table, τmax per part (with a shear), the EI share of separate plies, and the warnings
+ * and notes, one per row. Numbers at full precision in the units named in each header.
+ */
+export function jointsCsv(x: JointsExport): string {
+  const u = x.units;
+  const lines: string[] = [];
+  const block = (rows: readonly (readonly (string | number | null)[])[]): void => {
+    lines.push('', ...rows.map(cells));
+  };
+  if (x.joints.length > 0) {
+    const header = ['joint', 'part A', 'part B', `length [${x.unit}]`, 'kind', 'default kind'];
+    if (x.shear) header.push(`q [${u.q}]`, `tau on joint [${u.stress}]`, `tau in part A [${u.stress}]`, `tau in part B [${u.stress}]`, `required fillet leg [${u.weld}]`, `minimum fillet leg [${u.weld}]`, `largest fastener pitch [${u.weld}]`, 'needs');
+    block([header, ...x.joints.map((j) => {
+      const row: (string | number | null)[] = [j.name, j.parts[0], j.parts[1], j.length, j.kindText, j.isDefault ? 'true' : 'false'];
+      const s = j.shear;
+      if (x.shear) row.push(s?.q ?? null, s?.tauJoint ?? null, s?.tauIn[0] ?? null, s?.tauIn[1] ?? null, s?.fillet?.requiredLeg ?? null, s?.fillet?.minimum?.leg ?? null, s?.largestPitch ?? null, s?.needs ?? '');
+      return row;
+    })]);
+  }
+  if (x.shear) {
+    block([[`shear Vy [${u.force}]`, `shear Vx [${u.force}]`, 'weld method', `FEXX [${u.stress}]`], [x.shear.Vy, x.shear.Vx, x.shear.method, x.shear.fexx]]);
+    block([['part', `tau max [${u.stress}]`, 'where'], ...x.shear.parts.map((p) => [p.part, p.tauMax, p.where])]);
+  }
+  if (x.plies) block([['ply (parts)', 'share of vertical load (about x) [-]', 'share of horizontal load (about y) [-]', `EIx [${u.stiffness}]`, `EIy [${u.stiffness}]`], ...x.plies.plies.map((p) => [p.parts.join(' + '), p.shareX, p.shareY, p.EIx, p.EIy])]);
+  const notes = [...x.warnings, ...(x.plies ? [x.plies.note] : []), ...(x.shear ? [x.shear.tauMethod] : []), ...x.notes];
+  if (notes.length > 0) block([['note'], ...notes.map((n) => [n])]);
+  return lines.length === 0 ? '' : `${lines.join('\r\n')}\r\n`;
+}
+
+/** The joints as report tables (core/report ReportTable): joints, τmax per part, EI shares, notes. */
+export function jointsReportTables(x: JointsExport): { title: string; columns: string[]; rows: string[][]; textColumns: number[] }[] {
+  const u = x.units;
+  const f = (v: number | null | undefined): string => (v === null || v === undefined ? '—' : sig(v));
+  const out: { title: string; columns: string[]; rows: string[][]; textColumns: number[] }[] = [];
+  if (x.joints.length > 0) {
+    const columns = ['joint', 'parts', `length (${x.unit})`, 'kind'];
+    if (x.shear) columns.push(`q (${u.q})`, `τ on joint (${u.stress})`, `τ beside, A | B (${u.stress})`, 'needs');
+    out.push({
+      title: x.shear ? `Joints under Vy = ${sig(x.shear.Vy)} ${u.force}, Vx = ${sig(x.shear.Vx)} ${u.force} (welds ${x.shear.method}, FEXX ${sig(x.shear.fexx)} ${u.stress})` : 'Joints',
+      columns,
+      rows: x.joints.map((j) => {
+        const row = [j.name, `${j.parts[0]} | ${j.parts[1]}`, f(j.length), `${j.kindText}${j.isDefault ? ' (default)' : ''}`];
+        if (x.shear) row.push(f(j.shear?.q), f(j.shear?.tauJoint), `${f(j.shear?.tauIn[0])} | ${f(j.shear?.tauIn[1])}`, j.shear?.needs ?? '');
+        return row;
+      }),
+      textColumns: x.shear ? [1, 3, 7] : [1, 3],
+    });
+  }
+  if (x.shear) out.push({ title: 'Shear stress τ = V·Q/(I·t), largest in each part', columns: ['part', `τmax (${u.stress})`, 'where'], rows: x.shear.parts.map((p) => [p.part, f(p.tauMax), p.where]), textColumns: [2] });
+  if (x.plies) out.push({ title: 'Separate plies: share of the load by EI', columns: ['ply (parts)', 'vertical load (about x)', 'horizontal load (about y)', `EIx (${u.stiffness})`], rows: x.plies.plies.map((p) => [p.parts.join(' + '), `${sig(p.shareX * 100)} %`, `${sig(p.shareY * 100)} %`, f(p.EIx)]), textColumns: [] });
+  const notes = [...x.warnings, ...(x.plies ? [x.plies.note] : []), ...(x.shear ? [x.shear.tauMethod] : []), ...x.notes];
+  if (notes.length > 0) out.push({ title: 'Pieces, overlaps and joints: notes', columns: ['note'], rows: notes.map((n) => [n]), textColumns: [0] });
+  return out;
 }

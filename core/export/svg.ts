@@ -21,6 +21,7 @@ import type { SectionResult } from '../section/index.ts';
 import { defaultDisplaySet, formatSig, toDisplay, type DisplaySet } from '../units/index.ts';
 import type { LengthUnit } from '../units/types.ts';
 import { catalogueFor, PROPERTY_CATALOGUE, shownValue } from '../properties/catalogue.ts';
+import type { JointsExport } from './joints.ts';
 
 const DRAWING_TABLE = catalogueFor('drawing', PROPERTY_CATALOGUE);
 
@@ -30,6 +31,8 @@ export interface SvgInput {
   readonly section: Pick<SectionResult, 'region' | 'parts' | 'properties' | 'diagnostics'>;
   /** Display units of the table (default: core/units defaultDisplaySet of the unit). */
   readonly display?: DisplaySet;
+  /** Joints (core/export/joints.ts): marked on the drawing (J1, J2 …) and listed below it with pieces, overlaps, q and τ. */
+  readonly joints?: JointsExport | null;
 }
 
 const DRAW = 560;
@@ -189,7 +192,8 @@ export function sectionSvg(input: SvgInput): string {
   const lines: string[] = [];
   const tableRows = p ? DRAWING_TABLE.length + 2 : 0;
   const partsTop = TOP + tableRows * ROW + 16;
-  const bottom = Math.max(TOP + DRAW + 24, partsTop + (section.parts.length + 1) * ROW);
+  const jointLines = input.joints ? jointsText(input.joints) : [];
+  const bottom = Math.max(TOP + DRAW + 24, partsTop + (section.parts.length + 1) * ROW) + jointLines.length * 15;
   const height = bottom + 40;
   lines.push(
     `<?xml version="1.0" encoding="UTF-8"?>`,
@@ -209,6 +213,7 @@ export function sectionSvg(input: SvgInput): string {
     lines.push(`<g data-operation="${composed.part.operation}"><title>${escapeXml(composed.part.name)}</title>`, ...regionPaths(composed.region, frame, stroke), `</g>`);
   }
   lines.push(`</g>`);
+  if (input.joints) lines.push(...jointMarkers(input.joints, frame));
   if (p) lines.push(...axesMarkup(p, frame), ...tableMarkup(p, unit, display));
   else lines.push(`<text x="${TABLE_X}" y="${TOP}" font-size="12" fill="#b03030">No properties: ${escapeXml(section.diagnostics[0]?.message ?? 'the geometry has problems')}</text>`);
   lines.push(`<g id="part-list" font-size="12"><text x="${TABLE_X}" y="${px(partsTop)}" font-weight="bold">Parts</text>`);
@@ -216,6 +221,62 @@ export function sectionSvg(input: SvgInput): string {
     const sign = composed.part.operation === 'subtract' ? '− ' : '+ ';
     lines.push(`<text x="${TABLE_X}" y="${px(partsTop + (i + 1) * ROW)}">${escapeXml(sign + composed.part.name)}</text>`);
   });
-  lines.push(`</g>`, `<text id="caution" x="${MARGIN}" y="${px(bottom + 16)}" font-size="11" fill="#555">${escapeXml(CAUTION)}</text>`, `</svg>`, '');
+  lines.push(`</g>`);
+  if (jointLines.length > 0) {
+    const top = bottom - jointLines.length * 15;
+    lines.push(`<g id="joints-table" font-size="11">`, ...jointLines.map((t, i) => `<text x="${MARGIN}" y="${px(top + i * 15)}"${i === 0 ? ' font-weight="bold"' : ''}>${escapeXml(t)}</text>`), `</g>`);
+  }
+  lines.push(`<text id="caution" x="${MARGIN}" y="${px(bottom + 16)}" font-size="11" fill="#555">${escapeXml(CAUTION)}</text>`, `</svg>`, '');
   return lines.join('\n');
+}
+
+/** Thick lines along each joint's contact segments, named J1, J2 … at the middle of the first. */
+function jointMarkers(x: JointsExport, frame: Frame): string[] {
+  const out = [`<g id="joints" stroke="#d9822b" stroke-width="3" stroke-linecap="round">`];
+  for (const j of x.joints) {
+    out.push(`<g data-joint="${escapeXml(j.name)}"><title>${escapeXml(`${j.name}: ${j.parts[0]} | ${j.parts[1]}, ${j.kindText}`)}</title>`);
+    for (const s of j.segments) out.push(`<line x1="${px(frame.toX(s.x0))}" y1="${px(frame.toY(s.y0))}" x2="${px(frame.toX(s.x1))}" y2="${px(frame.toY(s.y1))}"/>`);
+    out.push('</g>');
+  }
+  out.push('</g>', `<g id="joint-names" font-size="11" fill="#9a5a10">`);
+  for (const j of x.joints) {
+    const s = j.segments[0];
+    if (s) out.push(`<text x="${px(frame.toX((s.x0 + s.x1) / 2) + 5)}" y="${px(frame.toY((s.y0 + s.y1) / 2) - 5)}">${escapeXml(j.name)}</text>`);
+  }
+  out.push('</g>');
+  return out;
+}
+
+/** Lines of text under the drawing: joints, τmax per part, EI shares, warnings and notes (long ones wrapped). */
+function jointsText(x: JointsExport): string[] {
+  const u = x.units;
+  const g = (v: number | null | undefined): string => (v === null || v === undefined ? '—' : formatSig(v, 4));
+  const out: string[] = [];
+  if (x.joints.length > 0) {
+    out.push(x.shear ? `Joints under Vy = ${g(x.shear.Vy)} ${u.force}, Vx = ${g(x.shear.Vx)} ${u.force} (welds ${x.shear.method})` : 'Joints');
+    for (const j of x.joints) {
+      const s = j.shear;
+      out.push(...wrap(`${j.name}  ${j.parts[0]} | ${j.parts[1]}  ${g(j.length)} ${x.unit}  ${j.kindText}${j.isDefault ? ' (default)' : ''}${s ? `  q = ${g(s.q)} ${u.q}  τ = ${g(s.tauJoint)} ${u.stress}  ${s.needs}` : ''}`, 150));
+    }
+  }
+  if (x.shear) for (const p of x.shear.parts) out.push(...wrap(`τmax ${p.part} = ${g(p.tauMax)} ${u.stress}  (${p.where})`, 150));
+  if (x.plies) for (const p of x.plies.plies) out.push(`EI share ${p.parts.join(' + ')}: ${formatSig(p.shareX * 100, 4)} % of a vertical load, ${formatSig(p.shareY * 100, 4)} % of a horizontal load`);
+  const notes = [...x.warnings, ...(x.plies ? [x.plies.note] : []), ...x.notes];
+  for (const n of notes) out.push(...wrap(n, 150));
+  if (out.length > 0 && out[0] !== 'Joints' && !out[0]?.startsWith('Joints under')) out.unshift('Pieces and joints');
+  return out;
+}
+
+function wrap(text: string, width: number): string[] {
+  const words = text.split(' ');
+  const out: string[] = [];
+  let line = '';
+  for (const w of words) {
+    if (line.length > 0 && line.length + 1 + w.length > width) {
+      out.push(line);
+      line = w;
+    } else line = line.length === 0 ? w : `${line} ${w}`;
+  }
+  if (line.length > 0) out.push(line);
+  return out;
 }

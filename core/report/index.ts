@@ -6,6 +6,7 @@
  * user text is escaped (core/export escapeXml).
  */
 import { escapeXml } from '../export/svg.ts';
+import { jointsReportTables, type JointsExport } from '../export/joints.ts';
 import { CAUTION } from '../member/check.ts';
 
 export interface ReportTable {
@@ -29,6 +30,8 @@ export interface ReportInput {
   readonly materials?: readonly string[];
   readonly memberChecks?: readonly string[];
   readonly torsion?: TorsionNote | null;
+  /** Joints, pieces and overlaps, q and τ under a shear (core/export/joints.ts); tables follow the others. */
+  readonly joints?: JointsExport | null;
   /** e.g. "2026-12-01" — given by the caller so the output is reproducible. */
   readonly date?: string;
 }
@@ -48,7 +51,7 @@ export function reportHtml(input: ReportInput): string {
   const e = escapeXml;
   // Heading and table in one block that is not split across pages (a heading never ends a page).
   const cell = (t: ReportTable, tag: 'th' | 'td', text: string, i: number): string => `<${tag}${t.textColumns?.includes(i) ? ' class="text"' : ''}>${e(text)}</${tag}>`;
-  const tables = input.tables.map((t) => `<section class="block"><h2>${e(t.title)}</h2>\n<table><thead><tr>${t.columns.map((c, i) => cell(t, 'th', c, i)).join('')}</tr></thead><tbody>\n${t.rows.map((r) => `<tr>${r.map((c, i) => cell(t, 'td', c, i)).join('')}</tr>`).join('\n')}\n</tbody></table></section>`);
+  const tables = [...input.tables, ...(input.joints ? jointsReportTables(input.joints) : [])].map((t) => `<section class="block"><h2>${e(t.title)}</h2>\n<table><thead><tr>${t.columns.map((c, i) => cell(t, 'th', c, i)).join('')}</tr></thead><tbody>\n${t.rows.map((r) => `<tr>${r.map((c, i) => cell(t, 'td', c, i)).join('')}</tr>`).join('\n')}\n</tbody></table></section>`);
   const methods = [
     'Area, centroid, second moments and elastic moduli: exact integrals over the boundary by Green\'s theorem, straight edges and circular arcs in closed form (no mesh).',
     'Plastic moduli: the plastic neutral axis splits the area in half; Z is the first moment of both halves about it.',
