@@ -12,6 +12,7 @@
 import { allSectionViews, newSectionFile, serialiseDocument, type SectionDocument, type SectionFile } from '../../core/document/index.ts';
 import type { Part } from '../../core/document/types.ts';
 import { propertiesCsv, sectionSvg } from '../../core/export/index.ts';
+import { jointsCsv, jointsExport } from '../../core/export/joints.ts';
 import { getPartType } from '../../core/parts/index.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
 import { convertLength, defaultDisplaySet, plainDisplaySet, type DisplaySet, type LengthUnit } from '../../core/units/index.ts';
@@ -595,13 +596,15 @@ export class AppController implements CommandTarget {
     }
     const base = (st.file?.name ?? st.doc.name).replace(/\.(section\.json|geojson|json)$/i, '').replace(/[^\w.-]+/g, '-') || 'section';
     const torsion = this.state.torsion;
+    // Joints, separate pieces and overlaps go into both exports (core/export/joints.ts).
+    const joints = jointsExport({ doc: st.doc });
     const file =
       kind === 'svg'
-        ? { suggestedName: `${base}.svg`, mimeType: 'image/svg+xml', text: sectionSvg({ name: st.doc.name, unit: st.doc.unit, section, display: this.display() }) }
+        ? { suggestedName: `${base}.svg`, mimeType: 'image/svg+xml', text: sectionSvg({ name: st.doc.name, unit: st.doc.unit, section, display: this.display(), joints }) }
         : {
             suggestedName: `${base}.csv`,
             mimeType: 'text/csv',
-            text: propertiesCsv({ name: st.doc.name, unit: st.doc.unit, properties: section.properties, torsion: torsion.kind === 'done' && torsion.doc === st.doc ? torsion.result : null }),
+            text: propertiesCsv({ name: st.doc.name, unit: st.doc.unit, properties: section.properties, torsion: torsion.kind === 'done' && torsion.doc === st.doc ? torsion.result : null }) + (joints ? jointsCsv(joints) : ''),
           };
     try {
       if (await this.host.exportFile(file)) this.note(`Exported ${file.suggestedName}`);

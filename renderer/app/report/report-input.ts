@@ -12,6 +12,8 @@
  */
 import type { SectionDocument } from '../../../core/document/types.ts';
 import { sectionSvg } from '../../../core/export/index.ts';
+import { jointsExport } from '../../../core/export/joints.ts';
+import type { ShearLoads } from '../../../core/joints/index.ts';
 import { materialPiecesFromDocument, newtonsTo, pascalsTo, type ForceUnit, type StressUnit } from '../../../core/materials/index.ts';
 import { LIMIT_CAUTION, sectionMemberCheck, type SectionMemberInput, type Support } from '../../../core/member/index.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
@@ -37,6 +39,8 @@ export interface SectionReportOptions {
   readonly date?: string;
   /** The file's own name, put before the section's when they differ. */
   readonly fileTitle?: string;
+  /** Shear forces Vy, Vx (N) for the joints' q and τ (core/export/joints.ts); absent: joints, pieces and overlaps only. */
+  readonly shear?: ShearLoads | null;
 }
 
 export type SectionReport = { readonly ok: true; readonly input: ReportInput } | { readonly ok: false; readonly errors: readonly string[] };
@@ -151,12 +155,14 @@ export function sectionReportInput(o: SectionReportOptions): SectionReport {
   if (p === null) return { ok: false, errors: section.diagnostics.length > 0 ? section.diagnostics.map((d) => d.message) : ['the section has no area: draw or open a section first'] };
   const tables = propertyTables(p, o.doc.unit, o.display, o.sig);
   if (o.torsion) tables.splice(2, 0, torsionTable(o.torsion, p, o.doc.unit, o.display, o.sig));
+  const joints = jointsExport({ doc: o.doc, loads: o.shear ?? null });
   return {
     ok: true,
     input: {
       title: reportTitle(o.fileTitle ?? '', o.doc.name),
-      drawings: [sectionSvg({ name: o.doc.name, unit: o.doc.unit, section, display: o.display })],
+      drawings: [sectionSvg({ name: o.doc.name, unit: o.doc.unit, section, display: o.display, joints })],
       tables,
+      joints,
       materials: materialLines(o.doc),
       memberChecks: memberLines(o.doc, o.member),
       torsion: o.torsion ? { meshElements: o.torsion.meshElements, jRelativeError: o.torsion.jRelativeError } : null,
