@@ -21,7 +21,7 @@ import { SUPPORTS, type Support } from '../../core/member/beam.ts';
 import { CAUTION as MEMBER_CAUTION, type MemberResult } from '../../core/member/check.ts';
 import { COMMON_LIVE_RATIO, COMMON_TOTAL_RATIO, DEFLECTION_LIMIT_MEANING, STRESS_FACTOR_MEANING, type Criterion, type StressLimits } from '../../core/member/verdict.ts';
 import { sectionMemberCheck } from '../../core/member/section-member.ts';
-import { convertLength, formatSig, fromSI, parseQuantityOrThrow, unitSystem, type LengthUnit, type QuantityKind, type UnitSystem } from '../../core/units/index.ts';
+import { convertLength, formatSig, fromSI, parseQuantityOrThrow, unitSystem, zeroWithinRounding, type LengthUnit, type QuantityKind, type UnitSystem } from '../../core/units/index.ts';
 import { EXIT_BAD_INPUT, EXIT_FLAGGED, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
 import { DXF_INPUT_FLAGS, dxfReadOptions, loadSectionArgument, type LoadedSection } from '../load.ts';
 
@@ -422,9 +422,12 @@ export function materialPropsResults(file: string, section: LoadedSection, flags
   const L = (v: number, p = 1): number => convertLength(v, section.unit, reportUnit, p);
   const su = system.units, u = reportUnit;
   const EI = (v: number): number => fromSI(v, 'flexuralStiffness', su.flexuralStiffness);
+  // Rounding residue as 0 (core/units zeroWithinRounding): positions on the section's size, EIxy on EIx + EIy, θ on 90°.
+  const pr = section.properties;
+  const size = Math.max(pr.xMax - pr.xMin, pr.yMax - pr.yMin);
   const values = {
-    EA: fromSI(c.EA, 'axialStiffness', su.axialStiffness), EIx: EI(c.EIx), EIy: EI(c.EIy), EIxy: EI(c.EIxy), EI1: EI(c.EI1), EI2: EI(c.EI2), thetaEIDeg: c.thetaDeg,
-    cxE: L(c.cx), cyE: L(c.cy), eRef: fromSI(c.eRef, 'stress', su.stress),
+    EA: fromSI(c.EA, 'axialStiffness', su.axialStiffness), EIx: EI(c.EIx), EIy: EI(c.EIy), EIxy: EI(zeroWithinRounding(c.EIxy, c.EIx + c.EIy)), EI1: EI(c.EI1), EI2: EI(c.EI2), thetaEIDeg: zeroWithinRounding(c.thetaDeg, 90),
+    cxE: L(zeroWithinRounding(c.cx, size)), cyE: L(zeroWithinRounding(c.cy, size)), eRef: fromSI(c.eRef, 'stress', su.stress),
     transformedArea: L(c.transformedArea, 2), transformedIx: L(c.transformedIx, 4), transformedIy: L(c.transformedIy, 4),
     massPerLength: fromSI(c.massPerLength, 'massPerLength', su.massPerLength), weightPerLength: fromSI(c.weightPerLength, 'weightPerLength', su.weightPerLength),
   };

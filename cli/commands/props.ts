@@ -12,8 +12,7 @@ import type { SectionProperties } from '../../core/properties/types.ts';
 import { compositeTorsionAnalysis, MeshInputError, MeshRefinementError, TorsionSolveError, torsionConstants, type ShearPiece, type TorsionResult } from '../../core/torsion/index.ts';
 import { builtInMaterial, documentMaterials, materialPiecesFromDocument } from '../../core/materials/index.ts';
 import type { SectionDocument } from '../../core/document/types.ts';
-import type { NetSectionProperties } from '../../core/properties/index.ts';
-import { catalogueFor, PROPERTY_CATALOGUE, shownValue, TORSION_CATALOGUE, type CatalogueKind } from '../../core/properties/catalogue.ts';
+import { catalogueFor, NET_CATALOGUE, PROPERTY_CATALOGUE, shownValue, TORSION_CATALOGUE, type CatalogueKind } from '../../core/properties/catalogue.ts';
 import { convertLength, defaultDisplaySet, formatSig, fromSI, QUANTITY_POWER, toDisplay, unitSystem, type LengthUnit, type Quantity } from '../../core/units/index.ts';
 import { cutParts, sectionDxf } from '../../core/dxf/index.ts';
 import { CAUTION, EXIT_BAD_INPUT, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
@@ -74,32 +73,24 @@ interface ExtraResults {
   readonly errors: readonly string[];
 }
 
-const NET_ROWS: readonly (readonly [keyof NetSectionProperties, string, Quantity, string])[] = [
-  ['area', 'An', 'area', 'net area (fastener holes deducted)'],
-  ['cx', 'cx,net', 'length', 'net centroid x (net neutral axis, y bending)'],
-  ['cy', 'cy,net', 'length', 'net centroid y (net neutral axis, x bending)'],
-  ['Ix', 'Ix,net', 'inertia', 'net second moment about the net x axis'],
-  ['Iy', 'Iy,net', 'inertia', 'net second moment about the net y axis'],
-  ['Ixy', 'Ixy,net', 'inertia', 'net product of inertia'],
-  ['SxTop', 'Sx,net,top', 'modulus', 'net elastic modulus, x axis, top fibre'],
-  ['SxBottom', 'Sx,net,bottom', 'modulus', 'net elastic modulus, x axis, bottom fibre'],
-  ['SyLeft', 'Sy,net,left', 'modulus', 'net elastic modulus, y axis, left fibre'],
-  ['SyRight', 'Sy,net,right', 'modulus', 'net elastic modulus, y axis, right fibre'],
-];
-
 /** Net-section rows and the JSON "net" object, where fastener holes exist. */
 function netResults(section: LoadedSection, unit: LengthUnit): ExtraResults {
   const net = section.net;
   if (net === undefined) return { json: { fastenerHoles: 0 }, units: { fastenerHoles: '-' }, rows: [], errors: [] };
   const display = defaultDisplaySet(unit);
   const values: Record<string, number> = {};
-  const rows = NET_ROWS.map(([key, symbol, q, what]) => {
-    const v = convertLength(net.properties[key], section.unit, unit, QUANTITY_POWER[q]);
-    values[key] = v;
-    return [symbol, formatSig(toDisplay(v, unit, display[q]), SIGNIFICANT, { grouping: ',' }), display[q].label, what] as const;
+  const units: Record<string, string> = { fastenerHoles: '-' };
+  const rows = catalogueFor('cli', NET_CATALOGUE).map((e) => {
+    const q = e.kind as Quantity;
+    // Rounding residue as 0, on the gross section's scales (core/properties/catalogue.ts).
+    const v = convertLength(shownValue(q, net.properties[e.key], section.properties), section.unit, unit, QUANTITY_POWER[q]);
+    values[e.key] = v;
+    units[`net.${e.key}`] = kindUnit(q, unit);
+    return [e.symbol, formatSig(toDisplay(v, unit, display[q]), SIGNIFICANT, { grouping: ',' }), display[q].label, e.meaning] as const;
   });
   return {
     json: { fastenerHoles: net.holes, net: { ...values, note: 'net section: the gross section less its fastener holes; every other value is gross (fastener holes exist only at the fasteners)' } },
+    units,
     rows: [['fastenerHoles', String(net.holes), '', 'fastener holes: deducted in the net rows only; all other values are gross'], ...rows],
     errors: [],
   };

@@ -11,6 +11,7 @@
  * each kind's natural scale taken from the section itself (see residueScale).
  */
 import { zeroWithinRounding, type Quantity } from '../units/index.ts';
+import type { NetSectionProperties } from './net.ts';
 import type { SectionProperties } from './types.ts';
 
 export type CatalogueKind = Quantity | 'angle' | 'ratio';
@@ -20,6 +21,7 @@ export type PropertyView = 'panel' | 'csv' | 'drawing' | 'report' | 'cli';
 
 export type NumericKey = { [K in keyof SectionProperties]: SectionProperties[K] extends number ? K : never }[keyof SectionProperties];
 export type TorsionKey = 'J' | 'Cw' | 'xs' | 'ys';
+export type NetKey = keyof NetSectionProperties;
 
 export interface CatalogueEntry<K extends string = NumericKey> {
   readonly key: K;
@@ -84,6 +86,25 @@ export const TORSION_CATALOGUE: readonly CatalogueEntry<TorsionKey>[] = [
   { key: 'Cw', symbol: 'Cw', kind: 'warping', meaning: 'warping constant about the shear centre', group: G.torsion, views: NO_SVG },
   { key: 'xs', symbol: 'xs', kind: 'length', meaning: 'shear centre x (Trefftz)', group: G.torsion, views: NO_SVG },
   { key: 'ys', symbol: 'ys', kind: 'length', meaning: 'shear centre y (Trefftz)', group: G.torsion, views: NO_SVG },
+];
+
+/**
+ * The net section (the gross section less its fastener holes, core/properties/net.ts), shown
+ * beside the gross values where fastener holes exist (JSON: under "net", by these keys).
+ */
+const NET_VIEWS: readonly PropertyView[] = ['panel', 'cli'];
+const net = (key: NetKey, symbol: string, kind: CatalogueKind, meaning: string): CatalogueEntry<NetKey> => ({ key, symbol, kind, meaning, group: 'Net section', views: NET_VIEWS });
+export const NET_CATALOGUE: readonly CatalogueEntry<NetKey>[] = [
+  net('area', 'An', 'area', 'net area (fastener holes deducted)'),
+  net('cx', 'x̄ net', 'length', 'net centroid x (net neutral axis, y bending)'),
+  net('cy', 'ȳ net', 'length', 'net centroid y (net neutral axis, x bending)'),
+  net('Ix', 'Ix,net', 'inertia', 'net second moment about the net x axis'),
+  net('Iy', 'Iy,net', 'inertia', 'net second moment about the net y axis'),
+  net('Ixy', 'Ixy,net', 'inertia', 'net product of inertia'),
+  net('SxTop', 'Sx,net top', 'modulus', 'net elastic modulus, x axis, top fibre: Ix,net / (ymax − ȳ net)'),
+  net('SxBottom', 'Sx,net bot', 'modulus', 'net elastic modulus, x axis, bottom fibre: Ix,net / (ȳ net − ymin)'),
+  net('SyLeft', 'Sy,net left', 'modulus', 'net elastic modulus, y axis, left fibre'),
+  net('SyRight', 'Sy,net right', 'modulus', 'net elastic modulus, y axis, right fibre'),
 ];
 
 /** The entries a view shows, in catalogue order. */

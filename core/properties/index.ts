@@ -27,4 +27,4 @@ export {
 } from './plastic.ts';
 export { sectionProperties, centroidalFromIntegrals, type CentroidalIntegrals } from './section.ts';
 export { netSectionProperties, type NetSectionProperties } from './net.ts';
-export { PROPERTY_CATALOGUE, TORSION_CATALOGUE, catalogueFor, catalogueGroups, residueScale, shownValue, type CatalogueEntry, type CatalogueKind, type PropertyView, type NumericKey, type TorsionKey } from './catalogue.ts';
+export { NET_CATALOGUE, PROPERTY_CATALOGUE, TORSION_CATALOGUE, catalogueFor, catalogueGroups, residueScale, shownValue, type CatalogueEntry, type CatalogueKind, type PropertyView, type NumericKey, type TorsionKey, type NetKey } from './catalogue.ts';

@@ -111,3 +111,20 @@ describe('props --json says the unit of every number (issue 11 item 3)', () => {
     expect([j.units.EIx, j.units.GJ, j.units.gRef, j.units.weightPerLength]).toEqual(['kip·in²', 'kip·in²', 'ksi', 'lb/ft']);
   });
 });
+
+describe('rounding residue is printed and exported as 0 (issue 11 item 4: "cx 1.5e-14")', () => {
+  it('three 0.1 × 0.3 m steel bars at (−0.1, 0.5), (0.2, 0), (−0.1, −0.5): x̄E = Σ A·x / ΣA = 0, EIxy = E·Σ A·x·y = 0, θ = 0 exactly, not 1e-17 and 1e-11', async () => {
+    const { propsCommand } = await import('../../cli/commands/props.ts');
+    const { builtInMaterial } = await import('../../core/materials/library.ts');
+    const bar = (id: string, x: number, y: number) => ({ ...rect(id, 0.1, 0.3), placement: { x, y, rotationDeg: 0, mirror: false } });
+    const three = JSON.stringify({
+      format: 'sectionsmith-section', version: 2, name: 'trailer frame', unit: 'm', materials: [builtInMaterial('astm-a36')], defaultMaterial: 'astm-a36',
+      sections: [{ id: 's', name: 'three bars', parts: [bar('a', -0.1, 0.5), bar('b', 0.2, 0), bar('c', -0.1, -0.5)] }],
+    });
+    const r = await run(propsCommand, ['three.json'], { json: true }, three);
+    const j = JSON.parse(r.out) as Record<string, number>;
+    expect([j.cx, j.cy, j.Ixy, j.cxE, j.cyE, j.EIxy, j.thetaEIDeg]).toEqual([0, 0, 0, 0, 0, 0, 0]);
+    // A value that is not residue is kept: the plastic neutral axis for y bending splits the area in half at x = −0.075 (exact arithmetic).
+    expect(j.pnaX).toBeCloseTo(-0.075, 12);
+  });
+});

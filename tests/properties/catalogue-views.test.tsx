@@ -15,7 +15,8 @@ import { propsCommand } from '../../cli/commands/props.ts';
 import { sectionDxf } from '../../core/dxf/index.ts';
 import { propertiesCsv } from '../../core/export/csv.ts';
 import { escapeXml, sectionSvg } from '../../core/export/svg.ts';
-import { PROPERTY_CATALOGUE, TORSION_CATALOGUE, type CatalogueEntry, type PropertyView } from '../../core/properties/catalogue.ts';
+import { NET_CATALOGUE, PROPERTY_CATALOGUE, TORSION_CATALOGUE, type CatalogueEntry, type PropertyView } from '../../core/properties/catalogue.ts';
+import { netSectionProperties } from '../../core/properties/net.ts';
 import { CAUTION } from '../../core/member/check.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
 import type { TorsionResult } from '../../core/torsion/types.ts';
@@ -33,7 +34,7 @@ const torsion: TorsionResult = { J: 50, Cw: 3, xs: 0.1, ys: -0.2, meshElements: 
 
 const panel = renderToStaticMarkup(
   <ResultsPanel
-    results={{ properties: p, stale: null, diagnostics: [], hiddenParts: 0, net: null, fastenerHoles: 0, millis: 1 }}
+    results={{ properties: p, stale: null, diagnostics: [], hiddenParts: 0, net: netSectionProperties(section.region), fastenerHoles: 1, millis: 1 }}
     unit="in"
     display={display}
     sig={4}
@@ -85,10 +86,26 @@ describe('the property catalogue is the one list every view reads', () => {
   });
 
   it('a view lists nothing the catalogue does not hold: the panel has one result row per panel entry', () => {
-    const rows = panel.match(/data-testid="result-[A-Za-z0-9]+"/g) ?? [];
+    const rows = panel.match(/data-testid="result-(?!net-)[A-Za-z0-9]+"/g) ?? [];
     const expected = [...PROPERTY_CATALOGUE, ...TORSION_CATALOGUE].filter((e) => e.views.includes('panel')).length;
     expect(rows).toHaveLength(expected);
     const reportRows = reportSymbols.filter((s) => s !== 'Cw, xs, ys');
     expect(reportRows).toHaveLength([...PROPERTY_CATALOGUE, ...TORSION_CATALOGUE].filter((e) => e.views.includes('report')).length);
+  });
+});
+
+describe('the net-section rows come from the catalogue too', () => {
+  // The same gusset, its hole a fastener hole (format version 3 cut-out role): a net section exists.
+  const v3 = {
+    format: 'sectionsmith-section', version: 3, name: doc.name, unit: 'in', materials: [], defaultMaterial: null,
+    sections: [{ id: 's', name: doc.name, parts: doc.parts.map((part) => (part.operation === 'subtract' ? { ...part, cutoutRole: 'fastener-hole' } : part)) }],
+  };
+  let out = '';
+  propsCommand.run(['gusset.json'], { json: true }, { out: (t) => { out += t; }, err: () => undefined, readFile: () => JSON.stringify(v3) }, {});
+  const j = JSON.parse(out) as { net?: Record<string, number>; units: Record<string, string> };
+
+  it.each(NET_CATALOGUE.map((e) => [e.key, e] as const))('net %s: in the panel and under "net" in the CLI JSON with its unit, as the catalogue says', (_key, e) => {
+    expect(['panel', panel.includes(`data-testid="result-net-${e.key}"`)]).toEqual(['panel', e.views.includes('panel')]);
+    expect(['cli', typeof j.net?.[e.key] === 'number' && typeof j.units[`net.${e.key}`] === 'string']).toEqual(['cli', e.views.includes('cli')]);
   });
 });

@@ -1,13 +1,13 @@
 /** Every section property with its symbol, value and unit; stale values marked; diagnostics in words; the caution. */
 import type { ReactElement } from 'react';
 import type { LengthUnit } from '../../../core/units/index.ts';
-import { formatSig, toDisplay, type DisplaySet } from '../../../core/units/index.ts';
+import { formatSig, type DisplaySet } from '../../../core/units/index.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
 import type { NetSectionProperties } from '../../../core/properties/index.ts';
 import type { Results } from '../../controller/results.ts';
 import type { TorsionState } from '../../controller/torsion-client.ts';
 import type { SectionDocument } from '../../../core/document/types.ts';
-import { propertyGroups, torsionRows } from './result-rows.ts';
+import { netRows, propertyGroups, torsionRows } from './result-rows.ts';
 import { CAUTION } from '../../../core/member/check.ts';
 
 interface Props {
@@ -76,16 +76,8 @@ function TorsionRows({ t, current, p, unit, display, sig }: { t: TorsionState; c
 }
 
 /** Net-section rows (fastener holes deducted), labelled net, beside the gross values. */
-function NetRows({ net, holes, unit, display, sig }: { net: NetSectionProperties; holes: number; unit: LengthUnit; display: DisplaySet; sig: number }): ReactElement {
-  const rows: [string, string, string, number, 'area' | 'length' | 'inertia' | 'modulus'][] = [
-    ['area', 'An', 'net area', net.area, 'area'],
-    ['cy', 'ȳ net', 'net neutral axis (x bending)', net.cy, 'length'],
-    ['cx', 'x̄ net', 'net neutral axis (y bending)', net.cx, 'length'],
-    ['Ix', 'Ix,net', 'net, about the net x axis', net.Ix, 'inertia'],
-    ['Iy', 'Iy,net', 'net, about the net y axis', net.Iy, 'inertia'],
-    ['SxTop', 'Sx,net top', 'Ix,net / (ymax − ȳ net)', net.SxTop, 'modulus'],
-    ['SxBottom', 'Sx,net bot', 'Ix,net / (ȳ net − ymin)', net.SxBottom, 'modulus'],
-  ];
+/** Net-section rows (fastener holes deducted), labelled net, beside the gross values; the list is the property catalogue's. */
+function NetRows({ net, p, holes, unit, display, sig }: { net: NetSectionProperties; p: SectionProperties; holes: number; unit: LengthUnit; display: DisplaySet; sig: number }): ReactElement {
   return (
     <table data-testid="net-section">
       <caption>Net section ({holes} fastener hole{holes === 1 ? '' : 's'} deducted)</caption>
@@ -95,19 +87,16 @@ function NetRows({ net, holes, unit, display, sig }: { net: NetSectionProperties
             Every other value here is the gross section: fastener holes exist only at the fasteners, so stiffness, deflection, torsion and plastic moduli ignore them.
           </td>
         </tr>
-        {rows.map(([key, symbol, label, value, q]) => {
-          const d = display[q];
-          return (
-            <tr key={key} title={label}>
-              <th scope="row">{symbol}</th>
-              <td className="value" data-testid={`result-net-${key}`} data-value={String(value)}>
-                {formatSig(toDisplay(value, unit, d), sig)}
-              </td>
-              <td className="unit">{d.label}</td>
-              <td className="label">{label}</td>
-            </tr>
-          );
-        })}
+        {netRows('panel', net, p, unit, display, sig).map((row) => (
+          <tr key={row.key} title={row.meaning}>
+            <th scope="row">{row.symbol}</th>
+            <td className="value" data-testid={`result-net-${row.key}`} data-value={String(row.raw)}>
+              {row.text}
+            </td>
+            <td className="unit">{row.unit}</td>
+            <td className="label">{row.meaning}</td>
+          </tr>
+        ))}
       </tbody>
     </table>
   );
@@ -166,7 +155,7 @@ export function ResultsPanel({ results, unit, display, sig, torsion, current }: 
               </tbody>
             </table>
           ))}
-          {results.properties && results.net && <NetRows net={results.net} holes={results.fastenerHoles} unit={unit} display={display} sig={sig} />}
+          {results.properties && results.net && <NetRows net={results.net} p={results.properties} holes={results.fastenerHoles} unit={unit} display={display} sig={sig} />}
           {results.properties && <TorsionRows t={torsion} current={current} p={results.properties} unit={unit} display={display} sig={sig} />}
         </div>
       )}

@@ -8,7 +8,8 @@
  * angles in degrees, ratios without a unit. Rounding residue (below 1e-9 of the kind's natural
  * scale for this section) is shown as 0 (catalogue `shownValue`); `raw` keeps the full number.
  */
-import { catalogueFor, catalogueGroups, PROPERTY_CATALOGUE, residueScale, TORSION_CATALOGUE, type CatalogueEntry, type CatalogueKind, type TorsionKey } from '../../../core/properties/catalogue.ts';
+import { catalogueFor, catalogueGroups, NET_CATALOGUE, PROPERTY_CATALOGUE, residueScale, TORSION_CATALOGUE, type CatalogueEntry, type CatalogueKind, type TorsionKey } from '../../../core/properties/catalogue.ts';
+import type { NetSectionProperties } from '../../../core/properties/net.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
 import { formatSig, toDisplay, zeroWithinRounding, type DisplaySet, type LengthUnit } from '../../../core/units/index.ts';
 
@@ -57,4 +58,9 @@ export function torsionRows(view: 'panel' | 'report', t: Readonly<Record<Torsion
       const r = row(e, t[e.key], p, unit, display, sig);
       return e.key === 'J' && t.components > 1 ? { ...r, meaning: `Saint-Venant torsion constant: sum over ${t.components} separate pieces` } : r;
     });
+}
+
+/** The net-section rows (fastener holes deducted), on the gross section's residue scales. */
+export function netRows(view: 'panel' | 'report', net: NetSectionProperties, p: SectionProperties, unit: LengthUnit, display: DisplaySet, sig: number): ShownRow[] {
+  return catalogueFor(view, NET_CATALOGUE).map((e) => row(e, net[e.key], p, unit, display, sig));
 }
