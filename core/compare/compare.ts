@@ -25,7 +25,7 @@ import { regionBounds } from '../geometry/bounds.ts';
 import { materialPiecesFromDocument } from '../materials/document.ts';
 import { CAUTION, sectionMemberCheck, type Criterion, type StressLimits } from '../member/index.ts';
 import { sectionFromDocument } from '../section/index.ts';
-import { convertLength } from '../units/index.ts';
+import { convertLength, fromSI, unitSystem } from '../units/index.ts';
 import type { LengthUnit } from '../units/types.ts';
 
 export { CAUTION };
@@ -226,7 +226,7 @@ export type TargetId = 'minIx' | 'minSx' | 'minZx' | 'minEIx' | 'maxDepth' | 'de
 /** One target an alternative does not meet, and by how much. */
 export interface TargetFailure {
   readonly target: TargetId;
-  /** Plain sentence with both values and the margin: lengths in the comparison unit, stresses and EI in psi and kip·in² (in, ft) or MPa and kN·m². */
+  /** Plain sentence with both values and the margin: lengths in the comparison unit, stresses and EI in ksi and kip·in² (in, ft) or MPa and kN·m² (core/units unitSystem). */
   readonly message: string;
   /** value / limit (≥ 1 over a maximum, ≤ 1 under a minimum); null when the value is missing. */
   readonly ratio: number | null;
@@ -247,12 +247,16 @@ export interface Pick {
 }
 
 const g4 = (v: number): string => String(Number(v.toPrecision(4)));
-const imperial = (u: LengthUnit): boolean => u === 'in' || u === 'ft';
-const N_PER_LBF = 4.4482216152605; // exact by definition
-/** Stresses in messages: psi for inch and foot work, MPa otherwise. */
-const stressText = (pa: number, u: LengthUnit): string => (imperial(u) ? `${g4(pa / (N_PER_LBF / 0.0254 ** 2))} psi` : `${g4(pa / 1e6)} MPa`);
-/** EI in messages: kip·in² for inch and foot work, kN·m² otherwise. */
-const eiFactor = (u: LengthUnit): { f: number; unit: string } => (imperial(u) ? { f: 1 / (1000 * N_PER_LBF * 0.0254 ** 2), unit: 'kip·in²' } : { f: 1e-3, unit: 'kN·m²' });
+/** Stresses in messages: the comparison unit's system (core/units unitSystem: ksi for inch and foot work, MPa otherwise). */
+const stressText = (pa: number, u: LengthUnit): string => {
+  const unit = unitSystem(u).units.stress;
+  return `${g4(fromSI(pa, 'stress', unit))} ${unit}`;
+};
+/** EI in messages: the system's flexural stiffness unit (kip·in² or kN·m²), as a factor from N·m². */
+const eiFactor = (u: LengthUnit): { f: number; unit: string } => {
+  const unit = unitSystem(u).units.flexuralStiffness;
+  return { f: fromSI(1, 'flexuralStiffness', unit), unit };
+};
 const pctOver = (r: number): string => `${g4(Math.abs(r - 1) * 100)} %`;
 
 function minimum(target: TargetId, what: string, value: number | null, limit: number | undefined, unit: string): TargetFailure | null {

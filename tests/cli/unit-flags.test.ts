@@ -128,3 +128,13 @@ describe('rounding residue is printed and exported as 0 (issue 11 item 4: "cx 1.
     expect(j.pnaX).toBeCloseTo(-0.075, 12);
   });
 });
+
+describe('compare target messages in the unit system', () => {
+  it('an inch comparison under 6 kip/ft on 20 ft: the bar\'s stress M/S = (0.5 · 240² / 8) / 42.667 = 84.38 ksi against 50 ksi (A992 fy, from memory), in ksi not psi', async () => {
+    const { builtInMaterial } = await import('../../core/materials/library.ts');
+    const steel = JSON.stringify({ ...JSON.parse(alternatives), materials: [builtInMaterial('astm-a992')], defaultMaterial: 'astm-a992' });
+    const r = await run(compareCommand, ['alts.json'], { span: '20ft', load: '6kip/ft', stress: true }, steel);
+    expect(r.out).toMatch(/bar 4x8 does not meet: bending stress in Steel ASTM A992 \(Fy 50 ksi\) 84\.3[78] ksi is 168\.[78] % of its limit 50 ksi/);
+    expect(r.out).not.toMatch(/psi/);
+  });
+});
