@@ -11,10 +11,11 @@
  */
 import type { SectionDocument } from '../../core/document/types.ts';
 import type { Region } from '../../core/geometry/types.ts';
-import { SEPARATE_PIECES_NOTE, type DesignMethod, type SeparateTorsion } from '../../core/joints/index.ts';
+import { partsActingTogether, SEPARATE_PIECES_NOTE, type DesignMethod, type SeparateTorsion } from '../../core/joints/index.ts';
 import { JOINTS_NOTE, jointsExport } from '../../core/export/joints.ts';
 import { convertLength, formatSig, parseQuantityOrThrow, QuantityError, type LengthUnit } from '../../core/units/index.ts';
 import type { FlagSpec, FlagValues } from '../command.ts';
+import type { LoadedSection } from '../load.ts';
 
 export const JOINT_FLAGS: readonly FlagSpec[] = [
   { name: 'shear', type: 'string', value: 'V', description: 'vertical shear Vy, e.g. 100kN or 22kip (default unit N): adds the shear flow q = V·Q/I of every joint, the stress at it and the weld or fastener it needs' },
@@ -131,4 +132,12 @@ export function withTorsionPieces<T extends { json: Record<string, unknown>; uni
     units: { ...out.units, 'torsionPieces[].J': `${unit}⁴` },
     rows: [...out.rows, ...grouped.groups.map((g) => ['J piece', formatSig(J(g.result.J), 6, { grouping: ',' }), `${unit}⁴`, `${g.labels.join(' + ')}: twists on its own`] as const), ['torsion', '', '', grouped.why] as const],
   };
+}
+
+/** What every result of a section says about its material: separate pieces and overlapping parts (not the default-joint notes). */
+export function sectionWarnings(section: LoadedSection): string[] {
+  if (section.doc === undefined) return regionPiecesResults(section.region).json.warnings as string[];
+  const acting = partsActingTogether(section.doc);
+  const pieces = acting.warnings.filter((w) => w.startsWith('The material falls into'));
+  return [...pieces, ...acting.warnings.filter((w) => w.startsWith('Parts "'))];
 }

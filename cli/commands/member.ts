@@ -24,6 +24,7 @@ import { sectionMemberCheck } from '../../core/member/section-member.ts';
 import { convertLength, formatSig, fromSI, parseQuantityOrThrow, unitSystem, zeroWithinRounding, type LengthUnit, type QuantityKind, type UnitSystem } from '../../core/units/index.ts';
 import { EXIT_BAD_INPUT, EXIT_FLAGGED, EXIT_OK, type CliIo, type Command, type FlagLists, type FlagSpec, type FlagValues } from '../command.ts';
 import { DXF_INPUT_FLAGS, dxfReadOptions, loadSectionArgument, type LoadedSection } from '../load.ts';
+import { sectionWarnings } from './joints-results.ts';
 
 export const MEMBER_FLAGS: readonly FlagSpec[] = [
   { name: 'span', type: 'string', value: 'L', description: 'span (required), e.g. 6000, 6m, 20ft, 13\'-9"; a bare number is in the document unit; a cantilever\'s length' },
@@ -123,6 +124,8 @@ interface MemberReport {
   readonly selfWeight?: number;
   readonly stiffnessFrom: string;
   readonly pieces: readonly MaterialPiece[];
+  /** Separate pieces and overlapping parts (cli/commands/joints-results.ts sectionWarnings). */
+  readonly warnings?: readonly string[];
 }
 
 function ratioFlag(flags: FlagValues, name: string, fallback: number): number {
@@ -283,6 +286,7 @@ function reportJson(file: string, r: MemberReport): Record<string, unknown> {
       stressLimits: STRESS_FACTOR_MEANING,
     },
     deflectionSearch: res.deflectionSolve,
+    warnings: r.warnings ?? [],
     cautions: res.cautions,
   };
 }
@@ -304,7 +308,7 @@ function reportText(file: string, r: MemberReport): string {
   lines.push(`  maximum shear        ${g(k.force(Math.abs(res.shearMax.value)))} ${su.force} at x = ${g(k.len(res.shearMax.at))} ${l}`);
   lines.push('', `verdict: ${res.verdict.summary}`, ...res.verdict.criteria.map((c) => criterionLine(c, k, system)));
   lines.push('', `Deflection limits: ${DEFLECTION_LIMIT_MEANING}.`, `Stress limits: ${STRESS_FACTOR_MEANING}`);
-  lines.push('', ...res.cautions.map((c) => `CAUTION: ${c}`), '');
+  lines.push('', ...(r.warnings ?? []).map((w) => `WARNING: ${w}`), ...res.cautions.map((c) => `CAUTION: ${c}`), '');
   return lines.join('\n');
 }
 
@@ -319,7 +323,7 @@ function runMember(positionals: readonly string[], flags: FlagValues, io: CliIo,
       io.err(pieces.map((p) => `${file}: ${p}`).join('\n') + '\n');
       return EXIT_BAD_INPUT;
     }
-    const report = runCheck(section, pieces, flags, units, lists);
+    const report = { ...runCheck(section, pieces, flags, units, lists), warnings: sectionWarnings(section) };
     io.out(flags.json === true ? `${JSON.stringify(reportJson(file, report), (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n` : reportText(file, report));
     // A criterion over its limit is a result that needs attention, as a flagged row is for `check`.
     return report.result.verdict.passes ? EXIT_OK : EXIT_FLAGGED;

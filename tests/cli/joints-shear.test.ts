@@ -150,4 +150,13 @@ describe('separate pieces and overlaps are said in the CLI output', () => {
     const text = (await cli('props', file)).out;
     expect(text).toContain('WARNING: Parts "top flange" and "top flange copy" overlap by 10000 mm²');
   });
+
+  it('member: two plates apart say so in the text and the JSON', async () => {
+    const file = write('apart', 'mm', [rect('left', 10, 100, -20, 0), rect('right', 10, 100, 20, 0)]);
+    const args = ['member', file, '--span', '2m', '--support', 'simple', '--uniform', '1kN/m', '--E', '200GPa'];
+    const text = await cli(...args);
+    expect(text.out).toContain('WARNING: The material falls into 2 separate pieces');
+    const j = JSON.parse((await cli(...args, '--json')).out) as { warnings: string[] };
+    expect(j.warnings[0]).toContain('Bending properties (A, I, S, Z) assume the parts act together');
+  });
 });
