@@ -11,6 +11,7 @@ export const CHANNELS = [
   { name: 'document:save', direction: 'invoke' },
   { name: 'document:save-as', direction: 'invoke' },
   { name: 'export:save', direction: 'invoke' },
+  { name: 'export:save-bytes', direction: 'invoke' },
   { name: 'report:print-pdf', direction: 'invoke' },
   { name: 'dialog:confirm-discard', direction: 'invoke' },
   { name: 'recent:list', direction: 'invoke' },

@@ -17,6 +17,7 @@ import type { InvokeChannel, HostCommand, SendChannel } from './channels.ts';
 import { createGrantedPaths, DOCUMENT_EXTENSION } from './granted-paths.ts';
 import { claimSingleInstance } from './instance.ts';
 import { guarded } from './ipc-guard.ts';
+import { exportBytes } from './export-bytes.ts';
 import { documentPathFromArgv } from './launch-file.ts';
 import { menuTemplate } from './menu.ts';
 import { printReportToPdf } from './print-pdf.ts';
@@ -151,6 +152,17 @@ function registerHandlers(): void {
     if (choice.canceled || !choice.filePath) return false;
     await saveAtomically(choice.filePath, file.text, { keepBackup: false });
     return true;
+  });
+  handle('export:save-bytes', async (file) => {
+    const owner = window;
+    if (!owner) return false;
+    return exportBytes(file, {
+      chooseTarget: async (name, filter) => {
+        const choice = await dialog.showSaveDialog(owner, { title: 'Export', defaultPath: path.join(defaultFolder(), name), filters: [filter] });
+        return choice.canceled || !choice.filePath ? null : choice.filePath;
+      },
+      save: (filePath, bytes) => saveAtomically(filePath, bytes, { keepBackup: false }),
+    });
   });
   handle('report:print-pdf', async (html, suggestedName) => {
     const owner = window;

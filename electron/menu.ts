@@ -30,6 +30,7 @@ export function menuTemplate(send: (command: HostCommand) => void, platform: Nod
         { type: 'separator' },
         item('Export Drawing as SVG…', 'export-svg', 'CmdOrCtrl+E'),
         item('Export Properties as CSV…', 'export-csv', 'CmdOrCtrl+Shift+E'),
+        item('Export Properties as XLSX…', 'export-xlsx'),
         item('Export Drawing as DXF (CAD, cutting)…', 'export-dxf'),
         { type: 'separator' },
         item('Compare Alternatives…', 'compare'),

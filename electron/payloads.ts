@@ -5,6 +5,7 @@
  */
 import * as v from 'valibot';
 import { validateDocument } from '../core/document/schema.ts';
+import { XLSX_MIME_TYPE } from '../renderer/host/host.ts';
 import type { Channel } from './channels.ts';
 import { isRecoveryId } from './recovery.ts';
 import { SETTING_KEY, SETTING_KEY_MAX, SETTING_VALUE_MAX } from './settings.ts';
@@ -46,6 +47,15 @@ const exportFile = v.strictObject({
   text,
 });
 
+/** Largest file of bytes (an XLSX workbook) accepted for saving. */
+export const MAX_EXPORT_BYTES = 64 * 1024 * 1024;
+
+const exportBytes = v.strictObject({
+  suggestedName: fileName,
+  mimeType: v.literal(XLSX_MIME_TYPE, `the XLSX type ${XLSX_MIME_TYPE}`),
+  bytes: v.pipe(v.instance(Uint8Array, 'bytes (a Uint8Array)'), v.check((b) => b.byteLength <= MAX_EXPORT_BYTES, `at most ${MAX_EXPORT_BYTES} bytes`)),
+});
+
 /** Arguments of each channel, as a tuple; a channel without arguments takes an empty tuple. */
 export const PAYLOADS = {
   'document:open': v.strictTuple([]),
@@ -54,6 +64,7 @@ export const PAYLOADS = {
   'document:save': v.strictTuple([handle, text]),
   'document:save-as': v.strictTuple([fileName, text]),
   'export:save': v.strictTuple([exportFile]),
+  'export:save-bytes': v.strictTuple([exportBytes]),
   'report:print-pdf': v.strictTuple([reportHtml, fileName]),
   'dialog:confirm-discard': v.strictTuple([shortText]),
   'recent:list': v.strictTuple([]),

@@ -24,6 +24,7 @@ const host: Host = {
   save: (handle, text) => invoke<SaveResult>('document:save', handle, text),
   saveAs: (suggestedName, text) => invoke<SaveResult | null>('document:save-as', suggestedName, text),
   exportFile: (file) => invoke<boolean>('export:save', { suggestedName: file.suggestedName, mimeType: file.mimeType, text: file.text }),
+  exportBytes: (file) => invoke<boolean>('export:save-bytes', { suggestedName: file.suggestedName, mimeType: file.mimeType, bytes: file.bytes }),
   printToPdf: (html, suggestedName) => invoke<boolean>('report:print-pdf', html, suggestedName),
   confirmDiscard: (documentName) => invoke<boolean>('dialog:confirm-discard', documentName),
   recentFiles: () => invoke<{ name: string; handle: string }[]>('recent:list'),

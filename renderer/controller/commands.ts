@@ -15,7 +15,7 @@ export interface CommandTarget {
   openExample(): Promise<void>;
   openLaunchFile(): Promise<void>;
   save(as: boolean): Promise<void>;
-  exportAs(kind: 'svg' | 'csv'): Promise<void>;
+  exportAs(kind: 'svg' | 'csv' | 'xlsx'): Promise<void>;
   exportDxf(): Promise<void>;
   zoomBy(factor: number): void;
   fit(): void;
@@ -54,6 +54,7 @@ export const COMMANDS = {
   'save-as': { label: 'Save as…', run: (t) => t.save(true) },
   'export-svg': { label: 'Export drawing (SVG)…', run: (t) => t.exportAs('svg') },
   'export-csv': { label: 'Export properties (CSV)…', run: (t) => t.exportAs('csv') },
+  'export-xlsx': { label: 'Export properties (XLSX)…', run: (t) => t.exportAs('xlsx') },
   'export-dxf': { label: 'Export drawing for CAD and cutting (DXF)…', run: (t) => t.exportDxf() },
   compare: { label: 'Compare alternatives…', run: (t) => t.show('compare') },
   'print-report': { label: 'Print report…', run: (t) => t.show('print-report') },

@@ -13,6 +13,8 @@ import { allSectionViews, newSectionFile, serialiseDocument, type SectionDocumen
 import type { Part } from '../../core/document/types.ts';
 import { propertiesCsv, sectionSvg } from '../../core/export/index.ts';
 import { jointsCsv, jointsExport } from '../../core/export/joints.ts';
+import { propertiesSheet } from '../../core/export/xlsx.ts';
+import { saveXlsx } from './xlsx.ts';
 import { getPartType } from '../../core/parts/index.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
 import { convertLength, defaultDisplaySet, plainDisplaySet, type DisplaySet, type LengthUnit } from '../../core/units/index.ts';
@@ -587,7 +589,7 @@ export class AppController implements CommandTarget {
     }
   }
 
-  async exportAs(kind: 'svg' | 'csv'): Promise<void> {
+  async exportAs(kind: 'svg' | 'csv' | 'xlsx'): Promise<void> {
     const st = this.editor.getState();
     const section = sectionFromDocument(st.doc);
     if (!section.properties) {
@@ -598,13 +600,23 @@ export class AppController implements CommandTarget {
     const torsion = this.state.torsion;
     // Joints, separate pieces and overlaps go into both exports (core/export/joints.ts).
     const joints = jointsExport({ doc: st.doc });
+    const csvInput = { name: st.doc.name, unit: st.doc.unit, properties: section.properties, torsion: torsion.kind === 'done' && torsion.doc === st.doc ? torsion.result : null };
+    if (kind === 'xlsx') {
+      const name = `${base}.xlsx`;
+      try {
+        if (await saveXlsx(this.host, propertiesSheet(csvInput), name)) this.note(`Exported ${name}`);
+      } catch (err) {
+        this.error(`Export of ${name} failed.`, [errorText(err)]);
+      }
+      return;
+    }
     const file =
       kind === 'svg'
         ? { suggestedName: `${base}.svg`, mimeType: 'image/svg+xml', text: sectionSvg({ name: st.doc.name, unit: st.doc.unit, section, display: this.display(), joints }) }
         : {
             suggestedName: `${base}.csv`,
             mimeType: 'text/csv',
-            text: propertiesCsv({ name: st.doc.name, unit: st.doc.unit, properties: section.properties, torsion: torsion.kind === 'done' && torsion.doc === st.doc ? torsion.result : null }) + (joints ? jointsCsv(joints) : ''),
+            text: propertiesCsv(csvInput) + (joints ? jointsCsv(joints) : ''),
           };
     try {
       if (await this.host.exportFile(file)) this.note(`Exported ${file.suggestedName}`);

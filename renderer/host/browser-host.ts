@@ -17,7 +17,7 @@
  * confirmDiscard uses window.confirm until the UI installs its own dialog (setConfirmDiscard).
  * While there are unsaved changes, leaving the page asks first (beforeunload).
  */
-import type { ExportFile, Host, OpenedFile, RecoveryCopy, SaveResult } from './host.ts';
+import { XLSX_MIME_TYPE, type ExportBytes, type ExportFile, type Host, type OpenedFile, type RecoveryCopy, type SaveResult } from './host.ts';
 
 // The parts of the File System Access API we use (not yet in TypeScript's DOM library).
 interface PickerType { readonly description: string; readonly accept: Record<string, string[]> }
@@ -25,7 +25,7 @@ interface FileHandle {
   readonly kind: 'file';
   readonly name: string;
   getFile(): Promise<File>;
-  createWritable(): Promise<{ write(data: string): Promise<void>; close(): Promise<void>; abort(): Promise<void> }>;
+  createWritable(): Promise<{ write(data: string | Uint8Array): Promise<void>; close(): Promise<void>; abort(): Promise<void> }>;
   queryPermission?(options: { mode: 'read' | 'readwrite' }): Promise<PermissionState>;
   requestPermission?(options: { mode: 'read' | 'readwrite' }): Promise<PermissionState>;
 }
@@ -57,6 +57,7 @@ const EXPORT_TYPES: Readonly<Record<string, PickerType>> = {
   'application/json': { description: 'JSON', accept: { 'application/json': ['.json'] } },
   'text/plain': { description: 'Text', accept: { 'text/plain': ['.txt'] } },
   'application/dxf': { description: 'DXF drawing', accept: { 'application/dxf': ['.dxf'] } },
+  [XLSX_MIME_TYPE]: { description: 'Excel workbook (XLSX)', accept: { [XLSX_MIME_TYPE]: ['.xlsx'] } },
 };
 
 export interface BrowserHost extends Host {
@@ -140,6 +141,17 @@ export function createBrowserHost(win: Window & typeof globalThis = window): Bro
       await writeThrough(handle, file.text);
       return true;
     },
+    async exportBytes(file: ExportBytes) {
+      if (!pickers.showSaveFilePicker) {
+        download(win, file.suggestedName, file.mimeType, file.bytes);
+        return true;
+      }
+      const type = EXPORT_TYPES[file.mimeType];
+      const handle = await cancellable(pickers.showSaveFilePicker({ suggestedName: file.suggestedName, types: type ? [type] : [] }));
+      if (!handle) return false;
+      await writeThrough(handle, file.bytes);
+      return true;
+    },
     confirmDiscard: (documentName) => ask(documentName),
     setConfirmDiscard(next) {
       ask = next;
@@ -219,7 +231,7 @@ async function ensurePermission(handle: FileHandle, mode: 'read' | 'readwrite'):
   if (answer !== 'granted') throw new Error(`Permission to ${mode === 'read' ? 'read' : 'write'} "${handle.name}" was not given.`);
 }
 
-async function writeThrough(handle: FileHandle, text: string): Promise<void> {
+async function writeThrough(handle: FileHandle, text: string | Uint8Array): Promise<void> {
   try {
     await ensurePermission(handle, 'readwrite');
     const writable = await handle.createWritable();
@@ -249,8 +261,8 @@ function storageReason(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }
 
-function download(win: Window & typeof globalThis, name: string, mimeType: string, text: string): void {
-  const url = win.URL.createObjectURL(new Blob([text], { type: mimeType }));
+function download(win: Window & typeof globalThis, name: string, mimeType: string, text: string | Uint8Array): void {
+  const url = win.URL.createObjectURL(new Blob([typeof text === 'string' ? text : new Uint8Array(text)], { type: mimeType }));
   const link = win.document.createElement('a');
   link.href = url;
   link.download = name;

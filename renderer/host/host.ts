@@ -30,13 +30,22 @@ export interface ExportFile {
   readonly text: string;
 }
 
+/** A derived file made of bytes (an XLSX workbook), saved where the user chooses. */
+export interface ExportBytes {
+  readonly suggestedName: string;
+  readonly mimeType: typeof XLSX_MIME_TYPE;
+  readonly bytes: Uint8Array;
+}
+
+export const XLSX_MIME_TYPE = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
+
 /**
  * Commands a host sends to the renderer (native menu items in Electron; a file handed over by the
  * OS arrives as 'open-launch-file', to be fetched with `launchFile()`). The editor runs them as if
  * the user had used its own buttons or keys.
  */
 export const HOST_COMMANDS = [
-  'new', 'open', 'save', 'save-as', 'export-svg', 'export-csv', 'export-dxf', 'compare', 'print-report', 'check-table',
+  'new', 'open', 'save', 'save-as', 'export-svg', 'export-csv', 'export-xlsx', 'export-dxf', 'compare', 'print-report', 'check-table',
   'undo', 'redo', 'delete', 'zoom-in', 'zoom-out', 'zoom-fit', 'open-example', 'open-launch-file',
 ] as const;
 export type HostCommand = (typeof HOST_COMMANDS)[number];
@@ -51,6 +60,8 @@ export interface Host {
   saveAs(suggestedName: string, text: string): Promise<SaveResult | null>;
   /** Export a derived file (SVG, CSV, HTML report); returns false if cancelled. */
   exportFile(file: ExportFile): Promise<boolean>;
+  /** Export a derived file of bytes (XLSX); returns false if cancelled. Hosts that cannot save bytes leave it out. */
+  exportBytes?(file: ExportBytes): Promise<boolean>;
   /** Ask before discarding unsaved changes; true = discard. */
   confirmDiscard(documentName: string): Promise<boolean>;
   recentFiles(): Promise<readonly { name: string; handle: string }[]>;

@@ -13,6 +13,7 @@ import { EXAMPLE_TEXT, rig, settle, type Rig } from './fakes.ts';
 import { importDxf } from '../../core/dxf/index.ts';
 import { sectionProperties } from '../../core/properties/index.ts';
 import { readFileSync } from 'node:fs';
+import { firstSheetCells, unzip } from '../export/unzip.ts';
 
 const key = (k: string, o: Partial<KeyInput> = {}): KeyInput => ({ key: k, mod: false, shift: false, alt: false, typing: false, ...o });
 
@@ -378,6 +379,18 @@ const COMMAND_CASES: Record<CommandId, () => Promise<void>> = {
     await r.c.run('export-csv');
     expect(r.host.exported[0]?.suggestedName).toBe('Untitled-section.csv');
     expect(r.host.exported[0]?.mimeType).toBe('text/csv');
+  },
+  async 'export-xlsx'() {
+    const r = withPlate();
+    await r.c.run('export-xlsx');
+    const file = r.host.exportedBytes[0];
+    expect(file?.suggestedName).toBe('Untitled-section.xlsx');
+    expect(file?.mimeType).toBe('application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
+    // Read back: the caution in A1 and the plate's area as a number, A = b·h = 100 × 20 = 2000 (exact arithmetic).
+    const cells = firstSheetCells(unzip(file?.bytes ?? new Uint8Array()));
+    expect(cells.get('A1')?.text).toMatch(/^CAUTION:/);
+    const areaColumn = [...cells.values()].find((c) => c.text === 'area [mm^2]')?.ref.replace(/\d+$/, '');
+    expect(cells.get(`${areaColumn}3`)).toMatchObject({ type: 'number', text: '2000' });
   },
   async 'export-dxf'() {
     const r = withPlate();

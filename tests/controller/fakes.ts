@@ -4,7 +4,7 @@ import { resolve } from 'node:path';
 import type { SectionDocument } from '../../core/document/types.ts';
 import { AppController, type Timers, type TorsionRunner } from '../../renderer/controller/controller.ts';
 import type { TorsionState } from '../../renderer/controller/torsion-client.ts';
-import type { ExportFile, Host, HostCommand, OpenedFile, RecoveryCopy, SaveResult } from '../../renderer/host/host.ts';
+import type { ExportBytes, ExportFile, Host, HostCommand, OpenedFile, RecoveryCopy, SaveResult } from '../../renderer/host/host.ts';
 
 export const EXAMPLE_TEXT = readFileSync(resolve(__dirname, '../../assets/examples/footbridge-box-girder.section.json'), 'utf8');
 
@@ -60,6 +60,8 @@ export interface FakeHost extends Host {
   /** When set, writeRecovery fails with this message (a full storage quota). */
   recoveryFailure: string | null;
   readonly exported: ExportFile[];
+  /** Files of bytes (XLSX) given to exportBytes. */
+  readonly exportedBytes: ExportBytes[];
   readonly saved: { handle: string | null; suggested: string | null; text: string }[];
   readonly titles: string[];
   nextOpen: OpenedFile | null;
@@ -82,6 +84,7 @@ export function fakeHost(): FakeHost {
     discarded: [],
     recoveryFailure: null,
     exported: [],
+    exportedBytes: [],
     saved: [],
     titles: [],
     nextOpen: null,
@@ -101,6 +104,10 @@ export function fakeHost(): FakeHost {
     },
     exportFile: async (file) => {
       host.exported.push(file);
+      return true;
+    },
+    exportBytes: async (file) => {
+      host.exportedBytes.push(file);
       return true;
     },
     confirmDiscard: async (name) => {

@@ -226,7 +226,7 @@ describe('IPC channels', () => {
   it('are one list of named verbs, each with a payload schema, and no generic pipe', () => {
     expect(CHANNELS.map((c) => c.name)).toEqual([
       'document:open', 'document:open-recent', 'document:launch-file', 'document:save', 'document:save-as',
-      'export:save', 'report:print-pdf', 'dialog:confirm-discard', 'recent:list', 'recovery:write', 'recovery:read', 'recovery:discard',
+      'export:save', 'export:save-bytes', 'report:print-pdf', 'dialog:confirm-discard', 'recent:list', 'recovery:write', 'recovery:read', 'recovery:discard',
       'table:open', 'settings:read', 'settings:write',
       'window:set-title', 'window:set-unsaved', 'menu:command',
     ]);
@@ -289,6 +289,11 @@ describe('payload validation', () => {
     expect(() => checkedArgs('document:save-as', ['C:\\Windows\\x.section.json', '{}'])).toThrow(/without folders/);
     expect(() => checkedArgs('export:save', [{ suggestedName: 'a.exe', mimeType: 'application/x-msdownload', text: 'x' }])).toThrow(/one of image\/svg\+xml/);
     expect(checkedArgs('export:save', [{ suggestedName: 'trailer frame.svg', mimeType: 'image/svg+xml', text: '<svg/>' }])).toHaveLength(1);
+    const xlsx = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
+    expect(() => checkedArgs('export:save-bytes', [{ suggestedName: '../x.xlsx', mimeType: xlsx, bytes: new Uint8Array(2) }])).toThrow(/without folders/);
+    expect(() => checkedArgs('export:save-bytes', [{ suggestedName: 'x.xlsx', mimeType: 'text/csv', bytes: new Uint8Array(2) }])).toThrow(/the XLSX type/);
+    expect(() => checkedArgs('export:save-bytes', [{ suggestedName: 'x.xlsx', mimeType: xlsx, bytes: 'PK' }])).toThrow(/bytes \(a Uint8Array\)/);
+    expect(checkedArgs('export:save-bytes', [{ suggestedName: 'compare.xlsx', mimeType: xlsx, bytes: new Uint8Array([80, 75]) }])).toHaveLength(1);
   });
 
   it('document text written to disk must pass core/document validation, and the refusal says what is wrong', () => {

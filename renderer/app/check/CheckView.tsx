@@ -13,6 +13,8 @@ import {
 } from '../../../core/check/index.ts';
 import { formatSig, LENGTH_UNITS, type LengthUnit } from '../../../core/units/index.ts';
 import type { Host } from '../../host/host.ts';
+import { tableCheckSheet } from '../../../core/export/xlsx.ts';
+import { saveXlsx } from '../../controller/xlsx.ts';
 import { CheckClient, type CheckState } from './check-client.ts';
 import { MAPPING_INDEX_KEY, mappingKey, newColumns, powerOf, readRemembered, rememberedIndex, rememberedText, rememberedWithin, symbolOf, targetChoices, targetText, unitChoices, unitTextOf, viewMessage, type RememberedCheck } from './check-model.ts';
 import './check-view.css';
@@ -244,7 +246,16 @@ export function CheckView({ host, onClose }: Props): ReactElement {
     }
   };
 
-  const exportReport = async (result: TableCheck): Promise<void> => {
+  const exportReport = async (result: TableCheck, kind: 'csv' | 'xlsx' = 'csv'): Promise<void> => {
+    if (kind === 'xlsx') {
+      const name = `${stemOf(table?.name)}-check.xlsx`;
+      try {
+        if (await saveXlsx(host, tableCheckSheet(result), name)) setExportNote(`Exported ${name}`);
+      } catch (err) {
+        setExportNote(`The report was not exported: ${err instanceof Error ? err.message : String(err)}`);
+      }
+      return;
+    }
     const file = { suggestedName: `${stemOf(table?.name)}-check.csv`, mimeType: 'text/csv', text: tableCheckCsv(result) };
     try {
       if (await host.exportFile(file)) setExportNote(`Exported ${file.suggestedName}`);
@@ -397,6 +408,7 @@ export function CheckView({ host, onClose }: Props): ReactElement {
             page={page}
             onPage={setPage}
             onExport={() => void exportReport(state.result)}
+            onExportXlsx={() => void exportReport(state.result, 'xlsx')}
             exportNote={exportNote}
           />
         )}
@@ -476,10 +488,11 @@ interface ReportProps {
   readonly page: number;
   readonly onPage: (p: number) => void;
   readonly onExport: () => void;
+  readonly onExportXlsx: () => void;
   readonly exportNote: string | null;
 }
 
-function Report({ result, millis, flaggedOnly, onFlaggedOnly, page, onPage, onExport, exportNote }: ReportProps): ReactElement {
+function Report({ result, millis, flaggedOnly, onFlaggedOnly, page, onPage, onExport, onExportXlsx, exportNote }: ReportProps): ReactElement {
   const s = result.summary;
   const symbols = Object.keys(CHECKED_PROPERTIES).filter((k) => result.rows.some((r) => r.properties.some((p) => p.symbol === k)));
   const shown = flaggedOnly ? result.rows.filter((r) => r.flagged) : result.rows;
@@ -553,6 +566,9 @@ function Report({ result, millis, flaggedOnly, onFlaggedOnly, page, onPage, onEx
         </label>
         <button type="button" data-testid="check-export" onClick={onExport}>
           Export the report (CSV)…
+        </button>
+        <button type="button" data-testid="check-export-xlsx" onClick={onExportXlsx}>
+          Export the report (XLSX)…
         </button>
         {exportNote && (
           <span className="muted small" data-testid="check-export-note">

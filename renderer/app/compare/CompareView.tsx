@@ -19,6 +19,8 @@ import { fileStem } from '../report/report-input.ts';
 import { ReportView, sameDisplay, today, useStable } from '../report/ReportView.tsx';
 import '../shell/overlays.css';
 import { CAUTION } from '../../../core/member/check.ts';
+import { comparisonSheet } from '../../../core/export/xlsx.ts';
+import { saveXlsx } from '../../controller/xlsx.ts';
 
 interface Props {
   /** The open document's sections, in order. */
@@ -78,6 +80,16 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
     }
   };
 
+  const exportXlsx = async (): Promise<void> => {
+    if (!model.ok) return;
+    const name = `${fileStem(fileName)}-comparison.xlsx`;
+    try {
+      if (await saveXlsx(host, comparisonSheet({ ...model.comparison, alternatives: model.rows }, model.pick), name)) setStatus({ kind: 'info', title: `Exported ${name}.`, lines: [] });
+    } catch (err) {
+      setStatus({ kind: 'error', title: `Export of ${name} failed.`, lines: [err instanceof Error ? err.message : String(err)] });
+    }
+  };
+
   const drawing = useMemo(() => (model.ok ? comparisonSvg(model.docs, model.comparison.unit) : ''), [model]);
   const report = useMemo(() => (reporting && model.ok ? comparisonReportInput(model, sig, today()) : null), [reporting, model, sig]);
   const addedCount = added.length;
@@ -93,6 +105,9 @@ export function CompareView({ sections, fileName, display, sig, onClose }: Props
         </button>
         <button type="button" data-testid="compare-export-csv" disabled={!model.ok} onClick={() => void exportFile('csv')}>
           Export CSV…
+        </button>
+        <button type="button" data-testid="compare-export-xlsx" disabled={!model.ok} onClick={() => void exportXlsx()}>
+          Export XLSX…
         </button>
         <button type="button" data-testid="compare-export-svg" disabled={!model.ok} onClick={() => void exportFile('svg')}>
           Export SVG…

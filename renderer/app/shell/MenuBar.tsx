@@ -120,6 +120,7 @@ export function MenuBar(props: Props): ReactElement {
           <hr />
           {item('export-svg', 'Export drawing (SVG)…')}
           {item('export-csv', 'Export properties (CSV)…')}
+          {item('export-xlsx', 'Export properties (XLSX)…')}
           {item('export-dxf', 'Export drawing for CAD and cutting (DXF)…')}
           <hr />
           {item('compare', 'Compare alternatives…')}
