@@ -31,10 +31,10 @@
  * sloped lines; analyse closed cells by compatibility (Bredt–Batho).
  */
 import type { SectionDocument } from '../document/types.ts';
-import { BooleanError, intersectRegions, regionBounds, ringFromPoints, rotateRegion } from '../geometry/index.ts';
+import { regionBounds, rotateRegion } from '../geometry/index.ts';
 import type { Region } from '../geometry/types.ts';
 import { regionCrossingsAt } from '../materials/widths.ts';
-import { regionIntegrals } from '../properties/index.ts';
+import { momentsBeyondLine } from '../properties/plastic.ts';
 import type { ContactSegment, Joint } from './contacts.ts';
 import { partsActingTogether } from './groups.ts';
 import { jointShearFlows, partMaterials, transformed, type JointShearFlow, type PartMaterial, type ShearLoads, type TransformedSection } from './shear-flow.ts';
@@ -166,21 +166,12 @@ function lineData(m: Model, o: CutOrientation, c: number): LineData {
   return { crossed, plus: new Map() };
 }
 
-/** Q about the centroid of the piece of part p on the + side of the line (above y = c, or right of x = c). */
+/** Q about the centroid of the piece of part p on the + side of the line (above y = c, or right of x = c), exact (core/properties momentsBeyondLine). */
 function plusPiece(m: Model, line: LineData, p: PartMaterial, o: CutOrientation, c: number): { A: number; Qx: number; Qy: number } {
   const cached = line.plus.get(p.index);
   if (cached) return cached;
-  const { minX, maxX, minY, maxY } = m.box;
-  const pad = Math.max(maxX - minX, maxY - minY);
-  const [x0, y0, x1, y1] = o === 'horizontal' ? [minX - pad, c, maxX + pad, maxY + pad] : [c, minY - pad, maxX + pad, maxY + pad];
-  const half: Region = [{ outer: ringFromPoints([[x0, y0], [x1, y0], [x1, y1], [x0, y1]]), holes: [] }];
-  let piece: Region = [];
-  try {
-    piece = intersectRegions(p.region, half, { context: 'cutting a part for its shear stress', parts: [p.label, o === 'horizontal' ? `the material above y = ${c}` : `the material right of x = ${c}`] });
-  } catch (err) {
-    if (!(err instanceof BooleanError)) throw err;
-  }
-  const out = piece.length === 0 ? { A: 0, Qx: 0, Qy: 0 } : centred(m, regionIntegrals(piece, m.s.ox, m.s.oy));
+  const raw = momentsBeyondLine(p.region, o, c, m.s.ox, m.s.oy);
+  const out = centred(m, { ...raw, originX: m.s.ox, originY: m.s.oy });
   line.plus.set(p.index, out);
   return out;
 }

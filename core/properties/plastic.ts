@@ -833,6 +833,26 @@ export function areaAboveLine(region: Region, c: number): { readonly area: numbe
 }
 
 /**
+ * Area and first moments of the part of a region beyond a line, in one exact pass (arcs
+ * included, no Boolean clipping; the same edge integrals as areaAboveLine): above y = c
+ * (horizontal) or right of x = c (vertical). Moments about (ox, oy): Qx = ∫(y − oy) dA,
+ * Qy = ∫(x − ox) dA. Used for the shear formula's Q (core/joints/shear-stress.ts).
+ */
+export function momentsBeyondLine(region: Region, orientation: 'horizontal' | 'vertical', c: number, ox: number, oy: number): { readonly A: number; readonly Qx: number; readonly Qy: number } {
+  if (region.length === 0) return { A: 0, Qx: 0, Qy: 0 };
+  if (orientation === 'horizontal') {
+    // s = y, t = x: a right-handed (t, s) frame.
+    const f: Frame = { nx: 0, ny: 1, tx: 1, ty: 0 };
+    const side = upperSide(localRings([{ region, weight: 1 }], ox, oy, f), f, c - oy);
+    return { A: side.A, Qx: side.Qs, Qy: side.Qt };
+  }
+  // s = x, t = −y: right-handed (t × s = +1).
+  const f: Frame = { nx: 1, ny: 0, tx: 0, ty: -1 };
+  const side = upperSide(localRings([{ region, weight: 1 }], ox, oy, f), f, c - ox);
+  return { A: side.A, Qx: -side.Qt, Qy: side.Qs };
+}
+
+/**
  * PNA of several weighted regions with the PNA at angleDeg (CCW from +x), balancing
  * Σ w_i A_i(s > d) − Σ w_i A_i(s < d) = axialForce (docs/methods.md §5.1, §5.3).
  * Throws RangeError for non-positive weights, empty input or |axialForce| > Σ w_i A_i.

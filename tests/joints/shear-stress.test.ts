@@ -172,3 +172,25 @@ describe('flitch beam: two 2x10 and a 3/8 × 9 steel plate, transformed section'
     expect(rel(wood, (1.5 * (V * ((1.5 * 9.25 ** 3) / 12)) / In) / (1.5 * 9.25))).toBeLessThan(1e-12);
   });
 });
+
+describe('round sections, exact arcs', () => {
+  const circle = (id: string, diameter: number, operation: 'add' | 'subtract' = 'add'): Part => ({
+    id, name: id, type: 'circle', operation, material: null, visible: true, placement: at(0, 0), diameter,
+  });
+
+  it('solid circle: τmax = 4·V/(3·A) at the neutral axis (common practice; Gere & Timoshenko), under Vy and under Vx', () => {
+    const d = doc([circle('bar', 60)]);
+    const A = Math.PI * 30 ** 2;
+    expect(rel(tauOf(shearStresses(d, { Vy: 50_000, Vx: 0 }), 'bar')?.tauMax ?? 0, (4 * 50_000) / (3 * A))).toBeLessThan(1e-9);
+    expect(rel(tauOf(shearStresses(d, { Vy: 0, Vx: 50_000 }), 'bar')?.tauMax ?? 0, (4 * 50_000) / (3 * A))).toBeLessThan(1e-9);
+  });
+
+  it('hollow circle (a void inside): V·Q/(I·t) with Q = 2/3·(ro³ − ri³), I = π/4·(ro⁴ − ri⁴), t = 2·(ro − ri), a whole-line cut', () => {
+    const d = doc([circle('tube', 100), { ...circle('bore', 80, 'subtract'), cutoutRole: 'void' } as Part]);
+    const ro = 50, ri = 40, V = 80_000;
+    const want = (V * ((2 / 3) * (ro ** 3 - ri ** 3))) / ((Math.PI / 4) * (ro ** 4 - ri ** 4) * 2 * (ro - ri));
+    const t = tauOf(shearStresses(d, { Vy: V, Vx: 0 }), 'tube');
+    expect(rel(t?.tauMax ?? 0, want)).toBeLessThan(1e-9);
+    expect(t?.cut?.how).toBe('whole line');
+  });
+});
