@@ -39,6 +39,12 @@ function rectangle(x0: number, y0: number, w: number, h: number): Polygon {
   return { outer: ringOf(corners, [0, 0, 0, 0]), holes: [] };
 }
 
+/** The rectangle between x0..x1 and y0..y1, corners taken as given. */
+function band(x0: number, x1: number, y0: number, y1: number): Polygon {
+  const corners: Point[] = [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
+  return { outer: ringOf(corners, [0, 0, 0, 0]), holes: [] };
+}
+
 export const glulam: PartType = {
   id: 'glulam',
   label: 'Glued-laminated timber (laminations of a stated thickness)',
@@ -53,7 +59,9 @@ export const glulam: PartType = {
     if (diagnostics.length > 0) return { region: [], diagnostics };
     const { b, n, tl } = values as { b: number; n: number; tl: number };
     const d = n * tl;
-    return { region: Array.from({ length: n }, (_, i) => rectangle(-b / 2, -d / 2 + i * tl, b, tl)), diagnostics };
+    // Each glue line computed once, so neighbouring laminations share it exactly (touch, never overlap by a rounding).
+    const lines = Array.from({ length: n + 1 }, (_, i) => (i === n ? d / 2 : -d / 2 + i * tl));
+    return { region: Array.from({ length: n }, (_, i) => band(-b / 2, b / 2, lines[i]!, lines[i + 1]!)), diagnostics };
   },
 };
 

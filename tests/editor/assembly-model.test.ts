@@ -15,7 +15,7 @@ import type { SectionDocument } from '../../core/document/types.ts';
 import { compositeProperties, materialPiecesFromDocument } from '../../core/materials/index.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
 import {
-  ASSEMBLIES, assemblySpec, buildAssembly, catalogueParamsInUnit, defaultRoleMaterial, defaultTexts, placeAssembly, placeAssemblyStep, type AssemblyId,
+  ASSEMBLIES, assemblySpec, buildAssembly, catalogueParamsInUnit, defaultRoleMaterial, defaultTexts, missingRoleMaterials, placeAssembly, placeAssemblyStep, type AssemblyId,
 } from '../../renderer/app/parts/assembly-model.ts';
 import { editorWith, emptyDoc } from './helpers.ts';
 
@@ -150,7 +150,8 @@ describe('bad input is named by field and builds nothing', () => {
       for (const unit of ['mm', 'in'] as const) {
         const b = buildAssembly(spec.id, defaultTexts(spec, unit), unit);
         expect({ id: spec.id, unit, ...b.fieldErrors, errors: b.errors }).toEqual({ id: spec.id, unit, errors: [] });
-        expect(b.pieces.length).toBeGreaterThan(1);
+        // Glulam and LVL/PSL are one part each (glulam's laminations are strips of that one part).
+        expect(b.pieces.length).toBeGreaterThan(spec.id === 'glulam' || spec.id === 'scl' ? 0 : 1);
       }
     }
   });
@@ -231,5 +232,90 @@ describe('one undo step in the editor', () => {
     const ed = editorWith();
     expect(placeAssemblyStep(ed, 'Place plate girder', [], {})).toEqual([]);
     expect(ed.getState().canUndo).toBe(false);
+  });
+});
+
+describe('timber assemblies (issue 16 item 3)', () => {
+  const inch: SectionDocument = { ...emptyDoc(), unit: 'in', defaultMaterial: 'df-l-no2' };
+  const materialsFor = (doc: SectionDocument, id: AssemblyId, changes: Record<string, string> = {}) =>
+    Object.fromEntries(assemblySpec(id).roles.map((r) => [r, defaultRoleMaterial(doc, r, id, form(id, doc.unit, changes))]));
+  const placeIn = (doc: SectionDocument, id: AssemblyId, changes: Record<string, string> = {}): SectionDocument => {
+    const built = buildAssembly(id, form(id, doc.unit, changes), doc.unit);
+    expect(built.fieldErrors).toEqual({});
+    expect(built.errors).toEqual([]);
+    return placeAssembly(doc, built.pieces, materialsFor(doc, id, changes)).doc;
+  };
+
+  it('each is in the picker with its materials by role and its source named', () => {
+    const ids = ASSEMBLIES.map((a) => a.id);
+    expect(ids).toEqual(expect.arrayContaining(['glulam', 'scl', 'wood-i-joist', 'multi-ply']));
+    expect(assemblySpec('glulam').source).toMatch(/ANSI A190\.1/);
+    expect(assemblySpec('glulam').source).toMatch(/NDS Supplement/);
+    expect(assemblySpec('scl').source).toMatch(/common practice/);
+    expect(assemblySpec('wood-i-joist').source).toMatch(/common practice/);
+    expect(assemblySpec('multi-ply').source).toMatch(/NDS Supplement .*Table 1A/);
+    expect(assemblySpec('wood-i-joist').roles).toEqual(['joist-flange', 'joist-web']);
+  });
+
+  it('glulam 5-1/8 in × 8 laminations of 1-1/2 in: d = 12 in, A = 61.5 in², Ix = b·d³/12 = 738 in⁴ (NDS Supplement Table 1C, 5-1/8 × 12: A 61.5, Ix 738.0, from memory; b·d and b·d³/12 exactly)', () => {
+    const doc = placeIn(inch, 'glulam');
+    expect(doc.parts).toHaveLength(1);
+    expect(doc.parts[0]!.material).toBe('glulam-24f-1.8e');
+    const p = properties(doc);
+    expect(rel(p.area, 5.125 * 12)).toBeLessThan(1e-12);
+    expect(rel(p.Ix, (5.125 * 12 ** 3) / 12)).toBeLessThan(1e-12);
+  });
+
+  it('glulam of southern pine, 5 in × 10 laminations of 1-3/8 in: d = 13.75 in, Ix = 5·13.75³/12 (exact arithmetic)', () => {
+    const p = properties(placeIn(inch, 'glulam', { b: '5', n: '10', tl: '1 3/8' }));
+    expect(rel(p.Ix, (5 * 13.75 ** 3) / 12)).toBeLessThan(1e-12);
+  });
+
+  it('LVL 1-3/4 × 11-7/8 in takes the generic LVL; PSL has no built-in material, so the user chooses one', () => {
+    const doc = placeIn(inch, 'scl');
+    expect(doc.parts.map((x) => `${x.name}: ${x.material}`)).toEqual(['LVL: lvl-2.0e']);
+    expect(rel(properties(doc).Ix, (1.75 * 11.875 ** 3) / 12)).toBeLessThan(1e-12);
+    expect(placeIn(inch, 'scl', { product: 'psl', b: '3 1/2' }).parts.map((x) => `${x.name}: ${x.material}`)).toEqual(['PSL: null']);
+  });
+
+  it('wood I-joist 11-7/8 in, flanges 2-5/16 × 1-1/2, web 3/8: three parts, flanges and web each with their own material; Ix = [b·D³ − (b − tw)·hw³]/12', () => {
+    // The flanges take lumber the document already uses (here Douglas Fir-Larch), else the generic LVL.
+    expect(placeIn(inch, 'wood-i-joist').parts.map((x) => `${x.name}: ${x.material}`)).toEqual(['I-joist top flange: df-l-no2', 'I-joist web: null', 'I-joist bottom flange: df-l-no2']);
+    const doc = placeIn({ ...inch, defaultMaterial: 'astm-a992' }, 'wood-i-joist');
+    expect(doc.parts.map((x) => `${x.name}: ${x.material}`)).toEqual(['I-joist top flange: lvl-2.0e', 'I-joist web: null', 'I-joist bottom flange: lvl-2.0e']);
+    const hw = 11.875 - 2 * 1.5;
+    expect(rel(properties(doc).Ix, (2.3125 * 11.875 ** 3 - (2.3125 - 0.375) * hw ** 3) / 12)).toBeLessThan(1e-12);
+    const web = placeAssembly(inch, buildAssembly('wood-i-joist', form('wood-i-joist', 'in'), 'in').pieces, { 'joist-flange': 'df-l-no2', 'joist-web': 'lvl-2.0e' }).doc;
+    expect(web.parts.map((x) => x.material)).toEqual(['df-l-no2', 'lvl-2.0e', 'df-l-no2']);
+  });
+
+  it('in a document that uses materials, an I-joist web or a PSL left without one is refused (it would take the default material, here steel)', () => {
+    const steel = { ...inch, defaultMaterial: 'astm-a992' };
+    const web = missingRoleMaterials(steel, assemblySpec('wood-i-joist'), { 'joist-flange': 'lvl-2.0e', 'joist-web': null });
+    expect(web).toHaveLength(1);
+    expect(web[0]).toMatch(/web: with none it would take the document's default material \(astm-a992\)/);
+    expect(missingRoleMaterials(steel, assemblySpec('wood-i-joist'), { 'joist-flange': 'lvl-2.0e', 'joist-web': 'lvl-2.0e' })).toEqual([]);
+    expect(missingRoleMaterials(emptyDoc(), assemblySpec('scl'), { engineered: null })).toEqual([]);
+  });
+
+  it('an I-joist whose flanges fill its depth is refused next to the flange depth; nothing is built', () => {
+    const built = buildAssembly('wood-i-joist', form('wood-i-joist', 'in', { flangeH: '6' }), 'in');
+    expect(built.pieces).toEqual([]);
+    expect(built.fieldErrors['flangeH']).toMatch(/leave no web/);
+  });
+
+  it('3-ply 2x10: three lumber parts side by side, touching at the two ply joints; A = 3 × 1.5 × 9.25 = 41.625 in² (NDS Supplement Table 1A)', () => {
+    const doc = placeIn(inch, 'multi-ply');
+    expect(doc.parts.map((x) => `${x.name}: ${x.material}`)).toEqual(['lumber ply 1: df-l-no2', 'lumber ply 2: df-l-no2', 'lumber ply 3: df-l-no2']);
+    expect(doc.parts.map((x) => x.placement.x)).toEqual([-1.5, 0, 1.5]);
+    expect(rel(properties(doc).area, 3 * 1.5 * 9.25)).toBeLessThan(1e-12);
+    expect(buildAssembly('multi-ply', form('multi-ply', 'in', { plies: '1' }), 'in').fieldErrors['plies']).toMatch(/at least 2/);
+  });
+
+  it('glulam in a millimetre document: the lamination is typed in mm (38.1 = 1-1/2 in exactly) and n = 0 is refused naming the field', () => {
+    const mm: SectionDocument = { ...emptyDoc(), unit: 'mm' };
+    const p = properties(placeIn(mm, 'glulam', { b: '130', n: '8', tl: '38.1' }));
+    expect(rel(p.Ix, (130 * (8 * 38.1) ** 3) / 12)).toBeLessThan(1e-12);
+    expect(buildAssembly('glulam', form('glulam', 'mm', { n: '0' }), 'mm').fieldErrors['n']).toMatch(/laminations n/);
   });
 });

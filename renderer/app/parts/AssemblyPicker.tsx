@@ -12,13 +12,13 @@ import { sectionFromDocument } from '../../../core/section/index.ts';
 import { formatSig } from '../../../core/units/index.ts';
 import type { Editor, EditorState } from '../../editor/editor.ts';
 import {
-  ASSEMBLIES, assemblyCatalogueSearch, assemblySpec, buildAssembly, defaultRoleMaterial, defaultTexts, documentUsesMaterials, placeAssembly, placeAssemblyStep, roleMaterialChoices,
+  ASSEMBLIES, assemblyCatalogueSearch, assemblySpec, buildAssembly, defaultRoleMaterial, defaultTexts, documentUsesMaterials, missingRoleMaterials, placeAssembly, placeAssemblyStep, roleMaterialChoices,
   type AssemblyField, type AssemblyId, type AssemblySpec, type Role,
 } from './assembly-model.ts';
 import type { BuiltUpPiece } from '../../../core/parts/index.ts';
 import './assembly.css';
 
-const ROLE_LABEL: Readonly<Record<Role, string>> = { steel: 'steel pieces', timber: 'lumber plies' };
+const ROLE_LABEL: Readonly<Record<Role, string>> = { steel: 'steel pieces', timber: 'lumber plies', engineered: 'engineered wood', 'joist-flange': 'flanges', 'joist-web': 'web (OSB, plywood)' };
 
 /** Area of the pieces on their own, for the line above the Place button (bolt holes alone have none). */
 function piecesArea(doc: SectionDocument, pieces: readonly BuiltUpPiece[]): number | null {
@@ -107,7 +107,6 @@ export function AssemblyPicker({ editor, state, onPlaced }: { editor: Editor; st
   const texts = typed[formKey] ?? defaults;
   const built = useMemo(() => buildAssembly(kind, texts, unit), [kind, texts, unit]);
   const area = useMemo(() => (built.pieces.length > 0 ? piecesArea(doc, built.pieces) : null), [doc, built.pieces]);
-  const problems = Object.keys(built.fieldErrors).length + built.errors.length;
   const usesMaterials = documentUsesMaterials(doc);
 
   const materialFor = (role: Role): string | null => {
@@ -115,8 +114,10 @@ export function AssemblyPicker({ editor, state, onPlaced }: { editor: Editor; st
     const pick = chosen[role];
     if (pick === '') return null;
     if (pick !== undefined && choices.some((c) => c.id === pick)) return pick;
-    return defaultRoleMaterial(doc, role, kind);
+    return defaultRoleMaterial(doc, role, kind, texts);
   };
+  const missing = missingRoleMaterials(doc, spec, Object.fromEntries(spec.roles.map((r) => [r, materialFor(r)])));
+  const problems = Object.keys(built.fieldErrors).length + built.errors.length + missing.length;
 
   const setText = (key: string, value: string): void => {
     setPlacedNote('');
@@ -154,6 +155,11 @@ export function AssemblyPicker({ editor, state, onPlaced }: { editor: Editor; st
         </select>
       </label>
       <p className="muted small assembly-summary">{spec.summary} Dimensions in {unit}.</p>
+      {spec.source !== undefined && (
+        <p className="muted small" data-testid="assembly-source">
+          Source: {spec.source}.
+        </p>
+      )}
       {groupsOf(spec).map((g) => (
         <fieldset key={g.name} className="assembly-group">
           <legend>{g.name}</legend>
@@ -186,7 +192,7 @@ export function AssemblyPicker({ editor, state, onPlaced }: { editor: Editor; st
           </div>
         </fieldset>
       )}
-      {built.errors.map((e) => (
+      {[...built.errors, ...missing].map((e) => (
         <p key={e} className="assembly-error" data-testid="assembly-errors" role="alert">
           {e}
         </p>

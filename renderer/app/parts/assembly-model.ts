@@ -10,7 +10,7 @@
  * Failure: a field that cannot be read, or a combination the helper refuses, gives a message
  *   naming the field (or the assembly when no one field is to blame); nothing is built then,
  *   so bad input never reaches the document.
- * Materials: a role ('steel' or 'timber') maps to a material id chosen by the user; the first
+ * Materials: a role (steel, lumber, engineered wood, an I-joist's flange or web) maps to a material id chosen by the user; the first
  *   choice offered is a material of that kind the document already has, else a built-in one,
  *   or none when the document uses no materials at all. Built-ins are copied into the document
  *   when used, as the materials panel does.
@@ -21,7 +21,7 @@ import type { Part, SectionDocument } from '../../../core/document/types.ts';
 import type { Diagnostic } from '../../../core/geometry/types.ts';
 import { BUILT_IN_MATERIALS } from '../../../core/materials/index.ts';
 import {
-  DRESSED_SIZES, boltHolePattern, boxFromChannels, coverPlatedI, doubleAnglesBackToBack, dressedPly, flitchBeam, getPartType, plateGirder, type BuiltUpPiece,
+  DRESSED_SIZES, boltHolePattern, boxFromChannels, coverPlatedI, doubleAnglesBackToBack, dressedPly, flitchBeam, getPartType, multiPlyLumber, plateGirder, woodIJoist, type BuiltUpPiece,
 } from '../../../core/parts/index.ts';
 import { convertLength, type LengthUnit } from '../../../core/units/index.ts';
 import type { Editor } from '../../editor/editor.ts';
@@ -29,8 +29,12 @@ import { uniquePartId } from '../../editor/transforms.ts';
 import { withMaterialStored } from '../materials/material-form.ts';
 import { parseNumber } from '../shell/numbers.ts';
 
-export type AssemblyId = 'plate-girder' | 'cover-plated-i' | 'box-from-channels' | 'double-angles' | 'flitch-beam' | 'bolt-holes';
-export type Role = 'steel' | 'timber';
+export type AssemblyId = 'plate-girder' | 'cover-plated-i' | 'box-from-channels' | 'double-angles' | 'flitch-beam' | 'bolt-holes' | 'glulam' | 'scl' | 'wood-i-joist' | 'multi-ply';
+/**
+ * What a piece is made of, each with its own material choice: steel pieces, lumber plies,
+ * engineered wood (glulam, LVL, PSL), and the two materials of a wood I-joist.
+ */
+export type Role = 'steel' | 'timber' | 'engineered' | 'joist-flange' | 'joist-web';
 
 /**
  * length: > 0; gap: ≥ 0; position: any number; count: a whole number ≥ min;
@@ -63,6 +67,8 @@ export interface AssemblySpec {
   readonly summary: string;
   readonly fields: readonly AssemblyField[];
   readonly roles: readonly Role[];
+  /** Where its sizes and rules come from (shown beside the form). */
+  readonly source?: string;
   /** A helper's message mentioning the word goes next to that field. */
   readonly blame: readonly (readonly [RegExp, string])[];
 }
@@ -156,6 +162,71 @@ export const ASSEMBLIES: readonly AssemblySpec[] = [
       { key: 'plies', label: 'plies', kind: 'count', min: 2, inch: '2', metric: '2', group: 'lumber (NDS dressed sizes)' },
       { key: 'plateT', label: 'thickness t', kind: 'length', inch: '1/2', metric: '12', group: 'steel plate (each)' },
       { key: 'plateDepth', label: 'depth', kind: 'length', optional: true, placeholder: 'as the lumber', inch: '', metric: '', group: 'steel plate (each)' },
+      ...centre('the middle'),
+    ],
+  },
+  {
+    id: 'glulam',
+    label: 'Glulam (laminations of a stated thickness)',
+    summary: 'Glued-laminated timber: n laminations of thickness tl stacked to the depth n·tl, each drawn as its own strip so the glue lines show (the section is the solid b × n·tl rectangle); the point placed is the middle of the section.',
+    source: 'ANSI A190.1 (structural glued laminated timber); NDS Supplement (AWC 2018) Tables 1C and 1D: laminations 1-1/2 in thick for western species, 1-3/8 in for southern pine; widths 3-1/8, 5-1/8, 6-3/4, 8-3/4, 10-3/4 in (western) and 3, 5, 6-3/4, 8-1/2, 10-1/2 in (southern pine) — from memory of those tables',
+    roles: ['engineered'],
+    blame: [],
+    fields: [
+      { key: 'b', label: 'width b', kind: 'length', inch: '5 1/8', metric: '130', group: 'section' },
+      { key: 'n', label: 'laminations n', kind: 'count', min: 1, inch: '8', metric: '8', group: 'section' },
+      { key: 'tl', label: 'lamination thickness tl (1 1/2 in western, 1 3/8 in southern pine)', kind: 'length', inch: '1 1/2', metric: '38.1', group: 'section' },
+      ...centre('the middle'),
+    ],
+  },
+  {
+    id: 'scl',
+    label: 'LVL or PSL (structural composite lumber)',
+    summary: 'A solid b × d member of laminated veneer lumber or parallel strand lumber; the point placed is the middle of the section. Take E, Fb and the sizes from the producer\'s published values.',
+    source: 'common practice: LVL made in 1-3/4 in plies (members of 1, 2 or 3 plies side by side), PSL in 3-1/2, 5-1/4 and 7 in widths, depths 9-1/4 to 18 in (from memory); no producer\'s own data are used',
+    roles: ['engineered'],
+    blame: [],
+    fields: [
+      {
+        key: 'product', label: 'product', kind: 'choice', inch: 'lvl', metric: 'lvl', group: 'member',
+        choices: [
+          { value: 'lvl', label: 'LVL (laminated veneer lumber)' },
+          { value: 'psl', label: 'PSL (parallel strand lumber)' },
+        ],
+      },
+      { key: 'b', label: 'width b', kind: 'length', inch: '1 3/4', metric: '45', group: 'member' },
+      { key: 'd', label: 'depth d', kind: 'length', inch: '11 7/8', metric: '302', group: 'member' },
+      ...centre('the middle'),
+    ],
+  },
+  {
+    id: 'wood-i-joist',
+    label: 'Wood I-joist (flanges and web)',
+    summary: 'Two flanges b × h of one material (LVL or sawn lumber) and a web tw thick of another (OSB or plywood) between them, each its own part so each takes its own material; the point placed is mid-depth. The web\'s tongue in the flange groove is not modelled.',
+    source: 'common practice (flanges 1-1/2 in deep and 1-3/4 to 3-1/2 in wide, webs 3/8 to 7/16 in OSB; from memory); the producer\'s published section values govern design',
+    roles: ['joist-flange', 'joist-web'],
+    blame: [[/flanges \(2/, 'flangeH'], [/web tw/, 'tw']],
+    fields: [
+      { key: 'depth', label: 'overall depth', kind: 'length', inch: '11 7/8', metric: '302', group: 'joist' },
+      { key: 'flangeB', label: 'width b', kind: 'length', inch: '2 5/16', metric: '58', group: 'each flange' },
+      { key: 'flangeH', label: 'depth h', kind: 'length', inch: '1 1/2', metric: '38', group: 'each flange' },
+      { key: 'tw', label: 'thickness tw', kind: 'length', inch: '3/8', metric: '9.5', group: 'web' },
+      ...centre('the middle'),
+    ],
+  },
+  {
+    id: 'multi-ply',
+    label: 'Multi-ply lumber (plies kept separate)',
+    summary: 'Plies of one dressed lumber size side by side, each its own part, so the joints between plies are kept (for the shear flow a nailed or screwed joint must carry); the point placed is the middle.',
+    source: 'NDS Supplement (AWC 2018) Table 1A, dressed sizes; plies fastened side by side: common practice',
+    roles: ['timber'],
+    blame: [[/nominal/, 'lumber'], [/plies/, 'plies']],
+    fields: [
+      {
+        key: 'lumber', label: 'nominal size', kind: 'choice', inch: '2x10', metric: '2x10', group: 'lumber (NDS dressed sizes)',
+        choices: DRESSED_SIZES.map((s) => ({ value: s.nominal, label: `${s.nominal} (${s.b} × ${s.d} in)` })),
+      },
+      { key: 'plies', label: 'plies', kind: 'count', min: 2, inch: '3', metric: '3', group: 'lumber (NDS dressed sizes)' },
       ...centre('the middle'),
     ],
   },
@@ -333,6 +404,19 @@ function helperResult(spec: AssemblySpec, read: Read, unit: LengthUnit): { piece
       const depth = read.values['plateDepth'] ?? (ply === undefined ? 0 : shown(ply.d, 'in', unit));
       return flitchBeam({ lumber: { b: size.nominalB, d: size.nominalD }, plies: num(read, 'plies'), plate: { t: num(read, 'plateT'), depth }, unit });
     }
+    case 'glulam':
+      return engineeredPiece('glulam', 'glulam', { b: num(read, 'b'), n: num(read, 'n'), tl: num(read, 'tl') });
+    case 'scl': {
+      const product = read.choices['product'] === 'psl' ? 'psl' : 'lvl';
+      return engineeredPiece(product, product.toUpperCase(), { b: num(read, 'b'), d: num(read, 'd') });
+    }
+    case 'wood-i-joist':
+      return woodIJoist({ depth: num(read, 'depth'), flange: { b: num(read, 'flangeB'), h: num(read, 'flangeH') }, tw: num(read, 'tw') });
+    case 'multi-ply': {
+      const size = DRESSED_SIZES.find((s) => s.nominal === read.choices['lumber']);
+      if (size === undefined) return null;
+      return multiPlyLumber({ lumber: { b: size.nominalB, d: size.nominalD }, plies: num(read, 'plies'), unit });
+    }
     case 'bolt-holes': {
       const axis = read.choices['axis'] as 'x' | 'y' | 'z';
       const pitch = read.values['pitch'];
@@ -346,12 +430,21 @@ function helperResult(spec: AssemblySpec, read: Read, unit: LengthUnit): { piece
   }
 }
 
+/** One engineered-wood part (glulam, LVL, PSL) with its parameters in the document unit, or the part type's own diagnostics. */
+function engineeredPiece(shape: string, name: string, params: Record<string, number>): { pieces: readonly BuiltUpPiece[]; diagnostics: readonly Diagnostic[] } {
+  const diagnostics = getPartType(shape)?.region(params).diagnostics ?? [];
+  if (diagnostics.length > 0) return { pieces: [], diagnostics };
+  return { pieces: [{ name, type: 'shape', shape, params, placement: { x: 0, y: 0, rotationDeg: 0, mirror: false }, operation: 'add', role: 'timber', materialRole: 'engineered' }], diagnostics };
+}
+
 const RENAMES: Readonly<Record<string, string>> = { web: 'web plate', 'top flange': 'top flange plate', 'bottom flange': 'bottom flange plate' };
 
 /** The plain name a piece gets in the parts list. */
 function plainName(spec: AssemblySpec, piece: BuiltUpPiece, plies: number): string {
   if (spec.id === 'plate-girder') return RENAMES[piece.name] ?? piece.name;
   if (spec.id === 'cover-plated-i' && piece.type === 'shape' && piece.shape === 'i-shape') return piece.designation ?? 'rolled I';
+  if (spec.id === 'wood-i-joist') return piece.name === 'web' ? 'I-joist web' : `I-joist ${piece.name}`;
+  if (spec.id === 'multi-ply') return piece.name.replace(/^ply /, 'lumber ply ');
   if (spec.id === 'flitch-beam') {
     const ply = /^ply (\d+)$/.exec(piece.name);
     if (ply) return `lumber ply ${ply[1]}`;
@@ -394,7 +487,21 @@ export function buildAssembly(id: AssemblyId, texts: Readonly<Record<string, str
 
 // ---- materials by role ----------------------------------------------------------------------
 
-const ROLE_KINDS: Readonly<Record<Role, readonly string[]>> = { steel: ['steel'], timber: ['sawn-lumber', 'engineered-wood'] };
+const ROLE_KINDS: Readonly<Record<Role, readonly string[]>> = {
+  steel: ['steel'],
+  timber: ['sawn-lumber', 'engineered-wood'],
+  engineered: ['engineered-wood'],
+  'joist-flange': ['engineered-wood', 'sawn-lumber'],
+  'joist-web': ['engineered-wood', 'other'],
+};
+
+/** The role whose material a piece takes: a wood I-joist's flange or web, engineered wood, else the helper's steel or timber. */
+export function pieceRole(piece: BuiltUpPiece): Role | undefined {
+  if (piece.materialRole === 'flange') return 'joist-flange';
+  if (piece.materialRole === 'web') return 'joist-web';
+  if (piece.materialRole === 'engineered') return 'engineered';
+  return piece.role;
+}
 
 /** Whether the document uses materials at all (its own, a default, or any part's). */
 export function documentUsesMaterials(doc: SectionDocument): boolean {
@@ -420,13 +527,33 @@ export function roleMaterialChoices(doc: SectionDocument, role: Role): { id: str
  * role's kind the document already uses or holds; else a common grade (ASTM A992 for a rolled
  * I, ASTM A36 for plates, channels and angles, Douglas Fir-Larch No. 2 for lumber; common practice).
  */
-export function defaultRoleMaterial(doc: SectionDocument, role: Role, id: AssemblyId): string | null {
+export function defaultRoleMaterial(doc: SectionDocument, role: Role, id: AssemblyId, choices: Readonly<Record<string, string>> = {}): string | null {
   if (!documentUsesMaterials(doc)) return null;
   const known = [...doc.parts.map((p) => p.material), doc.defaultMaterial, ...doc.materials.map((m) => m.id)];
   const hit = known.find((m): m is string => m !== null && ROLE_KINDS[role].includes(kindOf(doc, m) ?? ''));
   if (hit !== undefined) return hit;
+  // Engineered wood: the generic built-in of the product (glulam, LVL; from memory, marked so in the
+  // library); none is built in for PSL or an I-joist web (OSB, plywood): the user chooses one.
+  if (role === 'engineered') return id === 'glulam' ? 'glulam-24f-1.8e' : choices['product'] === 'psl' ? null : 'lvl-2.0e';
+  if (role === 'joist-flange') return 'lvl-2.0e';
+  if (role === 'joist-web') return null;
   if (role === 'timber') return 'df-l-no2';
   return id === 'cover-plated-i' ? 'astm-a992' : 'astm-a36';
+}
+
+const ROLE_WORDS: Readonly<Record<Role, string>> = { steel: 'steel pieces', timber: 'lumber plies', engineered: 'engineered wood', 'joist-flange': 'flanges', 'joist-web': 'web' };
+
+/**
+ * Roles that must be given a material before placing: in a document that uses materials, a
+ * wood role left at none would take the document's default material (which may be steel), so
+ * an I-joist web or a PSL member without one is refused with a message saying so.
+ */
+export function missingRoleMaterials(doc: SectionDocument, spec: AssemblySpec, materials: Readonly<Partial<Record<Role, string | null>>>): string[] {
+  if (!documentUsesMaterials(doc)) return [];
+  const fallback = doc.defaultMaterial === null ? 'no material' : `the document's default material (${doc.materials.find((m) => m.id === doc.defaultMaterial)?.name ?? doc.defaultMaterial})`;
+  return spec.roles
+    .filter((r) => r !== 'steel' && r !== 'timber' && (materials[r] ?? null) === null)
+    .map((r) => `Choose a material for the ${ROLE_WORDS[r]}: with none it would take ${fallback}, and no generic one is built in (use the producer's published values).`);
 }
 
 // ---- into the document ----------------------------------------------------------------------
@@ -457,7 +584,10 @@ function nameSuffix(doc: SectionDocument, names: readonly string[]): string {
  * Built-in materials used are copied into the document's materials.
  */
 export function placeAssembly(doc: SectionDocument, pieces: readonly BuiltUpPiece[], materials: Readonly<Partial<Record<Role, string | null>>>): { doc: SectionDocument; ids: string[] } {
-  const materialOf = (p: BuiltUpPiece): string | null => (p.operation === 'add' && p.role !== undefined ? (materials[p.role] ?? null) : null);
+  const materialOf = (p: BuiltUpPiece): string | null => {
+    const role = pieceRole(p);
+    return p.operation === 'add' && role !== undefined ? (materials[role] ?? null) : null;
+  };
   let working = doc;
   for (const m of new Set(pieces.map(materialOf))) if (m !== null) working = withMaterialStored(working, m);
   const suffix = nameSuffix(doc, pieces.map((p) => p.name));
