@@ -208,7 +208,8 @@ export function jointsExport(input: JointsExportInput): JointsExport | null {
           minimum: t === null ? null : { thinnerPart: c.length(t), leg: c.weld(min), source: 'AISC 360-22 Table J2.4 (from memory)' },
           intermittent: { leg: c.weld(Math.max(leg, min)), segment: c.weld(inter.segment), pitch: c.weld(inter.pitch) },
         };
-        needs = `fillet leg ≥ ${sig(fillet.requiredLeg)} ${u.weld} (${method}, ${lines} line${lines === 1 ? '' : 's'})${fillet.minimum ? `; Table J2.4 minimum ${sig(fillet.minimum.leg)} ${u.weld}` : ''}; or ${sig(fillet.intermittent.leg)} ${u.weld} × ${sig(fillet.intermittent.segment)} ${u.weld} at pitch ≤ ${sig(fillet.intermittent.pitch)} ${u.weld}`;
+        const governing = fillet.minimum && fillet.minimum.leg > fillet.requiredLeg ? `; the Table J2.4 minimum governs` : '';
+        needs = `fillet leg ≥ ${sig(fillet.requiredLeg)} ${u.weld} (${method}, ${lines} line${lines === 1 ? '' : 's'})${fillet.minimum ? `; Table J2.4 minimum ${sig(fillet.minimum.leg)} ${u.weld}${governing}` : ''}; or ${sig(fillet.intermittent.leg)} ${u.weld} × ${sig(fillet.intermittent.segment)} ${u.weld} at pitch ≤ ${sig(fillet.intermittent.pitch)} ${u.weld}`;
       } else if (j.kind.type === 'welded') needs = 'groove weld: its strength is that of the joined metal (check by the local code)';
       let largestPitch: number | undefined;
       if (j.kind.type === 'fastened') {

@@ -296,9 +296,10 @@ function linesFor(m: Model, p: PartMaterial, o: CutOrientation): number[] {
   if (inside(axis)) out.push(axis);
   const corners = new Set<number>();
   for (const poly of p.region) for (const ring of [poly.outer, ...poly.holes]) for (let i = o === 'horizontal' ? 1 : 0; i < ring.xy.length; i += 2) corners.add(ring.xy[i] as number);
-  for (const e of m.edges) if (e.segments !== null && (e.a === p.index || e.b === p.index)) for (const g of e.segments) for (const v of o === 'horizontal' ? [g.y0, g.y1] : [g.x0, g.x1]) corners.add(v);
   const list = [...corners];
   const use = list.length <= MAX_CORNER_CUTS ? list : Array.from({ length: MAX_CORNER_CUTS + 1 }, (_, i) => lo + ((hi - lo) * i) / MAX_CORNER_CUTS);
+  // The ends of the part's joints always (a dense outline's corners are replaced by even steps, its joints are not).
+  for (const e of m.edges) if (e.segments !== null && (e.a === p.index || e.b === p.index)) for (const g of e.segments) use.push(...(o === 'horizontal' ? [g.y0, g.y1] : [g.x0, g.x1]));
   for (const v of use) for (const c of [v - m.eps, v + m.eps]) if (inside(c)) out.push(c);
   for (let i = 0; i < SAMPLES; i++) out.push(lo + ((hi - lo) * (i + 0.5)) / SAMPLES);
   return out;

@@ -33,6 +33,9 @@ describe('jointsExport: one set of numbers in output units', () => {
     expect(rel(Math.abs(x?.joints[0]?.shear?.q ?? 0), q)).toBeLessThan(1e-9);
     expect(rel(x?.joints[0]?.shear?.fillet?.requiredLeg ?? 0, legLrfd)).toBeLessThan(1e-9);
     expect(x?.joints[0]?.shear?.fillet?.minimum?.leg).toBe(5); // Table J2.4: thinner part 10 mm → 5 mm
+    // 2.45 mm by strength is less than the 5 mm minimum: the minimum governs, and the text says so.
+    expect(legLrfd).toBeLessThan(5);
+    expect(x?.joints[0]?.shear?.needs).toContain('Table J2.4 minimum 5 mm; the Table J2.4 minimum governs');
     expect(rel(x?.shear?.parts.find((p) => p.part === 'web')?.tauMax ?? 0, tauWeb)).toBeLessThan(1e-9);
     expect(x?.notes.join(' ')).toContain('the local code governs');
   });
