@@ -128,6 +128,15 @@ function table(request: Request, p: SectionProperties, unit: LengthUnit): string
   ].join('\n');
 }
 
+/** The unit of each dimension given ("params.d": "in"); lumber's nominal sizes are inches by name, slopes and counts have none. */
+function paramUnits(request: Request): Record<string, string> {
+  const type = getPartType(request.shape);
+  return Object.fromEntries(Object.keys(request.params).map((k) => {
+    const q = type?.params.find((p) => p.key === k)?.quantity ?? 'length';
+    return [`params.${k}`, q === 'length' ? request.unit : q === 'nominal-in' ? 'in (nominal)' : '-'];
+  }));
+}
+
 function json(request: Request, p: SectionProperties, unit: LengthUnit): string {
   const body = {
     input: 'part',
@@ -139,7 +148,7 @@ function json(request: Request, p: SectionProperties, unit: LengthUnit): string 
     caution: CAUTION,
     convention: 'Ixy = +∫XY dA about the centroid; angles in degrees counter-clockwise from +x; lengths in "unit", areas unit², moduli unit³, second moments unit⁴',
     ...propertiesInUnit(p, request.unit, unit),
-    units: propertyUnits(unit),
+    units: { ...propertyUnits(unit), ...paramUnits(request) },
   };
   return `${JSON.stringify(body, (_k, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2)}\n`;
 }

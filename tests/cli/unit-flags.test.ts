@@ -40,8 +40,9 @@ describe('part TYPE key=value takes units', () => {
   it('d=14in bf=10in tw=1/2in tf=3/4" with --unit mm: A = 21.25 in² = 13,709.65 mm², Ix = 740.4427 in⁴ in mm⁴', async () => {
     const r = await run(partCommand, ['i-shape', 'd=14in', 'bf=10in', 'tw=1/2in', 'tf=3/4"'], { unit: 'mm', json: true });
     expect(r.err).toBe('');
-    const j = JSON.parse(r.out) as { area: number; Ix: number; params: Record<string, number>; paramsUnit: string };
+    const j = JSON.parse(r.out) as { area: number; Ix: number; params: Record<string, number>; paramsUnit: string; units: Record<string, string> };
     expect(j.paramsUnit).toBe('mm');
+    expect([j.units['params.d'], j.units['params.tf']]).toEqual(['mm', 'mm']);
     expect(j.params.d).toBeCloseTo(355.6, 10);
     expect(j.area / 13709.65 - 1).toBeLessThan(1e-12);
     expect(Math.abs(j.Ix / (IX * 25.4 ** 4) - 1)).toBeLessThan(1e-12);
