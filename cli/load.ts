@@ -16,6 +16,7 @@ import { type ComposedPart, sectionFromDocument } from '../core/section/index.ts
 import { isLengthUnit, type LengthUnit } from '../core/units/index.ts';
 import { documentFromDxf, importDxf, looksLikeDxf } from '../core/dxf/index.ts';
 import type { CliIo, FlagLists, FlagSpec, FlagValues } from './command.ts';
+import { fileErrorReason } from './output.ts';
 
 export interface LoadedSection {
   readonly kind: 'document' | 'geojson';
@@ -218,9 +219,7 @@ function readSectionFile(file: string, io: CliIo, geoJsonUnit: LengthUnit | unde
     if (tooLong !== null) return { ok: false, messages: [`${file}: ${tooLong}`] };
     text = io.readFile(file);
   } catch (err) {
-    const code = (err as { code?: string }).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a directory' : code === 'EACCES' ? 'permission denied' : err instanceof Error ? err.message : String(err);
-    return { ok: false, messages: [`${file}: cannot read the file: ${why}`] };
+    return { ok: false, messages: [`${file}: cannot read the file: ${fileErrorReason(err, 'read')}`] };
   }
   if (/\.dxf$/i.test(file) || looksLikeDxf(text)) {
     const dxf = documentFromDxfText(file, text, geoJsonUnit, dxfOptions);

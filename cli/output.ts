@@ -14,24 +14,37 @@ export class BadInputError extends Error {
   override readonly name = 'BadInputError';
 }
 
-const REASONS: Readonly<Record<string, string>> = {
-  ENOENT: 'its folder does not exist',
-  EISDIR: 'it is a folder, not a file',
-  ENOTDIR: 'a part of the path is not a folder',
-  EACCES: 'permission denied',
-  EPERM: 'permission denied',
-  EROFS: 'the file system is read-only',
-  ENOSPC: 'the disk is full',
-};
+/** Why a file could not be written, by Node's error code. */
+const WRITE_REASONS: ReadonlyMap<string, string> = new Map([
+  ['ENOENT', 'its folder does not exist'],
+  ['EISDIR', 'it is a folder, not a file'],
+  ['ENOTDIR', 'a part of the path is not a folder'],
+  ['EACCES', 'permission denied'],
+  ['EPERM', 'permission denied'],
+  ['EROFS', 'the file system is read-only'],
+  ['ENOSPC', 'the disk is full'],
+]);
+
+/** Why a file could not be read, by Node's error code. */
+const READ_REASONS: ReadonlyMap<string, string> = new Map([
+  ['ENOENT', 'no such file'],
+  ['EISDIR', 'it is a directory'],
+  ['EACCES', 'permission denied'],
+]);
+
+/** A file system error in plain words for reading or writing a file; the error's own message otherwise. */
+export function fileErrorReason(err: unknown, use: 'read' | 'write'): string {
+  const code = (err as { code?: unknown } | null)?.code;
+  const known = typeof code === 'string' ? (use === 'read' ? READ_REASONS : WRITE_REASONS).get(code) : undefined;
+  return known ?? (err instanceof Error ? err.message : String(err));
+}
 
 /** Writes `text` to `path` (UTF-8), or throws BadInputError naming `--flag`, the path and why. */
 export function writeOutputFile(flag: string, path: string, text: string | Uint8Array): void {
   try {
     writeFileSync(path, text, typeof text === 'string' ? 'utf8' : undefined);
   } catch (err) {
-    const code = (err as { code?: unknown }).code;
-    const reason = typeof code === 'string' && Object.hasOwn(REASONS, code) ? REASONS[code] : err instanceof Error ? err.message : String(err);
-    throw new BadInputError(`--${flag} ${path}: cannot write the file: ${reason}`);
+    throw new BadInputError(`--${flag} ${path}: cannot write the file: ${fileErrorReason(err, 'write')}`);
   }
 }
 
