@@ -15,7 +15,8 @@
  * Errors name the JSON path, e.g. features[3].geometry.coordinates[0][5].
  */
 import type { Polygon, Region, Ring } from './geometry/types.ts';
-import { MAX_DOCUMENT_VERTICES } from './document/schema.ts';
+import { tooManyVertices } from './document/schema.ts';
+import { ringVertexCount } from './geometry/ring.ts';
 
 export interface GeoJsonIssue {
   readonly path: string;
@@ -158,12 +159,11 @@ export function regionFromGeoJson(value: unknown): GeoJsonResult {
   if (issues.length > 0) return { ok: false, errors: issues };
   let vertexCount = 0;
   for (const p of out.polygons) {
-    vertexCount += p.outer.xy.length / 2;
-    for (const h of p.holes) vertexCount += h.xy.length / 2;
+    vertexCount += ringVertexCount(p.outer);
+    for (const h of p.holes) vertexCount += ringVertexCount(h);
   }
-  if (vertexCount > MAX_DOCUMENT_VERTICES) {
-    return { ok: false, errors: [{ path: '(top level)', message: `the file holds ${vertexCount.toLocaleString('en-US')} vertices, more than this build computes (${MAX_DOCUMENT_VERTICES.toLocaleString('en-US')}); simplify or split the outlines` }] };
-  }
+  const tooMany = tooManyVertices(vertexCount, 'the file holds', 'vertices');
+  if (tooMany !== null) return { ok: false, errors: [{ path: '(top level)', message: tooMany }] };
   return { ok: true, region: out.polygons, sources: out.sources, vertexCount };
 }
 

@@ -339,6 +339,16 @@ export type ValidationResult = { readonly ok: true; readonly document: SectionFi
  */
 export const MAX_DOCUMENT_VERTICES = 2_000_000;
 
+/**
+ * The refusal for more than MAX_DOCUMENT_VERTICES vertices, or null within the limit: one wording
+ * for documents and GeoJSON files (`holder` is "the document holds … outline vertices" or "the file
+ * holds … vertices").
+ */
+export function tooManyVertices(count: number, holder: 'the document holds' | 'the file holds', what: 'outline vertices' | 'vertices'): string | null {
+  if (count <= MAX_DOCUMENT_VERTICES) return null;
+  return `${holder} ${count.toLocaleString('en-US')} ${what}, more than this build computes (${MAX_DOCUMENT_VERTICES.toLocaleString('en-US')}); simplify or split the outlines`;
+}
+
 function vertexCount(file: SectionFile): number {
   let n = 0;
   for (const section of file.sections) {
@@ -355,10 +365,8 @@ export function validateDocument(value: unknown): ValidationResult {
   const result = v.safeParse(documentSchema, value, { abortEarly: false });
   if (!result.success) return { ok: false, issues: result.issues.map(issueToDocumentIssue) };
   const document = result.output as SectionFile;
-  const vertices = vertexCount(document);
-  if (vertices > MAX_DOCUMENT_VERTICES) {
-    return { ok: false, issues: [{ path: '', message: `the document holds ${vertices.toLocaleString('en-US')} outline vertices, more than this build computes (${MAX_DOCUMENT_VERTICES.toLocaleString('en-US')}); simplify or split the outlines` }] };
-  }
+  const tooMany = tooManyVertices(vertexCount(document), 'the document holds', 'outline vertices');
+  if (tooMany !== null) return { ok: false, issues: [{ path: '', message: tooMany }] };
   const issues = crossFieldIssues(document);
   return issues.length > 0 ? { ok: false, issues } : { ok: true, document };
 }
