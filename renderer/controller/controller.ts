@@ -91,6 +91,11 @@ export interface AppState {
   readonly recent: readonly { readonly name: string; readonly handle: string }[];
   /** A DXF drawing waiting for the user's choices (unit, layers, parts) before it is imported, or null. */
   readonly dxf: DxfPrompt | null;
+  /**
+   * A file that was refused while another document stayed open: the results on screen are that
+   * document's, not the refused file's, and the views say so until the open document changes.
+   */
+  readonly refused: { readonly file: string; readonly shown: string } | null;
 }
 
 /** What the DXF import dialog shows and the user chooses; the open document is untouched until Import. */
@@ -169,6 +174,8 @@ export class AppController implements CommandTarget {
   private unsubscribeEditor: (() => void) | null = null;
   private unsubscribeHost: (() => void) | null = null;
   private started = false;
+  /** The document that was open when a file was refused (the refusal note lasts while it is). */
+  private refusedOver: SectionDocument | null = null;
 
   constructor(deps: ControllerDeps) {
     this.host = deps.host;
@@ -192,6 +199,7 @@ export class AppController implements CommandTarget {
       clipboardParts: 0,
       recent: [],
       dxf: null,
+      refused: null,
     };
     this.torsionRunner = deps.torsion((torsion) => this.set({ torsion }));
     this.attach();
@@ -262,6 +270,10 @@ export class AppController implements CommandTarget {
       this.lastTitle = title;
       this.host.setTitle(title);
       this.host.setUnsaved?.(st.dirty);
+    }
+    if (this.state.refused !== null && st.doc !== this.refusedOver) {
+      this.refusedOver = null;
+      this.set({ refused: null });
     }
     if (st.doc !== this.lastDoc || st.gesture !== this.lastGesture) {
       const docChanged = st.doc !== this.lastDoc;
@@ -452,6 +464,7 @@ export class AppController implements CommandTarget {
     const s = summariseDxf(text);
     if (!s.ok) {
       this.error(`Could not open ${name}. The current document is unchanged.`, [s.message]);
+      this.markRefused(name);
       return false;
     }
     const unit = s.summary.unit ?? this.editor.getState().doc.unit;
@@ -496,12 +509,19 @@ export class AppController implements CommandTarget {
     const r = documentFromText(text, name, this.editor.getState().doc.unit);
     if (!r.ok) {
       this.error(`Could not open ${name}. The current document is unchanged.`, r.errors);
+      this.markRefused(name);
       return false;
     }
     this.loadDoc(r.file, { name, handle: r.note?.startsWith('GeoJSON') ? null : handle });
     if (r.note) this.note(`Opened ${name}`, [r.note]);
     else this.showBanner(null);
     return true;
+  }
+
+  /** The results on screen stay the open document's: say so, naming the refused file. */
+  private markRefused(file: string): void {
+    this.refusedOver = this.editor.getState().doc;
+    this.set({ refused: { file, shown: this.documentName() } });
   }
 
   /** A file dropped or chosen in the page (no handle: saving it is a Save As). */

@@ -2,7 +2,7 @@
 // limit is refused on opening with the command line's own words and the open document kept; a
 // placement typed out there is reported and does not freeze the page (the grid once stepped
 // k + 1 === k beyond 2^53 and never ended).
-import { check, openApp, partCount, resultValue } from './harness.mjs';
+import { appUrl, check, openApp, partCount, resultValue } from './harness.mjs';
 
 const far = {
   format: 'sectionsmith-section', version: 3, name: 'far away', unit: 'mm', materials: [], defaultMaterial: null,
@@ -21,6 +21,33 @@ export async function aPartAt1e20IsRefusedOnOpeningWithTheLimitAndTheDocumentKep
   check(/far\.section\.json/.test(message) && /deck plate/.test(message) && /1000000000|1e\+?9/.test(message), `the message names the file, the part and the limit: ${message}`);
   check((await partCount(page)) === before.parts, 'the open document keeps its parts');
   check((await resultValue(page, 'area')) === before.area, 'the open document keeps its area');
+  // Finding 8: the numbers still shown are said to be the open document's, not the refused file's.
+  const notice = await page.getByTestId('results-refused').textContent();
+  check(/far\.section\.json was not opened/.test(notice) && /footbridge-box-girder\.section\.json/.test(notice), `the results say whose they are: ${notice}`);
+  // An edit to the open document makes its numbers plainly current again.
+  await page.getByTestId('part-select-0').click();
+  await page.getByTestId('transform-delete').click();
+  await page.getByTestId('results-refused').waitFor({ state: 'detached' });
+}
+
+export async function oneViewThatFailsToDrawLeavesTheRestOfTheEditorAndTheDocument({ page, baseUrl }) {
+  // ?break-view=results makes the results view throw while it renders (a test hook in ErrorBoundary.tsx).
+  await page.goto(`${appUrl(baseUrl)}&break-view=results`);
+  const failed = page.getByTestId('view-error');
+  await failed.waitFor({ timeout: 20_000 });
+  check((await failed.getAttribute('data-view')) === 'results', 'the failed view is the results view, not the whole app');
+  check(/results view could not be drawn/.test(await failed.textContent()), 'the view says it could not be drawn');
+  // Everything else is drawn, around the same document: its parts, the drawing, the menus.
+  await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length > 0);
+  const parts = await partCount(page);
+  check(await page.getByTestId('canvas').isVisible(), 'the drawing is still shown');
+  check((await page.locator('[data-testid="result-area"]').count()) === 0, 'the failed view shows no numbers');
+  // The document is live: an edit goes through and can be undone.
+  await page.getByTestId('part-select-0').click();
+  await page.getByTestId('transform-delete').click();
+  await page.waitForFunction((n) => document.querySelectorAll('[data-testid^="part-row-"]').length === n - 1, parts);
+  await page.getByTestId('undo').click();
+  await page.waitForFunction((n) => document.querySelectorAll('[data-testid^="part-row-"]').length === n, parts);
 }
 
 export async function aPlacementTypedAt1e20IsReportedAndThePageStaysResponsive({ page, baseUrl }) {

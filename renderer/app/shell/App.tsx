@@ -14,6 +14,8 @@ import { TorsionClient } from '../../controller/torsion-client.ts';
 import { Canvas } from '../canvas/Canvas.tsx';
 import { EntryPanel, SelectionPanel } from '../parts/EntryPanel.tsx';
 import { MenuBar } from './MenuBar.tsx';
+import { RefusedNotice } from './RefusedNotice.tsx';
+import { ErrorBoundary } from './ErrorBoundary.tsx';
 import { ShortcutSheet } from './ShortcutSheet.tsx';
 import { DxfImportDialog } from './DxfImportDialog.tsx';
 import { PartsPanel } from '../parts/PartsPanel.tsx';
@@ -252,7 +254,10 @@ export function App({ controller: given }: { readonly controller?: AppController
             </label>
             <p className="muted small">Changing the document unit converts every length exactly, so the section stays the same physical size. The display unit changes only how results read.</p>
           </div>
-          <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={app.sig} torsion={torsion} current={state.doc} />
+          <RefusedNotice refused={app.refused} />
+          <ErrorBoundary view="results">
+            <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={app.sig} torsion={torsion} current={state.doc} />
+          </ErrorBoundary>
           <JointsNotes doc={state.doc} />
           <JointsPanel editor={editor} doc={state.doc} store={joints} />
           <MaterialsPanel editor={editor} doc={state.doc} valid={!!results.properties} display={display} />
