@@ -2,31 +2,16 @@
 // process through runCli (fast); two run the real launcher as a process to prove the bin works
 // after `npm ci` and that a bad file exits with code 2.
 import { execFile } from 'node:child_process';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { COMMANDS, runCli } from '../../cli/main.ts';
+import { COMMANDS } from '../../cli/main.ts';
+import { cli, tempFolder } from './run-cli.ts';
 import { newDocument } from '../../core/document/index.ts';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const launcher = join(here, '..', '..', 'cli', 'sectionsmith.mjs');
-const dir = mkdtempSync(join(tmpdir(), 'sectionsmith-cli-'));
-
-function file(name: string, text: string): string {
-  const path = join(dir, name);
-  writeFileSync(path, text);
-  return path;
-}
-
-async function cli(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const io = { out: (t: string) => void (out += t), err: (t: string) => void (err += t), readFile: (p: string) => readFileSync(p, 'utf8') };
-  const code = await runCli(argv, io);
-  return { code, out, err };
-}
+const { dir, file } = tempFolder('sectionsmith-cli-');
 
 const rectangle = (extra: Record<string, unknown> = {}) => ({
   id: 'p1', name: 'deck plate', type: 'rectangle', operation: 'add', material: null, visible: true,

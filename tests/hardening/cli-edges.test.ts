@@ -2,28 +2,11 @@
 // on the CLI found mishandled (a silent wrong answer with exit 0, or exit 3 "internal error" where
 // the input was simply bad). Every case must now end in exit 2 with a message naming what is wrong,
 // or in the right answer. The numbers are exact arithmetic (b·h, b·h³/12) or the input itself.
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../cli/main.ts';
+import { cli, tempFolder } from '../cli/run-cli.ts';
 import { csvTextCell } from '../../core/export/csv.ts';
 
-const dir = mkdtempSync(join(tmpdir(), 'sectionsmith-edges-'));
-
-function file(name: string, text: string): string {
-  const path = join(dir, name);
-  writeFileSync(path, text);
-  return path;
-}
-
-async function cli(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const io = { out: (t: string) => void (out += t), err: (t: string) => void (err += t), readFile: (p: string) => readFileSync(p, 'utf8') };
-  const code = await runCli(argv, io);
-  return { code, out, err };
-}
+const { dir, file } = tempFolder('sectionsmith-edges-');
 
 const placement = { x: 0, y: 0, rotationDeg: 0, mirror: false };
 const common = { operation: 'add', material: null, visible: true, placement };

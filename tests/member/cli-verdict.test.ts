@@ -10,23 +10,11 @@
  */
 import { describe, expect, it } from 'vitest';
 import { memberCommand } from '../../cli/commands/member.ts';
-import type { CliIo, FlagLists, FlagValues } from '../../cli/command.ts';
+import type { FlagLists, FlagValues } from '../../cli/command.ts';
+import { runCommand, type CliRun } from '../cli/run-cli.ts';
 import { builtInMaterial } from '../../core/materials/library.ts';
 
-function run(files: Record<string, string>, positionals: string[], flags: FlagValues, lists: FlagLists = {}) {
-  let out = '', err = '';
-  const io: CliIo = {
-    out: (t) => { out += t; },
-    err: (t) => { err += t; },
-    readFile: (p) => {
-      const text = files[p];
-      if (text === undefined) throw Object.assign(new Error('missing'), { code: 'ENOENT' });
-      return text;
-    },
-  };
-  const code = memberCommand.run(positionals, flags, io, lists) as number;
-  return { code, out, err };
-}
+const run = (files: Record<string, string>, positionals: string[], flags: FlagValues, lists: FlagLists = {}): CliRun => runCommand(memberCommand, files, positionals, flags, lists);
 
 const w14x90 = JSON.stringify({
   format: 'sectionsmith-section', version: 1, name: 'W14X90', unit: 'in', defaultMaterial: 'astm-a992', materials: [builtInMaterial('astm-a992')],

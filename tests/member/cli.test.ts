@@ -1,26 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { memberCommand } from '../../cli/commands/member.ts';
-import type { CliIo, FlagValues } from '../../cli/command.ts';
+import type { FlagValues } from '../../cli/command.ts';
+import { runCommand, type CliRun } from '../cli/run-cli.ts';
 import { builtInMaterial } from '../../core/materials/library.ts';
 import { readRefs, refValue } from './refs.ts';
 
 const refs = readRefs(new URL('../fixtures/analytic-refs-stress-member.csv', import.meta.url));
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 
-function run(files: Record<string, string>, positionals: string[], flags: FlagValues) {
-  let out = '', err = '';
-  const io: CliIo = {
-    out: (t) => { out += t; },
-    err: (t) => { err += t; },
-    readFile: (p) => {
-      const text = files[p];
-      if (text === undefined) throw Object.assign(new Error('missing'), { code: 'ENOENT' });
-      return text;
-    },
-  };
-  const code = memberCommand.run(positionals, flags, io) as number;
-  return { code, out, err };
-}
+const run = (files: Record<string, string>, positionals: string[], flags: FlagValues): CliRun => runCommand(memberCommand, files, positionals, flags);
 
 // A 120 × 200 mm rectangle: I = 120·200³/12 = 8e7 mm⁴, the I of the beam_deflection rows.
 const rectangle = JSON.stringify({ type: 'Polygon', coordinates: [[[0, 0], [120, 0], [120, 200], [0, 200], [0, 0]]] });
