@@ -38,8 +38,12 @@ export async function startHarness() {
   };
 }
 
-/** Runs one test function in a fresh context; resolves { ok, ms, error }. */
+/**
+ * Runs one test function in a fresh context; resolves { ok, ms, error }. A test that needs longer
+ * than TEST_TIMEOUT_MS says so on the function: `myTest.timeoutMs = 150_000`.
+ */
 export async function runOne(harness, name, test) {
+  const limit = Number.isFinite(test.timeoutMs) ? test.timeoutMs : TEST_TIMEOUT_MS;
   const context = await harness.browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 900 } });
   const page = await context.newPage();
   const problems = [];
@@ -57,7 +61,7 @@ export async function runOne(harness, name, test) {
     await Promise.race([
       test({ page, baseUrl: harness.baseUrl, artifactsDir, context }),
       new Promise((_, reject) => {
-        timer = setTimeout(() => reject(new Error(`timed out after ${TEST_TIMEOUT_MS} ms`)), TEST_TIMEOUT_MS);
+        timer = setTimeout(() => reject(new Error(`timed out after ${limit} ms`)), limit);
       }),
     ]);
     if (problems.length > 0) throw new Error(problems.join('\n'));
