@@ -27,6 +27,7 @@ import { CAUTION, sectionMemberCheck, type Criterion, type StressLimits } from '
 import { sectionFromDocument } from '../section/index.ts';
 import { convertLength, fromSI, unitSystem } from '../units/index.ts';
 import type { LengthUnit } from '../units/types.ts';
+import { partsActingTogether } from '../joints/index.ts';
 
 export { CAUTION };
 
@@ -118,7 +119,8 @@ function valuesOf(doc: SectionDocument, unit: LengthUnit, beam: SharedBeam | nul
   const A = L(p.area, 2), Ix = L(p.Ix, 4), Sx = L(Math.min(p.SxTop, p.SxBottom), 3), Zx = L(p.Zx, 3);
   const b = regionBounds(s.region);
   const values: Values = { A, Ix, Iy: L(p.Iy, 4), Sx, Zx, IxPerA: Ix / A, SxPerA: Sx / A, ZxPerA: Zx / A, depth: b === null ? null : L(b.maxY - b.minY, 1), EIx: null, weight: null, deflection: null, liveDeflection: null, stressUse: null };
-  const notes: string[] = [];
+  // Separate pieces and overlapping parts are said for every alternative (core/joints).
+  const notes: string[] = partsActingTogether(doc).warnings.filter((w) => w.startsWith('The material falls into') || w.startsWith('Parts "'));
   const none = { values, stress: [], materials: [], notes };
   if (doc.defaultMaterial === null && doc.parts.every((part) => part.operation !== 'add' || part.material === null)) {
     // One line instead of one per part when the section has no materials at all.
