@@ -12,7 +12,8 @@
  * Symmetric here: every material group (the pieces of one shear modulus; one group for a
  * single material) is carried onto itself by the mirror, checked on the exact geometry: the
  * area of the symmetric difference of the group and its mirror image (core/geometry's Boolean
- * adapter, arcs flattened within its default sagitta) is below 1e-9 of the group's area. The
+ * adapter, arcs flattened within 1e-4 of the size: a mirrored arc flattens into the mirrored
+ * chords, so the chords cancel) is below 1e-9 of the group's area. The
  * axis is the middle of the bounding box, where any mirror axis of the section must lie.
  * Error estimate of a shear-centre coordinate: the larger of |coarse − fine| (the two nested
  * mesh levels of core/torsion) and jRelativeError × the section size (the solver's relative
@@ -32,12 +33,45 @@ const vertexCount = (r: Region): number => r.reduce((n, p) => n + p.outer.xy.len
 const area = (r: Region): number => (r.length === 0 ? 0 : Math.abs(regionIntegrals(r).A));
 
 /** Is every group carried onto itself by the mirror x → 2a − x (axis 'vertical') or y → 2a − y ('horizontal')? */
+/**
+ * The fast test: the boundary segments (start, end, bulge) of a region, each mirrored (mirroring
+ * reverses a segment and negates its bulge, so (p, q, b) becomes (m(q), m(p), b)), are the same
+ * multiset as the originals, coordinates compared on a grid of 1e-9 of the size. Equal boundaries
+ * bound the same region, so a yes is exact; a no may come from grid rounding, and the Boolean test
+ * then decides.
+ */
+function segmentsMirror(g: Region, axis: 'vertical' | 'horizontal', a: number, size: number): boolean {
+  const q = (v: number): number => Math.round(v / (1e-9 * size));
+  const m = (x: number, y: number): [number, number] => (axis === 'vertical' ? [2 * a - x, y] : [x, 2 * a - y]);
+  const own: string[] = [], mirrored: string[] = [];
+  for (const p of g) {
+    for (const ring of [p.outer, ...p.holes]) {
+      const n = ring.xy.length / 2;
+      for (let i = 0; i < n; i++) {
+        const j = (i + 1) % n;
+        const x0 = ring.xy[2 * i]!, y0 = ring.xy[2 * i + 1]!, x1 = ring.xy[2 * j]!, y1 = ring.xy[2 * j + 1]!;
+        const b = ring.bulge?.[i] ?? 0;
+        own.push(`${q(x0)},${q(y0)},${q(x1)},${q(y1)},${b}`);
+        const [mx1, my1] = m(x1, y1), [mx0, my0] = m(x0, y0);
+        mirrored.push(`${q(mx1)},${q(my1)},${q(mx0)},${q(my0)},${b}`);
+      }
+    }
+  }
+  own.sort();
+  mirrored.sort();
+  return own.every((k, i) => k === mirrored[i]);
+}
+
 export function mirrorsOntoItself(groups: readonly Region[], axis: 'vertical' | 'horizontal', a: number): boolean {
+  const b = regionBounds(groups.flat());
+  if (b !== null && groups.every((g) => segmentsMirror(g, axis, a, Math.max(b.maxX - b.minX, b.maxY - b.minY)))) return true;
+  // Arcs flattened coarsely (1e-4 of the size): a mirrored arc is flattened into the mirrored chords, so the test stays exact for symmetric arcs and costs far less.
+  const options = b === null ? {} : { maxSagitta: 1e-4 * Math.max(b.maxX - b.minX, b.maxY - b.minY) };
   return groups.every((g) => {
     const m = axis === 'vertical' ? transformRegion(g, { x: 2 * a, y: 0, rotationDeg: 0, mirror: true }) : transformRegion(g, { x: 0, y: 2 * a, rotationDeg: 180, mirror: true });
     const own = area(g);
     try {
-      return area(differenceRegions(g, m)) + area(differenceRegions(m, g)) <= 1e-9 * own;
+      return area(differenceRegions(g, m, undefined, options)) + area(differenceRegions(m, g, undefined, options)) <= 1e-9 * own;
     } catch {
       return false;
     }

@@ -12,6 +12,7 @@ import { describe, expect, it } from 'vitest';
 import { compositeTorsionAnalysis, torsionConstants } from '../../core/torsion/index.ts';
 import { mirrorsOntoItself, snapShearCentre } from '../../core/torsion/symmetry.ts';
 import { polygon, rectangle } from './shapes.ts';
+import { filletedWShape } from './w-shape.ts';
 
 describe('shear centre on the axis of symmetry', () => {
   it('a flat bar 120 × 9 mm with its corner at (13, 7): xs = 73 and ys = 11.5 exactly (the bar\'s mid-lines)', () => {
@@ -54,6 +55,11 @@ describe('shear centre on the axis of symmetry', () => {
     expect(r.ys).toBe(0);
     // G-weighted: the stiff side pulls the shear centre right, far beyond any error estimate.
     expect(r.xs).toBeGreaterThan(5);
+  });
+
+  it('a W14X90 with its root fillets as exact arcs (AISC Shapes Database v15.0 dimensions): xs = ys = 0, the web and flange mid-lines', () => {
+    const r = torsionConstants([filletedWShape({ d: 14, bf: 14.5, tw: 0.44, tf: 0.71, r: 1.31 - 0.71 })]);
+    expect([r.xs, r.ys]).toEqual([0, 0]);
   });
 
   it('the mirror test reads exact geometry: a bar 1e-6 out of square is not symmetric, and a distance beyond the estimate is kept', () => {
