@@ -7,7 +7,7 @@
  */
 import type { SectionDocument } from '../../core/document/types.ts';
 import { regionFromDocument } from '../../core/section/index.ts';
-import { torsionConstants } from '../../core/torsion/index.ts';
+import { torsionOfDocument } from '../app/joints/joint-torsion.ts';
 import type { TorsionResult } from '../../core/torsion/types.ts';
 
 export type TorsionRequest = { readonly id: number; readonly doc: SectionDocument };
@@ -28,7 +28,8 @@ self.addEventListener('message', (event: MessageEvent<TorsionRequest>) => {
       return;
     }
     let last = 0;
-    const result = torsionConstants(composed.region, {
+    // Parts joined only by "not connected" joints twist separately (renderer/app/joints/joint-torsion.ts).
+    const result = torsionOfDocument(doc, {
       onProgress: (fraction) => {
         const now = performance.now();
         if (now - last > 100) {

@@ -109,6 +109,10 @@ export async function aDuplicateOnTopIsNamedWithItsAreaAndChannelsToeToToeShowTh
   await page.getByTestId('joint-kind').selectOption('not-connected');
   const note = await page.getByTestId('pieces-note').innerText();
   check(/2 separate pieces/.test(note) && /not connected/.test(note), `not connected channels are two pieces, got "${note}"`);
+  // Torsion follows: the two channels twist on their own (J summed, no shared shear centre or Cw).
+  await torsionDone(page);
+  check((await page.getByTestId('torsion-separate').count()) === 1, 'torsion treats not-connected channels as two pieces');
+  check((await page.locator('[data-testid="result-ys"]').count()) === 0, 'no shared shear centre is shown');
   await page.getByTestId('joints-panel').screenshot({ path: path.join(artifactsDir, 'joints-channels.png') });
   await page.getByTestId('undo').click();
   check(/\(default\)/.test(await page.getByTestId('joint-row-0').innerText()), 'undo puts the default kind back');

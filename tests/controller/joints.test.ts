@@ -25,6 +25,7 @@ import {
 import { rig, settle } from './fakes.ts';
 import type { Editor } from '../../renderer/editor/editor.ts';
 import { withMaterialStored } from '../../renderer/app/materials/material-form.ts';
+import { torsionOfDocument } from '../../renderer/app/joints/joint-torsion.ts';
 
 const rel = (got: number, want: number): number => Math.abs(got - want) / Math.abs(want);
 
@@ -279,5 +280,28 @@ describe('shear flow and what each joint asks of its welds or fasteners', () => 
     const d = shearFlowDiagram(box, { Vy: 100_000, Vx: 0 });
     expect(d.walls).toEqual([]);
     expect(d.notes.join(' ')).toMatch(/closed cell/);
+  });
+});
+
+/** Saint-Venant J of a t × b rectangle (t ≤ b): (t³·b/3)·[1 − (192·t/(π⁵·b))·Σ_{n odd} tanh(nπb/2t)/n⁵] (Timoshenko & Goodier, Theory of Elasticity, torsion of a rectangular bar). */
+function rectangleJ(t: number, b: number): number {
+  let sum = 0;
+  for (let n = 1; n < 200; n += 2) sum += Math.tanh((n * Math.PI * b) / (2 * t)) / n ** 5;
+  return ((t ** 3 * b) / 3) * (1 - ((192 * t) / (Math.PI ** 5 * b)) * sum);
+}
+
+describe('not connected means separate: the torsion the editor solves', () => {
+  const pair = plates([{ name: 'left ply', b: 10, h: 100, x: -5, y: 0 }, { name: 'right ply', b: 10, h: 100, x: 5, y: 0 }]);
+  it('two 10 × 100 plates side by side, welded (the default between steel parts): one 20 × 100 bar', () => {
+    const r = torsionOfDocument(pair);
+    expect(r.components).toBe(1);
+    expect(rel(r.J, rectangleJ(20, 100))).toBeLessThan(0.01);
+  });
+
+  it('the same plates with their joint not connected: J is the sum of the two plates\' J, two pieces, no shared shear centre', () => {
+    const loose: SectionDocument = { ...pair, joints: [{ parts: ['p1', 'p2'], kind: { type: 'not-connected' } }] };
+    const r = torsionOfDocument(loose);
+    expect(r.components).toBe(2);
+    expect(rel(r.J, 2 * rectangleJ(10, 100))).toBeLessThan(0.01);
   });
 });
