@@ -9,5 +9,6 @@ export { migrateToCurrent, MIGRATIONS, OLDEST_READABLE_VERSION, FIRST_SECTION_ID
 export { parseDocument, parseJson, textTooLong, MAX_TEXT_LENGTH, documentFromJson, jsonSyntaxError, serialiseDocument, newDocument, type ParseResult, type JsonResult } from './io.ts';
 export {
   allSectionViews, fileFromSection, findSection, firstSectionView, mapSectionViews, newSectionFile, sectionById, sectionNameProblem, sectionView,
-  uniqueSectionId, uniqueSectionName, withSectionView, jointsOfParts,
+  uniqueSectionId, uniqueSectionName, withSectionView, jointsOfParts, memberOfMaterials,
 } from './sections.ts';
+export * from './inputs.ts';

@@ -11,7 +11,7 @@ import type { LengthUnit } from '../units/types.ts';
 import { migrateToCurrent } from './migrations.ts';
 import { MAX_DOCUMENT_VERTICES, validateDocument, type DocumentIssue } from './schema.ts';
 import { fileFromSection, firstSectionView } from './sections.ts';
-import { DOCUMENT_FORMAT, SECTION_VIEW_VERSION, type JointSetting, type MaterialRef, type Part, type SectionDocument, type SectionFile } from './types.ts';
+import { DOCUMENT_FORMAT, SECTION_VIEW_VERSION, type JointSetting, type LoadSet, type MaterialRef, type MemberInputs, type Part, type SectionDocument, type SectionFile } from './types.ts';
 
 /**
  * `file` is the whole file (every section); `document` is the view of its first section, for
@@ -207,6 +207,19 @@ function orderedJoint(j: JointSetting): Record<string, unknown> {
   return { parts: [j.parts[0], j.parts[1]], kind };
 }
 
+function orderedLoad(l: LoadSet): Record<string, unknown> {
+  return { uniform: l.uniform, points: l.points.map((p) => ({ P: p.P, ...(p.a !== undefined ? { a: p.a } : {}) })) };
+}
+
+/** A member case in a fixed key order (SI values, written as they are). */
+function orderedMember(m: MemberInputs): Record<string, unknown> {
+  return {
+    span: m.span, support: m.support, dead: orderedLoad(m.dead), live: orderedLoad(m.live), selfWeight: m.selfWeight,
+    totalLimit: m.totalLimit, liveLimit: m.liveLimit, stressFactor: m.stressFactor,
+    ...(m.allowables !== undefined ? { allowables: m.allowables.map((a) => ({ material: a.material, ...(a.bending !== undefined ? { bending: a.bending } : {}), ...(a.shear !== undefined ? { shear: a.shear } : {}) })) } : {}),
+  };
+}
+
 function orderedMaterial(m: MaterialRef): Record<string, unknown> {
   const rest = Object.keys(m).filter((k) => k !== 'id' && k !== 'name').sort();
   return { id: m.id, name: m.name, ...Object.fromEntries(rest.map((k) => [k, m[k]])) };
@@ -227,7 +240,11 @@ export function serialiseDocument(input: SectionFile | SectionDocument): string 
     defaultMaterial: doc.defaultMaterial,
     ...(ref !== undefined ? { referenceModulus: 'material' in ref ? { material: ref.material } : { value: ref.value, unit: ref.unit } } : {}),
     materials: doc.materials.map(orderedMaterial),
-    sections: doc.sections.map((s) => ({ id: s.id, name: s.name, parts: s.parts.map(orderedPart), ...(s.joints !== undefined && s.joints.length > 0 ? { joints: s.joints.map(orderedJoint) } : {}) })),
+    sections: doc.sections.map((s) => ({
+      id: s.id, name: s.name, parts: s.parts.map(orderedPart), ...(s.joints !== undefined && s.joints.length > 0 ? { joints: s.joints.map(orderedJoint) } : {}),
+      ...(s.member !== undefined ? { member: orderedMember(s.member) } : {}),
+      ...(s.stress !== undefined ? { stress: { N: s.stress.N, Mx: s.stress.Mx, My: s.stress.My, Vx: s.stress.Vx, Vy: s.stress.Vy } } : {}),
+    })),
   };
   // Arrays holding only numbers go on one line. JSON.stringify never puts a raw newline inside a
   // string, so the leading "[\n" anchors the pattern to structure, never to text in a name.

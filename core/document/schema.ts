@@ -16,7 +16,7 @@
  */
 import * as v from 'valibot';
 import { STRESS_UNITS } from '../units/types.ts';
-import { CUTOUT_ROLES, DOCUMENT_FORMAT, DOCUMENT_VERSION, type JointSetting, type MaterialRef, type Part, type SectionFile } from './types.ts';
+import { CUTOUT_ROLES, DOCUMENT_FORMAT, MEMBER_SUPPORTS, DOCUMENT_VERSION, type JointSetting, type MaterialRef, type MemberInputs, type Part, type SectionFile } from './types.ts';
 
 export interface DocumentIssue {
   /** JSON path in the file, e.g. 'parts[2].placement.rotationDeg'; '' for the whole file. */
@@ -173,12 +173,47 @@ export const version2Schema = v.strictObject({
   sections: v.pipe(v.array(sectionV2, 'an array of sections'), v.minLength(1, 'at least one section')),
 }, 'a Sectionsmith document object');
 
+// Member and stress inputs (optional in version 3): physical quantities in SI (m, N, N/m, N·m, Pa).
+const pointLoad = v.strictObject({
+  P: finite('a finite force in N'),
+  a: v.optional(v.pipe(v.number('a position in m from the left end'), v.finite('a position in m from the left end'), v.minValue(0, 'a position in m from the left end, not negative'))),
+}, 'a point load { P (N), a? (m) }');
+const loadSet = v.strictObject({
+  uniform: finite('a finite line load in N/m'),
+  points: v.array(pointLoad, 'an array of point loads'),
+}, 'a load { uniform (N/m), points }');
+const allowable = v.strictObject({
+  material: v.pipe(text('a material id'), v.minLength(1, 'a material id')),
+  bending: v.optional(positive('a positive allowable stress in Pa')),
+  shear: v.optional(positive('a positive allowable stress in Pa')),
+}, 'an allowable { material, bending? (Pa), shear? (Pa) }');
+const memberInputs = v.strictObject({
+  span: positive('a positive span in m'),
+  support: v.picklist(MEMBER_SUPPORTS, `a support: ${MEMBER_SUPPORTS.map((x) => `"${x}"`).join(', ')}`),
+  dead: loadSet,
+  live: loadSet,
+  selfWeight: v.boolean('true or false'),
+  totalLimit: positive('a positive span ratio (L/ratio)'),
+  liveLimit: positive('a positive span ratio (L/ratio)'),
+  stressFactor: positive('a positive factor'),
+  allowables: v.optional(v.array(allowable, 'an array of allowables')),
+}, 'a member case { span, support, dead, live, selfWeight, totalLimit, liveLimit, stressFactor, allowables? }');
+const stressInputs = v.strictObject({
+  N: finite('a finite force in N'),
+  Mx: finite('a finite moment in N·m'),
+  My: finite('a finite moment in N·m'),
+  Vx: finite('a finite force in N'),
+  Vy: finite('a finite force in N'),
+}, 'stress forces { N, Mx, My, Vx, Vy } (N, N·m)');
+
 const section = v.strictObject({
   id: nonBlank('a non-empty string'),
   name: nonBlank('a non-empty name (not only spaces)'),
   parts: v.array(part, 'an array of parts'),
   joints: v.optional(v.array(jointSetting, 'an array of joints')),
-}, 'a section object { id, name, parts, joints? }');
+  member: v.optional(memberInputs),
+  stress: v.optional(stressInputs),
+}, 'a section object { id, name, parts, joints?, member?, stress? }');
 
 export const documentSchema = v.strictObject({
   format: v.literal(DOCUMENT_FORMAT, `"${DOCUMENT_FORMAT}"`),
@@ -289,6 +324,20 @@ function jointIssues(joints: readonly JointSetting[], parts: readonly Part[], at
   });
 }
 
+/**
+ * Allowables naming a material of the file, once each. (A point load beyond the span is not a
+ * file error: the member check refuses it with its position, so the case stays editable.)
+ */
+function memberIssues(m: MemberInputs, at: string, materialIds: ReadonlySet<string>, issues: DocumentIssue[]): void {
+  const seen = new Set<string>();
+  (m.allowables ?? []).forEach((x, k) => {
+    const here = `${at}.member.allowables[${k}].material`;
+    if (!materialIds.has(x.material)) issues.push({ path: here, message: `${here}: expected the id of an entry in materials, got ${JSON.stringify(x.material)}` });
+    if (seen.has(x.material)) issues.push({ path: here, message: `${here}: ${JSON.stringify(x.material)} has an allowable already` });
+    seen.add(x.material);
+  });
+}
+
 /** Cross-field problems of a version 2 document (paths as in that file). */
 export function version2Issues(doc: { readonly sections: readonly { readonly parts: readonly Part[] }[]; readonly materials: readonly MaterialRef[]; readonly defaultMaterial: string | null }): DocumentIssue[] {
   const issues: DocumentIssue[] = [];
@@ -325,6 +374,7 @@ function crossFieldIssues(doc: SectionFile): DocumentIssue[] {
     else sectionNames.set(key, k);
     partListIssues(s.parts, `${at}.parts`, materialIds, issues);
     if (s.joints !== undefined) jointIssues(s.joints, s.parts, at, issues);
+    if (s.member !== undefined) memberIssues(s.member, at, materialIds, issues);
   });
   return issues;
 }

@@ -22,7 +22,7 @@
  */
 import { invariant } from '../invariant.ts';
 import type { LengthUnit } from '../units/types.ts';
-import { DOCUMENT_FORMAT, DOCUMENT_VERSION, SECTION_VIEW_VERSION, type JointSetting, type Part, type Section, type SectionDocument, type SectionFile } from './types.ts';
+import { DOCUMENT_FORMAT, DOCUMENT_VERSION, SECTION_VIEW_VERSION, type JointSetting, type MemberInputs, type Part, type Section, type SectionDocument, type SectionFile } from './types.ts';
 
 /** The section with this id; throws if there is none (a caller's bug). */
 export function sectionById(file: SectionFile, sectionId: string): Section {
@@ -38,6 +38,7 @@ export function sectionView(file: SectionFile, sectionId: string): SectionDocume
   return {
     format: DOCUMENT_FORMAT, version: SECTION_VIEW_VERSION, name: s.name, unit: file.unit, parts: s.parts, materials: file.materials, defaultMaterial: file.defaultMaterial,
     ...(ref !== undefined ? { referenceModulus: ref } : {}), ...(s.joints !== undefined ? { joints: s.joints } : {}),
+    ...(s.member !== undefined ? { member: s.member } : {}), ...(s.stress !== undefined ? { stress: s.stress } : {}),
   };
 }
 
@@ -49,10 +50,20 @@ export function jointsOfParts(joints: readonly JointSetting[] | undefined, parts
   return kept.length === joints.length ? joints : kept;
 }
 
-/** A section object from its parts, name and joints (joints left out when there are none to keep). */
-function sectionOf(id: string, name: string, parts: readonly Part[], joints: readonly JointSetting[] | undefined): Section {
+/** The member case without allowables for materials the file no longer has (they go with their material). */
+export function memberOfMaterials(member: MemberInputs | undefined, known: ReadonlySet<string>): MemberInputs | undefined {
+  if (member?.allowables === undefined || member.allowables.every((a) => known.has(a.material))) return member;
+  return { ...member, allowables: member.allowables.filter((a) => known.has(a.material)) };
+}
+
+/** The inputs a section or view carries besides its parts (member case, stress forces). */
+type Inputs = Pick<Section, 'member' | 'stress'>;
+
+/** A section object from its parts, name, joints and inputs (joints left out when there are none to keep). */
+function sectionOf(id: string, name: string, parts: readonly Part[], joints: readonly JointSetting[] | undefined, inputs: Inputs = {}): Section {
   const kept = jointsOfParts(joints, parts);
-  return kept !== undefined && kept.length > 0 ? { id, name, parts, joints: kept } : { id, name, parts };
+  const extra = { ...(inputs.member !== undefined ? { member: inputs.member } : {}), ...(inputs.stress !== undefined ? { stress: inputs.stress } : {}) };
+  return kept !== undefined && kept.length > 0 ? { id, name, parts, joints: kept, ...extra } : { id, name, parts, ...extra };
 }
 
 /** The view of the first section (what a command reads when no section is named). */
@@ -92,7 +103,7 @@ export function withSectionView(file: SectionFile, sectionId: string, view: Sect
   const s = sectionById(file, sectionId);
   invariant(view.unit === file.unit, `a section view cannot change the document unit (${file.unit} → ${view.unit}); convert the whole file`);
   const materialsChanged = view.materials !== file.materials || view.defaultMaterial !== file.defaultMaterial || view.referenceModulus !== file.referenceModulus;
-  if (view.parts === s.parts && view.name === s.name && view.joints === s.joints && !materialsChanged) return file;
+  if (view.parts === s.parts && view.name === s.name && view.joints === s.joints && view.member === s.member && view.stress === s.stress && !materialsChanged) return file;
   if (view.name !== s.name) {
     const problem = sectionNameProblem(file, view.name, sectionId);
     invariant(problem === null, `renaming section "${s.name}": ${problem ?? ''}`);
@@ -106,7 +117,10 @@ export function withSectionView(file: SectionFile, sectionId: string, view: Sect
     materials: view.materials,
     defaultMaterial: view.defaultMaterial,
     ...(view.referenceModulus !== undefined ? { referenceModulus: view.referenceModulus } : {}),
-    sections: file.sections.map((x) => (x.id === sectionId ? sectionOf(x.id, view.name, view.parts, view.joints) : materialsChanged ? { ...x, parts: keepMaterial(x.parts) } : x)),
+    sections: file.sections.map((x) => {
+      if (x.id === sectionId) return sectionOf(x.id, view.name, view.parts, view.joints, { member: materialsChanged ? memberOfMaterials(view.member, known) : view.member, stress: view.stress });
+      return materialsChanged ? sectionOf(x.id, x.name, keepMaterial(x.parts), x.joints, { member: memberOfMaterials(x.member, known), stress: x.stress }) : x;
+    }),
   };
 }
 
@@ -117,7 +131,7 @@ export function fileFromSection(doc: SectionDocument, sectionId = 's1'): Section
   return {
     format: DOCUMENT_FORMAT, version: DOCUMENT_VERSION, name: doc.name, unit: doc.unit, materials: doc.materials, defaultMaterial: doc.defaultMaterial,
     ...(ref !== undefined ? { referenceModulus: ref } : {}),
-    sections: [sectionOf(sectionId, name, doc.parts, doc.joints)],
+    sections: [sectionOf(sectionId, name, doc.parts, doc.joints, doc)],
   };
 }
 
@@ -150,5 +164,5 @@ export function mapSectionViews(file: SectionFile, fn: (view: SectionDocument) =
   invariant(first, `"${file.name}" has no sections`);
   for (const v of views) invariant(v.unit === first.unit && v.materials === first.materials && v.defaultMaterial === first.defaultMaterial && v.referenceModulus === first.referenceModulus, 'mapSectionViews: every section must come back with the same unit and materials');
   const { referenceModulus: _old, ...rest } = file;
-  return { ...rest, ...(first.referenceModulus !== undefined ? { referenceModulus: first.referenceModulus } : {}), unit: first.unit, materials: first.materials, defaultMaterial: first.defaultMaterial, sections: file.sections.map((s, i) => { const view = views[i] as SectionDocument; return sectionOf(s.id, view.name, view.parts, view.joints); }) };
+  return { ...rest, ...(first.referenceModulus !== undefined ? { referenceModulus: first.referenceModulus } : {}), unit: first.unit, materials: first.materials, defaultMaterial: first.defaultMaterial, sections: file.sections.map((s, i) => { const view = views[i] as SectionDocument; return sectionOf(s.id, view.name, view.parts, view.joints, view); }) };
 }

@@ -134,6 +134,65 @@ export interface JointSetting {
 }
 
 /**
+ * Typed member and stress inputs, stored as physical quantities in fixed SI units (never as the
+ * digits shown in some unit), so a change of document or display unit, saving, reopening,
+ * recovery and undo all keep their meaning. The fields show them converted to the document's
+ * unit system (core/units/systems.ts).
+ */
+export const MEMBER_SUPPORTS = ['simple', 'cantilever', 'fixed', 'propped'] as const;
+export type MemberSupport = (typeof MEMBER_SUPPORTS)[number];
+
+/** A point load: P in N (downward positive), a in m from the left (fixed) end; no `a` = mid-span. */
+export interface PointLoadInput {
+  readonly P: number;
+  readonly a?: number;
+}
+
+/** One kind of load on the member: a uniform line load in N/m (downward positive) and point loads. */
+export interface LoadSet {
+  readonly uniform: number;
+  readonly points: readonly PointLoadInput[];
+}
+
+/** A typed allowable stress for one material (Pa): bending, shear, or both. */
+export interface AllowableInput {
+  readonly material: string;
+  readonly bending?: number;
+  readonly shear?: number;
+}
+
+/**
+ * The member (beam) check's case for one section: span in m, supports, the live load and the
+ * other (dead, superimposed) load apart so each deflection limit sees its own load, the
+ * deflection limits as span ratios (L/ratio), and the stress limit (factor × strength basis, or a
+ * typed allowable per material).
+ */
+export interface MemberInputs {
+  readonly span: number;
+  readonly support: MemberSupport;
+  /** Loads other than live (dead, superimposed dead …). */
+  readonly dead: LoadSet;
+  readonly live: LoadSet;
+  readonly selfWeight: boolean;
+  /** Deflection limit under total load: span / totalLimit. */
+  readonly totalLimit: number;
+  /** Deflection limit under live load alone: span / liveLimit. */
+  readonly liveLimit: number;
+  /** Stress limit = stressFactor × the material's strength basis (unless a typed allowable is given). */
+  readonly stressFactor: number;
+  readonly allowables?: readonly AllowableInput[];
+}
+
+/** The stress panel's forces about the centroid: N and V in N, moments in N·m (N > 0 tension). */
+export interface StressInputs {
+  readonly N: number;
+  readonly Mx: number;
+  readonly My: number;
+  readonly Vx: number;
+  readonly Vy: number;
+}
+
+/**
  * One section (alternative) on its own: its parts with the document's unit and materials.
  * As a view of a SectionFile, `name` is the section's name.
  */
@@ -149,6 +208,10 @@ export interface SectionDocument {
   readonly referenceModulus?: ReferenceModulus;
   /** The section's joint kinds (version 3); absent = every joint takes its default kind. */
   readonly joints?: readonly JointSetting[];
+  /** The section's member check case; absent = the defaults (core/document/inputs.ts). */
+  readonly member?: MemberInputs;
+  /** The section's stress panel forces; absent = all zero. */
+  readonly stress?: StressInputs;
 }
 
 /** One named alternative in a file: its own parts; unit and materials are the file's. */
@@ -160,6 +223,10 @@ export interface Section {
   readonly parts: readonly Part[];
   /** Kinds the user gave this section's joints (see JointSetting); absent = all defaults. */
   readonly joints?: readonly JointSetting[];
+  /** The member check case (SI); absent = the defaults. */
+  readonly member?: MemberInputs;
+  /** The stress panel's forces (SI); absent = all zero. */
+  readonly stress?: StressInputs;
 }
 
 /** What a file holds (version DOCUMENT_VERSION). */

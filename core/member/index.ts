@@ -4,3 +4,4 @@ export * from './check.ts';
 export * from './section-member.ts';
 export * from './shear.ts';
 export * from './verdict.ts';
+export * from './case.ts';

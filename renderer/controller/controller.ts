@@ -9,7 +9,7 @@
  *
  * Timers and the torsion worker come in through ControllerDeps, so tests drive it with fakes.
  */
-import { allSectionViews, newSectionFile, serialiseDocument, type SectionDocument, type SectionFile } from '../../core/document/index.ts';
+import { allSectionViews, newSectionFile, serialiseDocument, withInputsKept, type SectionDocument, type SectionFile } from '../../core/document/index.ts';
 import type { Part } from '../../core/document/types.ts';
 import { propertiesCsv, sectionSvg } from '../../core/export/index.ts';
 import { jointsCsv, jointsExport } from '../../core/export/joints.ts';
@@ -27,7 +27,7 @@ import { documentFromText } from './files.ts';
 import { documentFromDxf, importDxf, looksLikeDxf, sectionDxf, cutParts, summariseDxf, type DxfSummary } from '../../core/dxf/index.ts';
 import { CAUTION } from '../../core/member/check.ts';
 import { keyAction, type KeyInput } from './keymap.ts';
-import { createResultsCache, shapeOutlineResolver, type Results } from './results.ts';
+import { createResultsCache, sameSection, shapeOutlineResolver, type Results } from './results.ts';
 import type { TorsionState } from './torsion-client.ts';
 import { fitView, zoomAt, type View } from './view.ts';
 
@@ -275,7 +275,14 @@ export class AppController implements CommandTarget {
       this.refusedOver = null;
       this.set({ refused: null });
     }
-    if (st.doc !== this.lastDoc || st.gesture !== this.lastGesture) {
+    if (st.doc !== this.lastDoc && st.gesture === this.lastGesture && this.lastDoc !== null && sameSection(this.lastDoc, st.doc)) {
+      // Only a member or stress input changed: the section, its properties and its torsion stand.
+      this.lastDoc = st.doc;
+      const t = this.state.torsion;
+      if (t.kind === 'done') this.set({ torsion: { ...t, doc: st.doc } });
+      else if (t.kind === 'running' || this.torsionTimer !== null) this.scheduleTorsion();
+      this.scheduleRecovery();
+    } else if (st.doc !== this.lastDoc || st.gesture !== this.lastGesture) {
       const docChanged = st.doc !== this.lastDoc;
       this.lastDoc = st.doc;
       this.lastGesture = st.gesture;
@@ -755,7 +762,9 @@ export class AppController implements CommandTarget {
   changeUnit(unit: LengthUnit): void {
     const from = this.editor.getState().doc.unit;
     if (unit === from) return;
-    this.editor.replaceAllSections(`Document unit ${from} → ${unit}`, (doc) => ({ ...scaleDocumentLengths(doc, (v) => convertLength(v, from, unit), isLengthParam), unit }));
+    // Member and stress inputs are physical quantities (SI): they stay as they are; a section still
+    // on the default member case gets it written in first, so its span does not change either.
+    this.editor.replaceAllSections(`Document unit ${from} → ${unit}`, (doc) => ({ ...scaleDocumentLengths(withInputsKept(doc), (v) => convertLength(v, from, unit), isLengthParam), unit }));
     this.set({ view: { ...this.state.view, scale: this.state.view.scale / convertLength(1, from, unit) } });
   }
 

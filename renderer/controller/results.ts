@@ -24,12 +24,21 @@ export interface Results {
   readonly millis: number;
 }
 
+/**
+ * The same section apart from its member and stress inputs (typed loads change no property):
+ * the same parts, unit, name, materials and joints, by identity.
+ */
+export function sameSection(a: SectionDocument | null, b: SectionDocument): boolean {
+  if (a === b) return true;
+  return a !== null && a.parts === b.parts && a.unit === b.unit && a.name === b.name && a.materials === b.materials && a.defaultMaterial === b.defaultMaterial && a.referenceModulus === b.referenceModulus && a.joints === b.joints;
+}
+
 export function createResultsCache(): (doc: SectionDocument) => Results {
   let lastDoc: SectionDocument | null = null;
   let last: Results | null = null;
   let lastValid: SectionProperties | null = null;
   return (doc) => {
-    if (doc === lastDoc && last) return last;
+    if (last && sameSection(lastDoc, doc)) return last;
     const t0 = performance.now();
     let properties: SectionProperties | null = null;
     let diagnostics: readonly Diagnostic[];

@@ -462,6 +462,16 @@ export class Editor {
     this.emit();
   }
 
+  /**
+   * Live editing of the active section's view as a whole (a member or stress input being typed):
+   * shown at once, outside history; commitLive records everything since the first call as one step.
+   */
+  liveDocument(fn: (doc: SectionDocument) => SectionDocument): void {
+    this.liveSnapshot ??= this.doc;
+    this.setDoc(fn(this.doc));
+    this.emit();
+  }
+
   commitLive(label: string): void {
     const before = this.liveSnapshot;
     this.liveSnapshot = null;
@@ -529,7 +539,8 @@ export class Editor {
       id = uniqueSectionId(file);
       const name = options.name?.trim() ?? uniqueSectionName(file, options.duplicate ? `${current.name} (copy)` : `Alternative ${file.sections.length + 1}`);
       const at = file.sections.indexOf(current) + 1;
-      const added = { id, name, parts: options.duplicate ? current.parts : [] };
+      // A new alternative is for the same member: it starts with the active one's member case and forces.
+      const added = { id, name, parts: options.duplicate ? current.parts : [], ...(current.member !== undefined ? { member: current.member } : {}), ...(current.stress !== undefined ? { stress: current.stress } : {}) };
       return { file: { ...file, sections: [...file.sections.slice(0, at), added, ...file.sections.slice(at)] }, active: id };
     });
     return { ok: true, id };

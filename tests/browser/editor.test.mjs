@@ -210,6 +210,9 @@ export async function memberCheckOfTheGirderMatchesTheUniformLoadClosedForm({ pa
   await page.getByTestId('default-material').selectOption('astm-a992');
   await page.getByTestId('result-EIx').waitFor();
   await page.locator('summary', { hasText: 'Member check' }).click();
+  // The example's own case carries a live load and the self-weight: cleared, so w alone acts.
+  await page.getByTestId('member-live-uniform').fill('0');
+  await page.getByTestId('member-selfweight').uncheck();
   await page.getByTestId('member-span').fill('24000');
   await page.getByTestId('member-point').fill('0');
   await page.getByTestId('member-uniform').fill('20');

@@ -1,6 +1,6 @@
 /**
- * The editor's stress view (renderer/app/stress/stress.ts): typed forces with units, and the numbers it
- * shows. Closed forms: flexure formula σ = M·c/I and axial σ = N/A (Gere & Timoshenko, Mechanics of
+ * The editor's stress view (renderer/app/stress/stress.ts): forces typed with units through the
+ * panel's fields (core/units readQuantity, kept in SI), and the numbers it shows. Closed forms: flexure formula σ = M·c/I and axial σ = N/A (Gere & Timoshenko, Mechanics of
  * Materials, §5.5 and §1.2); kern of a circle, radius d/8 (common practice; Roark, kern of a solid
  * circle). Unit factors are exact by definition (1 ft = 12 in).
  */
@@ -8,17 +8,30 @@ import { describe, expect, it } from 'vitest';
 import type { Part, SectionDocument } from '../../core/document/types.ts';
 import { builtInMaterial, materialInSI } from '../../core/materials/index.ts';
 import { sectionFromDocument } from '../../core/section/index.ts';
-import { computeStress, stressUnits, toStressUnit, type ForceTexts } from '../../renderer/app/stress/stress.ts';
+import { computeStress, stressFields, stressUnits, toStressUnit, type StressKey } from '../../renderer/app/stress/stress.ts';
+import { readField } from '../../renderer/app/shell/quantity-text.ts';
+import type { StressInputs } from '../../core/document/types.ts';
 import { emptyDoc } from './helpers.ts';
 
 const common = { placement: { x: 0, y: 0, rotationDeg: 0, mirror: false }, operation: 'add', material: null, visible: true } as const;
 const plate = (b: number, h: number): Part => ({ ...common, id: 'p', name: 'plate', type: 'rectangle', width: b, height: h });
 const round = (d: number): Part => ({ ...common, id: 'c', name: 'round', type: 'circle', diameter: d });
 const docOf = (part: Part, over: Partial<SectionDocument> = {}): SectionDocument => ({ ...emptyDoc(), parts: [part], ...over });
-const forces = (f: Partial<ForceTexts>): ForceTexts => ({ N: '', Mx: '', My: '', Vx: '', Vy: '', ...f });
+type Texts = Partial<Record<StressKey, string>>;
+/** The texts typed into the panel's fields, read as each field reads them (SI); throws the field's refusal. */
+function forces(doc: SectionDocument, f: Texts): StressInputs {
+  const fields = stressFields(doc);
+  const out: Record<StressKey, number> = { N: 0, Mx: 0, My: 0, Vx: 0, Vy: 0 };
+  for (const [k, text] of Object.entries(f) as [StressKey, string][]) {
+    const r = readField(text, fields[k]);
+    if (!r.ok) throw new Error(r.message);
+    out[k] = r.si;
+  }
+  return out;
+}
 
-function run(doc: SectionDocument, f: Partial<ForceTexts>) {
-  const r = computeStress(doc, sectionFromDocument(doc).properties, forces(f));
+function run(doc: SectionDocument, f: Texts) {
+  const r = computeStress(doc, sectionFromDocument(doc).properties, forces(doc, f));
   if (!r.ok) throw new Error(r.message);
   return r.view;
 }
@@ -46,11 +59,10 @@ describe('stress view: forces with units', () => {
 
   it('a force unit on a moment, or a word, is refused with the input named', () => {
     const doc = docOf(plate(100, 200));
-    const bad = computeStress(doc, sectionFromDocument(doc).properties, forces({ Mx: '50 kN' }));
-    expect(bad.ok).toBe(false);
-    expect(!bad.ok && bad.message).toMatch(/^Mx: "50 kN" is a force, not a moment/);
-    const word = computeStress(doc, sectionFromDocument(doc).properties, forces({ N: 'ten' }));
-    expect(!word.ok && word.message).toMatch(/^N: "ten" is not a number/);
+    expect(() => forces(doc, { Mx: '50 kN' })).toThrow(/^Mx: "50 kN" is a force, not a moment/);
+    expect(() => forces(doc, { N: 'ten' })).toThrow(/^N: "ten" is not a number/);
+    expect(() => forces(doc, { N: '' })).toThrow(/^N: enter a value/);
+    expect(() => forces(doc, { N: '3 furlongs' })).toThrow(/^N: unknown unit "furlongs"/);
   });
 
   it('a pure axial load gives σ = N/A everywhere and no neutral axis', () => {

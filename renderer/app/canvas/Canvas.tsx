@@ -22,8 +22,7 @@ import { selectionDimensionOverlay } from './DimensionLines.tsx';
 import { arcOfSegment, ringVertexCount } from '../../../core/geometry/ring.ts';
 import type { Region } from '../../../core/geometry/types.ts';
 import { stressAt } from '../../../core/stress/index.ts';
-import { pascalsTo } from '../../../core/materials/index.ts';
-import { stressColour, type StressView } from '../stress/stress.ts';
+import { stressColour, toStressUnit, type StressView } from '../stress/stress.ts';
 
 export type { Overlays } from '../../controller/controller.ts';
 
@@ -327,7 +326,7 @@ function stressOverlay({ sv, view, overlays, width, height }: { sv: StressView; 
   if (overlays.stress) {
     // Legend: the symmetric scale ±|σ|max, compression left, in the panel's stress unit.
     const w = 180, x0 = RULER + 14, y0 = height - 52;
-    const half = formatSig(pascalsTo(sv.scale, sv.unit), 3);
+    const half = formatSig(toStressUnit(sv.scale, sv.unit), 3);
     const stops: (string | number)[] = [];
     for (let i = 0; i <= 8; i++) stops.push(i / 8, stressColour(((i - 4) / 4) * sv.scale, sv.scale));
     items.push(

@@ -1,18 +1,23 @@
 /**
  * The member check: the section as a beam of a given span, supports and loads (core/member).
- * Deflection, span/deflection against a chosen common-practice limit, the largest moment and
- * the bending stress per material, with the deflected shape and the moment diagram drawn.
- * Inputs in the document unit and kN (kip for inch documents); core works in SI.
+ * The case is stored with the section as physical quantities (core/document: MemberInputs, SI),
+ * so it is saved, undone and kept through unit changes like any edit; every box reads through
+ * core/units (a bare number in the unit shown, or any unit typed). Dead and live loads are given
+ * apart, each deflection limit judged under its own load (IBC Table 1604.3 common practice:
+ * L/240 total, L/360 live, editable); bending stress in every material against factor ×
+ * strength basis or a typed allowable; shear stress at the neutral axis; each part's use ratio;
+ * the governing criterion named, and any ratio over 100 % turns the whole verdict red. The
+ * deflected shape and the moment diagram are drawn.
  */
-import { useDeferredValue, useEffect, useMemo, useState, type ReactElement } from 'react';
-import type { SectionDocument } from '../../../core/document/types.ts';
-import { materialPiecesFromDocument } from '../../../core/materials/index.ts';
-import { COMMON_DEFLECTION_RATIOS, LIMIT_CAUTION, STRESS_FACTOR_MEANING, SUPPORTS, sectionMemberCheck, type SectionMemberInput, type Support } from '../../../core/member/index.ts';
-import { convertLength, formatSig } from '../../../core/units/index.ts';
-import { parseNumber } from '../shell/numbers.ts';
-import type { MemberCase } from '../report/report-input.ts';
+import { useDeferredValue, useMemo, useState, type ReactElement } from 'react';
+import { memberInputsOf } from '../../../core/document/inputs.ts';
+import type { MemberInputs, MemberSupport, SectionDocument } from '../../../core/document/types.ts';
+import { DEFLECTION_LIMIT_MEANING, LIMIT_CAUTION, STRESS_FACTOR_MEANING, SUPPORTS, type Support } from '../../../core/member/index.ts';
+import { formatSig } from '../../../core/units/index.ts';
+import { QuantityInput } from '../shell/QuantityInput.tsx';
+import type { InputEditing } from '../shell/quantity-text.ts';
+import { allowableFields, allowableOf, FIELD_RANGE, memberFields, memberOutcome, memberUnits, memberValue, readMemberField, sectionMaterials, shown, withAllowable, withMemberValue, type MemberFieldKey } from './member-model.ts';
 
-const N_PER_KIP = 4448.2216152605; // exact by definition (1 lbf = 4.4482216152605 N)
 const SUPPORT_NAMES: Readonly<Record<Support, string>> = { simple: 'simply supported', cantilever: 'cantilever (fixed at left)', fixed: 'fixed at both ends', propped: 'propped cantilever' };
 
 function Plot({ xs, ys, label, unit, testid, flip, note }: { xs: readonly number[]; ys: readonly number[]; label: string; unit: string; testid: string; flip: boolean; note?: string }): ReactElement {
@@ -43,93 +48,146 @@ function Plot({ xs, ys, label, unit, testid, flip, note }: { xs: readonly number
   );
 }
 
-/** `onCase` hears the load case whenever the open panel computes one (null when its inputs are unusable), for the report. */
-export function MemberPanel({ doc: current, valid, onCase }: { doc: SectionDocument; valid: boolean; onCase?: (c: MemberCase | null) => void }): ReactElement {
+export function MemberPanel({ doc: current, valid, editing }: { doc: SectionDocument; valid: boolean; editing: InputEditing }): ReactElement {
   // Computed only while the panel is open, and a step behind a drag so dragging stays smooth.
   const doc = useDeferredValue(current);
   const [open, setOpen] = useState(false);
-  const inch = doc.unit === 'in' || doc.unit === 'ft';
-  const force = inch ? 'kip' : 'kN';
-  const line = inch ? 'kip/ft' : 'kN/m';
-  const [f, setF] = useState({ span: inch ? '240' : '6000', P: '10', a: '', w: '0', ratio: '360', self: false, support: 'simple' as Support });
-  const set = (k: keyof typeof f, v: string | boolean): void => setF((o) => ({ ...o, [k]: v }));
+  const [problems, setProblems] = useState<Readonly<Record<string, string>>>({});
+  const problemList = Object.values(problems);
+  const m = memberInputsOf(current);
+  const fields = memberFields(current.unit);
+  const u = memberUnits(current.unit);
+  const edit = (fn: (m: MemberInputs) => MemberInputs): void => editing.live((d) => ({ ...d, member: fn(memberInputsOf(d)) }));
+  const problem = (key: string) => (message: string | null): void =>
+    setProblems((o) => {
+      if (message === null) {
+        const { [key]: _gone, ...rest } = o;
+        return rest;
+      }
+      return { ...o, [key]: message };
+    });
+  const box = (key: MemberFieldKey, testid: string, caption: string, emptyMeans?: string): ReactElement => (
+    <QuantityInput
+      field={fields[key]}
+      caption={caption}
+      si={memberValue(m, key)}
+      testid={testid}
+      read={(t, f) => readMemberField(t, f, FIELD_RANGE[key])}
+      {...(emptyMeans !== undefined ? { emptyMeans } : {})}
+      onLive={(si) => edit((x) => withMemberValue(x, key, si))}
+      onCommit={() => editing.commit(`Set ${fields[key].label}`)}
+      onCancel={() => editing.cancel()}
+      onProblem={problem(key)}
+    />
+  );
+  const setNow = (label: string, fn: (m: MemberInputs) => MemberInputs): void => {
+    edit(fn);
+    editing.commit(label);
+  };
 
-  const outcome = useMemo(() => {
-    if (!open) return { error: '' };
-    if (!valid) return { error: 'The section needs valid geometry first.' };
-    const nums: Record<string, number> = {};
-    for (const [k, label] of [['span', 'span L'], ['P', 'point load P'], ['w', 'uniform load w'], ['ratio', 'limit L/…']] as const) {
-      const r = parseNumber(f[k], label);
-      if (!r.ok) return { error: r.message };
-      nums[k] = r.value;
-    }
-    const a = f.a.trim() === '' ? (nums.span as number) / 2 : parseNumber(f.a, 'load position a');
-    const at = typeof a === 'number' ? a : a.ok ? a.value : NaN;
-    if (!Number.isFinite(at)) return { error: typeof a === 'number' ? 'bad position' : (a as { message: string }).message };
-    const pieces = materialPiecesFromDocument(doc);
-    if (pieces.issues.length > 0 || pieces.pieces.length === 0) return { error: `Materials: ${pieces.issues.join('; ') || 'choose a material (Materials and stiffness)'}` };
-    const P = (nums.P as number) * (inch ? N_PER_KIP : 1000);
-    // kip/ft → N/m: 1 kip/ft = 4448.2216152605 N / 0.3048 m (exact factors).
-    const w = (nums.w as number) * (inch ? N_PER_KIP / 0.3048 : 1000);
-    const input: SectionMemberInput = { span: nums.span as number, support: f.support, points: P !== 0 ? [{ P, a: at }] : [], uniform: w, selfWeight: f.self, limitRatio: nums.ratio as number };
-    const r = sectionMemberCheck(pieces.pieces, doc.unit, input);
-    return r.ok ? { result: r.result, input } : { error: r.issues.join(' ') };
-  }, [doc, valid, f, inch, open]);
-  useEffect(() => {
-    if (open) onCase?.('input' in outcome && outcome.input ? { unit: doc.unit, input: outcome.input } : null);
-  }, [open, outcome, doc.unit, onCase]);
-
-  const lenOut = (m: number): number => convertLength(m, 'm', inch ? 'in' : 'mm');
-  const lu = inch ? 'in' : 'mm';
-  const mom = (nm: number): number => (inch ? nm / N_PER_KIP / 0.3048 : nm / 1000);
-  const mu = inch ? 'kip·ft' : 'kN·m';
-  const su = inch ? 'ksi' : 'MPa';
-  const stress = (pa: number): number => (inch ? pa / 6894757.293168361 : pa / 1e6);
-  const r = 'result' in outcome ? outcome.result : null;
+  const outcome = useMemo(() => (open ? memberOutcome(doc, valid) : null), [open, doc, valid]);
+  const materials = useMemo(() => (open && valid ? sectionMaterials(doc) : []), [open, valid, doc.parts, doc.materials, doc.defaultMaterial]);
+  const k = shown(doc.unit);
+  const r = outcome?.kind === 'done' && problemList.length === 0 ? outcome : null;
+  const res = r?.result;
+  const total = res?.verdict.criteria.find((c) => c.kind === 'deflection-total');
+  const live = res?.verdict.criteria.find((c) => c.kind === 'deflection-live');
+  const pct = (x: number | undefined): string => (x === undefined ? '—' : `${formatSig(100 * x, 3)} %`);
 
   return (
     <details className="member" data-testid="member-panel" onToggle={(e) => setOpen(e.currentTarget.open)}>
-      <summary>Member check: span, supports, loads, deflection</summary>
+      <summary>Member check: span, supports, loads, deflection, stress</summary>
+      <p className="muted small">A bare number is read in the unit shown, or type one (“40 ft”, “2 kip/ft”). The case is kept with this section and saved in the file.</p>
       <div className="grid4">
-        <label className="field"><span>L ({doc.unit})</span><input data-testid="member-span" value={f.span} onChange={(e) => set('span', e.target.value)} /></label>
+        {box('span', 'member-span', 'L')}
         <label className="field" style={{ gridColumn: 'span 3' }}>
           <span>supports</span>
-          <select data-testid="member-support" value={f.support} onChange={(e) => set('support', e.target.value)}>
+          <select data-testid="member-support" value={m.support} onChange={(e) => setNow('Set supports', (x) => ({ ...x, support: e.target.value as MemberSupport }))}>
             {SUPPORTS.map((s) => <option key={s} value={s}>{SUPPORT_NAMES[s]}</option>)}
           </select>
         </label>
-        <label className="field"><span>P ({force})</span><input data-testid="member-point" value={f.P} onChange={(e) => set('P', e.target.value)} /></label>
-        <label className="field"><span>at a ({doc.unit})</span><input data-testid="member-point-at" value={f.a} placeholder="mid" onChange={(e) => set('a', e.target.value)} /></label>
-        <label className="field"><span>w ({line})</span><input data-testid="member-uniform" value={f.w} onChange={(e) => set('w', e.target.value)} /></label>
-        <label className="field"><span>limit L/</span><input data-testid="member-limit" list="deflection-ratios" value={f.ratio} onChange={(e) => set('ratio', e.target.value)} /></label>
       </div>
-      <datalist id="deflection-ratios">{COMMON_DEFLECTION_RATIOS.map((n) => <option key={n} value={n} />)}</datalist>
-      <label className="check"><input type="checkbox" data-testid="member-selfweight" checked={f.self} onChange={(e) => set('self', e.target.checked)} /> include self-weight</label>
-      {'error' in outcome && outcome.error && <p className="error" data-testid="member-error">{outcome.error}</p>}
-      {r && (
+      <p className="small" style={{ margin: '4px 0 0' }}>Dead and other loads (downward +)</p>
+      <div className="grid4">
+        {box('deadW', 'member-uniform', 'w')}
+        {box('deadP', 'member-point', 'P')}
+        {box('deadA', 'member-point-at', 'at a', m.support === 'cantilever' ? 'free end' : 'mid')}
+        <span />
+      </div>
+      <p className="small" style={{ margin: '4px 0 0' }}>Live load (downward +)</p>
+      <div className="grid4">
+        {box('liveW', 'member-live-uniform', 'wL')}
+        {box('liveP', 'member-live-point', 'PL')}
+        {box('liveA', 'member-live-point-at', 'at a', m.support === 'cantilever' ? 'free end' : 'mid')}
+        <span />
+      </div>
+      <div className="grid4">
+        {box('totalLimit', 'member-limit', 'total: L/')}
+        {box('liveLimit', 'member-live-limit', 'live: L/')}
+        {box('stressFactor', 'member-stress-factor', 'stress factor')}
+        <span />
+      </div>
+      <p className="muted small" data-testid="member-limit-meaning">Deflection limits: {DEFLECTION_LIMIT_MEANING}. Defaults L/240 and L/360; stress factor 1. {STRESS_FACTOR_MEANING}</p>
+      {materials.length > 0 && (
+        <div className="grid4" data-testid="member-allowables">
+          {materials.flatMap((mat) => {
+            const f = allowableFields(mat.name, current.unit);
+            return (['bending', 'shear'] as const).map((which) => (
+              <QuantityInput
+                key={`${mat.id}-${which}`}
+                field={f[which]}
+                caption={`${which === 'bending' ? 'allowable σ' : 'allowable τ'}, ${mat.name}`}
+                si={allowableOf(m, mat.id, which)}
+                testid={`member-${which === 'bending' ? 'allowable' : 'shear-allowable'}-${mat.id}`}
+                emptyMeans="factor × strength"
+                read={(t, fl) => readMemberField(t, fl, 'positive')}
+                onLive={(si) => edit((x) => withAllowable(x, mat.id, which, si))}
+                onCommit={() => editing.commit(`Set ${f[which].label}`)}
+                onCancel={() => editing.cancel()}
+                onProblem={problem(`${mat.id}-${which}`)}
+                className="field wide"
+              />
+            ));
+          })}
+        </div>
+      )}
+      <label className="check"><input type="checkbox" data-testid="member-selfweight" checked={m.selfWeight} onChange={(e) => { const on = e.target.checked; setNow(on ? 'Include self-weight' : 'Leave out self-weight', (x) => ({ ...x, selfWeight: on })); }} /> include self-weight</label>
+      {problemList.length > 0 && <p className="error" data-testid="member-error">{problemList.join(' ')} The section keeps its earlier value.</p>}
+      {problemList.length === 0 && outcome && outcome.kind !== 'done' && <p className={outcome.kind === 'error' ? 'error' : 'muted'} data-testid={outcome.kind === 'error' ? 'member-error' : 'member-no-load'}>{outcome.message}</p>}
+      {r && res && (
         <div className="result-table">
+          <p className={res.verdict.passes ? 'verdict ok' : 'verdict bad'} data-testid="member-overall-verdict" data-passes={res.verdict.passes ? 'true' : 'false'}>{res.verdict.summary}</p>
           <table>
             <tbody>
-              <tr><th>δmax</th><td className="value" data-testid="result-deflectionMax" data-value={String(r.deflectionMax)}>{formatSig(lenOut(r.deflectionMax), 4)}</td><td className="unit">{lu}</td><td className="label">at {formatSig(lenOut(r.deflectionAt), 4)} {lu}</td></tr>
-              <tr><th>L/δ</th><td className="value" data-testid="result-spanOverDeflection" data-value={String(r.spanOverDeflection)}>{formatSig(r.spanOverDeflection, 4)}</td><td className="unit" /><td className="label" data-testid="member-verdict">{r.limit ? `${r.limit.verdict} L/${r.limit.ratio}` : ''}</td></tr>
-              <tr><th>Mmax</th><td className="value" data-testid="result-momentMax" data-value={String(r.momentMax)}>{formatSig(mom(r.momentMax), 4)}</td><td className="unit">{mu}</td><td className="label">at {formatSig(lenOut(r.momentAt), 4)} {lu}</td></tr>
-              {r.stresses.map((s) => (
-                <tr key={s.id}><th>σ</th><td className="value">{formatSig(stress(s.maxTension), 3)} / {formatSig(stress(s.maxCompression), 3)}</td><td className="unit">{su}</td><td className="label">{s.name}: tension / compression{s.strengthRatio !== undefined ? `, ${formatSig(100 * s.strengthRatio, 3)} % of ${s.strengthLabel}` : ''}</td></tr>
+              <tr><th>δmax</th><td className="value" data-testid="result-deflectionMax" data-value={String(res.deflectionMax)} data-shown={String(k.deflection(res.deflectionMax))}>{formatSig(k.deflection(res.deflectionMax), 4)}</td><td className="unit">{u.deflection}</td><td className="label">total load, at {formatSig(k.length(res.deflectionAt), 4)} {u.length}</td></tr>
+              <tr><th>L/δ</th><td className="value" data-testid="result-spanOverDeflection" data-value={String(res.spanOverDeflection)}>{formatSig(res.spanOverDeflection, 4)}</td><td className="unit" /><td className="label" data-testid="member-verdict">{total ? `${total.status === 'pass' ? 'within' : 'exceeds'} L/${m.totalLimit} (total, ${pct(total.ratio)})` : ''}; {live?.status === 'not checked' ? `live L/${m.liveLimit}: not checked (no live load)` : live ? `${live.status === 'pass' ? 'within' : 'exceeds'} L/${m.liveLimit} (live, ${pct(live.ratio)})` : ''}</td></tr>
+              {res.liveDeflectionMax !== undefined && <tr><th>δlive</th><td className="value" data-testid="result-liveDeflectionMax" data-value={String(res.liveDeflectionMax)}>{formatSig(k.deflection(res.liveDeflectionMax), 4)}</td><td className="unit">{u.deflection}</td><td className="label">live load alone</td></tr>}
+              <tr><th>Mmax</th><td className="value" data-testid="result-momentMax" data-value={String(res.momentMax)}>{formatSig(k.moment(res.momentMax), 4)}</td><td className="unit">{u.moment}</td><td className="label">at {formatSig(k.length(res.momentAt), 4)} {u.length}</td></tr>
+              <tr><th>Vmax</th><td className="value" data-testid="result-shearMax" data-value={String(res.shearMax.value)}>{formatSig(k.force(Math.abs(res.shearMax.value)), 4)}</td><td className="unit">{u.force}</td><td className="label">at {formatSig(k.length(res.shearMax.at), 4)} {u.length}</td></tr>
+              {r.parts.map((s, i) => (
+                <tr key={`${s.name}${i}`} data-testid="member-part-use" data-ratio={s.ratio === undefined ? '' : String(s.ratio)} className={s.ratio !== undefined && s.ratio > 1 ? 'bad' : undefined}>
+                  <th>σ</th>
+                  <td className="value">{formatSig(k.stress(s.tension), 3)} / {formatSig(k.stress(s.compression), 3)}</td>
+                  <td className="unit">{u.stress}</td>
+                  <td className="label">{s.name}: tension / compression; use {pct(s.ratio)}{s.ratio === undefined ? ' (no limit: give the material a strength or type an allowable)' : ''}</td>
+                </tr>
+              ))}
+              {res.shearStresses.map((t) => (
+                <tr key={`tau-${t.materialId}`}><th>τ</th><td className="value">{formatSig(k.stress(t.tau), 3)}</td><td className="unit">{u.stress}</td><td className="label">at the neutral axis, V·Q/(I·t), in {r.materials.find((x) => x.id === t.materialId)?.name ?? t.materialId}</td></tr>
               ))}
             </tbody>
           </table>
-          <p className={r.verdict.passes ? 'verdict ok' : 'verdict bad'} data-testid="member-overall-verdict" data-passes={r.verdict.passes ? 'true' : 'false'}>{r.verdict.summary}</p>
           <ul className="small" data-testid="member-criteria">
-            {r.verdict.criteria.map((c) => (
-              <li key={`${c.kind}${c.materialId ?? ''}`} className={c.status === 'fail' ? 'bad' : c.status === 'pass' ? 'ok' : 'muted'} data-testid="member-criterion" data-kind={c.kind} data-ratio={c.ratio === undefined ? '' : String(c.ratio)}>
-                {c.status === 'not checked' ? `not checked: ${c.label} (${c.reason ?? ''})` : `${c.status === 'fail' ? 'FAILS' : 'passes'}: ${c.label} at ${formatSig((c.ratio ?? NaN) * 100, 3)} % of its limit (${c.limitBasis})`}
+            {res.verdict.criteria.map((c) => (
+              <li key={`${c.kind}${c.materialId ?? ''}`} className={c.status === 'fail' ? 'bad' : c.status === 'pass' ? 'ok' : 'muted'} data-testid="member-criterion" data-kind={c.kind} data-status={c.status} data-ratio={c.ratio === undefined ? '' : String(c.ratio)}>
+                {c === res.verdict.governing ? 'GOVERNS, ' : ''}
+                {c.status === 'not checked' ? `not checked: ${c.label} (${c.reason ?? ''})` : `${c.status === 'fail' ? 'FAILS' : 'passes'}: ${c.label} at ${pct(c.ratio)} of its limit (${c.limitBasis})`}
               </li>
             ))}
           </ul>
-          <p className="muted small">{STRESS_FACTOR_MEANING}</p>
           {/* Deflection is downward positive: drawn below the beam line, so the shape sags under a downward load. */}
-          <Plot xs={r.diagram.x.map(lenOut)} ys={r.diagram.deflection.map(lenOut)} label="deflected shape" unit={lu} testid="member-deflection-plot" flip={false} note="downward drawn down" />
-          <Plot xs={r.diagram.x.map(lenOut)} ys={r.diagram.moment.map(mom)} label="bending moment" unit={mu} testid="member-moment-plot" flip={false} note="sagging + drawn below" />
+          <Plot xs={res.diagram.x.map(k.length)} ys={res.diagram.deflection.map(k.deflection)} label="deflected shape" unit={u.deflection} testid="member-deflection-plot" flip={false} note="downward drawn down" />
+          <Plot xs={res.diagram.x.map(k.length)} ys={res.diagram.moment.map(k.moment)} label="bending moment" unit={u.moment} testid="member-moment-plot" flip={false} note="sagging + drawn below" />
           <p className="caution">{LIMIT_CAUTION}</p>
         </div>
       )}

@@ -159,7 +159,7 @@ export function SectionReport({ doc, fileName, display, sig, torsion, member, fi
   }
   const notes = [
     ...(solved ? [] : [torsion.kind === 'failed' ? `Torsion was not computed (${torsion.message}); the report leaves J and Cw out.` : 'Torsion is still being computed; J, Cw and the mesh note appear here when it finishes.']),
-    ...(member ? [] : ['No member check: open "Member check" and enter a span and loads to include one.']),
+    ...(member ? [] : ['No member check: give this section a span and loads under "Member check" to include one.']),
   ];
   return <ReportView input={built.input} stem={fileStem(fileName)} notes={notes} onClose={onClose} />;
 }

@@ -3,18 +3,19 @@
  * the annotated drawing from core/export, the properties in the chosen display units and
  * figures, the torsion constants when the finite-element solve of this very document is done
  * (with its mesh size and error estimate for the method notes), the materials of the parts,
- * and the member check of the member panel's load case, recomputed for this document.
+ * and the member check of the section's stored member case (core/document: MemberInputs).
  *
- * Units: the document's length unit in; tables in the display set given. Forces and stresses
- * follow the member panel: kN, kN/m, kN·m and MPa for metric documents; kip, kip/ft, kip·ft and
- * ksi for inch and foot documents (exact factors in core/materials/quantities.ts).
+ * Units: the document's length unit in; tables in the display set given. Forces, line loads,
+ * moments and stresses in the document's unit system (core/units/systems.ts): kN, kN/m, kN·m and
+ * MPa for metric documents; kip, kip/ft, kip·ft and ksi for inch and foot documents. Every factor
+ * comes from core/units.
  * Pure: no DOM, no clock (the caller passes the date).
  */
 import type { SectionDocument } from '../../../core/document/types.ts';
 import { sectionSvg } from '../../../core/export/index.ts';
 import { jointsExport } from '../../../core/export/joints.ts';
 import type { ShearLoads } from '../../../core/joints/index.ts';
-import { materialPiecesFromDocument, newtonsTo, pascalsTo, type ForceUnit, type StressUnit } from '../../../core/materials/index.ts';
+import { materialPiecesFromDocument } from '../../../core/materials/index.ts';
 import { LIMIT_CAUTION, sectionMemberCheck, type SectionMemberInput, type Support } from '../../../core/member/index.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
 import type { ReportInput, ReportTable } from '../../../core/report/index.ts';
@@ -45,24 +46,19 @@ export interface SectionReportOptions {
 
 export type SectionReport = { readonly ok: true; readonly input: ReportInput } | { readonly ok: false; readonly errors: readonly string[] };
 
-/** Units of forces for the member lines: the member panel's choice for the document unit. */
+/** Units of the member lines: the document's unit system (core/units/systems.ts). */
 export interface ForceUnits {
-  readonly force: ForceUnit;
+  readonly force: string;
   readonly line: string;
   readonly moment: string;
-  readonly stress: StressUnit;
+  readonly stress: string;
+  /** Deflections and positions along the member in the report: in or mm. */
   readonly length: LengthUnit;
-  /** N/m → line unit, N·m → moment unit. */
-  readonly perLine: number;
-  readonly perMoment: number;
 }
 
 export function forceUnitsFor(unit: LengthUnit): ForceUnits {
-  const inch = unit === 'in' || unit === 'ft';
-  // 1 kip = 4448.2216152605 N and 1 ft = 0.3048 m, exact by definition.
-  return inch
-    ? { force: 'kip', line: 'kip/ft', moment: 'kip·ft', stress: 'ksi', length: 'in', perLine: 0.3048 / 4448.2216152605, perMoment: 1 / (4448.2216152605 * 0.3048) }
-    : { force: 'kN', line: 'kN/m', moment: 'kN·m', stress: 'MPa', length: 'mm', perLine: 1 / 1000, perMoment: 1 / 1000 };
+  const s = unitSystem(unit);
+  return { force: s.units.force, line: s.units.lineLoad, moment: s.units.moment, stress: s.units.stress, length: s.deflection as LengthUnit };
 }
 
 const SUPPORT_WORDS: Readonly<Record<Support, string>> = { simple: 'simply supported', cantilever: 'cantilever fixed at the left end', fixed: 'fixed at both ends', propped: 'propped cantilever' };
@@ -103,7 +99,7 @@ export function materialLines(doc: SectionDocument): string[] {
   const u = forceUnitsFor(doc.unit);
   // Densities in the document's unit system (lb/ft³ or kg/m³, core/units).
   const density = unitSystem(doc.unit).units.density;
-  const s = (pa: number): string => `${formatSig(pascalsTo(pa, u.stress), 4)} ${u.stress}`;
+  const s = (pa: number): string => `${formatSig(fromSI(pa, 'stress', u.stress), 4)} ${u.stress}`;
   return found.pieces.map((piece, i) => {
     const m = piece.material;
     const strength = Number.isFinite(m.fy) ? `, ${m.strengthBasis === 'yield' ? 'fy' : m.strengthBasis === 'tensile' ? 'tensile strength' : 'reference Fb'} = ${s(m.fy)}` : '';
@@ -122,20 +118,30 @@ export function memberLines(doc: SectionDocument, member: MemberCase | null): st
   if (!r.ok) return [`The member check could not run: ${r.issues.join('; ')}.`];
   const u = forceUnitsFor(doc.unit);
   const g = (v: number, n = 4): string => formatSig(v, n);
+  const force = (n: number): string => `${g(fromSI(n, 'force', u.force))} ${u.force}`;
+  const line = (npm: number): string => `${g(fromSI(npm, 'lineLoad', u.line))} ${u.line}`;
+  const stress = (pa: number): string => `${g(fromSI(pa, 'stress', u.stress), 3)} ${u.stress}`;
   const len = (metres: number): string => `${g(convertLength(metres, 'm', u.length))} ${u.length}`;
   const docLen = (v: number): string => `${g(v)} ${doc.unit}`;
   const loads = [
-    ...input.points.map((p) => `point load ${g(newtonsTo(p.P, u.force))} ${u.force} at ${docLen(p.a)} from the left end`),
-    `uniform load ${g(input.uniform * u.perLine)} ${u.line}`,
-    input.selfWeight ? `self-weight ${g((r.selfWeight ?? 0) * u.perLine)} ${u.line} included` : 'self-weight not included',
+    ...input.points.map((p) => `point load ${force(p.P)} at ${docLen(p.a)} from the left end`),
+    `uniform load ${line(input.uniform)}`,
+    ...(input.live !== undefined && (input.live.uniform !== 0 || input.live.points.length > 0)
+      ? [`live uniform load ${line(input.live.uniform)}`, ...input.live.points.map((p) => `live point load ${force(p.P)} at ${docLen(p.a)} from the left end`)]
+      : ['no live load']),
+    input.selfWeight ? `self-weight ${line(r.selfWeight ?? 0)} included` : 'self-weight not included',
   ];
   const res = r.result;
+  const pct = (x: number | undefined): string => (x === undefined ? '—' : `${g(100 * x, 3)} %`);
   const lines = [
     `Beam ${SUPPORT_WORDS[input.support]}, span ${docLen(input.span)}; ${loads.join('; ')}.`,
     `Largest deflection ${len(Math.abs(res.deflectionMax))} at ${len(res.deflectionAt)}; span / deflection = ${g(res.spanOverDeflection)}.`,
     ...(res.limit ? [`${res.limit.passes ? 'Within' : 'Exceeds'} the common-practice limit L/${res.limit.ratio} (allowed ${len(res.limit.allowed)}).`] : []),
-    `Largest bending moment ${g(Math.abs(res.momentMax) * u.perMoment)} ${u.moment} at ${len(res.momentAt)}.`,
-    ...res.stresses.map((s) => `Bending stress in ${s.name}: tension ${g(pascalsTo(s.maxTension, u.stress), 3)} ${u.stress}, compression ${g(pascalsTo(-s.maxCompression, u.stress), 3)} ${u.stress}${s.strengthRatio !== undefined ? ` (${g(100 * s.strengthRatio, 3)} % of the ${s.strengthLabel})` : ''}.`),
+    ...(res.liveDeflectionMax !== undefined && res.liveLimit ? [`Live-load deflection ${len(Math.abs(res.liveDeflectionMax))}: ${res.liveLimit.passes ? 'within' : 'exceeds'} the common-practice limit L/${res.liveLimit.ratio} (allowed ${len(res.liveLimit.allowed)}).`] : []),
+    `Largest bending moment ${g(Math.abs(fromSI(res.momentMax, 'moment', u.moment)))} ${u.moment} at ${len(res.momentAt)}.`,
+    ...res.stresses.map((s) => `Bending stress in ${s.name}: tension ${stress(s.maxTension)}, compression ${stress(-s.maxCompression)}${s.strengthRatio !== undefined ? ` (${g(100 * s.strengthRatio, 3)} % of the ${s.strengthLabel})` : ''}.`),
+    ...res.verdict.criteria.map((c) => (c.status === 'not checked' ? `Not checked: ${c.label} (${c.reason ?? ''}).` : `${c.status === 'fail' ? 'FAILS' : 'Passes'}: ${c.label} at ${pct(c.ratio)} of its limit (${c.limitBasis}).`)),
+    `Verdict: ${res.verdict.summary}.`,
     LIMIT_CAUTION,
   ];
   return lines;

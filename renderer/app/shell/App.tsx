@@ -31,8 +31,8 @@ import { SectionReport } from '../report/ReportView.tsx';
 import { JointsNotes, JointsPanel } from '../joints/JointsPanel.tsx';
 import { JointsLayer } from '../joints/JointsLayer.tsx';
 import { JointsStore } from '../joints/joints-store.ts';
-import type { MemberCase } from '../report/report-input.ts';
-import { computeStress, type ForceTexts } from '../stress/stress.ts';
+import { memberCaseOf } from '../member/member-model.ts';
+import { computeStress } from '../stress/stress.ts';
 import exampleText from '../../../assets/examples/footbridge-box-girder.section.json?raw';
 
 const TOOLS: readonly { id: ToolId; label: string; key: string; hint: string }[] = [
@@ -66,7 +66,6 @@ export function App({ controller: given }: { readonly controller?: AppController
   const outlines = editor.outlines(state.doc);
   const sectionViews = useMemo(() => controller.sectionViews(), [controller, state.sectionFile, state.activeSection, state.doc]);
   const [cursor, setCursor] = useState<Vec | null>(null);
-  const [memberCase, setMemberCase] = useState<MemberCase | null>(null);
   const display = controller.display();
   const { overlays, torsion, banner, recovery, view } = app;
   const docName = controller.documentName();
@@ -99,14 +98,16 @@ export function App({ controller: given }: { readonly controller?: AppController
 
   // Normal stress under the panel's forces: computed while the panel is open or an overlay shows it,
   // a step behind a drag so dragging stays smooth.
-  const [forces, setForces] = useState<ForceTexts>({ N: '', Mx: '', My: '', Vx: '', Vy: '' });
   const [stressOpen, setStressOpen] = useState(false);
   const stressShown = useRef(false);
   const stressDoc = useDeferredValue(state.doc);
   const stressCache = useMemo(() => createResultsCache(), []);
   const stressProps = stressDoc === state.doc ? p : stressCache(stressDoc).properties;
   const stressWanted = stressOpen || overlays.stress || overlays.kern;
-  const stress = useMemo(() => (stressWanted ? computeStress(stressDoc, stressProps, forces) : null), [stressWanted, stressDoc, stressProps, forces]);
+  const stress = useMemo(() => (stressWanted ? computeStress(stressDoc, stressProps) : null), [stressWanted, stressDoc, stressProps]);
+  const reportMember = useMemo(() => memberCaseOf(state.doc), [state.doc]);
+  // The member and stress panels edit the section's stored inputs through the editor (one undo step per field edit).
+  const inputEditing = useMemo(() => ({ live: editor.liveDocument.bind(editor), commit: editor.commitLive.bind(editor), cancel: editor.cancelLive.bind(editor) }), [editor]);
 
   return (
     <div className="app">
@@ -263,8 +264,7 @@ export function App({ controller: given }: { readonly controller?: AppController
           <MaterialsPanel editor={editor} doc={state.doc} valid={!!results.properties} display={display} />
           <StressPanel
             doc={state.doc}
-            texts={forces}
-            onTexts={setForces}
+            editing={inputEditing}
             outcome={stress}
             onOpen={(open) => {
               setStressOpen(open);
@@ -275,12 +275,12 @@ export function App({ controller: given }: { readonly controller?: AppController
               }
             }}
           />
-          <MemberPanel doc={state.doc} valid={!!results.properties} onCase={setMemberCase} />
+          <MemberPanel doc={state.doc} valid={!!results.properties} editing={inputEditing} />
         </aside>
       </div>
       {app.shown === 'compare' && <CompareView sections={sectionViews} fileName={docName} display={display} sig={app.sig} onClose={() => controller.show(null)} />}
       {app.shown === 'check-table' && <CheckView host={getHost()} onClose={() => controller.show(null)} />}
-      {app.shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} fileTitle={state.sectionFile.name} display={display} sig={app.sig} torsion={torsion} member={memberCase} onClose={() => controller.show(null)} />}
+      {app.shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} fileTitle={state.sectionFile.name} display={display} sig={app.sig} torsion={torsion} member={reportMember} onClose={() => controller.show(null)} />}
       {app.shown === 'shortcuts' && <ShortcutSheet onClose={() => controller.show(null)} />}
       {app.dxf !== null && <DxfImportDialog prompt={app.dxf} controller={controller} />}
       {app.asking !== null && (

@@ -1,50 +1,66 @@
 /**
- * The stress panel: N, Mx, My (Vx, Vy for the average shear) typed with units; the largest and
- * smallest normal stress with where they occur, the neutral axis, the kern, and the map's legend.
- * The numbers come from ./stress.ts (core/stress); the map itself is drawn on the canvas.
+ * The stress panel: N, Mx, My (Vx, Vy for the average shear), stored with the section as
+ * physical quantities and typed through core/units (any unit, or a bare number in the unit
+ * shown); the largest and smallest normal stress with where they occur, the neutral axis, the
+ * kern, and the map's legend. The numbers come from ./stress.ts (core/stress); the map itself is
+ * drawn on the canvas.
  */
-import type { ReactElement } from 'react';
+import { useState, type ReactElement } from 'react';
+import { stressInputsOf } from '../../../core/document/inputs.ts';
 import type { SectionDocument } from '../../../core/document/types.ts';
 import { CAUTION } from '../../../core/member/index.ts';
 import { formatSig } from '../../../core/units/index.ts';
-import { LEGEND_GRADIENT, stressUnits, toStressUnit, type ForceTexts, type StressOutcome } from './stress.ts';
+import { QuantityInput } from '../shell/QuantityInput.tsx';
+import type { InputEditing } from '../shell/quantity-text.ts';
+import { LEGEND_GRADIENT, stressFields, stressUnits, toStressUnit, type StressKey, type StressOutcome } from './stress.ts';
 
 interface Props {
   readonly doc: SectionDocument;
-  readonly texts: ForceTexts;
-  readonly onTexts: (t: ForceTexts) => void;
+  readonly editing: InputEditing;
   readonly outcome: StressOutcome | null;
   readonly onOpen: (open: boolean) => void;
 }
 
-export function StressPanel({ doc, texts, onTexts, outcome, onOpen }: Props): ReactElement {
+export function StressPanel({ doc, editing, outcome, onOpen }: Props): ReactElement {
   const u = stressUnits(doc);
-  const field = (key: keyof ForceTexts, label: string, unit: string, testid: string): ReactElement => (
-    <label className="field">
-      <span>
-        {label} ({unit})
-      </span>
-      <input data-testid={testid} value={texts[key]} placeholder="0" onChange={(e) => onTexts({ ...texts, [key]: e.target.value })} />
-    </label>
+  const fields = stressFields(doc);
+  const stored = stressInputsOf(doc);
+  const [problems, setProblems] = useState<Partial<Record<StressKey, string>>>({});
+  const shownProblems = Object.values(problems).filter((m): m is string => m !== undefined);
+  const field = (key: StressKey, testid: string): ReactElement => (
+    <QuantityInput
+      field={fields[key]}
+      si={stored[key]}
+      testid={testid}
+      onLive={(si) => editing.live((d) => ({ ...d, stress: { ...stressInputsOf(d), [key]: si ?? 0 } }))}
+      onCommit={() => editing.commit(`Set ${key}`)}
+      onCancel={() => editing.cancel()}
+      onProblem={(m) => setProblems((o) => ({ ...o, [key]: m ?? undefined }))}
+    />
   );
-  const v = outcome?.ok ? outcome.view : null;
+  const v = outcome?.ok && shownProblems.length === 0 ? outcome.view : null;
   const s = (pa: number): number => toStressUnit(pa, u.stress);
   const at = (p: readonly [number, number]): string => `at (${formatSig(p[0], 4)}, ${formatSig(p[1], 4)}) ${doc.unit}`;
   return (
     <details className="member" data-testid="stress-panel" onToggle={(e) => onOpen(e.currentTarget.open)}>
       <summary>Normal stress and kern</summary>
       <p className="muted small">
-        N &gt; 0 is tension. Mx &gt; 0 puts tension at +y, My &gt; 0 puts tension at +x (moments about the centroid). A bare number is read in the unit shown; or type one, e.g. “250 N·m”.
+        N &gt; 0 is tension. Mx &gt; 0 puts tension at +y, My &gt; 0 puts tension at +x (moments about the centroid). A bare number is read in the unit shown; or type one, e.g. “250 N·m”. The forces are kept with this section and saved in the file.
       </p>
       <div className="grid4">
-        {field('N', 'N', u.force, 'stress-N')}
-        {field('Mx', 'Mx', u.moment, 'stress-Mx')}
-        {field('My', 'My', u.moment, 'stress-My')}
+        {field('N', 'stress-N')}
+        {field('Mx', 'stress-Mx')}
+        {field('My', 'stress-My')}
         <span />
-        {field('Vx', 'Vx', u.force, 'stress-Vx')}
-        {field('Vy', 'Vy', u.force, 'stress-Vy')}
+        {field('Vx', 'stress-Vx')}
+        {field('Vy', 'stress-Vy')}
       </div>
-      {outcome && !outcome.ok && (
+      {shownProblems.length > 0 && (
+        <p className="error" data-testid="stress-error">
+          {shownProblems.join(' ')} The section keeps its earlier value.
+        </p>
+      )}
+      {shownProblems.length === 0 && outcome && !outcome.ok && (
         <p className="error" data-testid="stress-error">
           {outcome.message}
         </p>

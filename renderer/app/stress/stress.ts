@@ -1,39 +1,43 @@
 /**
- * The stress view's numbers: typed forces read with their units, the strain plane from core/stress,
- * extremes with their points, the neutral axis, the kern, and the colour scale of the map.
+ * The stress view's numbers: the section's stored forces (SI, core/document: StressInputs), the
+ * strain plane from core/stress, extremes with their points, the neutral axis, the kern, and the
+ * colour scale of the map. The input boxes read through core/units (../shell/quantity-text.ts)
+ * in the document's unit system: kN, kN·m, MPa for mm/cm/m documents; kip, kip·ft, ksi for in/ft.
  *
  * Stiffness: with materials, the E-weighted section of core/materials (E in Pa, lengths in the
  * document unit); without, the geometric section with E = 1 Pa, so stresses do not depend on E.
  * Forces go to Pa·unit² (N) and Pa·unit³ (moments) so every stress comes out in Pa.
  * Sign convention (docs/methods.md §9.1): N > 0 tension; Mx > 0 tension at +Y; My > 0 tension at +X.
  */
-import type { SectionDocument } from '../../../core/document/types.ts';
+import { stressInputsOf } from '../../../core/document/inputs.ts';
+import type { SectionDocument, StressInputs } from '../../../core/document/types.ts';
 import type { Point, Region } from '../../../core/geometry/types.ts';
-import { compositeProperties, materialPiecesFromDocument, parseQuantity, pascalsTo, forceToNewtons, FORCE_UNITS, QuantityError, type ForceUnit, type StressUnit } from '../../../core/materials/index.ts';
+import { compositeProperties, materialPiecesFromDocument } from '../../../core/materials/index.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
 import { regionFromDocument } from '../../../core/section/index.ts';
 import { averageShear, kern, neutralAxis, strainPlane, stressExtremes, type NeutralAxis, type SectionStiffness, type StrainPlane } from '../../../core/stress/index.ts';
-import { convertLength, formatSig } from '../../../core/units/index.ts';
+import { convertLength, formatSig, fromSI, unitSystem } from '../../../core/units/index.ts';
+import type { InputField } from '../shell/quantity-text.ts';
 
-export type MomentUnit = 'N·mm' | 'N·m' | 'kN·m' | 'kN·mm' | 'lbf·in' | 'lbf·ft' | 'kip·in' | 'kip·ft';
-export const MOMENT_UNITS: readonly MomentUnit[] = ['N·mm', 'N·m', 'kN·m', 'kN·mm', 'lbf·in', 'lbf·ft', 'kip·in', 'kip·ft'];
-const MOMENT_FORCE: Readonly<Record<MomentUnit, [ForceUnit, 'mm' | 'm' | 'in' | 'ft']>> = {
-  'N·mm': ['N', 'mm'], 'N·m': ['N', 'm'], 'kN·m': ['kN', 'm'], 'kN·mm': ['kN', 'mm'],
-  'lbf·in': ['lbf', 'in'], 'lbf·ft': ['lbf', 'ft'], 'kip·in': ['kip', 'in'], 'kip·ft': ['kip', 'ft'],
-};
-
-/** Units shown and assumed for bare numbers: kN, kN·m, MPa for metric documents; kip, kip·ft, ksi for inch and foot ones. */
-export function stressUnits(doc: SectionDocument): { force: ForceUnit; moment: MomentUnit; stress: StressUnit } {
-  const inch = doc.unit === 'in' || doc.unit === 'ft';
-  return inch ? { force: 'kip', moment: 'kip·ft', stress: 'ksi' } : { force: 'kN', moment: 'kN·m', stress: 'MPa' };
+/** Units shown and assumed for bare numbers: the document's unit system (core/units/systems.ts). */
+export function stressUnits(doc: SectionDocument): { force: string; moment: string; stress: string } {
+  const u = unitSystem(doc.unit).units;
+  return { force: u.force, moment: u.moment, stress: u.stress };
 }
 
-export interface ForceTexts {
-  readonly N: string;
-  readonly Mx: string;
-  readonly My: string;
-  readonly Vx: string;
-  readonly Vy: string;
+export type StressKey = keyof StressInputs;
+export const STRESS_KEYS: readonly StressKey[] = ['N', 'Mx', 'My', 'Vx', 'Vy'];
+
+/** The input box of each force: its name in messages, kind and unit. */
+export function stressFields(doc: SectionDocument): Readonly<Record<StressKey, InputField>> {
+  const u = stressUnits(doc);
+  return {
+    N: { label: 'N', kind: 'force', unit: u.force },
+    Mx: { label: 'Mx', kind: 'moment', unit: u.moment },
+    My: { label: 'My', kind: 'moment', unit: u.moment },
+    Vx: { label: 'Vx', kind: 'force', unit: u.force },
+    Vy: { label: 'Vy', kind: 'force', unit: u.force },
+  };
 }
 
 export interface StressPiece {
@@ -60,52 +64,27 @@ export interface StressView {
   /** Per piece (one per part with a material): its own largest and smallest stress (Pa). */
   readonly perPiece: readonly { readonly label: string; readonly max: number; readonly min: number }[];
   /** The stress unit of the panel and legend. */
-  readonly unit: StressUnit;
+  readonly unit: string;
   /** The extremes as shown on the canvas, e.g. "104.0 MPa". */
   readonly labels: { readonly max: string; readonly min: string };
 }
 
-/** "−12.5 kN·m" or a bare number in the default unit → the SI value (N or N·m); throws QuantityError naming the input. */
-function readForce(text: string, unit: ForceUnit, what: string): number {
-  if (text.trim() === '') return 0;
-  const q = parseQuantity(text.replace('−', '-'), FORCE_UNITS, unit, what);
-  return forceToNewtons(q.value, q.unit);
-}
-
-function readMoment(text: string, unit: MomentUnit, what: string): number {
-  if (text.trim() === '') return 0;
-  // Also accepted: kNm, kN*m, kN.m for kN·m (and likewise for the others).
-  const t = text.replace('−', '-').replace(/(N|kN|lbf|kip)\s*[*.·]?\s*(mm|m|in|ft)\s*$/, '$1·$2');
-  const q = parseQuantity(t, MOMENT_UNITS, unit, what);
-  const [force, length] = MOMENT_FORCE[q.unit];
-  return forceToNewtons(q.value, force) * convertLength(1, length, 'm');
-}
-
 export type StressOutcome = { readonly ok: true; readonly view: StressView } | { readonly ok: false; readonly message: string };
 
-export function computeStress(doc: SectionDocument, properties: SectionProperties | null, texts: ForceTexts): StressOutcome {
+/** The stresses under `forces` (default: the section's stored ones). */
+export function computeStress(doc: SectionDocument, properties: SectionProperties | null, forces: StressInputs = stressInputsOf(doc)): StressOutcome {
   try {
-    return stressOf(doc, properties, texts);
+    return stressOf(doc, properties, forces);
   } catch (err) {
     // A failed invariant in core is a bug or a degenerate section; say which rather than show nothing.
     return { ok: false, message: `The stresses could not be computed: ${err instanceof Error ? err.message : String(err)}` };
   }
 }
 
-function stressOf(doc: SectionDocument, properties: SectionProperties | null, texts: ForceTexts): StressOutcome {
+function stressOf(doc: SectionDocument, properties: SectionProperties | null, forces: StressInputs): StressOutcome {
   if (!properties) return { ok: false, message: 'The section needs valid geometry first.' };
   const u = stressUnits(doc);
-  let N: number, Mx: number, My: number, Vx: number, Vy: number;
-  try {
-    N = readForce(texts.N, u.force, 'N');
-    Mx = readMoment(texts.Mx, u.moment, 'Mx');
-    My = readMoment(texts.My, u.moment, 'My');
-    Vx = readForce(texts.Vx, u.force, 'Vx');
-    Vy = readForce(texts.Vy, u.force, 'Vy');
-  } catch (err) {
-    if (err instanceof QuantityError) return { ok: false, message: err.message };
-    throw err;
-  }
+  const { N, Mx, My, Vx, Vy } = forces;
   let stiffness: SectionStiffness;
   let pieces: StressPiece[];
   let withMaterials = false;
@@ -146,11 +125,12 @@ function stressOf(doc: SectionDocument, properties: SectionProperties | null, te
   const shear = averageShear({ N, Mx, My, Vx, Vy }, properties.area * m2);
   return {
     ok: true,
-    view: { plane, pieces, perPiece, unit: u.stress, ...best, labels: { max: `${formatSig(pascalsTo(best.max, u.stress), 4)} ${u.stress}`, min: `${formatSig(pascalsTo(best.min, u.stress), 4)} ${u.stress}` }, scale: Math.max(Math.abs(best.max), Math.abs(best.min)), axis, kern: k.vertices, tauX: shear.tauX, tauY: shear.tauY, withMaterials },
+    view: { plane, pieces, perPiece, unit: u.stress, ...best, labels: { max: `${formatSig(toStressUnit(best.max, u.stress), 4)} ${u.stress}`, min: `${formatSig(toStressUnit(best.min, u.stress), 4)} ${u.stress}` }, scale: Math.max(Math.abs(best.max), Math.abs(best.min)), axis, kern: k.vertices, tauX: shear.tauX, tauY: shear.tauY, withMaterials },
   };
 }
 
-export const toStressUnit = (pa: number, unit: StressUnit): number => pascalsTo(pa, unit);
+/** Pa → the given stress unit (core/units). */
+export const toStressUnit = (pa: number, unit: string): number => fromSI(pa, 'stress', unit);
 
 /** The map's palette, our own: deep slate blue (compression) through the paper colour to a burnt red-orange (tension). */
 const STOPS: readonly [number, [number, number, number]][] = [
