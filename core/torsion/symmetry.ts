@@ -18,8 +18,9 @@
  * Error estimate of a shear-centre coordinate: the larger of |coarse − fine| (the two nested
  * mesh levels of core/torsion) and jRelativeError × the section size (the solver's relative
  * error estimate taken as a relative error of positions). Lengths in the region's unit.
- * Sections of more than MAX_CHECKED_VERTICES outline points are not checked (no snap): the
- * Boolean test would cost more than the solve saves in honesty.
+ * Sections of more than MAX_CHECKED_VERTICES outline points (dense imported curves) are not
+ * checked (no snap: the check would cost a share of the solve), and the
+ * Boolean test runs only up to MAX_BOOLEAN_VERTICES (it takes seconds on 1e5 points).
  */
 import { differenceRegions, unionRegions } from '../geometry/boolean.ts';
 import { regionBounds } from '../geometry/bounds.ts';
@@ -27,7 +28,9 @@ import { transformRegion } from '../geometry/transform.ts';
 import type { Region } from '../geometry/types.ts';
 import { regionIntegrals } from '../properties/integrals.ts';
 
-export const MAX_CHECKED_VERTICES = 200_000;
+export const MAX_CHECKED_VERTICES = 20_000;
+/** The Boolean test (when the fast one says no) only up to this many outline points: it costs seconds on 1e5. */
+export const MAX_BOOLEAN_VERTICES = 2_000;
 
 const vertexCount = (r: Region): number => r.reduce((n, p) => n + p.outer.xy.length / 2 + p.holes.reduce((m, h) => m + h.xy.length / 2, 0), 0);
 const area = (r: Region): number => (r.length === 0 ? 0 : Math.abs(regionIntegrals(r).A));
@@ -65,6 +68,7 @@ function segmentsMirror(g: Region, axis: 'vertical' | 'horizontal', a: number, s
 export function mirrorsOntoItself(groups: readonly Region[], axis: 'vertical' | 'horizontal', a: number): boolean {
   const b = regionBounds(groups.flat());
   if (b !== null && groups.every((g) => segmentsMirror(g, axis, a, Math.max(b.maxX - b.minX, b.maxY - b.minY)))) return true;
+  if (groups.reduce((n, g) => n + vertexCount(g), 0) > MAX_BOOLEAN_VERTICES) return false;
   // Arcs flattened coarsely (1e-4 of the size): a mirrored arc is flattened into the mirrored chords, so the test stays exact for symmetric arcs and costs far less.
   const options = b === null ? {} : { maxSagitta: 1e-4 * Math.max(b.maxX - b.minX, b.maxY - b.minY) };
   return groups.every((g) => {
@@ -107,8 +111,9 @@ export function materialGroups(pieces: readonly { readonly region: Region; reado
 /** xs, ys with each coordinate put on an axis of symmetry of the groups when within its error estimate. */
 export function snapShearCentre(groups: readonly Region[], s: ShearCentreEstimate): { xs: number; ys: number } {
   const all = groups.flat();
+  if (vertexCount(all) > MAX_CHECKED_VERTICES) return { xs: s.xs, ys: s.ys };
   const b = regionBounds(all);
-  if (b === null || vertexCount(all) > MAX_CHECKED_VERTICES) return { xs: s.xs, ys: s.ys };
+  if (b === null) return { xs: s.xs, ys: s.ys };
   const size = Math.max(b.maxX - b.minX, b.maxY - b.minY);
   const ax = (b.minX + b.maxX) / 2;
   const ay = (b.minY + b.maxY) / 2;
