@@ -11,6 +11,7 @@ import { findShapes, searchCatalogue, STEEL_LBFT_PER_IN2, type CatalogueEntry, t
 import { weightAgreement } from '../../../core/catalogue/measure.ts';
 import { defaultParams, getPartType, partTypes } from '../../../core/parts/index.ts';
 import type { ParamSpec } from '../../../core/parts/index.ts';
+import { regionIntegrals } from '../../../core/properties/index.ts';
 import { localRegion } from '../../../core/section/index.ts';
 import { formatSig, type LengthUnit } from '../../../core/units/index.ts';
 import type { Editor, EditorState } from '../../editor/editor.ts';
@@ -50,8 +51,26 @@ export function polygonsOfShape(part: ShapePart, unit: LengthUnit, doc: SectionD
   });
 }
 
-/** Tabulated weight beside the weight computed from the rebuilt area (steel, 490 lb/ft³; HSS and Pipe at their nominal wall). */
+/**
+ * Lumber: the NDS Supplement Table 1B gives approximate weights per foot for wood densities of
+ * 25 to 50 lb/ft³ (from memory); the catalogue shows the 35 lb/ft³ column's rule, A·35/144.
+ */
+const LUMBER_PCF = 35;
+
+/**
+ * Tabulated weight beside the weight computed from the rebuilt area (steel, 490 lb/ft³; HSS and
+ * Pipe at their nominal wall); for lumber, the density-based weight of the dressed b·d beside the
+ * one from the rebuilt area.
+ */
 function weightText(e: CatalogueEntry): string {
+  if (e.family === 'lumber') {
+    const built = getPartType(e.shape)?.region(e.params);
+    const b = e.dimensions['b'];
+    const d = e.dimensions['d'];
+    if (built === undefined || built.diagnostics.length > 0 || b === undefined || d === undefined) return '';
+    const area = regionIntegrals(built.region).A;
+    return ` · at ${LUMBER_PCF} lb/ft³: ${formatSig((b * d * LUMBER_PCF) / 144, 3)} lb/ft (b·d), computed ${formatSig((area * LUMBER_PCF) / 144, 3)}`;
+  }
   if (e.nominalWeight === undefined) return '';
   const a = weightAgreement(e);
   const computed = a === undefined || !Number.isFinite(a.area) ? '' : `, computed ${formatSig(a.area * STEEL_LBFT_PER_IN2, 3)}`;
@@ -127,7 +146,7 @@ export function PartsPalette({ editor, state, onPlaced }: { editor: Editor; stat
             <li key={e.designation}>
               <button type="button" data-testid={`catalogue-result-${i}`} title={`${e.source}. ${e.modelling.join(' ')}`} onClick={() => place(e)}>
                 <strong>{e.designation}</strong>
-                <span className="muted">
+                <span className="muted" data-testid={`catalogue-result-text-${i}`} data-family={e.family}>
                   d {formatSig(e.depth, 3)} in{weightText(e)}
                 </span>
               </button>
