@@ -136,7 +136,9 @@ export function placedPart(part: Part, index: number, unit: LengthUnit): { regio
     return { region: [], diagnostics: local.diagnostics.map((d) => ({ ...d, part: label, message: `part "${label}": ${d.message}` })) };
   }
   const { mirror, ...rigid } = part.placement;
-  const placed = transformRegion(mirror ? mirroredLocal(local.region) : local.region, { ...rigid, mirror: false });
+  // A part at the origin, unturned and unmirrored, keeps its local region (a fresh one): no copy of a large outline.
+  const unmoved = !mirror && rigid.x === 0 && rigid.y === 0 && rigid.rotationDeg === 0;
+  const placed = unmoved ? local.region : transformRegion(mirror ? mirroredLocal(local.region) : local.region, { ...rigid, mirror: false });
   if (part.type === 'rectangle' || part.type === 'circle') return placedByConstruction(placed, part, label);
   const diagnostics = validateRegion(placed, { part: label });
   return diagnostics.length > 0 ? { region: [], diagnostics } : { region: normaliseRegion(placed), diagnostics: [] };
