@@ -18,9 +18,10 @@
  * Errors never touch an open document: the caller gets either a whole document or messages.
  * Each message names the entity type, handle and layer (and block, when inserted) and what is wrong.
  */
-import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type PolygonPart, type SectionFile } from '../document/types.ts';
+import { DOCUMENT_FORMAT, DOCUMENT_VERSION, type CutoutRole, type PolygonPart, type SectionFile } from '../document/types.ts';
 import type { Diagnostic, Polygon, Region, Ring } from '../geometry/types.ts';
 import { pointInRing, ringBounds, ringSignedArea, unionRegions, validateRegion, BooleanError } from '../geometry/index.ts';
+import { reverseRing } from '../geometry/ring.ts';
 import type { LengthUnit } from '../units/types.ts';
 import { joinPaths, type Loop } from './chains.ts';
 import { describeRef, drawingPaths, type EntityRef } from './curves.ts';
@@ -264,8 +265,12 @@ function polygonPart(polygon: Polygon, id: string, name: string): PolygonPart {
  * The imported polygons as a one-section document: a polygon part per outer loop, named after its
  * layer, in the drawing's own coordinates; or, with grouping 'one', one part when the loops unite
  * into one piece (when they do not, the parts stay separate and a note says why).
+ * Holes (loops inside an outer loop) take the role the user chose (core/document/types.ts
+ * CutoutRole): 'void' keeps them as holes of their part, missing along the member; each
+ * 'fastener-hole' becomes a cut-out part of its own right after its part, marked as a fastener
+ * hole, so it counts in the net section only.
  */
-export function documentFromDxf(imported: DxfImport, name: string, grouping: 'parts' | 'one' = 'parts'): { file: SectionFile; notes: string[] } {
+export function documentFromDxf(imported: DxfImport, name: string, grouping: 'parts' | 'one' = 'parts', holes: CutoutRole = 'void'): { file: SectionFile; notes: string[] } {
   let polygons: readonly Polygon[] = imported.polygons;
   const notes: string[] = [];
   if (grouping === 'one' && polygons.length > 1) {
@@ -284,8 +289,16 @@ export function documentFromDxf(imported: DxfImport, name: string, grouping: 'pa
     const layer = polygons === imported.polygons ? (imported.polygons[i]?.layers[0] ?? 'DXF') : 'DXF';
     const k = (counts.get(layer) ?? 0) + 1;
     counts.set(layer, k);
-    return polygonPart(p, `dxf${i + 1}`, `${layer} ${k}`);
-  });
+    if (holes === 'void' || p.holes.length === 0) return [polygonPart(p, `dxf${i + 1}`, `${layer} ${k}`)];
+    const cutouts = p.holes.map((h, j): PolygonPart => ({
+      ...polygonPart({ outer: reverseRing(h), holes: [] }, `dxf${i + 1}-h${j + 1}`, `${layer} ${k} hole ${j + 1}`),
+      operation: 'subtract',
+      cutoutRole: 'fastener-hole',
+    }));
+    return [polygonPart({ outer: p.outer, holes: [] }, `dxf${i + 1}`, `${layer} ${k}`), ...cutouts];
+  }).flat();
+  const holeCount = polygons.reduce((n, p) => n + p.holes.length, 0);
+  if (holes === 'fastener-hole' && holeCount > 0) notes.push(`${holeCount} hole(s) imported as fastener holes: each a cut-out part that counts in the net section only (gross properties ignore it)`);
   const file: SectionFile = {
     format: DOCUMENT_FORMAT, version: DOCUMENT_VERSION, name, unit: imported.unit, materials: [], defaultMaterial: null,
     sections: [{ id: 's1', name, parts }],

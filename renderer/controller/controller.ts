@@ -10,7 +10,7 @@
  * Timers and the torsion worker come in through ControllerDeps, so tests drive it with fakes.
  */
 import { allSectionViews, newSectionFile, serialiseDocument, withInputsKept, type SectionDocument, type SectionFile } from '../../core/document/index.ts';
-import type { Part } from '../../core/document/types.ts';
+import type { CutoutRole, Part } from '../../core/document/types.ts';
 import { propertiesCsv, sectionSvg } from '../../core/export/index.ts';
 import { jointsCsv, jointsExport } from '../../core/export/joints.ts';
 import { propertiesSheet } from '../../core/export/xlsx.ts';
@@ -107,6 +107,8 @@ export interface DxfPrompt {
   readonly unit: LengthUnit;
   readonly layers: readonly string[];
   readonly grouping: 'parts' | 'one';
+  /** What holes inside outlines are: voids (missing along the member) or fastener holes (net section only). */
+  readonly holes: CutoutRole;
   /** Why the last Import failed (entity, handle, layer, what is wrong), if it did. */
   readonly errors: readonly string[];
 }
@@ -475,12 +477,12 @@ export class AppController implements CommandTarget {
       return false;
     }
     const unit = s.summary.unit ?? this.editor.getState().doc.unit;
-    this.set({ dxf: { name, text, summary: s.summary, unit, layers: s.summary.layers.map((l) => l.name), grouping: 'parts', errors: [] } });
+    this.set({ dxf: { name, text, summary: s.summary, unit, layers: s.summary.layers.map((l) => l.name), grouping: 'parts', holes: 'void', errors: [] } });
     return true;
   }
 
   /** The user changed a choice in the DXF dialog. */
-  chooseDxf(patch: Partial<Pick<DxfPrompt, 'unit' | 'layers' | 'grouping'>>): void {
+  chooseDxf(patch: Partial<Pick<DxfPrompt, 'unit' | 'layers' | 'grouping' | 'holes'>>): void {
     const d = this.state.dxf;
     if (d) this.set({ dxf: { ...d, ...patch, errors: [] } });
   }
@@ -503,7 +505,7 @@ export class AppController implements CommandTarget {
       this.set({ dxf: { ...d, errors: r.errors.map((e) => e.message) } });
       return false;
     }
-    const made = documentFromDxf(r.value, d.name.replace(/\.dxf$/i, '') || 'Imported drawing', d.grouping);
+    const made = documentFromDxf(r.value, d.name.replace(/\.dxf$/i, '') || 'Imported drawing', d.grouping, d.holes);
     this.set({ dxf: null });
     this.loadDoc(made.file, { name: d.name, handle: null });
     this.note(`Imported ${d.name}: ${made.file.sections[0]?.parts.length ?? 0} part(s), unit ${r.value.unit}`, [...r.value.notes, ...made.notes]);

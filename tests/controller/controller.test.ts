@@ -584,6 +584,17 @@ describe('opening a DXF drawing', () => {
     expect(r.c.editor.getState().doc.unit).toBe('in');
   });
 
+  it('holes take the role chosen in the dialog: fastener holes become cut-outs counted in the net section only', () => {
+    const r = rig();
+    r.c.openText(dxf('pipe-lwpolyline.dxf'), 'pipe.dxf', null);
+    expect(r.c.getState().dxf?.holes).toBe('void');
+    r.c.chooseDxf({ holes: 'fastener-hole' });
+    expect(r.c.importChosenDxf()).toBe(true);
+    const parts = r.c.editor.getState().doc.parts;
+    expect(parts.map((p) => p.operation)).toEqual(['add', 'subtract']);
+    expect(parts[1]?.cutoutRole).toBe('fastener-hole');
+  });
+
   it('an import error stays in the dialog, naming the entity, and the document is unchanged', () => {
     const r = withPlate();
     const before = r.c.editor.getState().doc;

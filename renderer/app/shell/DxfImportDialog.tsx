@@ -1,7 +1,8 @@
 /**
  * The DXF import dialog: the drawing's layers (with how many boundary entities each holds), its
  * unit (from $INSUNITS, or chosen here when the file has none), and one part per outer loop or
- * loops that touch united into one part. The open document is untouched until Import succeeds;
+ * loops that touch united into one part, and what the holes are (voids, or fastener holes that
+ * count in the net section only). The open document is untouched until Import succeeds;
  * an import error (entity, handle, layer and what is wrong) is shown here.
  */
 import type { ReactElement } from 'react';
@@ -48,6 +49,13 @@ export function DxfImportDialog({ prompt, controller }: { readonly prompt: DxfPr
           <select data-testid="dxf-grouping" value={prompt.grouping} onChange={(e) => controller.chooseDxf({ grouping: e.target.value === 'one' ? 'one' : 'parts' })}>
             <option value="parts">one part each</option>
             <option value="one">one part (where they touch)</option>
+          </select>
+        </label>
+        <label>
+          Holes inside outlines are{' '}
+          <select data-testid="dxf-holes" value={prompt.holes} onChange={(e) => controller.chooseDxf({ holes: e.target.value === 'fastener-hole' ? 'fastener-hole' : 'void' })}>
+            <option value="void">voids along the member (every property)</option>
+            <option value="fastener-hole">fastener holes (net section only)</option>
           </select>
         </label>
         {prompt.errors.length > 0 && (
