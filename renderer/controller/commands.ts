@@ -23,6 +23,7 @@ export interface CommandTarget {
   copy(): void;
   cut(): void;
   paste(): void;
+  openPoints(): void;
   duplicate(): void;
   nudge(dx: number, dy: number): void;
 }
@@ -66,6 +67,7 @@ export const COMMANDS = {
   copy: { label: 'Copy', run: (t) => t.copy() },
   cut: { label: 'Cut', run: (t) => t.cut() },
   paste: { label: 'Paste', run: (t) => t.paste() },
+  'paste-points': { label: 'Paste coordinates (x y list)…', run: (t) => t.openPoints() },
   duplicate: { label: 'Duplicate', run: (t) => t.duplicate() },
   delete: { label: 'Delete', run: (t) => t.editor.deleteSelection() },
   'select-all': { label: 'Select all parts', run: (t) => t.editor.select(t.editor.getState().doc.parts.map((p) => p.id)) },

@@ -28,6 +28,8 @@ import { documentFromDxf, importDxf, looksLikeDxf, sectionDxf, cutParts, summari
 import { CAUTION } from '../../core/member/check.ts';
 import { keyAction, type KeyInput } from './keymap.ts';
 import { createResultsCache, sameSection, shapeOutlineResolver, type Results } from './results.ts';
+import { outlineFromPointList } from './point-list.ts';
+import type { ThirdColumn } from '../../core/parts/points.ts';
 import type { TorsionState } from './torsion-client.ts';
 import { fitView, zoomAt, type View } from './view.ts';
 
@@ -96,6 +98,16 @@ export interface AppState {
    * document's, not the refused file's, and the views say so until the open document changes.
    */
   readonly refused: { readonly file: string; readonly shown: string } | null;
+  /** The coordinates dialog (a point list pasted or typed for a new outline), or null. */
+  readonly points: PointsPrompt | null;
+}
+
+/** What the coordinates dialog holds: the list as text, what a third column means, and why the last try failed. */
+export interface PointsPrompt {
+  readonly text: string;
+  /** 'auto': from the header ("bulge", "radius"), else a third column is refused. */
+  readonly third: 'auto' | ThirdColumn;
+  readonly errors: readonly string[];
 }
 
 /** What the DXF import dialog shows and the user chooses; the open document is untouched until Import. */
@@ -202,6 +214,7 @@ export class AppController implements CommandTarget {
       recent: [],
       dxf: null,
       refused: null,
+      points: null,
     };
     this.torsionRunner = deps.torsion((torsion) => this.set({ torsion }));
     this.attach();
@@ -707,6 +720,9 @@ export class AppController implements CommandTarget {
     if (!action) return false;
     if (action.kind === 'tool-key') return this.editor.key(action.key) || true;
     if (action.id.startsWith('nudge-') && this.editor.getState().selection.length === 0) return false;
+    // Ctrl+V with the outline tool, or with no parts copied, is the browser's own paste: its text
+    // (a point list from a spreadsheet) arrives through pasteText.
+    if (action.id === 'paste' && (this.editor.getState().toolId === 'polygon' || this.clipboard.length === 0)) return false;
     void this.run(action.id);
     return true;
   }
@@ -792,6 +808,57 @@ export class AppController implements CommandTarget {
     this.copy();
     this.pasteCount = -1; // the first paste goes back where the parts were
     this.editor.run('Cut', (doc, sel) => ({ doc: { ...doc, parts: doc.parts.filter((p) => !sel.includes(p.id)) }, selection: [] }));
+  }
+
+  /**
+   * Text pasted on the drawing (not into a field): with the outline tool, or when it reads as a
+   * point list, it becomes an outline at once; a list with errors opens the coordinates dialog
+   * with the text and what is wrong, so nothing typed is lost. True when the text was taken.
+   */
+  pasteText(text: string): boolean {
+    if (text.trim() === '') return false;
+    const outlineTool = this.editor.getState().toolId === 'polygon';
+    const made = outlineFromPointList(text, 'auto', this.editor.getState().doc, 'add');
+    if (made.ok) {
+      this.addPastedOutline(made.part, made.note);
+      return true;
+    }
+    if (!outlineTool) return false;
+    this.set({ points: { text, third: 'auto', errors: made.errors } });
+    return true;
+  }
+
+  /** Opens the coordinates dialog (Edit → Paste coordinates). */
+  openPoints(): void {
+    this.set({ points: this.state.points ?? { text: '', third: 'auto', errors: [] } });
+  }
+
+  choosePoints(patch: Partial<Pick<PointsPrompt, 'text' | 'third'>>): void {
+    const p = this.state.points;
+    if (p) this.set({ points: { ...p, ...patch, errors: [] } });
+  }
+
+  cancelPoints(): void {
+    this.set({ points: null });
+  }
+
+  /** Adds (or cuts) the dialog's list as an outline; errors stay in the dialog and the document is unchanged. */
+  addPoints(operation: 'add' | 'subtract'): boolean {
+    const p = this.state.points;
+    if (!p) return false;
+    const made = outlineFromPointList(p.text, p.third, this.editor.getState().doc, operation);
+    if (!made.ok) {
+      this.set({ points: { ...p, errors: made.errors } });
+      return false;
+    }
+    this.set({ points: null });
+    this.addPastedOutline(made.part, made.note);
+    return true;
+  }
+
+  private addPastedOutline(part: Part, note: string): void {
+    this.editor.addPart(part.operation === 'subtract' ? 'Cut pasted outline' : 'Paste outline', (_doc, id) => ({ ...part, id }));
+    this.note(note);
   }
 
   /** Paste the clipboard's parts: each paste one offset further, selected, as one undo step. */

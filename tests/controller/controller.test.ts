@@ -453,6 +453,16 @@ const COMMAND_CASES: Record<CommandId, () => Promise<void>> = {
     await r.c.run('paste'); // a cut part pastes back where it was
     expect(placed(r)).toEqual([['part-1', 0, 0]]);
   },
+  async 'paste-points'() {
+    const r = rig();
+    await r.c.run('paste-points');
+    expect(r.c.getState().points).toMatchObject({ text: '', third: 'auto', errors: [] });
+    // A 200 × 10 plate typed as a spreadsheet would copy it, with a header: A = b·h = 2000 (exact arithmetic).
+    r.c.choosePoints({ text: 'x\ty\n0\t0\n200\t0\n200\t10\n0\t10\n' });
+    expect(r.c.addPoints('add')).toBe(true);
+    expect(r.c.getState().points).toBeNull();
+    expect(r.c.results(r.c.editor.getState().doc).properties?.area).toBe(2000);
+  },
   async paste() {
     const r = withPlate();
     await r.c.run('copy');
@@ -605,6 +615,40 @@ describe('opening a DXF drawing', () => {
     r.c.cancelDxf();
     expect(r.c.getState().dxf).toBeNull();
     expect(r.c.editor.getState().doc).toBe(before);
+  });
+});
+
+describe('a point list pasted or typed for an outline', () => {
+  it('pasted with the outline tool: comma-separated, third column of radii (header), an exact half-disc', () => {
+    const r = rig();
+    r.c.editor.setTool('polygon');
+    // Two points joined by a straight chord and a 50 radius arc: a half-disc of radius 50, A = π·50²/2 (Roark, Table A.1).
+    expect(r.c.pasteText('x,y,radius\n50,0,50\n-50,0,0\n')).toBe(true);
+    const area = r.c.results(r.c.editor.getState().doc).properties?.area ?? 0;
+    expect(Math.abs(area - (Math.PI * 50 ** 2) / 2) / ((Math.PI * 50 ** 2) / 2)).toBeLessThan(1e-12);
+  });
+
+  it('semicolons and spaces read too; a bad list opens the dialog naming the line and column, and the document is unchanged', () => {
+    const r = rig();
+    r.c.editor.setTool('polygon');
+    expect(r.c.pasteText('0;0\n100;0\n100;50\n')).toBe(true);
+    expect(r.c.editor.getState().doc.parts).toHaveLength(1);
+    const before = r.c.editor.getState().doc;
+    expect(r.c.pasteText('0 0\n100 0\n100 5o\n')).toBe(true);
+    expect(r.c.editor.getState().doc).toBe(before);
+    expect(r.c.getState().points?.errors[0]).toMatch(/line 3, column 2: "5o" is not a number/);
+    expect(r.c.getState().points?.text).toBe('0 0\n100 0\n100 5o\n');
+  });
+
+  it('crossing points are refused naming a point; without the outline tool other text is left alone', () => {
+    const r = rig();
+    r.c.openPoints();
+    r.c.choosePoints({ text: '0 0\n10 10\n10 0\n0 10\n' });
+    expect(r.c.addPoints('add')).toBe(false);
+    expect(r.c.getState().points?.errors.join(' ')).toMatch(/cross|point/i);
+    r.c.cancelPoints();
+    expect(r.c.pasteText('hello world')).toBe(false);
+    expect(r.c.getState().points).toBeNull();
   });
 });
 

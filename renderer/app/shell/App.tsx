@@ -18,6 +18,7 @@ import { RefusedNotice } from './RefusedNotice.tsx';
 import { ErrorBoundary } from './ErrorBoundary.tsx';
 import { ShortcutSheet } from './ShortcutSheet.tsx';
 import { DxfImportDialog } from './DxfImportDialog.tsx';
+import { PointsDialog, pastedText } from './PointsDialog.tsx';
 import { PartsPanel } from '../parts/PartsPanel.tsx';
 import { PartsPalette } from '../parts/PartsPalette.tsx';
 import { ResultsPanel } from '../results/ResultsPanel.tsx';
@@ -78,6 +79,12 @@ export function App({ controller: given }: { readonly controller?: AppController
       if (controller.keyDown(keyInput(e))) e.preventDefault();
     };
     window.addEventListener('keydown', onKey);
+    // Text pasted on the drawing (not into a field): a point list becomes an outline.
+    const onPaste = (e: ClipboardEvent): void => {
+      const text = pastedText(e);
+      if (text !== null && controller.pasteText(text)) e.preventDefault();
+    };
+    window.addEventListener('paste', onPaste);
     // The last edit reaches the recovery copy even if the page dies right after it is hidden.
     const flush = (): void => controller.flushRecovery();
     const onVisibility = (): void => {
@@ -87,6 +94,7 @@ export function App({ controller: given }: { readonly controller?: AppController
     document.addEventListener('visibilitychange', onVisibility);
     return () => {
       window.removeEventListener('keydown', onKey);
+      window.removeEventListener('paste', onPaste);
       window.removeEventListener('pagehide', flush);
       document.removeEventListener('visibilitychange', onVisibility);
       controller.dispose();
@@ -283,6 +291,7 @@ export function App({ controller: given }: { readonly controller?: AppController
       {app.shown === 'print-report' && <SectionReport doc={state.doc} fileName={docName} fileTitle={state.sectionFile.name} display={display} sig={app.sig} torsion={torsion} member={reportMember} onClose={() => controller.show(null)} />}
       {app.shown === 'shortcuts' && <ShortcutSheet onClose={() => controller.show(null)} />}
       {app.dxf !== null && <DxfImportDialog prompt={app.dxf} controller={controller} />}
+      {app.points !== null && <PointsDialog prompt={app.points} unit={state.doc.unit} controller={controller} />}
       {app.asking !== null && (
         <div className="modal-back">
           <div className="modal" role="dialog" aria-modal="true" data-testid="confirm-discard">

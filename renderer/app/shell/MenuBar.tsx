@@ -137,6 +137,7 @@ export function MenuBar(props: Props): ReactElement {
           {item('cut', 'Cut')}
           {item('copy', 'Copy')}
           {item('paste', 'Paste')}
+          {item('paste-points', 'Paste coordinates (x y list)…')}
           {item('duplicate', 'Duplicate')}
           {item('delete', 'Delete', 'Del')}
           {item('select-all', 'Select all parts')}
