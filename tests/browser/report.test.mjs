@@ -63,9 +63,10 @@ export async function exampleReportPrintsToFewA4PagesWithEveryTableWholeAndTheCa
   check(flat(pages.at(-1).text).includes(caution), 'the caution is on the last page');
   // A table kept whole: its heading and its last row are printed on the same page.
   const whole = [
-    ['Area, centroid, second moments and radii of gyration', 'radii of gyration: minor'],
-    ['Elastic and plastic moduli', 'plastic: shape factor, y'],
-    ['Torsion (finite elements)', 'shear centre y'],
+    // Last rows by their catalogue meanings (core/properties/catalogue.ts): r2, Zy/Sy and ys.
+    ['Area, centroid, second moments and radii of gyration', 'radius of gyration, axis 2'],
+    ['Elastic and plastic moduli', 'shape factor Zy / Sy,min'],
+    ['Torsion (finite elements)', 'shear centre y (Trefftz)'],
   ];
   for (const [title, last] of whole) {
     const at = pages.findIndex((p) => flat(p.text).includes(flat(title)));

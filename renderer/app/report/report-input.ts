@@ -69,7 +69,7 @@ export function propertyTables(p: SectionProperties, unit: LengthUnit, display: 
   const textColumns = [3];
   const groups = propertyGroups('report', p, unit, display, sig);
   const rows = (titles: readonly string[]): string[][] =>
-    groups.filter((g) => titles.includes(g.title)).flatMap((g) => g.rows.map((row) => [row.symbol, row.text, row.unit, `${g.title.toLowerCase()}: ${row.meaning}`]));
+    groups.filter((g) => titles.includes(g.title)).flatMap((g) => g.rows.map((row) => [row.symbol, row.text, row.unit, row.meaning]));
   return [
     { title: 'Area, centroid, second moments and radii of gyration', columns, rows: rows(['Area and centroid', 'Second moments about the centroid', 'Principal axes', 'Radii of gyration']), textColumns },
     { title: 'Elastic and plastic moduli', columns, rows: rows(['Elastic section moduli', 'Plastic']), textColumns },
