@@ -12,6 +12,7 @@ import Delaunator from 'delaunator';
 // is imported instead and typed by the small interface below.
 import ConstrainautorModule from '../../node_modules/@kninnug/constrainautor/lib/Constrainautor.mjs';
 import { MeshInputError } from './types.ts';
+import { entry } from '../invariant.ts';
 
 /** The part of Constrainautor's API used here (see its README). */
 interface ConstrainautorInstance {
@@ -39,13 +40,13 @@ export function constrainedTriangulation(
   }
   const con = new Constrainautor(del);
   for (let s = 0; s < segA.length; s++) {
-    const a = segA[s] ?? 0;
-    const b = segB[s] ?? 0;
+    const a = entry(segA, s);
+    const b = entry(segB, s);
     try {
       con.constrainOne(a, b);
     } catch (err) {
       const why = err instanceof Error ? err.message : String(err);
-      const at: [number, number] = [coords[2 * a] ?? 0, coords[2 * a + 1] ?? 0];
+      const at: [number, number] = [entry(coords, 2 * a), entry(coords, 2 * a + 1)];
       throw new MeshInputError({
         code: 'self-intersection',
         message: `boundary edge from (${at[0]}, ${at[1]}) to (${coords[2 * b]}, ${coords[2 * b + 1]}) crosses another edge or a vertex (${why})`,

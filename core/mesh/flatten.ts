@@ -8,6 +8,7 @@
  * Private to core/mesh: it returns plain coordinate lists, not geometry Rings.
  */
 import type { Ring } from '../geometry/types.ts';
+import { entry } from '../invariant.ts';
 
 export interface FlatRing {
   /** Vertex coordinates, closing vertex not repeated. */
@@ -53,15 +54,15 @@ export function flattenRingChords(ring: Ring, maxSweep: number): FlatRing {
   const onArc: number[] = [];
   let maxChordSweep = 0;
   for (let i = 0; i < count; i++) {
-    const xs = src[2 * i] ?? Number.NaN;
-    const ys = src[2 * i + 1] ?? Number.NaN;
-    const b = ring.bulge?.[i] ?? 0;
-    const before = ring.bulge?.[(i + count - 1) % count] ?? 0;
+    const xs = entry(src, 2 * i);
+    const ys = entry(src, 2 * i + 1);
+    const b = (ring.bulge ? entry(ring.bulge, i) : 0);
+    const before = (ring.bulge ? entry(ring.bulge, (i + count - 1) % count) : 0);
     out.push(xs, ys);
     onArc.push(b !== 0 || before !== 0 ? 1 : 0);
     if (b !== 0) {
       const j = (i + 1) % count;
-      const used = appendArcInterior(out, xs, ys, src[2 * j] ?? Number.NaN, src[2 * j + 1] ?? Number.NaN, b, maxSweep);
+      const used = appendArcInterior(out, xs, ys, entry(src, 2 * j), entry(src, 2 * j + 1), b, maxSweep);
       maxChordSweep = Math.max(maxChordSweep, used);
       while (onArc.length < out.length / 2) onArc.push(1);
     }
@@ -75,7 +76,7 @@ export function polylineSignedArea(xy: readonly number[]): number {
   let twice = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
-    twice += (xy[2 * i] ?? 0) * (xy[2 * j + 1] ?? 0) - (xy[2 * j] ?? 0) * (xy[2 * i + 1] ?? 0);
+    twice += (entry(xy, 2 * i)) * (entry(xy, 2 * j + 1)) - (entry(xy, 2 * j)) * (entry(xy, 2 * i + 1));
   }
   return twice / 2;
 }

@@ -16,6 +16,7 @@
 import { constrainedTriangulation, type ConstrainedTriangulation } from './cdt.ts';
 import type { SizeField } from './size-field.ts';
 import { MeshCancelledError, MeshRefinementError } from './types.ts';
+import { entry } from '../invariant.ts';
 
 export interface RefineInput {
   readonly xy: number[];
@@ -57,7 +58,7 @@ interface Round {
 
 function segmentKeyMap(w: RefineInput): Map<number, number> {
   const m = new Map<number, number>();
-  for (let s = 0; s < w.segA.length; s++) m.set((w.segA[s] ?? 0) * KEY + (w.segB[s] ?? 0), s);
+  for (let s = 0; s < w.segA.length; s++) m.set((entry(w.segA, s)) * KEY + (entry(w.segB, s)), s);
   return m;
 }
 
@@ -68,18 +69,18 @@ function segmentOfEdge(r: Round, a: number, b: number): number {
 /** Net winding gained crossing from the right of a→b to its left (0 for unconstrained edges). */
 function netAcross(w: RefineInput, r: Round, e: number): number {
   if (!r.cdt.isConstrained(e)) return 0;
-  const a = r.cdt.triangles[e] ?? 0;
-  const b = r.cdt.triangles[next(e)] ?? 0;
+  const a = entry(r.cdt.triangles, e);
+  const b = entry(r.cdt.triangles, next(e));
   const s = segmentOfEdge(r, a, b);
   if (s < 0) return 0;
-  const net = w.segNet[s] ?? 0;
+  const net = entry(w.segNet, s);
   return a < b ? net : -net;
 }
 
 function orient(xy: ArrayLike<number>, a: number, b: number, px: number, py: number): number {
-  const ax = xy[2 * a] ?? 0;
-  const ay = xy[2 * a + 1] ?? 0;
-  return ((xy[2 * b] ?? 0) - ax) * (py - ay) - ((xy[2 * b + 1] ?? 0) - ay) * (px - ax);
+  const ax = entry(xy, 2 * a);
+  const ay = entry(xy, 2 * a + 1);
+  return ((entry(xy, 2 * b)) - ax) * (py - ay) - ((entry(xy, 2 * b + 1)) - ay) * (px - ax);
 }
 
 /** Winding number of each triangle by a breadth-first walk from the convex hull (outside = 0). */
@@ -88,8 +89,8 @@ function classify(w: RefineInput, cdt: ConstrainedTriangulation, coords: Float64
   const count = tri.length / 3;
   const sign = new Int8Array(count);
   for (let t = 0; t < count; t++) {
-    const c = tri[3 * t + 2] ?? 0;
-    sign[t] = orient(coords, tri[3 * t] ?? 0, tri[3 * t + 1] ?? 0, coords[2 * c] ?? 0, coords[2 * c + 1] ?? 0) > 0 ? 1 : -1;
+    const c = entry(tri, 3 * t + 2);
+    sign[t] = orient(coords, entry(tri, 3 * t), entry(tri, 3 * t + 1), entry(coords, 2 * c), entry(coords, 2 * c + 1)) > 0 ? 1 : -1;
   }
   const round: Round = { cdt, sign, inside: new Uint8Array(count), segOf: segmentKeyMap(w) };
   const winding = new Int32Array(count);
@@ -97,20 +98,20 @@ function classify(w: RefineInput, cdt: ConstrainedTriangulation, coords: Float64
   const queue: number[] = [];
   for (let e = 0; e < tri.length; e++) {
     const t = Math.floor(e / 3);
-    if ((cdt.halfedges[e] ?? 0) >= 0 || seen[t]) continue;
+    if ((entry(cdt.halfedges, e)) >= 0 || seen[t]) continue;
     seen[t] = 1;
-    winding[t] = (sign[t] ?? 1) * netAcross(w, round, e);
+    winding[t] = (entry(sign, t)) * netAcross(w, round, e);
     queue.push(t);
   }
   for (let q = 0; q < queue.length; q++) {
-    const t = queue[q] ?? 0;
+    const t = entry(queue, q);
     for (let k = 0; k < 3; k++) {
       const e = 3 * t + k;
-      const f = cdt.halfedges[e] ?? -1;
+      const f = entry(cdt.halfedges, e);
       const u = Math.floor(f / 3);
       if (f < 0 || seen[u]) continue;
       seen[u] = 1;
-      winding[u] = (winding[t] ?? 0) - (sign[t] ?? 1) * netAcross(w, round, e);
+      winding[u] = (entry(winding, t)) - (entry(sign, t)) * netAcross(w, round, e);
       queue.push(u);
     }
   }
@@ -123,13 +124,13 @@ function encroachedSegments(r: Round, coords: Float64Array, into: Set<number>): 
   const tri = r.cdt.triangles;
   for (let e = 0; e < tri.length; e++) {
     if (!r.inside[Math.floor(e / 3)] || !r.cdt.isConstrained(e)) continue;
-    const a = tri[e] ?? 0;
-    const b = tri[next(e)] ?? 0;
-    const c = tri[prev(e)] ?? 0;
-    const ux = (coords[2 * a] ?? 0) - (coords[2 * c] ?? 0);
-    const uy = (coords[2 * a + 1] ?? 0) - (coords[2 * c + 1] ?? 0);
-    const vx = (coords[2 * b] ?? 0) - (coords[2 * c] ?? 0);
-    const vy = (coords[2 * b + 1] ?? 0) - (coords[2 * c + 1] ?? 0);
+    const a = entry(tri, e);
+    const b = entry(tri, next(e));
+    const c = entry(tri, prev(e));
+    const ux = (entry(coords, 2 * a)) - (entry(coords, 2 * c));
+    const uy = (entry(coords, 2 * a + 1)) - (entry(coords, 2 * c + 1));
+    const vx = (entry(coords, 2 * b)) - (entry(coords, 2 * c));
+    const vy = (entry(coords, 2 * b + 1)) - (entry(coords, 2 * c + 1));
     if (ux * vx + uy * vy < -1e-12 * Math.hypot(ux, uy) * Math.hypot(vx, vy)) {
       const s = segmentOfEdge(r, a, b);
       if (s >= 0) into.add(s);
@@ -147,15 +148,15 @@ interface Circle {
 }
 
 function circumcircle(coords: Float64Array, tri: Uint32Array, t: number): Circle {
-  const i0 = tri[3 * t] ?? 0;
-  const i1 = tri[3 * t + 1] ?? 0;
-  const i2 = tri[3 * t + 2] ?? 0;
-  const ax = coords[2 * i0] ?? 0;
-  const ay = coords[2 * i0 + 1] ?? 0;
-  const bx = (coords[2 * i1] ?? 0) - ax;
-  const by = (coords[2 * i1 + 1] ?? 0) - ay;
-  const cx = (coords[2 * i2] ?? 0) - ax;
-  const cy = (coords[2 * i2 + 1] ?? 0) - ay;
+  const i0 = entry(tri, 3 * t);
+  const i1 = entry(tri, 3 * t + 1);
+  const i2 = entry(tri, 3 * t + 2);
+  const ax = entry(coords, 2 * i0);
+  const ay = entry(coords, 2 * i0 + 1);
+  const bx = (entry(coords, 2 * i1)) - ax;
+  const by = (entry(coords, 2 * i1 + 1)) - ay;
+  const cx = (entry(coords, 2 * i2)) - ax;
+  const cy = (entry(coords, 2 * i2 + 1)) - ay;
   const d = 2 * (bx * cy - by * cx);
   const b2 = bx * bx + by * by;
   const c2 = cx * cx + cy * cy;
@@ -164,8 +165,8 @@ function circumcircle(coords: Float64Array, tri: Uint32Array, t: number): Circle
   const r = Math.hypot(ox, oy);
   const l = [Math.sqrt(b2), Math.hypot(cx - bx, cy - by), Math.sqrt(c2)];
   let shortest = 0;
-  for (let k = 1; k < 3; k++) if ((l[k] ?? 0) < (l[shortest] ?? 0)) shortest = k;
-  return { x: ax + ox, y: ay + oy, r, sinMin: (l[shortest] ?? 0) / (2 * r), shortest };
+  for (let k = 1; k < 3; k++) if ((entry(l, k)) < (entry(l, shortest))) shortest = k;
+  return { x: ax + ox, y: ay + oy, r, sinMin: (entry(l, shortest)) / (2 * r), shortest };
 }
 
 /**
@@ -174,28 +175,28 @@ function circumcircle(coords: Float64Array, tri: Uint32Array, t: number): Circle
  */
 function walkTo(r: Round, coords: Float64Array, t: number, px: number, py: number): number | null {
   const tri = r.cdt.triangles;
-  const c = (k: number): number => tri[3 * t + k] ?? 0;
-  const gx = ((coords[2 * c(0)] ?? 0) + (coords[2 * c(1)] ?? 0) + (coords[2 * c(2)] ?? 0)) / 3;
-  const gy = ((coords[2 * c(0) + 1] ?? 0) + (coords[2 * c(1) + 1] ?? 0) + (coords[2 * c(2) + 1] ?? 0)) / 3;
+  const c = (k: number): number => entry(tri, 3 * t + k);
+  const gx = ((entry(coords, 2 * c(0))) + (entry(coords, 2 * c(1))) + (entry(coords, 2 * c(2)))) / 3;
+  const gy = ((entry(coords, 2 * c(0) + 1)) + (entry(coords, 2 * c(1) + 1)) + (entry(coords, 2 * c(2) + 1))) / 3;
   let cur = t;
-  let entry = -1;
+  let entered = -1;
   for (let step = 0; step < 10_000; step++) {
     let exit = -1;
     for (let k = 0; k < 3 && exit < 0; k++) {
       const e = 3 * cur + k;
-      if (e === entry) continue;
-      const a = tri[e] ?? 0;
-      const b = tri[next(e)] ?? 0;
-      if ((r.sign[cur] ?? 1) * orient(coords, a, b, px, py) >= 0) continue;
-      const oa = (px - gx) * ((coords[2 * a + 1] ?? 0) - gy) - (py - gy) * ((coords[2 * a] ?? 0) - gx);
-      const ob = (px - gx) * ((coords[2 * b + 1] ?? 0) - gy) - (py - gy) * ((coords[2 * b] ?? 0) - gx);
+      if (e === entered) continue;
+      const a = entry(tri, e);
+      const b = entry(tri, next(e));
+      if ((entry(r.sign, cur)) * orient(coords, a, b, px, py) >= 0) continue;
+      const oa = (px - gx) * ((entry(coords, 2 * a + 1)) - gy) - (py - gy) * ((entry(coords, 2 * a)) - gx);
+      const ob = (px - gx) * ((entry(coords, 2 * b + 1)) - gy) - (py - gy) * ((entry(coords, 2 * b)) - gx);
       if (oa * ob <= 0) exit = e;
     }
     if (exit < 0) return cur;
     if (r.cdt.isConstrained(exit)) return -(1 + exit);
-    const f = r.cdt.halfedges[exit] ?? -1;
+    const f = entry(r.cdt.halfedges, exit);
     if (f < 0) return -(1 + exit);
-    entry = f;
+    entered = f;
     cur = Math.floor(f / 3);
   }
   return null;
@@ -206,11 +207,11 @@ function discGrid(w: RefineInput, cell: number): (x: number, y: number) => numbe
   const cells = new Map<number, number[]>();
   const key = (i: number, j: number): number => i * 1_048_576 + j;
   for (let s = 0; s < w.segA.length; s++) {
-    const a = w.segA[s] ?? 0;
-    const b = w.segB[s] ?? 0;
-    const mx = ((w.xy[2 * a] ?? 0) + (w.xy[2 * b] ?? 0)) / 2;
-    const my = ((w.xy[2 * a + 1] ?? 0) + (w.xy[2 * b + 1] ?? 0)) / 2;
-    const rad = Math.hypot((w.xy[2 * b] ?? 0) - (w.xy[2 * a] ?? 0), (w.xy[2 * b + 1] ?? 0) - (w.xy[2 * a + 1] ?? 0)) / 2;
+    const a = entry(w.segA, s);
+    const b = entry(w.segB, s);
+    const mx = ((entry(w.xy, 2 * a)) + (entry(w.xy, 2 * b))) / 2;
+    const my = ((entry(w.xy, 2 * a + 1)) + (entry(w.xy, 2 * b + 1))) / 2;
+    const rad = Math.hypot((entry(w.xy, 2 * b)) - (entry(w.xy, 2 * a)), (entry(w.xy, 2 * b + 1)) - (entry(w.xy, 2 * a + 1))) / 2;
     for (let i = Math.floor((mx - rad) / cell); i <= Math.floor((mx + rad) / cell); i++) {
       for (let j = Math.floor((my - rad) / cell); j <= Math.floor((my + rad) / cell); j++) {
         const k = key(i, j);
@@ -226,29 +227,29 @@ function discGrid(w: RefineInput, cell: number): (x: number, y: number) => numbe
 function meanSegmentLength(w: RefineInput): number {
   let sum = 0;
   for (let s = 0; s < w.segA.length; s++) {
-    const a = w.segA[s] ?? 0;
-    const b = w.segB[s] ?? 0;
-    sum += Math.hypot((w.xy[2 * b] ?? 0) - (w.xy[2 * a] ?? 0), (w.xy[2 * b + 1] ?? 0) - (w.xy[2 * a + 1] ?? 0));
+    const a = entry(w.segA, s);
+    const b = entry(w.segB, s);
+    sum += Math.hypot((entry(w.xy, 2 * b)) - (entry(w.xy, 2 * a)), (entry(w.xy, 2 * b + 1)) - (entry(w.xy, 2 * a + 1)));
   }
   return sum / Math.max(1, w.segA.length);
 }
 
 function encroaches(w: RefineInput, s: number, x: number, y: number): boolean {
-  const a = w.segA[s] ?? 0;
-  const b = w.segB[s] ?? 0;
-  const ax = w.xy[2 * a] ?? 0;
-  const ay = w.xy[2 * a + 1] ?? 0;
-  const bx = w.xy[2 * b] ?? 0;
-  const by = w.xy[2 * b + 1] ?? 0;
+  const a = entry(w.segA, s);
+  const b = entry(w.segB, s);
+  const ax = entry(w.xy, 2 * a);
+  const ay = entry(w.xy, 2 * a + 1);
+  const bx = entry(w.xy, 2 * b);
+  const by = entry(w.xy, 2 * b + 1);
   return (ax - x) * (bx - x) + (ay - y) * (by - y) < 0;
 }
 
 function splitSegment(w: RefineInput, s: number): void {
-  const a = w.segA[s] ?? 0;
-  const b = w.segB[s] ?? 0;
+  const a = entry(w.segA, s);
+  const b = entry(w.segB, s);
   const m = w.xy.length / 2;
-  w.xy.push(((w.xy[2 * a] ?? 0) + (w.xy[2 * b] ?? 0)) / 2, ((w.xy[2 * a + 1] ?? 0) + (w.xy[2 * b + 1] ?? 0)) / 2);
-  const net = w.segNet[s] ?? 0;
+  w.xy.push(((entry(w.xy, 2 * a)) + (entry(w.xy, 2 * b))) / 2, ((entry(w.xy, 2 * a + 1)) + (entry(w.xy, 2 * b + 1))) / 2);
+  const net = entry(w.segNet, s);
   // a < b < m: (a, m) keeps the direction of a → b, (b, m) reverses it.
   w.segB[s] = m;
   w.segA.push(b);
@@ -260,12 +261,12 @@ function splitSegment(w: RefineInput, s: number): void {
 export function presplitSegments(w: RefineInput, size: SizeField, maxPoints: number): void {
   for (let s = 0; s < w.segA.length; s++) {
     for (;;) {
-      const a = w.segA[s] ?? 0;
-      const b = w.segB[s] ?? 0;
-      const ax = w.xy[2 * a] ?? 0;
-      const ay = w.xy[2 * a + 1] ?? 0;
-      const bx = w.xy[2 * b] ?? 0;
-      const by = w.xy[2 * b + 1] ?? 0;
+      const a = entry(w.segA, s);
+      const b = entry(w.segB, s);
+      const ax = entry(w.xy, 2 * a);
+      const ay = entry(w.xy, 2 * a + 1);
+      const bx = entry(w.xy, 2 * b);
+      const by = entry(w.xy, 2 * b + 1);
       if (Math.hypot(bx - ax, by - ay) <= size.at((ax + bx) / 2, (ay + by) / 2)) break;
       if (w.xy.length / 2 >= maxPoints) throw new MeshRefinementError(`boundary splitting reached the cap of ${maxPoints} points`, w.xy.length / 2, 0);
       splitSegment(w, s);
@@ -288,11 +289,11 @@ interface Candidate {
  * circumcentre. Fewer points than circumcentres, same quality bound.
  */
 function offCentre(coords: Float64Array, tri: Uint32Array, t: number, c: Circle, minAngleRad: number): [number, number] {
-  const p = tri[3 * t + c.shortest] ?? 0;
-  const q = tri[3 * t + ((c.shortest + 1) % 3)] ?? 0;
-  const mx = ((coords[2 * p] ?? 0) + (coords[2 * q] ?? 0)) / 2;
-  const my = ((coords[2 * p + 1] ?? 0) + (coords[2 * q + 1] ?? 0)) / 2;
-  const half = Math.hypot((coords[2 * q] ?? 0) - (coords[2 * p] ?? 0), (coords[2 * q + 1] ?? 0) - (coords[2 * p + 1] ?? 0)) / 2;
+  const p = entry(tri, 3 * t + c.shortest);
+  const q = entry(tri, 3 * t + ((c.shortest + 1) % 3));
+  const mx = ((entry(coords, 2 * p)) + (entry(coords, 2 * q))) / 2;
+  const my = ((entry(coords, 2 * p + 1)) + (entry(coords, 2 * q + 1))) / 2;
+  const half = Math.hypot((entry(coords, 2 * q)) - (entry(coords, 2 * p)), (entry(coords, 2 * q + 1)) - (entry(coords, 2 * p + 1))) / 2;
   const dc = Math.hypot(c.x - mx, c.y - my);
   const d = half / Math.tan(minAngleRad / 2);
   if (!(d < dc) || dc === 0) return [c.x, c.y];
@@ -307,11 +308,11 @@ function badTriangles(r: Round, coords: Float64Array, s: RefineSettings): { list
   for (let t = 0; t < tri.length / 3; t++) {
     if (!r.inside[t]) continue;
     const c = circumcircle(coords, tri, t);
-    const i0 = tri[3 * t] ?? 0;
-    const i1 = tri[3 * t + 1] ?? 0;
-    const i2 = tri[3 * t + 2] ?? 0;
-    const gx = ((coords[2 * i0] ?? 0) + (coords[2 * i1] ?? 0) + (coords[2 * i2] ?? 0)) / 3;
-    const gy = ((coords[2 * i0 + 1] ?? 0) + (coords[2 * i1 + 1] ?? 0) + (coords[2 * i2 + 1] ?? 0)) / 3;
+    const i0 = entry(tri, 3 * t);
+    const i1 = entry(tri, 3 * t + 1);
+    const i2 = entry(tri, 3 * t + 2);
+    const gx = ((entry(coords, 2 * i0)) + (entry(coords, 2 * i1)) + (entry(coords, 2 * i2))) / 3;
+    const gy = ((entry(coords, 2 * i0 + 1)) + (entry(coords, 2 * i1 + 1)) + (entry(coords, 2 * i2 + 1))) / 3;
     const tooLarge = c.r > SIZE_RADIUS_RATIO * s.size.at(gx, gy);
     let tooSharp = c.sinMin < sinTarget;
     if (tooSharp && !tooLarge) {
@@ -344,7 +345,7 @@ function chooseInsertions(w: RefineInput, r: Round, coords: Float64Array, bad: r
     if (hit === null) continue;
     if (hit < 0) {
       const e = -hit - 1;
-      const seg = segmentOfEdge(r, r.cdt.triangles[e] ?? 0, r.cdt.triangles[next(e)] ?? 0);
+      const seg = segmentOfEdge(r, entry(r.cdt.triangles, e), entry(r.cdt.triangles, next(e)));
       if (seg >= 0) split.add(seg);
       continue;
     }
@@ -361,7 +362,7 @@ function chooseInsertions(w: RefineInput, r: Round, coords: Float64Array, bad: r
     blocked[hit] = 1;
     blocked[t] = 1;
     for (let k = 0; k < 3; k++) {
-      const f = r.cdt.halfedges[3 * hit + k] ?? -1;
+      const f = entry(r.cdt.halfedges, 3 * hit + k);
       if (f >= 0) blocked[Math.floor(f / 3)] = 1;
     }
   }
@@ -378,10 +379,10 @@ function addFrame(w: RefineInput): void {
   let xmax = -Infinity;
   let ymax = -Infinity;
   for (let i = 0; i < w.xy.length; i += 2) {
-    xmin = Math.min(xmin, w.xy[i] ?? 0);
-    xmax = Math.max(xmax, w.xy[i] ?? 0);
-    ymin = Math.min(ymin, w.xy[i + 1] ?? 0);
-    ymax = Math.max(ymax, w.xy[i + 1] ?? 0);
+    xmin = Math.min(xmin, entry(w.xy, i));
+    xmax = Math.max(xmax, entry(w.xy, i));
+    ymin = Math.min(ymin, entry(w.xy, i + 1));
+    ymax = Math.max(ymax, entry(w.xy, i + 1));
   }
   const pad = Math.hypot(xmax - xmin, ymax - ymin);
   w.xy.push(xmin - pad, ymin - pad, xmax + pad, ymin - pad, xmax + pad, ymax + pad, xmin - pad, ymax + pad);
@@ -415,10 +416,10 @@ function finish(coords: Float64Array, r: Round, rounds: number, insertedPoints: 
   const out: number[] = [];
   for (let t = 0; t < r.inside.length; t++) {
     if (!r.inside[t]) continue;
-    const a = tri[3 * t] ?? 0;
-    const b = tri[3 * t + 1] ?? 0;
-    const c = tri[3 * t + 2] ?? 0;
-    if ((r.sign[t] ?? 1) > 0) out.push(a, b, c);
+    const a = entry(tri, 3 * t);
+    const b = entry(tri, 3 * t + 1);
+    const c = entry(tri, 3 * t + 2);
+    if ((entry(r.sign, t)) > 0) out.push(a, b, c);
     else out.push(a, c, b);
   }
   return { xy: coords, triangles: Int32Array.from(out), rounds, insertedPoints, badTriangles };

@@ -15,7 +15,7 @@
  *
  * Method: meshRegion (core/mesh) at half the requested layers, each straight-sided T6 element
  * then split into four (nested mesh at the requested layers). The warping function is solved on
- * both levels by conjugate gradients preconditioned with symmetric Gauss–Seidel (sparse.ts; the
+ * both levels by conjugate gradients preconditioned with incomplete Cholesky IC(0) (sparse.ts; the
  * coarse solution, exactly prolongated, starts the fine solve).
  * The constants come from the fine level. Because J_h ≥ J_{h/2} ≥ J (minimum principle,
  * docs/methods.md §7.2), J_coarse − J_fine is a lower bound of the coarse error; the reported jRelativeError is
@@ -29,7 +29,7 @@
  */
 import type { Region } from '../geometry/types.ts';
 import { DEFAULT_CHORD_ANGLE_DEG, MeshCancelledError, MeshInputError, meshGraph, regionGraph, type MeshSimplification, type PlanarGraph, type TriangleMesh } from '../mesh/index.ts';
-import { invariant } from '../invariant.ts';
+import { entry, invariant } from '../invariant.ts';
 import { TorsionCancelledError } from './errors.ts';
 import { pieceLocator } from './pieces.ts';
 import type { TorsionOptions, TorsionResult } from './types.ts';
@@ -220,7 +220,7 @@ function analysis(region: Region, options: TorsionOptions, weigh: ((xy: Float64A
     const meshMs = now() - t0;
     // The coarse level only feeds the error estimate and the start of the fine solve; with the
     // energy form of J its solver error enters squared, so 1e-7 is ample there.
-    const solve = solveWarping(coarse, { tolerance: Math.max(tolerance, 1e-7), maxIterations, now, onProgress: stage(progress, 0.15, 0.3) });
+    const solve = solveWarping(coarse, { tolerance: Math.max(tolerance, 1e-7), maxIterations, now, preconditioner: options.preconditioner, onProgress: stage(progress, 0.15, 0.3) });
     return { base, coarse, solve, geometryChange: geometryChangeOfJ(base.simplification, coarse, solve), meshMs };
   };
   try {
@@ -254,6 +254,7 @@ function analysis(region: Region, options: TorsionOptions, weigh: ((xy: Float64A
       maxIterations,
       now,
       initial: prolongate(coarse, fine, solveC.omega),
+      preconditioner: options.preconditioner,
       onProgress: stage(progress, 0.3, 1),
     });
     const p = base.reentrantCorners > 0 ? 4 / 3 : 2;
@@ -312,12 +313,12 @@ export function torsionStressField(analysis: TorsionAnalysis): TorsionStressFiel
   const magnitude = new Float64Array(n);
   let maxMagnitude = 0;
   for (let i = 0; i < n; i++) {
-    const X = (mesh.xy[2 * i] ?? 0) - s.xc;
-    const Y = (mesh.xy[2 * i + 1] ?? 0) - s.yc;
-    tauX[i] = ((gx[i] ?? 0) - Y) / s.J;
-    tauY[i] = ((gy[i] ?? 0) + X) / s.J;
-    magnitude[i] = Math.hypot(tauX[i] ?? 0, tauY[i] ?? 0);
-    maxMagnitude = Math.max(maxMagnitude, magnitude[i] ?? 0);
+    const X = (entry(mesh.xy, 2 * i)) - s.xc;
+    const Y = (entry(mesh.xy, 2 * i + 1)) - s.yc;
+    tauX[i] = ((entry(gx, i)) - Y) / s.J;
+    tauY[i] = ((entry(gy, i)) + X) / s.J;
+    magnitude[i] = Math.hypot(entry(tauX, i), entry(tauY, i));
+    maxMagnitude = Math.max(maxMagnitude, entry(magnitude, i));
   }
   return { xy: mesh.xy, triangles: childTriangles(mesh), tauX, tauY, magnitude, maxMagnitude, unboundedAtCorners: analysis.reentrantCorners > 0 };
 }

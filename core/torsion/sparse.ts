@@ -1,12 +1,13 @@
 /**
  * Symmetric sparse matrices in compressed-row form (CSR, Float64Array/Int32Array) and a
- * conjugate-gradient solver preconditioned with symmetric Gauss–Seidel (Eisenstat's form, see
- * pcgSolve) for the singular, consistent Neumann system of the warping function (docs/methods.md §7.4,
- * §7.9, where the methods note suggests a plain diagonal (Jacobi) preconditioner instead).
+ * conjugate-gradient solver preconditioned with incomplete Cholesky IC(0) (symmetric
+ * Gauss–Seidel on request; see Preconditioner) for the singular, consistent Neumann system of the
+ * warping function (docs/methods.md §7.4, §7.9).
  * The null space is the constants on each connected component: the right-hand side is made
  * orthogonal to it (per-component mean removed) and the iterate's per-component mean is removed
  * at the end. Stops at ‖r‖/‖F‖ ≤ tolerance or throws TorsionSolveError at the iteration cap.
  */
+import { entry, invariant } from '../invariant.ts';
 import { TorsionCancelledError, TorsionSolveError } from './errors.ts';
 
 export interface Csr {
@@ -60,11 +61,11 @@ export function csrPattern(n: number, elements: Int32Array, per: number): Csr {
 
 /** Position of column j in row i (binary search; the pattern must contain it). */
 export function csrIndex(a: Csr, i: number, j: number): number {
-  let lo = a.rowStart[i] ?? 0;
-  let hi = (a.rowStart[i + 1] ?? 0) - 1;
+  let lo = entry(a.rowStart, i);
+  let hi = (entry(a.rowStart, i + 1)) - 1;
   while (lo <= hi) {
     const mid = (lo + hi) >> 1;
-    const c = a.col[mid] ?? 0;
+    const c = entry(a.col, mid);
     if (c === j) return mid;
     if (c < j) lo = mid + 1;
     else hi = mid - 1;
@@ -89,13 +90,13 @@ export function removeComponentMeans(v: Float64Array, component: Int32Array, com
   const sum = new Float64Array(components);
   const cnt = new Float64Array(components);
   for (let i = 0; i < v.length; i++) {
-    const c = component[i] ?? 0;
-    sum[c] = (sum[c] ?? 0) + (v[i] ?? 0);
-    cnt[c] = (cnt[c] ?? 0) + 1;
+    const c = entry(component, i);
+    sum[c] = (entry(sum, c)) + (entry(v, i));
+    cnt[c] = (entry(cnt, c)) + 1;
   }
   for (let i = 0; i < v.length; i++) {
-    const c = component[i] ?? 0;
-    v[i] = (v[i] ?? 0) - (sum[c] ?? 0) / (cnt[c] ?? 1);
+    const c = entry(component, i);
+    v[i] = (entry(v, i)) - (entry(sum, c)) / (entry(cnt, c));
   }
 }
 
@@ -104,6 +105,8 @@ export interface PcgSettings {
   readonly maxIterations: number;
   readonly component: Int32Array;
   readonly components: number;
+  /** Preconditioner (default 'ic0'). */
+  readonly preconditioner?: Preconditioner | undefined;
   /** Called every 32 iterations with the solve's progress 0..1; false cancels. */
   readonly onProgress?: ((fraction: number) => boolean | void) | undefined;
 }
@@ -120,10 +123,22 @@ const dot = (a: Float64Array, b: Float64Array): number => {
   return s;
 };
 
+/**
+ * Preconditioner of the conjugate-gradient solve (docs/methods.md §7.9):
+ *  - 'ic0' (the default): incomplete Cholesky without fill, M = L̃ L̃ᵀ with L̃ on the lower
+ *    pattern of A (Saad, Iterative Methods for Sparse Linear Systems, §10.3.2), factored from
+ *    A + α·diag(A) with α raised from 1e-4 until every pivot is positive (K is only
+ *    semi-definite and not an M-matrix). An iteration costs a product and two triangular solves.
+ *  - 'sgs': symmetric Gauss–Seidel, M = (D + L) D⁻¹ (D + U), with Eisenstat's trick (one sweep
+ *    pair per iteration). Kept for the bench's measured comparison (tests/bench/torsion.bench.ts).
+ */
+export type Preconditioner = 'sgs' | 'ic0';
+
 /** Triangular parts of A around its diagonal (positions diagAt), used by the Eisenstat trick. */
 interface Split {
   readonly a: Csr;
   readonly diagAt: Int32Array;
+  /** Diagonal of A (1 where a node has no element). */
   readonly d: Float64Array;
   readonly sqrtD: Float64Array;
 }
@@ -154,22 +169,18 @@ function upperSolve(m: Split, v: Float64Array, u: Float64Array): void {
 function triangularMultiply(m: Split, v: Float64Array, u: Float64Array, upper: boolean): void {
   const { rowStart, col, value } = m.a;
   for (let i = 0; i < m.a.n; i++) {
-    const from = upper ? m.diagAt[i]! : rowStart[i]!;
-    const to = upper ? rowStart[i + 1]! : m.diagAt[i]! + 1;
-    let s = 0;
+    const from = upper ? m.diagAt[i]! + 1 : rowStart[i]!;
+    const to = upper ? rowStart[i + 1]! : m.diagAt[i]!;
+    let s = m.d[i]! * v[i]!;
     for (let p = from; p < to; p++) s += value[p]! * v[col[p]!]!;
     u[i] = s;
   }
 }
 
 /**
- * Solves A x = f (A symmetric positive semi-definite) from the initial guess x0, by conjugate
- * gradients preconditioned with symmetric Gauss–Seidel, M = (D + L) D⁻¹ (D + U) = C Cᵀ with
- * C = (D + L) D^{-1/2} (SPD whenever D > 0, so it suits the semi-definite K). Eisenstat's trick
- * (Eisenstat 1981; Saad, Iterative Methods for Sparse Linear Systems, §9.2) applies
- * C⁻¹ A C⁻ᵀ with one forward and one backward sweep, using A = (D + L) + (D + U) − D, so an
- * iteration costs about one matrix product. The true residual ‖f − A x‖/‖f‖ = ‖C r̂‖/‖f‖ is
- * checked every CHECK_EVERY iterations and decides convergence.
+ * Solves A x = f (A symmetric positive semi-definite) from the initial guess x0 by conjugate
+ * gradients with the preconditioner s.preconditioner (default 'ic0'). Stops at
+ * ‖f − A x‖/‖f‖ ≤ tolerance; throws TorsionSolveError at the iteration cap.
  */
 export function pcgSolve(a: Csr, f: Float64Array, x0: Float64Array, s: PcgSettings): PcgResult {
   const n = a.n;
@@ -180,12 +191,38 @@ export function pcgSolve(a: Csr, f: Float64Array, x0: Float64Array, s: PcgSettin
   const diagAt = new Int32Array(n);
   const d = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    diagAt[i] = csrIndex(a, i, i);
-    const v = a.value[diagAt[i]!] ?? 0;
+    const at = csrIndex(a, i, i);
+    invariant(at >= 0, `sparse matrix row ${i} has no diagonal entry`);
+    diagAt[i] = at;
+    const v = a.value[at]!;
     // A zero diagonal only occurs for a node no element uses; 1 keeps it decoupled.
     d[i] = v > 0 ? v : 1;
   }
-  const m: Split = { a, diagAt, d, sqrtD: d.map(Math.sqrt) };
+  const x = (s.preconditioner ?? 'ic0') === 'ic0' ? icPcg(a, diagAt, d, b, bnorm, x0, s) : sgsPcg({ a, diagAt, d, sqrtD: d.map(Math.sqrt) }, b, bnorm, x0, s);
+  removeComponentMeans(x.x, s.component, s.components);
+  return x;
+}
+
+function progressCheck(s: PcgSettings, rel0: number): (it: number, rel: number) => void {
+  return (it, rel) => {
+    if (s.onProgress && it % 32 === 0) {
+      const fraction = Math.log(rel0 / rel) / Math.log(rel0 / s.tolerance);
+      if (s.onProgress(Math.min(1, Math.max(0, fraction))) === false) throw new TorsionCancelledError();
+    }
+  };
+}
+
+/**
+ * PCG with symmetric Gauss–Seidel, M = (D + L) D⁻¹ (D + U) = C Cᵀ, C = (D + L) D^{-1/2} (SPD
+ * whenever D > 0, so it suits the semi-definite K). Eisenstat's trick (Eisenstat 1981; Saad,
+ * Iterative Methods for Sparse Linear Systems, §9.2) applies C⁻¹ A C⁻ᵀ with one forward and one
+ * backward sweep, using A = (D + L) + (D + U) − D, so an iteration costs about one matrix product. The true
+ * residual ‖f − A x‖/‖f‖ = ‖C r̂‖/‖f‖ is checked every CHECK_EVERY iterations and decides
+ * convergence.
+ */
+function sgsPcg(m: Split, b: Float64Array, bnorm: number, x0: Float64Array, s: PcgSettings): PcgResult {
+  const { a, d, sqrtD } = m;
+  const n = a.n;
   const t1 = new Float64Array(n);
   const t2 = new Float64Array(n);
   // r̂ = C⁻¹ (b − A x0) = D^{1/2} (D + L)⁻¹ (b − A x0);  y = Cᵀ x0 = D^{-1/2} (D + U) x0.
@@ -193,12 +230,12 @@ export function pcgSolve(a: Csr, f: Float64Array, x0: Float64Array, s: PcgSettin
   for (let i = 0; i < n; i++) t1[i] = b[i]! - t1[i]!;
   const r = new Float64Array(n);
   lowerSolve(m, t1, r);
-  for (let i = 0; i < n; i++) r[i]! *= m.sqrtD[i]!;
+  for (let i = 0; i < n; i++) r[i]! *= sqrtD[i]!;
   const y = new Float64Array(n);
   triangularMultiply(m, x0, y, true);
-  for (let i = 0; i < n; i++) y[i]! /= m.sqrtD[i]!;
+  for (let i = 0; i < n; i++) y[i]! /= sqrtD[i]!;
   const trueResidual = (): number => {
-    for (let i = 0; i < n; i++) t1[i] = r[i]! / m.sqrtD[i]!;
+    for (let i = 0; i < n; i++) t1[i] = r[i]! / sqrtD[i]!;
     triangularMultiply(m, t1, t2, false);
     return Math.sqrt(dot(t2, t2)) / bnorm;
   };
@@ -206,16 +243,16 @@ export function pcgSolve(a: Csr, f: Float64Array, x0: Float64Array, s: PcgSettin
   const q = new Float64Array(n);
   let rr = dot(r, r);
   let rel = trueResidual();
-  const rel0 = Math.max(rel, s.tolerance * 10);
+  const progress = progressCheck(s, Math.max(rel, s.tolerance * 10));
   let it = 0;
   while (rel > s.tolerance) {
     if (it >= s.maxIterations) throw new TorsionSolveError(it, rel, s.tolerance);
     // q = Â p: w = (D + U)⁻¹ D^{1/2} p;  q = D^{1/2} [w + (D + L)⁻¹ (D^{1/2} p − D w)].
-    for (let i = 0; i < n; i++) t1[i] = m.sqrtD[i]! * p[i]!;
+    for (let i = 0; i < n; i++) t1[i] = sqrtD[i]! * p[i]!;
     upperSolve(m, t1, t2);
     for (let i = 0; i < n; i++) t1[i]! -= d[i]! * t2[i]!;
     lowerSolve(m, t1, q);
-    for (let i = 0; i < n; i++) q[i] = m.sqrtD[i]! * (q[i]! + t2[i]!);
+    for (let i = 0; i < n; i++) q[i] = sqrtD[i]! * (q[i]! + t2[i]!);
     const alpha = rr / dot(p, q);
     let rrNext = 0;
     for (let i = 0; i < n; i++) {
@@ -228,16 +265,115 @@ export function pcgSolve(a: Csr, f: Float64Array, x0: Float64Array, s: PcgSettin
     for (let i = 0; i < n; i++) p[i] = r[i]! + beta * p[i]!;
     it++;
     if (it % CHECK_EVERY === 0) rel = trueResidual();
-    if (s.onProgress && it % 32 === 0) {
-      const fraction = Math.log(rel0 / rel) / Math.log(rel0 / s.tolerance);
-      if (s.onProgress(Math.min(1, Math.max(0, fraction))) === false) throw new TorsionCancelledError();
-    }
+    progress(it, rel);
   }
   // x = C⁻ᵀ y = (D + U)⁻¹ D^{1/2} y.
-  for (let i = 0; i < n; i++) t1[i] = m.sqrtD[i]! * y[i]!;
+  for (let i = 0; i < n; i++) t1[i] = sqrtD[i]! * y[i]!;
   const x = new Float64Array(n);
   upperSolve(m, t1, x);
-  removeComponentMeans(x, s.component, s.components);
+  return { x, iterations: it, relativeResidual: rel };
+}
+
+/**
+ * IC(0) factor L̃ of A + α·diag(A), stored at A's own lower positions (row i: rowStart[i]..diagAt[i],
+ * the diagonal last), or null when a pivot is not positive.
+ */
+function ic0Factor(a: Csr, diagAt: Int32Array, d: Float64Array, alpha: number): Float64Array | null {
+  const { rowStart, col, value } = a;
+  const l = new Float64Array(value.length);
+  for (let i = 0; i < a.n; i++) {
+    const rs = rowStart[i]!;
+    const di = diagAt[i]!;
+    let sq = 0;
+    for (let p = rs; p < di; p++) {
+      const k = col[p]!;
+      const dk = diagAt[k]!;
+      let v = value[p]!;
+      // v −= Σ_{j<k} L̃_ij L̃_kj over the two sorted lower rows.
+      let q1 = rs;
+      let q2 = rowStart[k]!;
+      while (q1 < p && q2 < dk) {
+        const c1 = col[q1]!;
+        const c2 = col[q2]!;
+        if (c1 === c2) v -= l[q1++]! * l[q2++]!;
+        else if (c1 < c2) q1++;
+        else q2++;
+      }
+      const lik = v / l[dk]!;
+      l[p] = lik;
+      sq += lik * lik;
+    }
+    const pivot = d[i]! * (1 + alpha) - sq;
+    if (!(pivot > 1e-12 * d[i]!)) return null;
+    l[di] = Math.sqrt(pivot);
+  }
+  return l;
+}
+
+/** z = (L̃ L̃ᵀ)⁻¹ r. */
+function icApply(a: Csr, diagAt: Int32Array, l: Float64Array, r: Float64Array, z: Float64Array): void {
+  const { rowStart, col } = a;
+  const n = a.n;
+  for (let i = 0; i < n; i++) {
+    let v = r[i]!;
+    const di = diagAt[i]!;
+    for (let p = rowStart[i]!; p < di; p++) v -= l[p]! * z[col[p]!]!;
+    z[i] = v / l[di]!;
+  }
+  for (let i = n - 1; i >= 0; i--) {
+    const di = diagAt[i]!;
+    const zi = (z[i]! /= l[di]!);
+    for (let p = rowStart[i]!; p < di; p++) z[col[p]!]! -= l[p]! * zi;
+  }
+}
+
+/** Plain PCG with the IC(0) factor; convergence of the recurrence residual is confirmed on the true one. */
+function icPcg(a: Csr, diagAt: Int32Array, d: Float64Array, b: Float64Array, bnorm: number, x0: Float64Array, s: PcgSettings): PcgResult {
+  const n = a.n;
+  let l: Float64Array | null = null;
+  for (let alpha = 1e-4; l === null; alpha *= 10) {
+    invariant(alpha <= 1, 'incomplete Cholesky found no positive pivots even with a diagonal shift of 1');
+    l = ic0Factor(a, diagAt, d, alpha);
+  }
+  const x = Float64Array.from(x0);
+  const r = new Float64Array(n);
+  csrMultiply(a, x, r);
+  for (let i = 0; i < n; i++) r[i] = b[i]! - r[i]!;
+  const z = new Float64Array(n);
+  icApply(a, diagAt, l, r, z);
+  const p = Float64Array.from(z);
+  const q = new Float64Array(n);
+  let rz = dot(r, z);
+  const trueResidual = (): number => {
+    csrMultiply(a, x, q);
+    let ss = 0;
+    for (let i = 0; i < n; i++) ss += (b[i]! - q[i]!) ** 2;
+    return Math.sqrt(ss) / bnorm;
+  };
+  let rel = Math.sqrt(dot(r, r)) / bnorm;
+  const progress = progressCheck(s, Math.max(rel, s.tolerance * 10));
+  let it = 0;
+  while (rel > s.tolerance) {
+    if (it >= s.maxIterations) throw new TorsionSolveError(it, rel, s.tolerance);
+    csrMultiply(a, p, q);
+    const alpha = rz / dot(p, q);
+    let rr = 0;
+    for (let i = 0; i < n; i++) {
+      x[i]! += alpha * p[i]!;
+      const ri = (r[i]! -= alpha * q[i]!);
+      rr += ri * ri;
+    }
+    icApply(a, diagAt, l, r, z);
+    const rzNext = dot(r, z);
+    const beta = rzNext / rz;
+    rz = rzNext;
+    for (let i = 0; i < n; i++) p[i] = z[i]! + beta * p[i]!;
+    it++;
+    rel = Math.sqrt(rr) / bnorm;
+    // The recurrence drifts from the true residual in floating point: confirm before stopping.
+    if (rel <= s.tolerance) rel = trueResidual();
+    progress(it, rel);
+  }
   return { x, iterations: it, relativeResidual: rel };
 }
 

@@ -52,6 +52,8 @@ export interface TorsionOptions {
    * exceeds it, the coarse level is redone with a smaller tolerance.
    */
   readonly geometryTolerance?: number;
+  /** Preconditioner of the conjugate-gradient solves (default 'ic0', incomplete Cholesky; 'sgs', symmetric Gauss–Seidel; core/torsion/sparse.ts). Optional extension, for the bench's comparison. */
+  readonly preconditioner?: 'ic0' | 'sgs';
   /** Clock in ms for the phase times of torsionAnalysis (e.g. performance.now); none by default. */
   readonly now?: () => number;
 }

@@ -11,7 +11,8 @@
  * warping freely, with no shear connection between them.
  */
 import { elementStiffnessAndLoad, MASS_T6, shapeDerivatives, elementGeometry } from './element.ts';
-import { csrIndex, csrMultiply, csrPattern, pcgSolve } from './sparse.ts';
+import { csrIndex, csrMultiply, csrPattern, pcgSolve, type Preconditioner } from './sparse.ts';
+import { entry } from '../invariant.ts';
 
 export interface QuadraticMesh {
   /** All node coordinates: corners first (same indices as the T3 mesh), then mid-side nodes. */
@@ -36,16 +37,16 @@ export function quadraticMesh(xy: Float64Array, triangles: Int32Array): Quadrati
     let m = mid.get(key);
     if (m === undefined) {
       m = out.length / 2;
-      out.push(((xy[2 * a] ?? 0) + (xy[2 * b] ?? 0)) / 2, ((xy[2 * a + 1] ?? 0) + (xy[2 * b + 1] ?? 0)) / 2);
+      out.push(((entry(xy, 2 * a)) + (entry(xy, 2 * b))) / 2, ((entry(xy, 2 * a + 1)) + (entry(xy, 2 * b + 1))) / 2);
       mid.set(key, m);
     }
     return m;
   };
   const el = new Int32Array((triangles.length / 3) * 6);
   for (let t = 0; t < triangles.length / 3; t++) {
-    const a = triangles[3 * t] ?? 0;
-    const b = triangles[3 * t + 1] ?? 0;
-    const c = triangles[3 * t + 2] ?? 0;
+    const a = entry(triangles, 3 * t);
+    const b = entry(triangles, 3 * t + 1);
+    const c = entry(triangles, 3 * t + 2);
     el.set([a, b, c, midpoint(a, b), midpoint(b, c), midpoint(c, a)], 6 * t);
   }
   return { xy: Float64Array.from(out), elements: el };
@@ -53,12 +54,12 @@ export function quadraticMesh(xy: Float64Array, triangles: Int32Array): Quadrati
 
 /**
  * The same mesh with nodes renumbered by reverse Cuthill–McKee (docs/methods.md §7.9): neighbours get
- * nearby numbers, which keeps the Gauss–Seidel sweeps effective and the memory access local.
+ * nearby numbers, which keeps the incomplete factor (and Gauss–Seidel sweeps) effective and the memory access local.
  */
 export function bandOrdered(q: QuadraticMesh): QuadraticMesh {
   const n = q.xy.length / 2;
   const pattern = csrPattern(n, q.elements, 6);
-  const degree = (i: number): number => (pattern.rowStart[i + 1] ?? 0) - (pattern.rowStart[i] ?? 0);
+  const degree = (i: number): number => (entry(pattern.rowStart, i + 1)) - (entry(pattern.rowStart, i));
   const order: number[] = [];
   const placed = new Uint8Array(n);
   // Start each component from its lowest-degree node (a cheap stand-in for a peripheral one).
@@ -68,10 +69,10 @@ export function bandOrdered(q: QuadraticMesh): QuadraticMesh {
     placed[start] = 1;
     order.push(start);
     for (let h = order.length - 1; h < order.length; h++) {
-      const v = order[h] ?? 0;
+      const v = entry(order, h);
       const nbrs: number[] = [];
-      for (let p = pattern.rowStart[v] ?? 0; p < (pattern.rowStart[v + 1] ?? 0); p++) {
-        const u = pattern.col[p] ?? 0;
+      for (let p = entry(pattern.rowStart, v); p < (entry(pattern.rowStart, v + 1)); p++) {
+        const u = entry(pattern.col, p);
         if (!placed[u]) {
           placed[u] = 1;
           nbrs.push(u);
@@ -86,10 +87,10 @@ export function bandOrdered(q: QuadraticMesh): QuadraticMesh {
   order.forEach((old, k) => (newId[old] = k));
   const xy = new Float64Array(2 * n);
   order.forEach((old, k) => {
-    xy[2 * k] = q.xy[2 * old] ?? 0;
-    xy[2 * k + 1] = q.xy[2 * old + 1] ?? 0;
+    xy[2 * k] = entry(q.xy, 2 * old);
+    xy[2 * k + 1] = entry(q.xy, 2 * old + 1);
   });
-  return { xy, elements: q.elements.map((v) => newId[v] ?? 0), weights: q.weights };
+  return { xy, elements: q.elements.map((v) => entry(newId, v)), weights: q.weights };
 }
 
 /** Corner triangles of the nested refinement: each T6 split into its four children. */
@@ -97,7 +98,7 @@ export function childTriangles(q: QuadraticMesh): Int32Array {
   const e = q.elements;
   const out = new Int32Array((e.length / 6) * 12);
   for (let t = 0; t < e.length / 6; t++) {
-    const [n0, n1, n2, n3, n4, n5] = [0, 1, 2, 3, 4, 5].map((k) => e[6 * t + k] ?? 0) as [number, number, number, number, number, number];
+    const [n0, n1, n2, n3, n4, n5] = [0, 1, 2, 3, 4, 5].map((k) => entry(e, 6 * t + k)) as [number, number, number, number, number, number];
     out.set([n0, n3, n5, n3, n1, n4, n5, n4, n2, n3, n4, n5], 12 * t);
   }
   return out;
@@ -107,11 +108,11 @@ export function childTriangles(q: QuadraticMesh): Int32Array {
 const CHILD_NODES: readonly (readonly (readonly [number, number, number])[])[] = (() => {
   const P: (readonly [number, number, number])[] = [[1, 0, 0], [0, 1, 0], [0, 0, 1], [0.5, 0.5, 0], [0, 0.5, 0.5], [0.5, 0, 0.5]];
   const kids = [[0, 3, 5], [3, 1, 4], [5, 4, 2], [3, 4, 5]];
-  const avg = (p: readonly number[], q: readonly number[]): [number, number, number] => [((p[0] ?? 0) + (q[0] ?? 0)) / 2, ((p[1] ?? 0) + (q[1] ?? 0)) / 2, ((p[2] ?? 0) + (q[2] ?? 0)) / 2];
-  return kids.map(([a, b, c]) => {
-    const A = P[a ?? 0] ?? [0, 0, 0];
-    const B = P[b ?? 0] ?? [0, 0, 0];
-    const C = P[c ?? 0] ?? [0, 0, 0];
+  const avg = (p: readonly number[], q: readonly number[]): [number, number, number] => [((entry(p, 0)) + (entry(q, 0))) / 2, ((entry(p, 1)) + (entry(q, 1))) / 2, ((entry(p, 2)) + (entry(q, 2))) / 2];
+  return kids.map((kid) => {
+    const A = entry(P, entry(kid, 0));
+    const B = entry(P, entry(kid, 1));
+    const C = entry(P, entry(kid, 2));
     return [A, B, C, avg(A, B), avg(B, C), avg(C, A)];
   });
 })();
@@ -121,12 +122,12 @@ export function prolongate(coarse: QuadraticMesh, fine: QuadraticMesh, values: F
   const out = new Float64Array(fine.xy.length / 2);
   for (let t = 0; t < coarse.elements.length / 6; t++) {
     for (let k = 0; k < 4; k++) {
-      const nodes = CHILD_NODES[k] ?? [];
+      const nodes = entry(CHILD_NODES, k);
       nodes.forEach(([l1, l2, l3], j) => {
         const N = [l1 * (2 * l1 - 1), l2 * (2 * l2 - 1), l3 * (2 * l3 - 1), 4 * l1 * l2, 4 * l2 * l3, 4 * l3 * l1];
         let v = 0;
-        for (let i = 0; i < 6; i++) v += (N[i] ?? 0) * (values[coarse.elements[6 * t + i] ?? 0] ?? 0);
-        out[fine.elements[6 * (4 * t + k) + j] ?? 0] = v;
+        for (let i = 0; i < 6; i++) v += (entry(N, i)) * (entry(values, entry(coarse.elements, 6 * t + i)));
+        out[entry(fine.elements, 6 * (4 * t + k) + j)] = v;
       });
     }
   }
@@ -139,6 +140,7 @@ export interface SolveSettings {
   /** Clock for the phase times, ms (the caller's; core has no timer of its own). */
   readonly now?: (() => number) | undefined;
   readonly initial?: Float64Array | undefined;
+  readonly preconditioner?: Preconditioner | undefined;
   readonly onProgress?: ((fraction: number) => boolean | void) | undefined;
 }
 
@@ -174,18 +176,18 @@ function componentsOf(nodes: number, elements: Int32Array): { count: number; of:
   const parent = Int32Array.from({ length: nodes }, (_, i) => i);
   const find = (i: number): number => {
     let r = i;
-    while ((parent[r] ?? r) !== r) r = parent[r] ?? r;
-    while ((parent[i] ?? i) !== r) {
-      const nx = parent[i] ?? i;
+    while (entry(parent, r) !== r) r = entry(parent, r);
+    while (entry(parent, i) !== r) {
+      const nx = entry(parent, i);
       parent[i] = r;
       i = nx;
     }
     return r;
   };
   for (let t = 0; t < elements.length; t += 6) {
-    const a = find(elements[t] ?? 0);
+    const a = find(entry(elements, t));
     for (let k = 1; k < 6; k++) {
-      const b = find(elements[t + k] ?? 0);
+      const b = find(entry(elements, t + k));
       if (a !== b) parent[b] = a;
     }
   }
@@ -194,8 +196,8 @@ function componentsOf(nodes: number, elements: Int32Array): { count: number; of:
   let count = 0;
   for (let i = 0; i < nodes; i++) {
     const r = find(i);
-    if ((label[r] ?? -1) < 0) label[r] = count++;
-    of[i] = label[r] ?? 0;
+    if ((entry(label, r)) < 0) label[r] = count++;
+    of[i] = entry(label, r);
   }
   return { count, of };
 }
@@ -212,15 +214,15 @@ function meshCentroid(q: QuadraticMesh): Moments {
   let sy = 0;
   const e = q.elements;
   // Local origin at the first node keeps the sums well conditioned (docs/methods.md §1.3).
-  const ox = q.xy[0] ?? 0;
-  const oy = q.xy[1] ?? 0;
+  const ox = entry(q.xy, 0);
+  const oy = entry(q.xy, 1);
   for (let t = 0; t < e.length; t += 6) {
-    const xs = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? 0)] ?? 0) - ox);
-    const ys = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? 0) + 1] ?? 0) - oy);
-    const a = (elementGeometry(xs, ys).twiceArea / 2) * (q.weights?.[t / 6] ?? 1);
+    const xs = [0, 1, 2].map((k) => (entry(q.xy, 2 * (entry(e, t + k)))) - ox);
+    const ys = [0, 1, 2].map((k) => (entry(q.xy, 2 * (entry(e, t + k)) + 1)) - oy);
+    const a = (elementGeometry(xs, ys).twiceArea / 2) * ((q.weights ? entry(q.weights, t / 6) : 1));
     area += a;
-    sx += (a * ((xs[0] ?? 0) + (xs[1] ?? 0) + (xs[2] ?? 0))) / 3;
-    sy += (a * ((ys[0] ?? 0) + (ys[1] ?? 0) + (ys[2] ?? 0))) / 3;
+    sx += (a * ((entry(xs, 0)) + (entry(xs, 1)) + (entry(xs, 2)))) / 3;
+    sy += (a * ((entry(ys, 0)) + (entry(ys, 1)) + (entry(ys, 2)))) / 3;
   }
   return { area, xc: ox + sx / area, yc: oy + sy / area };
 }
@@ -235,7 +237,7 @@ function massTimes(q: QuadraticMesh, X: Float64Array, Y: Float64Array, v: Float6
     const b = e[t + 1]!;
     const c = e[t + 2]!;
     const twice = (X[b]! - X[a]!) * (Y[c]! - Y[a]!) - (X[c]! - X[a]!) * (Y[b]! - Y[a]!);
-    const s = (twice / 2 / 180) * (q.weights?.[t / 6] ?? 1);
+    const s = (twice / 2 / 180) * ((q.weights ? entry(q.weights, t / 6) : 1));
     for (let j = 0; j < 6; j++) local[j] = v[e[t + j]!]!;
     for (let i = 0; i < 6; i++) {
       let acc = 0;
@@ -248,7 +250,7 @@ function massTimes(q: QuadraticMesh, X: Float64Array, Y: Float64Array, v: Float6
 
 const dotv = (a: Float64Array, b: Float64Array): number => {
   let s = 0;
-  for (let i = 0; i < a.length; i++) s += (a[i] ?? 0) * (b[i] ?? 0);
+  for (let i = 0; i < a.length; i++) s += (entry(a, i)) * (entry(b, i));
   return s;
 };
 
@@ -270,8 +272,8 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
   const X = new Float64Array(n);
   const Y = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    X[i] = (q.xy[2 * i] ?? 0) - xc;
-    Y[i] = (q.xy[2 * i + 1] ?? 0) - yc;
+    X[i] = (entry(q.xy, 2 * i)) - xc;
+    Y[i] = (entry(q.xy, 2 * i + 1)) - yc;
   }
   const K = csrPattern(n, q.elements, 6);
   const F = new Float64Array(n);
@@ -285,25 +287,25 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
   const e = q.elements;
   for (let t = 0; t < e.length; t += 6) {
     for (let k = 0; k < 6; k++) {
-      ex[k] = X[e[t + k] ?? 0] ?? 0;
-      ey[k] = Y[e[t + k] ?? 0] ?? 0;
+      ex[k] = entry(X, entry(e, t + k));
+      ey[k] = entry(Y, entry(e, t + k));
     }
     const a = elementStiffnessAndLoad(ex, ey, ke, fe);
-    const w = q.weights?.[t / 6] ?? 1;
+    const w = (q.weights ? entry(q.weights, t / 6) : 1);
     if (w !== 1) {
       for (let k = 0; k < 36; k++) ke[k]! *= w;
       for (let k = 0; k < 6; k++) fe[k]! *= w;
     }
-    const [xx, yy, xy] = triangleSecondMoments([ex[0] ?? 0, ex[1] ?? 0, ex[2] ?? 0], [ey[0] ?? 0, ey[1] ?? 0, ey[2] ?? 0], a * w);
+    const [xx, yy, xy] = triangleSecondMoments([entry(ex, 0), entry(ex, 1), entry(ex, 2)], [entry(ey, 0), entry(ey, 1), entry(ey, 2)], a * w);
     Iyy += xx;
     Ixx += yy;
     Ixy += xy;
     for (let i = 0; i < 6; i++) {
-      const ni = e[t + i] ?? 0;
-      F[ni] = (F[ni] ?? 0) + (fe[i] ?? 0);
+      const ni = entry(e, t + i);
+      F[ni] = (entry(F, ni)) + (entry(fe, i));
       for (let j = 0; j < 6; j++) {
-        const p = csrIndex(K, ni, e[t + j] ?? 0);
-        K.value[p] = (K.value[p] ?? 0) + (ke[6 * i + j] ?? 0);
+        const p = csrIndex(K, ni, entry(e, t + j));
+        K.value[p] = (entry(K.value, p)) + (entry(ke, 6 * i + j));
       }
     }
   }
@@ -314,6 +316,7 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
     maxIterations: s.maxIterations,
     component: comps.of,
     components: comps.count,
+    preconditioner: s.preconditioner,
     onProgress: s.onProgress,
   });
   const t2 = now();
@@ -351,13 +354,13 @@ function zeroMeanPerComponent(q: QuadraticMesh, X: Float64Array, Y: Float64Array
   const areaOf = new Float64Array(comps.count);
   const meanOf = new Float64Array(comps.count);
   for (let i = 0; i < omega.length; i++) {
-    const c = comps.of[i] ?? 0;
-    areaOf[c] = (areaOf[c] ?? 0) + (M1[i] ?? 0);
-    meanOf[c] = (meanOf[c] ?? 0) + (Mw[i] ?? 0);
+    const c = entry(comps.of, i);
+    areaOf[c] = (entry(areaOf, c)) + (entry(M1, i));
+    meanOf[c] = (entry(meanOf, c)) + (entry(Mw, i));
   }
   for (let i = 0; i < omega.length; i++) {
-    const c = comps.of[i] ?? 0;
-    omega[i] = (omega[i] ?? 0) - (meanOf[c] ?? 0) / (areaOf[c] ?? 1);
+    const c = entry(comps.of, i);
+    omega[i] = (entry(omega, i)) - (entry(meanOf, c)) / (entry(areaOf, c));
   }
 }
 
@@ -372,8 +375,8 @@ export function nodalGradient(q: QuadraticMesh, values: Float64Array): { gx: Flo
   const at: readonly (readonly [number, number, number])[] = [[1, 0, 0], [0, 1, 0], [0, 0, 1], [0.5, 0.5, 0], [0, 0.5, 0.5], [0.5, 0, 0.5]];
   const e = q.elements;
   for (let t = 0; t < e.length; t += 6) {
-    const xs = [0, 1, 2].map((k) => q.xy[2 * (e[t + k] ?? 0)] ?? 0);
-    const ys = [0, 1, 2].map((k) => q.xy[2 * (e[t + k] ?? 0) + 1] ?? 0);
+    const xs = [0, 1, 2].map((k) => entry(q.xy, 2 * (entry(e, t + k))));
+    const ys = [0, 1, 2].map((k) => entry(q.xy, 2 * (entry(e, t + k)) + 1));
     const g = elementGeometry(xs, ys);
     const w = g.twiceArea / 2;
     at.forEach(([l1, l2, l3], k) => {
@@ -382,19 +385,19 @@ export function nodalGradient(q: QuadraticMesh, values: Float64Array): { gx: Flo
       let sx = 0;
       let sy = 0;
       for (let j = 0; j < 6; j++) {
-        const v = values[e[t + j] ?? 0] ?? 0;
-        sx += (dx[j] ?? 0) * v;
-        sy += (dy[j] ?? 0) * v;
+        const v = entry(values, entry(e, t + j));
+        sx += (entry(dx, j)) * v;
+        sy += (entry(dy, j)) * v;
       }
-      const node = e[t + k] ?? 0;
-      gx[node] = (gx[node] ?? 0) + w * sx;
-      gy[node] = (gy[node] ?? 0) + w * sy;
-      wsum[node] = (wsum[node] ?? 0) + w;
+      const node = entry(e, t + k);
+      gx[node] = (entry(gx, node)) + w * sx;
+      gy[node] = (entry(gy, node)) + w * sy;
+      wsum[node] = (entry(wsum, node)) + w;
     });
   }
   for (let i = 0; i < n; i++) {
-    gx[i] = (gx[i] ?? 0) / (wsum[i] || 1);
-    gy[i] = (gy[i] ?? 0) / (wsum[i] || 1);
+    gx[i] = (entry(gx, i)) / (wsum[i] || 1);
+    gy[i] = (entry(gy, i)) / (wsum[i] || 1);
   }
   return { gx, gy };
 }

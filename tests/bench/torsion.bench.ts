@@ -21,8 +21,13 @@
  *  - torsion-dense-1e5-cpu: torsionAnalysis on a 100,000-vertex ellipse, CPU time of one call
  *    against the 2 s target for a section of up to 10⁵ vertices (the command-line run adds the
  *    exact properties and start-up; tests/bench/cli.bench.ts times those). Ratio = CPU / 2 s.
+ *  - torsion-precond-CASE (W14X90, the two dense outlines, the 10⁵-vertex ellipse): CPU time of
+ *    torsionAnalysis with the incomplete Cholesky IC(0) preconditioner (the default). Baseline:
+ *    the same call with symmetric Gauss–Seidel, runs interleaved in this run; ratio < 1 means
+ *    IC(0) is faster. The detail gives the iterations of both levels for each.
  */
 import { torsionAnalysis, type TorsionAnalysis } from '../../core/torsion/index.ts';
+import type { Preconditioner } from '../../core/torsion/sparse.ts';
 import type { Polygon, Region } from '../../core/geometry/types.ts';
 import { filletedWShape } from '../torsion/w-shape.ts';
 import { medianMs, type BenchLine } from './report.ts';
@@ -74,6 +79,32 @@ function denseLine(name: string, region: Region, exact: number, baselineMs: numb
   };
 }
 
+/** Median CPU ms of torsionAnalysis with IC(0) against SGS, calls interleaved so that load on the machine hits both alike. */
+function preconditionerLine(name: string, region: Region, runs: number): BenchLine {
+  const cpu: Record<Preconditioner, number[]> = { ic0: [], sgs: [] };
+  const iterations: Record<Preconditioner, string> = { ic0: '', sgs: '' };
+  for (let r = 0; r < runs; r++) {
+    for (const pc of ['sgs', 'ic0'] as const) {
+      cpu[pc].push(cpuMsOf(() => {
+        const a = torsionAnalysis(region, { preconditioner: pc });
+        iterations[pc] = `${a.coarseIterations} coarse + ${a.result.iterations} fine`;
+      }));
+    }
+  }
+  const median = (v: number[]): number => v.sort((x, y) => x - y)[Math.floor(v.length / 2)] ?? Number.NaN;
+  const ic = median(cpu.ic0);
+  const sgs = median(cpu.sgs);
+  return {
+    name: `torsion-precond-${name}`,
+    value: ic,
+    unit: 'ms CPU (IC(0))',
+    baseline: sgs,
+    baselineUnit: 'ms CPU (symmetric Gauss–Seidel, this run)',
+    ratio: ic / sgs,
+    detail: `median of ${runs}; iterations IC(0) ${iterations.ic0}, SGS ${iterations.sgs}; ${ic <= sgs ? 'IC(0) faster' : 'SGS faster'}`,
+  };
+}
+
 export async function bench(): Promise<BenchLine[]> {
   const region = [filletedWShape({ d: 14, bf: 14.5, tw: 0.44, tf: 0.71, r: 1.31 - 0.71 })];
   let analysis = torsionAnalysis(region, { now });
@@ -91,6 +122,12 @@ export async function bench(): Promise<BenchLine[]> {
   const hollow: Region = [{ outer: ellipseRing(50, 50, 4096), holes: [ellipseRing(42, 42, 4096, true)] }];
   const dense: Region = [{ outer: ellipseRing(60, 35, 100_000), holes: [] }];
   const denseCpu = cpuMsOf(() => torsionAnalysis(dense));
+  const comparison = [
+    preconditionerLine('W14X90', region, 5),
+    preconditionerLine('ellipse-4096', ellipse, 5),
+    preconditionerLine('hollow-circle-8192', hollow, 5),
+    preconditionerLine('dense-1e5', dense, 3),
+  ];
   return [
     {
       name: 'torsion-W14X90-time',
@@ -121,5 +158,6 @@ export async function bench(): Promise<BenchLine[]> {
       ratio: denseCpu / 2000,
       detail: `100,000-vertex ellipse, one torsionAnalysis call (${denseCpu <= 2000 ? 'met' : 'NOT met'})`,
     },
+    ...comparison,
   ];
 }
