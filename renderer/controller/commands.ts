@@ -26,6 +26,10 @@ export interface CommandTarget {
   openPoints(): void;
   duplicate(): void;
   nudge(dx: number, dy: number): void;
+  /** Stops the torsion solve now running or waiting to start. */
+  cancelTorsion(): void;
+  /** Starts the torsion solve of the section now (after a cancel). */
+  solveTorsionNow(): void;
 }
 
 /** The views that open over the editor. */
@@ -87,6 +91,8 @@ export const COMMANDS = {
   'zoom-out': { label: 'Zoom out', run: (t) => t.zoomBy(0.8) },
   'zoom-fit': { label: 'Fit the section', run: (t) => t.fit() },
   shortcuts: { label: 'Keyboard shortcuts', run: (t) => t.show('shortcuts') },
+  'torsion-cancel': { label: 'Stop the torsion solve', run: (t) => t.cancelTorsion() },
+  'torsion-solve': { label: 'Solve torsion now', run: (t) => t.solveTorsionNow() },
   'tool-select': tool('select', 'Select tool'),
   'tool-rectangle': tool('rectangle', 'Plate tool'),
   'tool-circle': tool('circle', 'Round tool'),

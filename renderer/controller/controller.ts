@@ -328,6 +328,28 @@ export class AppController implements CommandTarget {
   }
 
   /**
+   * The user's Cancel: stops the solve now running (the worker is terminated) or about to start;
+   * the state says 'cancelled' until the next edit or solveTorsionNow. A finished result stays.
+   */
+  cancelTorsion(): void {
+    if (this.torsionTimer !== null) this.timers.clear(this.torsionTimer);
+    this.torsionTimer = null;
+    const kind = this.state.torsion.kind;
+    if (kind !== 'running' && kind !== 'idle') return;
+    this.torsionRunner.cancel();
+    this.set({ torsion: { kind: 'cancelled' } });
+  }
+
+  /** Solves the section now, without the settling delay (after a cancel). */
+  solveTorsionNow(): void {
+    if (this.torsionTimer !== null) this.timers.clear(this.torsionTimer);
+    this.torsionTimer = null;
+    const st = this.editor.getState();
+    if (st.gesture || !this.results(st.doc).properties) return;
+    this.torsionRunner.solve(st.doc);
+  }
+
+  /**
    * This window's recovery copy is written one frame after each committed edit (not during a
    * drag: the gesture's end commits it), and flushed at once when the page is hidden or goes away
    * (flushRecovery). It is cleared when the work becomes clean again (saved, or undone back to the

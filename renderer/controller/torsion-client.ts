@@ -9,6 +9,8 @@ import type { TorsionReply } from './torsion.worker.ts';
 export type TorsionState =
   | { readonly kind: 'idle' }
   | { readonly kind: 'running'; readonly fraction: number }
+  /** Stopped by the user (Cancel); the next edit or Solve starts afresh. */
+  | { readonly kind: 'cancelled' }
   | { readonly kind: 'done'; readonly result: TorsionResult; readonly millis: number; readonly doc: SectionDocument }
   | { readonly kind: 'failed'; readonly message: string };
 

@@ -144,6 +144,26 @@ describe('background work and recovery', () => {
     expect(r.torsion.solved).toHaveLength(0);
   });
 
+  it('Cancel stops a running solve, keeps a finished result, and the next edit solves again', () => {
+    const r = withPlate();
+    r.timers.advance(TORSION_DELAY_MS);
+    expect(r.torsion.solved).toHaveLength(1);
+    r.torsion.report({ kind: 'running', fraction: 0.4 });
+    const cancels = r.torsion.cancels;
+    r.c.cancelTorsion();
+    expect(r.torsion.cancels).toBe(cancels + 1);
+    expect(r.c.getState().torsion.kind).toBe('cancelled');
+    r.c.editor.moveSelectionBy(5, 0);
+    r.timers.advance(TORSION_DELAY_MS);
+    expect(r.torsion.solved).toHaveLength(2);
+    expect(r.torsion.solved[1]).toBe(r.c.editor.getState().doc);
+    // A finished result is not thrown away by a Cancel that has nothing to stop.
+    const done = { kind: 'done', result: { J: 1, Cw: 0, xs: 0, ys: 0, meshElements: 1, meshNodes: 1, iterations: 1, jRelativeError: 0, components: 1 }, millis: 1, doc: r.c.editor.getState().doc } as const;
+    r.torsion.report(done);
+    r.c.cancelTorsion();
+    expect(r.c.getState().torsion).toBe(done);
+  });
+
   it('reports the runner state in its own state', () => {
     const r = withPlate();
     r.torsion.report({ kind: 'running', fraction: 0.5 });
@@ -561,6 +581,23 @@ const COMMAND_CASES: Record<CommandId, () => Promise<void>> = {
     const r = withPlate();
     await r.c.run('nudge-down');
     expect(placed(r)).toEqual([['part-1', 0, -10]]);
+  },
+  async 'torsion-cancel'() {
+    const r = withPlate();
+    r.timers.advance(TORSION_DELAY_MS);
+    r.torsion.report({ kind: 'running', fraction: 0.25 });
+    const cancels = r.torsion.cancels;
+    await r.c.run('torsion-cancel');
+    expect(r.torsion.cancels).toBe(cancels + 1);
+    expect(r.c.getState().torsion).toEqual({ kind: 'cancelled' });
+  },
+  async 'torsion-solve'() {
+    const r = withPlate();
+    await r.c.run('torsion-cancel'); // cancelled while waiting for the drawing to settle
+    r.timers.advance(10 * TORSION_DELAY_MS);
+    expect(r.torsion.solved).toHaveLength(0);
+    await r.c.run('torsion-solve');
+    expect(r.torsion.solved).toEqual([r.c.editor.getState().doc]);
   },
 };
 

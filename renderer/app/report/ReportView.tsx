@@ -158,7 +158,7 @@ export function SectionReport({ doc, fileName, display, sig, torsion, member, fi
     );
   }
   const notes = [
-    ...(solved ? [] : [torsion.kind === 'failed' ? `Torsion was not computed (${torsion.message}); the report leaves J and Cw out.` : 'Torsion is still being computed; J, Cw and the mesh note appear here when it finishes.']),
+    ...(solved ? [] : [torsion.kind === 'failed' ? `Torsion was not computed (${torsion.message}); the report leaves J and Cw out.` : torsion.kind === 'cancelled' ? 'Torsion was stopped before it finished; the report leaves J and Cw out.' : 'Torsion is still being computed; J, Cw and the mesh note appear here when it finishes.']),
     ...(member ? [] : ['No member check: give this section a span and loads under "Member check" to include one.']),
   ];
   return <ReportView input={built.input} stem={fileStem(fileName)} notes={notes} onClose={onClose} />;

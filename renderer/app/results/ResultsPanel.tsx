@@ -18,9 +18,11 @@ interface Props {
   readonly torsion: TorsionState;
   /** The document now shown: a torsion result for another one is stale. */
   readonly current: SectionDocument;
+  /** Cancel and Solve now of the torsion solve (controller commands). */
+  readonly onTorsion?: (id: 'torsion-cancel' | 'torsion-solve') => void;
 }
 
-function TorsionRows({ t, current, p, unit, display, sig }: { t: TorsionState; current: SectionDocument; p: SectionProperties; unit: LengthUnit; display: DisplaySet; sig: number }): ReactElement {
+function TorsionRows({ t, current, p, unit, display, sig, onTorsion }: { t: TorsionState; current: SectionDocument; p: SectionProperties; unit: LengthUnit; display: DisplaySet; sig: number; onTorsion?: ((id: 'torsion-cancel' | 'torsion-solve') => void) | undefined }): ReactElement {
   // Separate pieces twist on their own: J adds, and there is no shared shear centre or Cw.
   const separate = t.kind === 'done' && t.result.components > 1;
   const rows = t.kind === 'done' ? torsionRows('panel', t.result, p, unit, display, sig) : [];
@@ -32,7 +34,16 @@ function TorsionRows({ t, current, p, unit, display, sig }: { t: TorsionState; c
         {t.kind === 'running' && (
           <tr>
             <td colSpan={4}>
-              <progress max={1} value={t.fraction} data-testid="torsion-progress" /> solving… {Math.round(t.fraction * 100)} %
+              <progress max={1} value={t.fraction} data-testid="torsion-progress" /> solving… {Math.round(t.fraction * 100)} %{' '}
+              {onTorsion && <button type="button" data-testid="torsion-cancel" onClick={() => onTorsion('torsion-cancel')}>Cancel</button>}
+            </td>
+          </tr>
+        )}
+        {t.kind === 'cancelled' && (
+          <tr>
+            <td colSpan={4} className="muted" data-testid="torsion-cancelled">
+              stopped before it finished; the next edit solves again{' '}
+              {onTorsion && <button type="button" data-testid="torsion-solve" onClick={() => onTorsion('torsion-solve')}>Solve now</button>}
             </td>
           </tr>
         )}
@@ -102,7 +113,7 @@ function NetRows({ net, p, holes, unit, display, sig }: { net: NetSectionPropert
   );
 }
 
-export function ResultsPanel({ results, unit, display, sig, torsion, current }: Props): ReactElement {
+export function ResultsPanel({ results, unit, display, sig, torsion, current, onTorsion }: Props): ReactElement {
   const p = results.properties ?? results.stale;
   const stale = !results.properties && !!results.stale;
   return (
@@ -155,8 +166,8 @@ export function ResultsPanel({ results, unit, display, sig, torsion, current }: 
               </tbody>
             </table>
           ))}
-          {results.properties && results.net && <NetRows net={results.net} p={results.properties} holes={results.fastenerHoles} unit={unit} display={display} sig={sig} />}
-          {results.properties && <TorsionRows t={torsion} current={current} p={results.properties} unit={unit} display={display} sig={sig} />}
+          {results.properties && results.net && <NetRows net={results.net} p={results.properties} holes={results.fastenerHoles} unit={unit} display={display} sig={sig} onTorsion={onTorsion} />}
+          {results.properties && <TorsionRows t={torsion} current={current} p={results.properties} unit={unit} display={display} sig={sig} onTorsion={onTorsion} />}
         </div>
       )}
     </section>

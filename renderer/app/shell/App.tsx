@@ -265,7 +265,7 @@ export function App({ controller: given }: { readonly controller?: AppController
           </div>
           <RefusedNotice refused={app.refused} />
           <ErrorBoundary view="results">
-            <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={app.sig} torsion={torsion} current={state.doc} />
+            <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={app.sig} torsion={torsion} current={state.doc} onTorsion={(id) => void controller.run(id)} />
           </ErrorBoundary>
           <JointsNotes doc={state.doc} />
           <JointsPanel editor={editor} doc={state.doc} store={joints} />
