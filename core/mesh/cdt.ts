@@ -12,7 +12,7 @@ import Delaunator from 'delaunator';
 // is imported instead and typed by the small interface below.
 import ConstrainautorModule from '../../node_modules/@kninnug/constrainautor/lib/Constrainautor.mjs';
 import { MeshInputError } from './types.ts';
-import { entry } from '../invariant.ts';
+import { outside } from '../invariant.ts';
 
 /** The part of Constrainautor's API used here (see its README). */
 interface ConstrainautorInstance {
@@ -40,13 +40,13 @@ export function constrainedTriangulation(
   }
   const con = new Constrainautor(del);
   for (let s = 0; s < segA.length; s++) {
-    const a = entry(segA, s);
-    const b = entry(segB, s);
+    const a = segA[s] ?? outside(segA, s);
+    const b = segB[s] ?? outside(segB, s);
     try {
       con.constrainOne(a, b);
     } catch (err) {
       const why = err instanceof Error ? err.message : String(err);
-      const at: [number, number] = [entry(coords, 2 * a), entry(coords, 2 * a + 1)];
+      const at: [number, number] = [(coords[2 * a] ?? outside(coords, 2 * a)), (coords[2 * a + 1] ?? outside(coords, 2 * a + 1))];
       throw new MeshInputError({
         code: 'self-intersection',
         message: `boundary edge from (${at[0]}, ${at[1]}) to (${coords[2 * b]}, ${coords[2 * b + 1]}) crosses another edge or a vertex (${why})`,

@@ -8,7 +8,7 @@
  * Private to core/mesh: it returns plain coordinate lists, not geometry Rings.
  */
 import type { Ring } from '../geometry/types.ts';
-import { entry } from '../invariant.ts';
+import { outside } from '../invariant.ts';
 
 export interface FlatRing {
   /** Vertex coordinates, closing vertex not repeated. */
@@ -54,15 +54,15 @@ export function flattenRingChords(ring: Ring, maxSweep: number): FlatRing {
   const onArc: number[] = [];
   let maxChordSweep = 0;
   for (let i = 0; i < count; i++) {
-    const xs = entry(src, 2 * i);
-    const ys = entry(src, 2 * i + 1);
-    const b = (ring.bulge ? entry(ring.bulge, i) : 0);
-    const before = (ring.bulge ? entry(ring.bulge, (i + count - 1) % count) : 0);
+    const xs = src[2 * i] ?? outside(src, 2 * i);
+    const ys = src[2 * i + 1] ?? outside(src, 2 * i + 1);
+    const b = (ring.bulge ? (ring.bulge[i] ?? outside(ring.bulge, i)) : 0);
+    const before = (ring.bulge ? (ring.bulge[(i + count - 1) % count] ?? outside(ring.bulge, (i + count - 1) % count)) : 0);
     out.push(xs, ys);
     onArc.push(b !== 0 || before !== 0 ? 1 : 0);
     if (b !== 0) {
       const j = (i + 1) % count;
-      const used = appendArcInterior(out, xs, ys, entry(src, 2 * j), entry(src, 2 * j + 1), b, maxSweep);
+      const used = appendArcInterior(out, xs, ys, (src[2 * j] ?? outside(src, 2 * j)), (src[2 * j + 1] ?? outside(src, 2 * j + 1)), b, maxSweep);
       maxChordSweep = Math.max(maxChordSweep, used);
       while (onArc.length < out.length / 2) onArc.push(1);
     }
@@ -76,7 +76,7 @@ export function polylineSignedArea(xy: readonly number[]): number {
   let twice = 0;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
-    twice += (entry(xy, 2 * i)) * (entry(xy, 2 * j + 1)) - (entry(xy, 2 * j)) * (entry(xy, 2 * i + 1));
+    twice += (xy[2 * i] ?? outside(xy, 2 * i)) * (xy[2 * j + 1] ?? outside(xy, 2 * j + 1)) - (xy[2 * j] ?? outside(xy, 2 * j)) * (xy[2 * i + 1] ?? outside(xy, 2 * i + 1));
   }
   return twice / 2;
 }

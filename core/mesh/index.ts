@@ -18,7 +18,7 @@ import { presplitSegments, refineTriangulation } from './refine.ts';
 import { graphMoments, simplifiedGraph } from './simplify.ts';
 import { reentrantCorners, sizeFieldOf } from './size-field.ts';
 import { MeshCancelledError, MeshInputError, type MeshOptions, type MeshSimplification, type TriangleMesh } from './types.ts';
-import { entry } from '../invariant.ts';
+import { outside } from '../invariant.ts';
 
 export { MeshCancelledError, MeshInputError, MeshRefinementError } from './types.ts';
 export type { MeshOptions, MeshSimplification, TriangleMesh } from './types.ts';
@@ -129,11 +129,11 @@ function compactNodes(xy: Float64Array, triangles: Int32Array): { xy: Float64Arr
   const out: number[] = [];
   const tri = new Int32Array(triangles.length);
   triangles.forEach((v, i) => {
-    if ((entry(map, v)) < 0) {
+    if ((map[v] ?? outside(map, v)) < 0) {
       map[v] = out.length / 2;
-      out.push(entry(xy, 2 * v), entry(xy, 2 * v + 1));
+      out.push((xy[2 * v] ?? outside(xy, 2 * v)), (xy[2 * v + 1] ?? outside(xy, 2 * v + 1)));
     }
-    tri[i] = entry(map, v);
+    tri[i] = map[v] ?? outside(map, v);
   });
   return { xy: Float64Array.from(out), triangles: tri };
 }
@@ -142,13 +142,13 @@ export function smallestAngleDeg(xy: Float64Array, triangles: Int32Array): numbe
   let best = 180;
   for (let t = 0; t < triangles.length; t += 3) {
     for (let k = 0; k < 3; k++) {
-      const a = entry(triangles, t + k);
-      const b = entry(triangles, t + ((k + 1) % 3));
-      const c = entry(triangles, t + ((k + 2) % 3));
-      const ux = (entry(xy, 2 * b)) - (entry(xy, 2 * a));
-      const uy = (entry(xy, 2 * b + 1)) - (entry(xy, 2 * a + 1));
-      const vx = (entry(xy, 2 * c)) - (entry(xy, 2 * a));
-      const vy = (entry(xy, 2 * c + 1)) - (entry(xy, 2 * a + 1));
+      const a = triangles[t + k] ?? outside(triangles, t + k);
+      const b = triangles[t + ((k + 1) % 3)] ?? outside(triangles, t + ((k + 1) % 3));
+      const c = triangles[t + ((k + 2) % 3)] ?? outside(triangles, t + ((k + 2) % 3));
+      const ux = (xy[2 * b] ?? outside(xy, 2 * b)) - (xy[2 * a] ?? outside(xy, 2 * a));
+      const uy = (xy[2 * b + 1] ?? outside(xy, 2 * b + 1)) - (xy[2 * a + 1] ?? outside(xy, 2 * a + 1));
+      const vx = (xy[2 * c] ?? outside(xy, 2 * c)) - (xy[2 * a] ?? outside(xy, 2 * a));
+      const vy = (xy[2 * c + 1] ?? outside(xy, 2 * c + 1)) - (xy[2 * a + 1] ?? outside(xy, 2 * a + 1));
       best = Math.min(best, (Math.atan2(Math.abs(ux * vy - uy * vx), ux * vx + uy * vy) * 180) / Math.PI);
     }
   }
@@ -165,7 +165,7 @@ export function refineUniform(mesh: Pick<TriangleMesh, 'xy' | 'triangles'>): { x
     let m = mid.get(key);
     if (m === undefined) {
       m = xy.length / 2;
-      xy.push(((entry(xy, 2 * a)) + (entry(xy, 2 * b))) / 2, ((entry(xy, 2 * a + 1)) + (entry(xy, 2 * b + 1))) / 2);
+      xy.push(((xy[2 * a] ?? outside(xy, 2 * a)) + (xy[2 * b] ?? outside(xy, 2 * b))) / 2, ((xy[2 * a + 1] ?? outside(xy, 2 * a + 1)) + (xy[2 * b + 1] ?? outside(xy, 2 * b + 1))) / 2);
       mid.set(key, m);
     }
     return m;
@@ -173,9 +173,9 @@ export function refineUniform(mesh: Pick<TriangleMesh, 'xy' | 'triangles'>): { x
   const tri: number[] = [];
   const t3 = mesh.triangles;
   for (let t = 0; t < t3.length; t += 3) {
-    const a = entry(t3, t);
-    const b = entry(t3, t + 1);
-    const c = entry(t3, t + 2);
+    const a = t3[t] ?? outside(t3, t);
+    const b = t3[t + 1] ?? outside(t3, t + 1);
+    const c = t3[t + 2] ?? outside(t3, t + 2);
     const ab = midpoint(a, b);
     const bc = midpoint(b, c);
     const ca = midpoint(c, a);

@@ -12,7 +12,7 @@
 import type { Polygon, Region } from '../geometry/types.ts';
 import { flattenRingChords, polylineSignedArea } from './flatten.ts';
 import { MeshInputError } from './types.ts';
-import { entry } from '../invariant.ts';
+import { outside } from '../invariant.ts';
 
 export interface PlanarGraph {
   /** Point coordinates (x, y pairs). */
@@ -46,7 +46,7 @@ function checkedRing(p: Polygon, polygon: number, ring: number, maxSweep: number
     throw new MeshInputError({ code: 'too-few-points', message: `${where} needs at least 3 vertices (2 when an arc closes it)`, polygon, ring });
   }
   for (let i = 0; i < r.xy.length; i++) {
-    const bulge = i < r.xy.length / 2 ? (r.bulge ? entry(r.bulge, i) : 0) : 0;
+    const bulge = i < r.xy.length / 2 ? (r.bulge ? (r.bulge[i] ?? outside(r.bulge, i)) : 0) : 0;
     if (!Number.isFinite(r.xy[i]) || !Number.isFinite(bulge)) {
       const vertex = Math.floor(i / 2) % (r.xy.length / 2);
       throw new MeshInputError({ code: 'non-finite', message: `${where}, vertex ${vertex} has a non-finite coordinate or bulge`, polygon, ring, vertex });
@@ -67,7 +67,7 @@ function checkedRing(p: Polygon, polygon: number, ring: number, maxSweep: number
 
 function reversedPolyline(xy: readonly number[]): number[] {
   const out: number[] = [];
-  for (let i = xy.length / 2 - 1; i >= 0; i--) out.push(entry(xy, 2 * i), entry(xy, 2 * i + 1));
+  for (let i = xy.length / 2 - 1; i >= 0; i--) out.push((xy[2 * i] ?? outside(xy, 2 * i)), (xy[2 * i + 1] ?? outside(xy, 2 * i + 1)));
   return out;
 }
 
@@ -110,8 +110,8 @@ class PointMerger {
 /** Splits directed edges at points lying on them (T-junctions between touching parts). */
 function splitAtTJunctions(xy: readonly number[], edges: readonly number[], tol: number): number[] {
   const n = xy.length / 2;
-  const px = (i: number): number => entry(xy, 2 * i);
-  const py = (i: number): number => entry(xy, 2 * i + 1);
+  const px = (i: number): number => (xy[2 * i] ?? outside(xy, 2 * i));
+  const py = (i: number): number => (xy[2 * i + 1] ?? outside(xy, 2 * i + 1));
   // Sort points by x so each edge only scans the points inside its x-range.
   const order = Int32Array.from({ length: n }, (_, i) => i).sort((a, b) => px(a) - px(b));
   const sortedX = Float64Array.from(order, px);
@@ -120,7 +120,7 @@ function splitAtTJunctions(xy: readonly number[], edges: readonly number[], tol:
     let hi = sortedX.length;
     while (lo < hi) {
       const mid = (lo + hi) >> 1;
-      if ((entry(sortedX, mid)) < v) lo = mid + 1;
+      if ((sortedX[mid] ?? outside(sortedX, mid)) < v) lo = mid + 1;
       else hi = mid;
     }
     return lo;
@@ -133,8 +133,8 @@ function splitAtTJunctions(xy: readonly number[], edges: readonly number[], tol:
     const dy = py(b) - py(a);
     const len2 = dx * dx + dy * dy;
     let hits: { u: number; k: number }[] | null = null;
-    for (let s = lowerBound(Math.min(px(a), px(b)) - tol); s < n && (entry(sortedX, s)) <= Math.max(px(a), px(b)) + tol; s++) {
-      const k = entry(order, s);
+    for (let s = lowerBound(Math.min(px(a), px(b)) - tol); s < n && (sortedX[s] ?? outside(sortedX, s)) <= Math.max(px(a), px(b)) + tol; s++) {
+      const k = order[s] ?? outside(order, s);
       if (k === a || k === b) continue;
       const u = ((px(k) - px(a)) * dx + (py(k) - py(a)) * dy) / len2;
       if (u <= 0 || u >= 1) continue;
@@ -169,7 +169,7 @@ export function planarGraphOfRegion(region: Region, maxSweep: number): PlanarGra
       const r = checkedRing(poly, pi, ri, maxSweep);
       maxChordSweep = Math.max(maxChordSweep, r.sweep);
       area += r.area;
-      for (let i = 0; i < r.xy.length; i += 2) growBox(pbox, entry(r.xy, i), entry(r.xy, i + 1));
+      for (let i = 0; i < r.xy.length; i += 2) growBox(pbox, (r.xy[i] ?? outside(r.xy, i)), (r.xy[i + 1] ?? outside(r.xy, i + 1)));
       rings.push({ xy: r.xy, onArc: r.onArc, polygon: pi, ring: ri });
     }
     if (!(area > 0)) throw new MeshInputError({ code: 'zero-area', message: `polygon ${pi}: its holes cover its outer ring`, polygon: pi });
@@ -185,13 +185,13 @@ export function planarGraphOfRegion(region: Region, maxSweep: number): PlanarGra
   for (const r of rings) {
     const ids: number[] = [];
     for (let i = 0; i < r.xy.length; i += 2) {
-      const id = merger.add(entry(r.xy, i), entry(r.xy, i + 1));
+      const id = merger.add((r.xy[i] ?? outside(r.xy, i)), (r.xy[i + 1] ?? outside(r.xy, i + 1)));
       ids.push(id);
       if (r.onArc[i / 2]) arcPoints.push(id);
     }
     for (let i = 0; i < ids.length; i++) {
-      const a = entry(ids, i);
-      const b = entry(ids, (i + 1) % ids.length);
+      const a = ids[i] ?? outside(ids, i);
+      const b = ids[(i + 1) % ids.length] ?? outside(ids, (i + 1) % ids.length);
       if (a !== b) edges.push(a, b);
     }
   }
@@ -227,15 +227,15 @@ function netSegments(xy: number[], edges: readonly number[]): Pick<PlanarGraph, 
       segB.push(b);
       segNet.push(0);
     }
-    segNet[s] = (entry(segNet, s)) + (p === a ? 1 : -1);
+    segNet[s] = (segNet[s] ?? outside(segNet, s)) + (p === a ? 1 : -1);
   }
   segNet.forEach((net, s) => {
     if (Math.abs(net) > 1) {
-      const a = entry(segA, s);
+      const a = segA[s] ?? outside(segA, s);
       throw new MeshInputError({
         code: 'overlap',
         message: `pieces of the region overlap along the edge at (${xy[2 * a]}, ${xy[2 * a + 1]})`,
-        at: [entry(xy, 2 * a), entry(xy, 2 * a + 1)],
+        at: [(xy[2 * a] ?? outside(xy, 2 * a)), (xy[2 * a + 1] ?? outside(xy, 2 * a + 1))],
       });
     }
   });

@@ -16,7 +16,7 @@
 import { constrainedTriangulation, type ConstrainedTriangulation } from './cdt.ts';
 import type { SizeField } from './size-field.ts';
 import { MeshCancelledError, MeshRefinementError } from './types.ts';
-import { entry } from '../invariant.ts';
+import { outside } from '../invariant.ts';
 
 export interface RefineInput {
   readonly xy: number[];
@@ -58,7 +58,7 @@ interface Round {
 
 function segmentKeyMap(w: RefineInput): Map<number, number> {
   const m = new Map<number, number>();
-  for (let s = 0; s < w.segA.length; s++) m.set((entry(w.segA, s)) * KEY + (entry(w.segB, s)), s);
+  for (let s = 0; s < w.segA.length; s++) m.set((w.segA[s] ?? outside(w.segA, s)) * KEY + (w.segB[s] ?? outside(w.segB, s)), s);
   return m;
 }
 
@@ -69,18 +69,18 @@ function segmentOfEdge(r: Round, a: number, b: number): number {
 /** Net winding gained crossing from the right of a→b to its left (0 for unconstrained edges). */
 function netAcross(w: RefineInput, r: Round, e: number): number {
   if (!r.cdt.isConstrained(e)) return 0;
-  const a = entry(r.cdt.triangles, e);
-  const b = entry(r.cdt.triangles, next(e));
+  const a = r.cdt.triangles[e] ?? outside(r.cdt.triangles, e);
+  const b = r.cdt.triangles[next(e)] ?? outside(r.cdt.triangles, next(e));
   const s = segmentOfEdge(r, a, b);
   if (s < 0) return 0;
-  const net = entry(w.segNet, s);
+  const net = w.segNet[s] ?? outside(w.segNet, s);
   return a < b ? net : -net;
 }
 
 function orient(xy: ArrayLike<number>, a: number, b: number, px: number, py: number): number {
-  const ax = entry(xy, 2 * a);
-  const ay = entry(xy, 2 * a + 1);
-  return ((entry(xy, 2 * b)) - ax) * (py - ay) - ((entry(xy, 2 * b + 1)) - ay) * (px - ax);
+  const ax = xy[2 * a] ?? outside(xy, 2 * a);
+  const ay = xy[2 * a + 1] ?? outside(xy, 2 * a + 1);
+  return ((xy[2 * b] ?? outside(xy, 2 * b)) - ax) * (py - ay) - ((xy[2 * b + 1] ?? outside(xy, 2 * b + 1)) - ay) * (px - ax);
 }
 
 /** Winding number of each triangle by a breadth-first walk from the convex hull (outside = 0). */
@@ -89,8 +89,8 @@ function classify(w: RefineInput, cdt: ConstrainedTriangulation, coords: Float64
   const count = tri.length / 3;
   const sign = new Int8Array(count);
   for (let t = 0; t < count; t++) {
-    const c = entry(tri, 3 * t + 2);
-    sign[t] = orient(coords, entry(tri, 3 * t), entry(tri, 3 * t + 1), entry(coords, 2 * c), entry(coords, 2 * c + 1)) > 0 ? 1 : -1;
+    const c = tri[3 * t + 2] ?? outside(tri, 3 * t + 2);
+    sign[t] = orient(coords, (tri[3 * t] ?? outside(tri, 3 * t)), (tri[3 * t + 1] ?? outside(tri, 3 * t + 1)), (coords[2 * c] ?? outside(coords, 2 * c)), (coords[2 * c + 1] ?? outside(coords, 2 * c + 1))) > 0 ? 1 : -1;
   }
   const round: Round = { cdt, sign, inside: new Uint8Array(count), segOf: segmentKeyMap(w) };
   const winding = new Int32Array(count);
@@ -98,20 +98,20 @@ function classify(w: RefineInput, cdt: ConstrainedTriangulation, coords: Float64
   const queue: number[] = [];
   for (let e = 0; e < tri.length; e++) {
     const t = Math.floor(e / 3);
-    if ((entry(cdt.halfedges, e)) >= 0 || seen[t]) continue;
+    if ((cdt.halfedges[e] ?? outside(cdt.halfedges, e)) >= 0 || seen[t]) continue;
     seen[t] = 1;
-    winding[t] = (entry(sign, t)) * netAcross(w, round, e);
+    winding[t] = (sign[t] ?? outside(sign, t)) * netAcross(w, round, e);
     queue.push(t);
   }
   for (let q = 0; q < queue.length; q++) {
-    const t = entry(queue, q);
+    const t = queue[q] ?? outside(queue, q);
     for (let k = 0; k < 3; k++) {
       const e = 3 * t + k;
-      const f = entry(cdt.halfedges, e);
+      const f = cdt.halfedges[e] ?? outside(cdt.halfedges, e);
       const u = Math.floor(f / 3);
       if (f < 0 || seen[u]) continue;
       seen[u] = 1;
-      winding[u] = (entry(winding, t)) - (entry(sign, t)) * netAcross(w, round, e);
+      winding[u] = (winding[t] ?? outside(winding, t)) - (sign[t] ?? outside(sign, t)) * netAcross(w, round, e);
       queue.push(u);
     }
   }
@@ -124,13 +124,13 @@ function encroachedSegments(r: Round, coords: Float64Array, into: Set<number>): 
   const tri = r.cdt.triangles;
   for (let e = 0; e < tri.length; e++) {
     if (!r.inside[Math.floor(e / 3)] || !r.cdt.isConstrained(e)) continue;
-    const a = entry(tri, e);
-    const b = entry(tri, next(e));
-    const c = entry(tri, prev(e));
-    const ux = (entry(coords, 2 * a)) - (entry(coords, 2 * c));
-    const uy = (entry(coords, 2 * a + 1)) - (entry(coords, 2 * c + 1));
-    const vx = (entry(coords, 2 * b)) - (entry(coords, 2 * c));
-    const vy = (entry(coords, 2 * b + 1)) - (entry(coords, 2 * c + 1));
+    const a = tri[e] ?? outside(tri, e);
+    const b = tri[next(e)] ?? outside(tri, next(e));
+    const c = tri[prev(e)] ?? outside(tri, prev(e));
+    const ux = (coords[2 * a] ?? outside(coords, 2 * a)) - (coords[2 * c] ?? outside(coords, 2 * c));
+    const uy = (coords[2 * a + 1] ?? outside(coords, 2 * a + 1)) - (coords[2 * c + 1] ?? outside(coords, 2 * c + 1));
+    const vx = (coords[2 * b] ?? outside(coords, 2 * b)) - (coords[2 * c] ?? outside(coords, 2 * c));
+    const vy = (coords[2 * b + 1] ?? outside(coords, 2 * b + 1)) - (coords[2 * c + 1] ?? outside(coords, 2 * c + 1));
     if (ux * vx + uy * vy < -1e-12 * Math.hypot(ux, uy) * Math.hypot(vx, vy)) {
       const s = segmentOfEdge(r, a, b);
       if (s >= 0) into.add(s);
@@ -148,15 +148,15 @@ interface Circle {
 }
 
 function circumcircle(coords: Float64Array, tri: Uint32Array, t: number): Circle {
-  const i0 = entry(tri, 3 * t);
-  const i1 = entry(tri, 3 * t + 1);
-  const i2 = entry(tri, 3 * t + 2);
-  const ax = entry(coords, 2 * i0);
-  const ay = entry(coords, 2 * i0 + 1);
-  const bx = (entry(coords, 2 * i1)) - ax;
-  const by = (entry(coords, 2 * i1 + 1)) - ay;
-  const cx = (entry(coords, 2 * i2)) - ax;
-  const cy = (entry(coords, 2 * i2 + 1)) - ay;
+  const i0 = tri[3 * t] ?? outside(tri, 3 * t);
+  const i1 = tri[3 * t + 1] ?? outside(tri, 3 * t + 1);
+  const i2 = tri[3 * t + 2] ?? outside(tri, 3 * t + 2);
+  const ax = coords[2 * i0] ?? outside(coords, 2 * i0);
+  const ay = coords[2 * i0 + 1] ?? outside(coords, 2 * i0 + 1);
+  const bx = (coords[2 * i1] ?? outside(coords, 2 * i1)) - ax;
+  const by = (coords[2 * i1 + 1] ?? outside(coords, 2 * i1 + 1)) - ay;
+  const cx = (coords[2 * i2] ?? outside(coords, 2 * i2)) - ax;
+  const cy = (coords[2 * i2 + 1] ?? outside(coords, 2 * i2 + 1)) - ay;
   const d = 2 * (bx * cy - by * cx);
   const b2 = bx * bx + by * by;
   const c2 = cx * cx + cy * cy;
@@ -165,8 +165,8 @@ function circumcircle(coords: Float64Array, tri: Uint32Array, t: number): Circle
   const r = Math.hypot(ox, oy);
   const l = [Math.sqrt(b2), Math.hypot(cx - bx, cy - by), Math.sqrt(c2)];
   let shortest = 0;
-  for (let k = 1; k < 3; k++) if ((entry(l, k)) < (entry(l, shortest))) shortest = k;
-  return { x: ax + ox, y: ay + oy, r, sinMin: (entry(l, shortest)) / (2 * r), shortest };
+  for (let k = 1; k < 3; k++) if ((l[k] ?? outside(l, k)) < (l[shortest] ?? outside(l, shortest))) shortest = k;
+  return { x: ax + ox, y: ay + oy, r, sinMin: (l[shortest] ?? outside(l, shortest)) / (2 * r), shortest };
 }
 
 /**
@@ -175,9 +175,9 @@ function circumcircle(coords: Float64Array, tri: Uint32Array, t: number): Circle
  */
 function walkTo(r: Round, coords: Float64Array, t: number, px: number, py: number): number | null {
   const tri = r.cdt.triangles;
-  const c = (k: number): number => entry(tri, 3 * t + k);
-  const gx = ((entry(coords, 2 * c(0))) + (entry(coords, 2 * c(1))) + (entry(coords, 2 * c(2)))) / 3;
-  const gy = ((entry(coords, 2 * c(0) + 1)) + (entry(coords, 2 * c(1) + 1)) + (entry(coords, 2 * c(2) + 1))) / 3;
+  const c = (k: number): number => (tri[3 * t + k] ?? outside(tri, 3 * t + k));
+  const gx = ((coords[2 * c(0)] ?? outside(coords, 2 * c(0))) + (coords[2 * c(1)] ?? outside(coords, 2 * c(1))) + (coords[2 * c(2)] ?? outside(coords, 2 * c(2)))) / 3;
+  const gy = ((coords[2 * c(0) + 1] ?? outside(coords, 2 * c(0) + 1)) + (coords[2 * c(1) + 1] ?? outside(coords, 2 * c(1) + 1)) + (coords[2 * c(2) + 1] ?? outside(coords, 2 * c(2) + 1))) / 3;
   let cur = t;
   let entered = -1;
   for (let step = 0; step < 10_000; step++) {
@@ -185,16 +185,16 @@ function walkTo(r: Round, coords: Float64Array, t: number, px: number, py: numbe
     for (let k = 0; k < 3 && exit < 0; k++) {
       const e = 3 * cur + k;
       if (e === entered) continue;
-      const a = entry(tri, e);
-      const b = entry(tri, next(e));
-      if ((entry(r.sign, cur)) * orient(coords, a, b, px, py) >= 0) continue;
-      const oa = (px - gx) * ((entry(coords, 2 * a + 1)) - gy) - (py - gy) * ((entry(coords, 2 * a)) - gx);
-      const ob = (px - gx) * ((entry(coords, 2 * b + 1)) - gy) - (py - gy) * ((entry(coords, 2 * b)) - gx);
+      const a = tri[e] ?? outside(tri, e);
+      const b = tri[next(e)] ?? outside(tri, next(e));
+      if ((r.sign[cur] ?? outside(r.sign, cur)) * orient(coords, a, b, px, py) >= 0) continue;
+      const oa = (px - gx) * ((coords[2 * a + 1] ?? outside(coords, 2 * a + 1)) - gy) - (py - gy) * ((coords[2 * a] ?? outside(coords, 2 * a)) - gx);
+      const ob = (px - gx) * ((coords[2 * b + 1] ?? outside(coords, 2 * b + 1)) - gy) - (py - gy) * ((coords[2 * b] ?? outside(coords, 2 * b)) - gx);
       if (oa * ob <= 0) exit = e;
     }
     if (exit < 0) return cur;
     if (r.cdt.isConstrained(exit)) return -(1 + exit);
-    const f = entry(r.cdt.halfedges, exit);
+    const f = r.cdt.halfedges[exit] ?? outside(r.cdt.halfedges, exit);
     if (f < 0) return -(1 + exit);
     entered = f;
     cur = Math.floor(f / 3);
@@ -207,11 +207,11 @@ function discGrid(w: RefineInput, cell: number): (x: number, y: number) => numbe
   const cells = new Map<number, number[]>();
   const key = (i: number, j: number): number => i * 1_048_576 + j;
   for (let s = 0; s < w.segA.length; s++) {
-    const a = entry(w.segA, s);
-    const b = entry(w.segB, s);
-    const mx = ((entry(w.xy, 2 * a)) + (entry(w.xy, 2 * b))) / 2;
-    const my = ((entry(w.xy, 2 * a + 1)) + (entry(w.xy, 2 * b + 1))) / 2;
-    const rad = Math.hypot((entry(w.xy, 2 * b)) - (entry(w.xy, 2 * a)), (entry(w.xy, 2 * b + 1)) - (entry(w.xy, 2 * a + 1))) / 2;
+    const a = w.segA[s] ?? outside(w.segA, s);
+    const b = w.segB[s] ?? outside(w.segB, s);
+    const mx = ((w.xy[2 * a] ?? outside(w.xy, 2 * a)) + (w.xy[2 * b] ?? outside(w.xy, 2 * b))) / 2;
+    const my = ((w.xy[2 * a + 1] ?? outside(w.xy, 2 * a + 1)) + (w.xy[2 * b + 1] ?? outside(w.xy, 2 * b + 1))) / 2;
+    const rad = Math.hypot((w.xy[2 * b] ?? outside(w.xy, 2 * b)) - (w.xy[2 * a] ?? outside(w.xy, 2 * a)), (w.xy[2 * b + 1] ?? outside(w.xy, 2 * b + 1)) - (w.xy[2 * a + 1] ?? outside(w.xy, 2 * a + 1))) / 2;
     for (let i = Math.floor((mx - rad) / cell); i <= Math.floor((mx + rad) / cell); i++) {
       for (let j = Math.floor((my - rad) / cell); j <= Math.floor((my + rad) / cell); j++) {
         const k = key(i, j);
@@ -227,29 +227,29 @@ function discGrid(w: RefineInput, cell: number): (x: number, y: number) => numbe
 function meanSegmentLength(w: RefineInput): number {
   let sum = 0;
   for (let s = 0; s < w.segA.length; s++) {
-    const a = entry(w.segA, s);
-    const b = entry(w.segB, s);
-    sum += Math.hypot((entry(w.xy, 2 * b)) - (entry(w.xy, 2 * a)), (entry(w.xy, 2 * b + 1)) - (entry(w.xy, 2 * a + 1)));
+    const a = w.segA[s] ?? outside(w.segA, s);
+    const b = w.segB[s] ?? outside(w.segB, s);
+    sum += Math.hypot((w.xy[2 * b] ?? outside(w.xy, 2 * b)) - (w.xy[2 * a] ?? outside(w.xy, 2 * a)), (w.xy[2 * b + 1] ?? outside(w.xy, 2 * b + 1)) - (w.xy[2 * a + 1] ?? outside(w.xy, 2 * a + 1)));
   }
   return sum / Math.max(1, w.segA.length);
 }
 
 function encroaches(w: RefineInput, s: number, x: number, y: number): boolean {
-  const a = entry(w.segA, s);
-  const b = entry(w.segB, s);
-  const ax = entry(w.xy, 2 * a);
-  const ay = entry(w.xy, 2 * a + 1);
-  const bx = entry(w.xy, 2 * b);
-  const by = entry(w.xy, 2 * b + 1);
+  const a = w.segA[s] ?? outside(w.segA, s);
+  const b = w.segB[s] ?? outside(w.segB, s);
+  const ax = w.xy[2 * a] ?? outside(w.xy, 2 * a);
+  const ay = w.xy[2 * a + 1] ?? outside(w.xy, 2 * a + 1);
+  const bx = w.xy[2 * b] ?? outside(w.xy, 2 * b);
+  const by = w.xy[2 * b + 1] ?? outside(w.xy, 2 * b + 1);
   return (ax - x) * (bx - x) + (ay - y) * (by - y) < 0;
 }
 
 function splitSegment(w: RefineInput, s: number): void {
-  const a = entry(w.segA, s);
-  const b = entry(w.segB, s);
+  const a = w.segA[s] ?? outside(w.segA, s);
+  const b = w.segB[s] ?? outside(w.segB, s);
   const m = w.xy.length / 2;
-  w.xy.push(((entry(w.xy, 2 * a)) + (entry(w.xy, 2 * b))) / 2, ((entry(w.xy, 2 * a + 1)) + (entry(w.xy, 2 * b + 1))) / 2);
-  const net = entry(w.segNet, s);
+  w.xy.push(((w.xy[2 * a] ?? outside(w.xy, 2 * a)) + (w.xy[2 * b] ?? outside(w.xy, 2 * b))) / 2, ((w.xy[2 * a + 1] ?? outside(w.xy, 2 * a + 1)) + (w.xy[2 * b + 1] ?? outside(w.xy, 2 * b + 1))) / 2);
+  const net = w.segNet[s] ?? outside(w.segNet, s);
   // a < b < m: (a, m) keeps the direction of a → b, (b, m) reverses it.
   w.segB[s] = m;
   w.segA.push(b);
@@ -261,12 +261,12 @@ function splitSegment(w: RefineInput, s: number): void {
 export function presplitSegments(w: RefineInput, size: SizeField, maxPoints: number): void {
   for (let s = 0; s < w.segA.length; s++) {
     for (;;) {
-      const a = entry(w.segA, s);
-      const b = entry(w.segB, s);
-      const ax = entry(w.xy, 2 * a);
-      const ay = entry(w.xy, 2 * a + 1);
-      const bx = entry(w.xy, 2 * b);
-      const by = entry(w.xy, 2 * b + 1);
+      const a = w.segA[s] ?? outside(w.segA, s);
+      const b = w.segB[s] ?? outside(w.segB, s);
+      const ax = w.xy[2 * a] ?? outside(w.xy, 2 * a);
+      const ay = w.xy[2 * a + 1] ?? outside(w.xy, 2 * a + 1);
+      const bx = w.xy[2 * b] ?? outside(w.xy, 2 * b);
+      const by = w.xy[2 * b + 1] ?? outside(w.xy, 2 * b + 1);
       if (Math.hypot(bx - ax, by - ay) <= size.at((ax + bx) / 2, (ay + by) / 2)) break;
       if (w.xy.length / 2 >= maxPoints) throw new MeshRefinementError(`boundary splitting reached the cap of ${maxPoints} points`, w.xy.length / 2, 0);
       splitSegment(w, s);
@@ -289,11 +289,11 @@ interface Candidate {
  * circumcentre. Fewer points than circumcentres, same quality bound.
  */
 function offCentre(coords: Float64Array, tri: Uint32Array, t: number, c: Circle, minAngleRad: number): [number, number] {
-  const p = entry(tri, 3 * t + c.shortest);
-  const q = entry(tri, 3 * t + ((c.shortest + 1) % 3));
-  const mx = ((entry(coords, 2 * p)) + (entry(coords, 2 * q))) / 2;
-  const my = ((entry(coords, 2 * p + 1)) + (entry(coords, 2 * q + 1))) / 2;
-  const half = Math.hypot((entry(coords, 2 * q)) - (entry(coords, 2 * p)), (entry(coords, 2 * q + 1)) - (entry(coords, 2 * p + 1))) / 2;
+  const p = tri[3 * t + c.shortest] ?? outside(tri, 3 * t + c.shortest);
+  const q = tri[3 * t + ((c.shortest + 1) % 3)] ?? outside(tri, 3 * t + ((c.shortest + 1) % 3));
+  const mx = ((coords[2 * p] ?? outside(coords, 2 * p)) + (coords[2 * q] ?? outside(coords, 2 * q))) / 2;
+  const my = ((coords[2 * p + 1] ?? outside(coords, 2 * p + 1)) + (coords[2 * q + 1] ?? outside(coords, 2 * q + 1))) / 2;
+  const half = Math.hypot((coords[2 * q] ?? outside(coords, 2 * q)) - (coords[2 * p] ?? outside(coords, 2 * p)), (coords[2 * q + 1] ?? outside(coords, 2 * q + 1)) - (coords[2 * p + 1] ?? outside(coords, 2 * p + 1))) / 2;
   const dc = Math.hypot(c.x - mx, c.y - my);
   const d = half / Math.tan(minAngleRad / 2);
   if (!(d < dc) || dc === 0) return [c.x, c.y];
@@ -308,11 +308,11 @@ function badTriangles(r: Round, coords: Float64Array, s: RefineSettings): { list
   for (let t = 0; t < tri.length / 3; t++) {
     if (!r.inside[t]) continue;
     const c = circumcircle(coords, tri, t);
-    const i0 = entry(tri, 3 * t);
-    const i1 = entry(tri, 3 * t + 1);
-    const i2 = entry(tri, 3 * t + 2);
-    const gx = ((entry(coords, 2 * i0)) + (entry(coords, 2 * i1)) + (entry(coords, 2 * i2))) / 3;
-    const gy = ((entry(coords, 2 * i0 + 1)) + (entry(coords, 2 * i1 + 1)) + (entry(coords, 2 * i2 + 1))) / 3;
+    const i0 = tri[3 * t] ?? outside(tri, 3 * t);
+    const i1 = tri[3 * t + 1] ?? outside(tri, 3 * t + 1);
+    const i2 = tri[3 * t + 2] ?? outside(tri, 3 * t + 2);
+    const gx = ((coords[2 * i0] ?? outside(coords, 2 * i0)) + (coords[2 * i1] ?? outside(coords, 2 * i1)) + (coords[2 * i2] ?? outside(coords, 2 * i2))) / 3;
+    const gy = ((coords[2 * i0 + 1] ?? outside(coords, 2 * i0 + 1)) + (coords[2 * i1 + 1] ?? outside(coords, 2 * i1 + 1)) + (coords[2 * i2 + 1] ?? outside(coords, 2 * i2 + 1))) / 3;
     const tooLarge = c.r > SIZE_RADIUS_RATIO * s.size.at(gx, gy);
     let tooSharp = c.sinMin < sinTarget;
     if (tooSharp && !tooLarge) {
@@ -345,7 +345,7 @@ function chooseInsertions(w: RefineInput, r: Round, coords: Float64Array, bad: r
     if (hit === null) continue;
     if (hit < 0) {
       const e = -hit - 1;
-      const seg = segmentOfEdge(r, entry(r.cdt.triangles, e), entry(r.cdt.triangles, next(e)));
+      const seg = segmentOfEdge(r, (r.cdt.triangles[e] ?? outside(r.cdt.triangles, e)), (r.cdt.triangles[next(e)] ?? outside(r.cdt.triangles, next(e))));
       if (seg >= 0) split.add(seg);
       continue;
     }
@@ -362,7 +362,7 @@ function chooseInsertions(w: RefineInput, r: Round, coords: Float64Array, bad: r
     blocked[hit] = 1;
     blocked[t] = 1;
     for (let k = 0; k < 3; k++) {
-      const f = entry(r.cdt.halfedges, 3 * hit + k);
+      const f = r.cdt.halfedges[3 * hit + k] ?? outside(r.cdt.halfedges, 3 * hit + k);
       if (f >= 0) blocked[Math.floor(f / 3)] = 1;
     }
   }
@@ -379,10 +379,10 @@ function addFrame(w: RefineInput): void {
   let xmax = -Infinity;
   let ymax = -Infinity;
   for (let i = 0; i < w.xy.length; i += 2) {
-    xmin = Math.min(xmin, entry(w.xy, i));
-    xmax = Math.max(xmax, entry(w.xy, i));
-    ymin = Math.min(ymin, entry(w.xy, i + 1));
-    ymax = Math.max(ymax, entry(w.xy, i + 1));
+    xmin = Math.min(xmin, (w.xy[i] ?? outside(w.xy, i)));
+    xmax = Math.max(xmax, (w.xy[i] ?? outside(w.xy, i)));
+    ymin = Math.min(ymin, (w.xy[i + 1] ?? outside(w.xy, i + 1)));
+    ymax = Math.max(ymax, (w.xy[i + 1] ?? outside(w.xy, i + 1)));
   }
   const pad = Math.hypot(xmax - xmin, ymax - ymin);
   w.xy.push(xmin - pad, ymin - pad, xmax + pad, ymin - pad, xmax + pad, ymax + pad, xmin - pad, ymax + pad);
@@ -416,10 +416,10 @@ function finish(coords: Float64Array, r: Round, rounds: number, insertedPoints: 
   const out: number[] = [];
   for (let t = 0; t < r.inside.length; t++) {
     if (!r.inside[t]) continue;
-    const a = entry(tri, 3 * t);
-    const b = entry(tri, 3 * t + 1);
-    const c = entry(tri, 3 * t + 2);
-    if ((entry(r.sign, t)) > 0) out.push(a, b, c);
+    const a = tri[3 * t] ?? outside(tri, 3 * t);
+    const b = tri[3 * t + 1] ?? outside(tri, 3 * t + 1);
+    const c = tri[3 * t + 2] ?? outside(tri, 3 * t + 2);
+    if ((r.sign[t] ?? outside(r.sign, t)) > 0) out.push(a, b, c);
     else out.push(a, c, b);
   }
   return { xy: coords, triangles: Int32Array.from(out), rounds, insertedPoints, badTriangles };

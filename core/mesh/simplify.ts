@@ -20,7 +20,7 @@
  * rejects the graph (MeshInputError) and the caller falls back to a smaller tolerance.
  */
 import type { PlanarGraph } from './planar-input.ts';
-import { entry } from '../invariant.ts';
+import { outside } from '../invariant.ts';
 
 export interface SimplifiedGraph {
   readonly graph: PlanarGraph;
@@ -35,12 +35,12 @@ export interface SimplifiedGraph {
 
 /** Net winding of segment s walked away from point p (material on the left when > 0). */
 function walkNet(g: PlanarGraph, s: number, from: number): number {
-  const net = entry(g.segNet, s);
+  const net = g.segNet[s] ?? outside(g.segNet, s);
   return g.segA[s] === from ? net : -net;
 }
 
 function otherEnd(g: PlanarGraph, s: number, p: number): number {
-  return g.segA[s] === p ? (entry(g.segB, s)) : (entry(g.segA, s));
+  return g.segA[s] === p ? (g.segB[s] ?? outside(g.segB, s)) : (g.segA[s] ?? outside(g.segA, s));
 }
 
 interface Incidence {
@@ -51,15 +51,15 @@ interface Incidence {
 function incidence(g: PlanarGraph, n: number): Incidence {
   const start = new Int32Array(n + 1);
   for (let s = 0; s < g.segA.length; s++) {
-    start[(entry(g.segA, s)) + 1]!++;
-    start[(entry(g.segB, s)) + 1]!++;
+    start[(g.segA[s] ?? outside(g.segA, s)) + 1]!++;
+    start[(g.segB[s] ?? outside(g.segB, s)) + 1]!++;
   }
   for (let i = 0; i < n; i++) start[i + 1]! += start[i]!;
   const fill = start.slice(0, n);
   const seg = new Int32Array(2 * g.segA.length);
   for (let s = 0; s < g.segA.length; s++) {
-    seg[fill[entry(g.segA, s)]!++] = s;
-    seg[fill[entry(g.segB, s)]!++] = s;
+    seg[fill[(g.segA[s] ?? outside(g.segA, s))]!++] = s;
+    seg[fill[(g.segB[s] ?? outside(g.segB, s))]!++] = s;
   }
   return { start, seg };
 }
@@ -248,8 +248,8 @@ export interface GraphMoments {
 
 export function graphMoments(g: PlanarGraph): GraphMoments {
   // A local origin keeps the sums well conditioned (docs/methods.md §1.3).
-  const ox = entry(g.xy, 0);
-  const oy = entry(g.xy, 1);
+  const ox = g.xy[0] ?? outside(g.xy, 0);
+  const oy = g.xy[1] ?? outside(g.xy, 1);
   let A = 0, Qx = 0, Qy = 0, Ixx = 0, Iyy = 0, Ixy = 0;
   for (let s = 0; s < g.segA.length; s++) {
     const w = g.segNet[s]!;

@@ -11,7 +11,7 @@
  * Cost: ray casting is O(samples × edges); the grid has at most ~40 000 cells.
  */
 import type { PlanarGraph } from './planar-input.ts';
-import { entry } from '../invariant.ts';
+import { outside } from '../invariant.ts';
 
 export interface SizeFieldSettings {
   readonly layers: number;
@@ -38,8 +38,8 @@ interface Grid {
 export function orientedBoundary(g: PlanarGraph): [number, number][] {
   const out: [number, number][] = [];
   g.segNet.forEach((net, s) => {
-    const a = entry(g.segA, s);
-    const b = entry(g.segB, s);
+    const a = g.segA[s] ?? outside(g.segA, s);
+    const b = g.segB[s] ?? outside(g.segB, s);
     if (net > 0) out.push([a, b]);
     else if (net < 0) out.push([b, a]);
   });
@@ -51,10 +51,10 @@ function rayThickness(xy: readonly number[], edges: readonly [number, number][],
   let best = Infinity;
   edges.forEach(([a, b], e) => {
     if (e === skip) return;
-    const ax = (entry(xy, 2 * a)) - px;
-    const ay = (entry(xy, 2 * a + 1)) - py;
-    const ex = (entry(xy, 2 * b)) - (entry(xy, 2 * a));
-    const ey = (entry(xy, 2 * b + 1)) - (entry(xy, 2 * a + 1));
+    const ax = (xy[2 * a] ?? outside(xy, 2 * a)) - px;
+    const ay = (xy[2 * a + 1] ?? outside(xy, 2 * a + 1)) - py;
+    const ex = (xy[2 * b] ?? outside(xy, 2 * b)) - (xy[2 * a] ?? outside(xy, 2 * a));
+    const ey = (xy[2 * b + 1] ?? outside(xy, 2 * b + 1)) - (xy[2 * a + 1] ?? outside(xy, 2 * a + 1));
     // Solve s·n = A + u·E  →  Cramer's rule on [n, −E].
     const det = -nx * ey + ny * ex;
     if (det === 0) return;
@@ -75,10 +75,10 @@ function thicknessSamples(g: PlanarGraph, edges: readonly [number, number][], la
   const spacing = g.diagonal / 40;
   const out: Sample[] = [];
   edges.forEach(([a, b], e) => {
-    const ax = entry(g.xy, 2 * a);
-    const ay = entry(g.xy, 2 * a + 1);
-    const dx = (entry(g.xy, 2 * b)) - ax;
-    const dy = (entry(g.xy, 2 * b + 1)) - ay;
+    const ax = g.xy[2 * a] ?? outside(g.xy, 2 * a);
+    const ay = g.xy[2 * a + 1] ?? outside(g.xy, 2 * a + 1);
+    const dx = (g.xy[2 * b] ?? outside(g.xy, 2 * b)) - ax;
+    const dy = (g.xy[2 * b + 1] ?? outside(g.xy, 2 * b + 1)) - ay;
     const len = Math.hypot(dx, dy);
     const m = Math.min(64, Math.max(1, Math.ceil(len / spacing)));
     for (let k = 0; k < m; k++) {
@@ -121,7 +121,7 @@ const cellOf = (grid: Grid, x: number, y: number): number => {
 
 function splat(grid: Grid, x: number, y: number, h: number): void {
   const c = cellOf(grid, x, y);
-  if (h < (entry(grid.h, c))) grid.h[c] = h;
+  if (h < (grid.h[c] ?? outside(grid.h, c))) grid.h[c] = h;
 }
 
 /** Two chamfer passes: h ← min(h, h_neighbour + grading · distance). */
@@ -130,8 +130,8 @@ function sweep(grid: Grid, grading: number): void {
   const d1 = grading * grid.cell;
   const d2 = d1 * Math.SQRT2;
   const relax = (c: number, n: number, d: number): void => {
-    const v = (entry(h, n)) + d;
-    if (v < (entry(h, c))) h[c] = v;
+    const v = (h[n] ?? outside(h, n)) + d;
+    if (v < (h[c] ?? outside(h, c))) h[c] = v;
   };
   for (let j = 0; j < ny; j++) {
     for (let i = 0; i < nx; i++) {
@@ -166,19 +166,19 @@ export function sizeFieldOf(g: PlanarGraph, corners: readonly number[], s: SizeF
   for (const c of caps) finest = Math.min(finest, c);
   const grid = emptyGrid(g, finest / s.cornerRefinement);
   for (const p of samples) splat(grid, p.x, p.y, p.h);
-  g.pieces.forEach((p, k) => capBox(grid, p.box, entry(caps, k)));
+  g.pieces.forEach((p, k) => capBox(grid, p.box, (caps[k] ?? outside(caps, k))));
   sweep(grid, s.grading);
   if (corners.length > 0 && s.cornerRefinement > 1) {
     for (const v of corners) {
-      const x = entry(g.xy, 2 * v);
-      const y = entry(g.xy, 2 * v + 1);
-      splat(grid, x, y, entry(grid.h, cellOf(grid, x, y)) / s.cornerRefinement);
+      const x = g.xy[2 * v] ?? outside(g.xy, 2 * v);
+      const y = g.xy[2 * v + 1] ?? outside(g.xy, 2 * v + 1);
+      splat(grid, x, y, (grid.h[cellOf(grid, x, y)] ?? outside(grid.h, cellOf(grid, x, y))) / s.cornerRefinement);
     }
     sweep(grid, s.grading);
   }
   let smallest = Infinity;
   for (const v of grid.h) smallest = Math.min(smallest, v);
-  return { at: (x, y) => entry(grid.h, cellOf(grid, x, y)), smallest };
+  return { at: (x, y) => (grid.h[cellOf(grid, x, y)] ?? outside(grid.h, cellOf(grid, x, y))), smallest };
 }
 
 function capBox(grid: Grid, box: readonly [number, number, number, number], cap: number): void {
@@ -191,7 +191,7 @@ function capBox(grid: Grid, box: readonly [number, number, number, number], cap:
   for (let j = j0; j <= j1; j++) {
     for (let i = i0; i <= i1; i++) {
       const c = j * grid.nx + i;
-      if (cap < (entry(grid.h, c))) grid.h[c] = cap;
+      if (cap < (grid.h[c] ?? outside(grid.h, c))) grid.h[c] = cap;
     }
   }
 }
@@ -206,19 +206,19 @@ export function reentrantCorners(g: PlanarGraph): number[] {
   edges.forEach(([a, b], e) => {
     outgoing[a] = e;
     incoming[b] = e;
-    degree[a] = (entry(degree, a)) + 1;
-    degree[b] = (entry(degree, b)) + 1;
+    degree[a] = (degree[a] ?? outside(degree, a)) + 1;
+    degree[b] = (degree[b] ?? outside(degree, b)) + 1;
   });
   const out: number[] = [];
   const limit = (10 * Math.PI) / 180;
   for (let v = 0; v < n; v++) {
-    const ein = edges[entry(incoming, v)];
-    const eout = edges[entry(outgoing, v)];
+    const ein = edges[(incoming[v] ?? outside(incoming, v))];
+    const eout = edges[(outgoing[v] ?? outside(outgoing, v))];
     if (degree[v] !== 2 || !ein || !eout) continue;
-    const ux = (entry(g.xy, 2 * v)) - (entry(g.xy, 2 * ein[0]));
-    const uy = (entry(g.xy, 2 * v + 1)) - (entry(g.xy, 2 * ein[0] + 1));
-    const wx = (entry(g.xy, 2 * eout[1])) - (entry(g.xy, 2 * v));
-    const wy = (entry(g.xy, 2 * eout[1] + 1)) - (entry(g.xy, 2 * v + 1));
+    const ux = (g.xy[2 * v] ?? outside(g.xy, 2 * v)) - (g.xy[2 * ein[0]] ?? outside(g.xy, 2 * ein[0]));
+    const uy = (g.xy[2 * v + 1] ?? outside(g.xy, 2 * v + 1)) - (g.xy[2 * ein[0] + 1] ?? outside(g.xy, 2 * ein[0] + 1));
+    const wx = (g.xy[2 * eout[1]] ?? outside(g.xy, 2 * eout[1])) - (g.xy[2 * v] ?? outside(g.xy, 2 * v));
+    const wy = (g.xy[2 * eout[1] + 1] ?? outside(g.xy, 2 * eout[1] + 1)) - (g.xy[2 * v + 1] ?? outside(g.xy, 2 * v + 1));
     // A right turn (clockwise) with material on the left is a re-entrant corner.
     if (Math.atan2(ux * wy - uy * wx, ux * wx + uy * wy) < -limit) out.push(v);
   }

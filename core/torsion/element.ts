@@ -5,7 +5,7 @@
  * K_e = ∫ ∇N·∇Nᵀ dA and F_e = ∫ (Y ∂N/∂X − X ∂N/∂Y) dA have degree-2 integrands: the 3-point
  * mid-edge rule is exact. M_e = ∫ N Nᵀ dA is the closed form of docs/methods.md §7.3 (degree 4).
  */
-import { entry } from '../invariant.ts';
+import { outside } from '../invariant.ts';
 
 /** Area coordinates and weights (× area) of the 3-point degree-2 rule: edge mid-points. */
 export const MIDEDGE_RULE: readonly (readonly [number, number, number, number])[] = [
@@ -57,8 +57,8 @@ export interface ElementGeometry {
 }
 
 export function elementGeometry(x: ArrayLike<number>, y: ArrayLike<number>): ElementGeometry {
-  const x1 = entry(x, 0), x2 = entry(x, 1), x3 = entry(x, 2);
-  const y1 = entry(y, 0), y2 = entry(y, 1), y3 = entry(y, 2);
+  const x1 = x[0] ?? outside(x, 0), x2 = x[1] ?? outside(x, 1), x3 = x[2] ?? outside(x, 2);
+  const y1 = y[0] ?? outside(y, 0), y2 = y[1] ?? outside(y, 1), y3 = y[2] ?? outside(y, 2);
   const d2 = (x2 - x1) * (y3 - y1) - (x3 - x1) * (y2 - y1);
   return {
     twiceArea: d2,
@@ -95,14 +95,14 @@ export function elementStiffnessAndLoad(x: ArrayLike<number>, y: ArrayLike<numbe
   for (const [l1, l2, l3, w] of MIDEDGE_RULE) {
     shapeDerivatives(l1, l2, l3, g.b, nx);
     shapeDerivatives(l1, l2, l3, g.c, ny);
-    const px = l1 * (entry(x, 0)) + l2 * (entry(x, 1)) + l3 * (entry(x, 2));
-    const py = l1 * (entry(y, 0)) + l2 * (entry(y, 1)) + l3 * (entry(y, 2));
+    const px = l1 * (x[0] ?? outside(x, 0)) + l2 * (x[1] ?? outside(x, 1)) + l3 * (x[2] ?? outside(x, 2));
+    const py = l1 * (y[0] ?? outside(y, 0)) + l2 * (y[1] ?? outside(y, 1)) + l3 * (y[2] ?? outside(y, 2));
     const wa = w * area;
     for (let i = 0; i < 6; i++) {
-      const nxi = entry(nx, i);
-      const nyi = entry(ny, i);
-      fe[i] = (entry(fe, i)) + wa * (py * nxi - px * nyi);
-      for (let j = 0; j < 6; j++) ke[6 * i + j] = (entry(ke, 6 * i + j)) + wa * (nxi * (entry(nx, j)) + nyi * (entry(ny, j)));
+      const nxi = nx[i] ?? outside(nx, i);
+      const nyi = ny[i] ?? outside(ny, i);
+      fe[i] = (fe[i] ?? outside(fe, i)) + wa * (py * nxi - px * nyi);
+      for (let j = 0; j < 6; j++) ke[6 * i + j] = (ke[6 * i + j] ?? outside(ke, 6 * i + j)) + wa * (nxi * (nx[j] ?? outside(nx, j)) + nyi * (ny[j] ?? outside(ny, j)));
     }
   }
   return area;

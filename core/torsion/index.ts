@@ -29,7 +29,7 @@
  */
 import type { Region } from '../geometry/types.ts';
 import { DEFAULT_CHORD_ANGLE_DEG, MeshCancelledError, MeshInputError, meshGraph, regionGraph, type MeshSimplification, type PlanarGraph, type TriangleMesh } from '../mesh/index.ts';
-import { entry, invariant } from '../invariant.ts';
+import { invariant, outside } from '../invariant.ts';
 import { TorsionCancelledError } from './errors.ts';
 import { pieceLocator } from './pieces.ts';
 import type { TorsionOptions, TorsionResult } from './types.ts';
@@ -313,12 +313,12 @@ export function torsionStressField(analysis: TorsionAnalysis): TorsionStressFiel
   const magnitude = new Float64Array(n);
   let maxMagnitude = 0;
   for (let i = 0; i < n; i++) {
-    const X = (entry(mesh.xy, 2 * i)) - s.xc;
-    const Y = (entry(mesh.xy, 2 * i + 1)) - s.yc;
-    tauX[i] = ((entry(gx, i)) - Y) / s.J;
-    tauY[i] = ((entry(gy, i)) + X) / s.J;
-    magnitude[i] = Math.hypot(entry(tauX, i), entry(tauY, i));
-    maxMagnitude = Math.max(maxMagnitude, entry(magnitude, i));
+    const X = (mesh.xy[2 * i] ?? outside(mesh.xy, 2 * i)) - s.xc;
+    const Y = (mesh.xy[2 * i + 1] ?? outside(mesh.xy, 2 * i + 1)) - s.yc;
+    tauX[i] = ((gx[i] ?? outside(gx, i)) - Y) / s.J;
+    tauY[i] = ((gy[i] ?? outside(gy, i)) + X) / s.J;
+    magnitude[i] = Math.hypot((tauX[i] ?? outside(tauX, i)), (tauY[i] ?? outside(tauY, i)));
+    maxMagnitude = Math.max(maxMagnitude, (magnitude[i] ?? outside(magnitude, i)));
   }
   return { xy: mesh.xy, triangles: childTriangles(mesh), tauX, tauY, magnitude, maxMagnitude, unboundedAtCorners: analysis.reentrantCorners > 0 };
 }

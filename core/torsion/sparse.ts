@@ -7,7 +7,7 @@
  * orthogonal to it (per-component mean removed) and the iterate's per-component mean is removed
  * at the end. Stops at ‖r‖/‖F‖ ≤ tolerance or throws TorsionSolveError at the iteration cap.
  */
-import { entry, invariant } from '../invariant.ts';
+import { invariant, outside } from '../invariant.ts';
 import { TorsionCancelledError, TorsionSolveError } from './errors.ts';
 
 export interface Csr {
@@ -61,11 +61,11 @@ export function csrPattern(n: number, elements: Int32Array, per: number): Csr {
 
 /** Position of column j in row i (binary search; the pattern must contain it). */
 export function csrIndex(a: Csr, i: number, j: number): number {
-  let lo = entry(a.rowStart, i);
-  let hi = (entry(a.rowStart, i + 1)) - 1;
+  let lo = a.rowStart[i] ?? outside(a.rowStart, i);
+  let hi = (a.rowStart[i + 1] ?? outside(a.rowStart, i + 1)) - 1;
   while (lo <= hi) {
     const mid = (lo + hi) >> 1;
-    const c = entry(a.col, mid);
+    const c = a.col[mid] ?? outside(a.col, mid);
     if (c === j) return mid;
     if (c < j) lo = mid + 1;
     else hi = mid - 1;
@@ -90,13 +90,13 @@ export function removeComponentMeans(v: Float64Array, component: Int32Array, com
   const sum = new Float64Array(components);
   const cnt = new Float64Array(components);
   for (let i = 0; i < v.length; i++) {
-    const c = entry(component, i);
-    sum[c] = (entry(sum, c)) + (entry(v, i));
-    cnt[c] = (entry(cnt, c)) + 1;
+    const c = component[i] ?? outside(component, i);
+    sum[c] = (sum[c] ?? outside(sum, c)) + (v[i] ?? outside(v, i));
+    cnt[c] = (cnt[c] ?? outside(cnt, c)) + 1;
   }
   for (let i = 0; i < v.length; i++) {
-    const c = entry(component, i);
-    v[i] = (entry(v, i)) - (entry(sum, c)) / (entry(cnt, c));
+    const c = component[i] ?? outside(component, i);
+    v[i] = (v[i] ?? outside(v, i)) - (sum[c] ?? outside(sum, c)) / (cnt[c] ?? outside(cnt, c));
   }
 }
 

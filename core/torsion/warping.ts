@@ -12,7 +12,7 @@
  */
 import { elementStiffnessAndLoad, MASS_T6, shapeDerivatives, elementGeometry } from './element.ts';
 import { csrIndex, csrMultiply, csrPattern, pcgSolve, type Preconditioner } from './sparse.ts';
-import { entry } from '../invariant.ts';
+import { outside } from '../invariant.ts';
 
 export interface QuadraticMesh {
   /** All node coordinates: corners first (same indices as the T3 mesh), then mid-side nodes. */
@@ -37,16 +37,16 @@ export function quadraticMesh(xy: Float64Array, triangles: Int32Array): Quadrati
     let m = mid.get(key);
     if (m === undefined) {
       m = out.length / 2;
-      out.push(((entry(xy, 2 * a)) + (entry(xy, 2 * b))) / 2, ((entry(xy, 2 * a + 1)) + (entry(xy, 2 * b + 1))) / 2);
+      out.push(((xy[2 * a] ?? outside(xy, 2 * a)) + (xy[2 * b] ?? outside(xy, 2 * b))) / 2, ((xy[2 * a + 1] ?? outside(xy, 2 * a + 1)) + (xy[2 * b + 1] ?? outside(xy, 2 * b + 1))) / 2);
       mid.set(key, m);
     }
     return m;
   };
   const el = new Int32Array((triangles.length / 3) * 6);
   for (let t = 0; t < triangles.length / 3; t++) {
-    const a = entry(triangles, 3 * t);
-    const b = entry(triangles, 3 * t + 1);
-    const c = entry(triangles, 3 * t + 2);
+    const a = triangles[3 * t] ?? outside(triangles, 3 * t);
+    const b = triangles[3 * t + 1] ?? outside(triangles, 3 * t + 1);
+    const c = triangles[3 * t + 2] ?? outside(triangles, 3 * t + 2);
     el.set([a, b, c, midpoint(a, b), midpoint(b, c), midpoint(c, a)], 6 * t);
   }
   return { xy: Float64Array.from(out), elements: el };
@@ -59,7 +59,7 @@ export function quadraticMesh(xy: Float64Array, triangles: Int32Array): Quadrati
 export function bandOrdered(q: QuadraticMesh): QuadraticMesh {
   const n = q.xy.length / 2;
   const pattern = csrPattern(n, q.elements, 6);
-  const degree = (i: number): number => (entry(pattern.rowStart, i + 1)) - (entry(pattern.rowStart, i));
+  const degree = (i: number): number => (pattern.rowStart[i + 1] ?? outside(pattern.rowStart, i + 1)) - (pattern.rowStart[i] ?? outside(pattern.rowStart, i));
   const order: number[] = [];
   const placed = new Uint8Array(n);
   // Start each component from its lowest-degree node (a cheap stand-in for a peripheral one).
@@ -69,10 +69,10 @@ export function bandOrdered(q: QuadraticMesh): QuadraticMesh {
     placed[start] = 1;
     order.push(start);
     for (let h = order.length - 1; h < order.length; h++) {
-      const v = entry(order, h);
+      const v = order[h] ?? outside(order, h);
       const nbrs: number[] = [];
-      for (let p = entry(pattern.rowStart, v); p < (entry(pattern.rowStart, v + 1)); p++) {
-        const u = entry(pattern.col, p);
+      for (let p = pattern.rowStart[v] ?? outside(pattern.rowStart, v); p < (pattern.rowStart[v + 1] ?? outside(pattern.rowStart, v + 1)); p++) {
+        const u = pattern.col[p] ?? outside(pattern.col, p);
         if (!placed[u]) {
           placed[u] = 1;
           nbrs.push(u);
@@ -87,10 +87,10 @@ export function bandOrdered(q: QuadraticMesh): QuadraticMesh {
   order.forEach((old, k) => (newId[old] = k));
   const xy = new Float64Array(2 * n);
   order.forEach((old, k) => {
-    xy[2 * k] = entry(q.xy, 2 * old);
-    xy[2 * k + 1] = entry(q.xy, 2 * old + 1);
+    xy[2 * k] = q.xy[2 * old] ?? outside(q.xy, 2 * old);
+    xy[2 * k + 1] = q.xy[2 * old + 1] ?? outside(q.xy, 2 * old + 1);
   });
-  return { xy, elements: q.elements.map((v) => entry(newId, v)), weights: q.weights };
+  return { xy, elements: q.elements.map((v) => (newId[v] ?? outside(newId, v))), weights: q.weights };
 }
 
 /** Corner triangles of the nested refinement: each T6 split into its four children. */
@@ -98,7 +98,7 @@ export function childTriangles(q: QuadraticMesh): Int32Array {
   const e = q.elements;
   const out = new Int32Array((e.length / 6) * 12);
   for (let t = 0; t < e.length / 6; t++) {
-    const [n0, n1, n2, n3, n4, n5] = [0, 1, 2, 3, 4, 5].map((k) => entry(e, 6 * t + k)) as [number, number, number, number, number, number];
+    const [n0, n1, n2, n3, n4, n5] = [0, 1, 2, 3, 4, 5].map((k) => (e[6 * t + k] ?? outside(e, 6 * t + k))) as [number, number, number, number, number, number];
     out.set([n0, n3, n5, n3, n1, n4, n5, n4, n2, n3, n4, n5], 12 * t);
   }
   return out;
@@ -108,11 +108,11 @@ export function childTriangles(q: QuadraticMesh): Int32Array {
 const CHILD_NODES: readonly (readonly (readonly [number, number, number])[])[] = (() => {
   const P: (readonly [number, number, number])[] = [[1, 0, 0], [0, 1, 0], [0, 0, 1], [0.5, 0.5, 0], [0, 0.5, 0.5], [0.5, 0, 0.5]];
   const kids = [[0, 3, 5], [3, 1, 4], [5, 4, 2], [3, 4, 5]];
-  const avg = (p: readonly number[], q: readonly number[]): [number, number, number] => [((entry(p, 0)) + (entry(q, 0))) / 2, ((entry(p, 1)) + (entry(q, 1))) / 2, ((entry(p, 2)) + (entry(q, 2))) / 2];
+  const avg = (p: readonly number[], q: readonly number[]): [number, number, number] => [((p[0] ?? outside(p, 0)) + (q[0] ?? outside(q, 0))) / 2, ((p[1] ?? outside(p, 1)) + (q[1] ?? outside(q, 1))) / 2, ((p[2] ?? outside(p, 2)) + (q[2] ?? outside(q, 2))) / 2];
   return kids.map((kid) => {
-    const A = entry(P, entry(kid, 0));
-    const B = entry(P, entry(kid, 1));
-    const C = entry(P, entry(kid, 2));
+    const A = P[(kid[0] ?? outside(kid, 0))] ?? outside(P, (kid[0] ?? outside(kid, 0)));
+    const B = P[(kid[1] ?? outside(kid, 1))] ?? outside(P, (kid[1] ?? outside(kid, 1)));
+    const C = P[(kid[2] ?? outside(kid, 2))] ?? outside(P, (kid[2] ?? outside(kid, 2)));
     return [A, B, C, avg(A, B), avg(B, C), avg(C, A)];
   });
 })();
@@ -122,12 +122,12 @@ export function prolongate(coarse: QuadraticMesh, fine: QuadraticMesh, values: F
   const out = new Float64Array(fine.xy.length / 2);
   for (let t = 0; t < coarse.elements.length / 6; t++) {
     for (let k = 0; k < 4; k++) {
-      const nodes = entry(CHILD_NODES, k);
+      const nodes = CHILD_NODES[k] ?? outside(CHILD_NODES, k);
       nodes.forEach(([l1, l2, l3], j) => {
         const N = [l1 * (2 * l1 - 1), l2 * (2 * l2 - 1), l3 * (2 * l3 - 1), 4 * l1 * l2, 4 * l2 * l3, 4 * l3 * l1];
         let v = 0;
-        for (let i = 0; i < 6; i++) v += (entry(N, i)) * (entry(values, entry(coarse.elements, 6 * t + i)));
-        out[entry(fine.elements, 6 * (4 * t + k) + j)] = v;
+        for (let i = 0; i < 6; i++) v += (N[i] ?? outside(N, i)) * (values[(coarse.elements[6 * t + i] ?? outside(coarse.elements, 6 * t + i))] ?? outside(values, (coarse.elements[6 * t + i] ?? outside(coarse.elements, 6 * t + i))));
+        out[(fine.elements[6 * (4 * t + k) + j] ?? outside(fine.elements, 6 * (4 * t + k) + j))] = v;
       });
     }
   }
@@ -176,18 +176,18 @@ function componentsOf(nodes: number, elements: Int32Array): { count: number; of:
   const parent = Int32Array.from({ length: nodes }, (_, i) => i);
   const find = (i: number): number => {
     let r = i;
-    while (entry(parent, r) !== r) r = entry(parent, r);
-    while (entry(parent, i) !== r) {
-      const nx = entry(parent, i);
+    while ((parent[r] ?? outside(parent, r)) !== r) r = parent[r] ?? outside(parent, r);
+    while ((parent[i] ?? outside(parent, i)) !== r) {
+      const nx = parent[i] ?? outside(parent, i);
       parent[i] = r;
       i = nx;
     }
     return r;
   };
   for (let t = 0; t < elements.length; t += 6) {
-    const a = find(entry(elements, t));
+    const a = find(elements[t] ?? outside(elements, t));
     for (let k = 1; k < 6; k++) {
-      const b = find(entry(elements, t + k));
+      const b = find(elements[t + k] ?? outside(elements, t + k));
       if (a !== b) parent[b] = a;
     }
   }
@@ -196,8 +196,8 @@ function componentsOf(nodes: number, elements: Int32Array): { count: number; of:
   let count = 0;
   for (let i = 0; i < nodes; i++) {
     const r = find(i);
-    if ((entry(label, r)) < 0) label[r] = count++;
-    of[i] = entry(label, r);
+    if ((label[r] ?? outside(label, r)) < 0) label[r] = count++;
+    of[i] = label[r] ?? outside(label, r);
   }
   return { count, of };
 }
@@ -214,15 +214,15 @@ function meshCentroid(q: QuadraticMesh): Moments {
   let sy = 0;
   const e = q.elements;
   // Local origin at the first node keeps the sums well conditioned (docs/methods.md §1.3).
-  const ox = entry(q.xy, 0);
-  const oy = entry(q.xy, 1);
+  const ox = q.xy[0] ?? outside(q.xy, 0);
+  const oy = q.xy[1] ?? outside(q.xy, 1);
   for (let t = 0; t < e.length; t += 6) {
-    const xs = [0, 1, 2].map((k) => (entry(q.xy, 2 * (entry(e, t + k)))) - ox);
-    const ys = [0, 1, 2].map((k) => (entry(q.xy, 2 * (entry(e, t + k)) + 1)) - oy);
-    const a = (elementGeometry(xs, ys).twiceArea / 2) * ((q.weights ? entry(q.weights, t / 6) : 1));
+    const xs = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? outside(e, t + k))] ?? outside(q.xy, 2 * (e[t + k] ?? outside(e, t + k)))) - ox);
+    const ys = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? outside(e, t + k)) + 1] ?? outside(q.xy, 2 * (e[t + k] ?? outside(e, t + k)) + 1)) - oy);
+    const a = (elementGeometry(xs, ys).twiceArea / 2) * ((q.weights ? (q.weights[t / 6] ?? outside(q.weights, t / 6)) : 1));
     area += a;
-    sx += (a * ((entry(xs, 0)) + (entry(xs, 1)) + (entry(xs, 2)))) / 3;
-    sy += (a * ((entry(ys, 0)) + (entry(ys, 1)) + (entry(ys, 2)))) / 3;
+    sx += (a * ((xs[0] ?? outside(xs, 0)) + (xs[1] ?? outside(xs, 1)) + (xs[2] ?? outside(xs, 2)))) / 3;
+    sy += (a * ((ys[0] ?? outside(ys, 0)) + (ys[1] ?? outside(ys, 1)) + (ys[2] ?? outside(ys, 2)))) / 3;
   }
   return { area, xc: ox + sx / area, yc: oy + sy / area };
 }
@@ -237,7 +237,7 @@ function massTimes(q: QuadraticMesh, X: Float64Array, Y: Float64Array, v: Float6
     const b = e[t + 1]!;
     const c = e[t + 2]!;
     const twice = (X[b]! - X[a]!) * (Y[c]! - Y[a]!) - (X[c]! - X[a]!) * (Y[b]! - Y[a]!);
-    const s = (twice / 2 / 180) * ((q.weights ? entry(q.weights, t / 6) : 1));
+    const s = (twice / 2 / 180) * ((q.weights ? (q.weights[t / 6] ?? outside(q.weights, t / 6)) : 1));
     for (let j = 0; j < 6; j++) local[j] = v[e[t + j]!]!;
     for (let i = 0; i < 6; i++) {
       let acc = 0;
@@ -250,7 +250,7 @@ function massTimes(q: QuadraticMesh, X: Float64Array, Y: Float64Array, v: Float6
 
 const dotv = (a: Float64Array, b: Float64Array): number => {
   let s = 0;
-  for (let i = 0; i < a.length; i++) s += (entry(a, i)) * (entry(b, i));
+  for (let i = 0; i < a.length; i++) s += (a[i] ?? outside(a, i)) * (b[i] ?? outside(b, i));
   return s;
 };
 
@@ -272,8 +272,8 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
   const X = new Float64Array(n);
   const Y = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    X[i] = (entry(q.xy, 2 * i)) - xc;
-    Y[i] = (entry(q.xy, 2 * i + 1)) - yc;
+    X[i] = (q.xy[2 * i] ?? outside(q.xy, 2 * i)) - xc;
+    Y[i] = (q.xy[2 * i + 1] ?? outside(q.xy, 2 * i + 1)) - yc;
   }
   const K = csrPattern(n, q.elements, 6);
   const F = new Float64Array(n);
@@ -287,25 +287,25 @@ export function solveWarping(q: QuadraticMesh, s: SolveSettings): WarpingSolutio
   const e = q.elements;
   for (let t = 0; t < e.length; t += 6) {
     for (let k = 0; k < 6; k++) {
-      ex[k] = entry(X, entry(e, t + k));
-      ey[k] = entry(Y, entry(e, t + k));
+      ex[k] = X[(e[t + k] ?? outside(e, t + k))] ?? outside(X, (e[t + k] ?? outside(e, t + k)));
+      ey[k] = Y[(e[t + k] ?? outside(e, t + k))] ?? outside(Y, (e[t + k] ?? outside(e, t + k)));
     }
     const a = elementStiffnessAndLoad(ex, ey, ke, fe);
-    const w = (q.weights ? entry(q.weights, t / 6) : 1);
+    const w = (q.weights ? (q.weights[t / 6] ?? outside(q.weights, t / 6)) : 1);
     if (w !== 1) {
       for (let k = 0; k < 36; k++) ke[k]! *= w;
       for (let k = 0; k < 6; k++) fe[k]! *= w;
     }
-    const [xx, yy, xy] = triangleSecondMoments([entry(ex, 0), entry(ex, 1), entry(ex, 2)], [entry(ey, 0), entry(ey, 1), entry(ey, 2)], a * w);
+    const [xx, yy, xy] = triangleSecondMoments([(ex[0] ?? outside(ex, 0)), (ex[1] ?? outside(ex, 1)), (ex[2] ?? outside(ex, 2))], [(ey[0] ?? outside(ey, 0)), (ey[1] ?? outside(ey, 1)), (ey[2] ?? outside(ey, 2))], a * w);
     Iyy += xx;
     Ixx += yy;
     Ixy += xy;
     for (let i = 0; i < 6; i++) {
-      const ni = entry(e, t + i);
-      F[ni] = (entry(F, ni)) + (entry(fe, i));
+      const ni = e[t + i] ?? outside(e, t + i);
+      F[ni] = (F[ni] ?? outside(F, ni)) + (fe[i] ?? outside(fe, i));
       for (let j = 0; j < 6; j++) {
-        const p = csrIndex(K, ni, entry(e, t + j));
-        K.value[p] = (entry(K.value, p)) + (entry(ke, 6 * i + j));
+        const p = csrIndex(K, ni, (e[t + j] ?? outside(e, t + j)));
+        K.value[p] = (K.value[p] ?? outside(K.value, p)) + (ke[6 * i + j] ?? outside(ke, 6 * i + j));
       }
     }
   }
@@ -354,13 +354,13 @@ function zeroMeanPerComponent(q: QuadraticMesh, X: Float64Array, Y: Float64Array
   const areaOf = new Float64Array(comps.count);
   const meanOf = new Float64Array(comps.count);
   for (let i = 0; i < omega.length; i++) {
-    const c = entry(comps.of, i);
-    areaOf[c] = (entry(areaOf, c)) + (entry(M1, i));
-    meanOf[c] = (entry(meanOf, c)) + (entry(Mw, i));
+    const c = comps.of[i] ?? outside(comps.of, i);
+    areaOf[c] = (areaOf[c] ?? outside(areaOf, c)) + (M1[i] ?? outside(M1, i));
+    meanOf[c] = (meanOf[c] ?? outside(meanOf, c)) + (Mw[i] ?? outside(Mw, i));
   }
   for (let i = 0; i < omega.length; i++) {
-    const c = entry(comps.of, i);
-    omega[i] = (entry(omega, i)) - (entry(meanOf, c)) / (entry(areaOf, c));
+    const c = comps.of[i] ?? outside(comps.of, i);
+    omega[i] = (omega[i] ?? outside(omega, i)) - (meanOf[c] ?? outside(meanOf, c)) / (areaOf[c] ?? outside(areaOf, c));
   }
 }
 
@@ -375,8 +375,8 @@ export function nodalGradient(q: QuadraticMesh, values: Float64Array): { gx: Flo
   const at: readonly (readonly [number, number, number])[] = [[1, 0, 0], [0, 1, 0], [0, 0, 1], [0.5, 0.5, 0], [0, 0.5, 0.5], [0.5, 0, 0.5]];
   const e = q.elements;
   for (let t = 0; t < e.length; t += 6) {
-    const xs = [0, 1, 2].map((k) => entry(q.xy, 2 * (entry(e, t + k))));
-    const ys = [0, 1, 2].map((k) => entry(q.xy, 2 * (entry(e, t + k)) + 1));
+    const xs = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? outside(e, t + k))] ?? outside(q.xy, 2 * (e[t + k] ?? outside(e, t + k)))));
+    const ys = [0, 1, 2].map((k) => (q.xy[2 * (e[t + k] ?? outside(e, t + k)) + 1] ?? outside(q.xy, 2 * (e[t + k] ?? outside(e, t + k)) + 1)));
     const g = elementGeometry(xs, ys);
     const w = g.twiceArea / 2;
     at.forEach(([l1, l2, l3], k) => {
@@ -385,19 +385,19 @@ export function nodalGradient(q: QuadraticMesh, values: Float64Array): { gx: Flo
       let sx = 0;
       let sy = 0;
       for (let j = 0; j < 6; j++) {
-        const v = entry(values, entry(e, t + j));
-        sx += (entry(dx, j)) * v;
-        sy += (entry(dy, j)) * v;
+        const v = values[(e[t + j] ?? outside(e, t + j))] ?? outside(values, (e[t + j] ?? outside(e, t + j)));
+        sx += (dx[j] ?? outside(dx, j)) * v;
+        sy += (dy[j] ?? outside(dy, j)) * v;
       }
-      const node = entry(e, t + k);
-      gx[node] = (entry(gx, node)) + w * sx;
-      gy[node] = (entry(gy, node)) + w * sy;
-      wsum[node] = (entry(wsum, node)) + w;
+      const node = e[t + k] ?? outside(e, t + k);
+      gx[node] = (gx[node] ?? outside(gx, node)) + w * sx;
+      gy[node] = (gy[node] ?? outside(gy, node)) + w * sy;
+      wsum[node] = (wsum[node] ?? outside(wsum, node)) + w;
     });
   }
   for (let i = 0; i < n; i++) {
-    gx[i] = (entry(gx, i)) / (wsum[i] || 1);
-    gy[i] = (entry(gy, i)) / (wsum[i] || 1);
+    gx[i] = (gx[i] ?? outside(gx, i)) / (wsum[i] || 1);
+    gy[i] = (gy[i] ?? outside(gy, i)) / (wsum[i] || 1);
   }
   return { gx, gy };
 }

@@ -166,7 +166,7 @@ export function ResultsPanel({ results, unit, display, sig, torsion, current, on
               </tbody>
             </table>
           ))}
-          {results.properties && results.net && <NetRows net={results.net} p={results.properties} holes={results.fastenerHoles} unit={unit} display={display} sig={sig} onTorsion={onTorsion} />}
+          {results.properties && results.net && <NetRows net={results.net} p={results.properties} holes={results.fastenerHoles} unit={unit} display={display} sig={sig} />}
           {results.properties && <TorsionRows t={torsion} current={current} p={results.properties} unit={unit} display={display} sig={sig} onTorsion={onTorsion} />}
         </div>
       )}
