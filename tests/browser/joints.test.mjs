@@ -154,6 +154,12 @@ export async function eachJointShowsItsShearFlowWeldAndFastenerPitchAndItsKindIs
   check(/^Vy: .*"lots"/.test(await page.getByTestId('joints-error-Vy').innerText()), 'a bad shear is named with its text');
   await page.getByTestId('joints-Vy').fill('100 kN');
   await page.getByTestId('joints-diagram').check();
+  // τ in the stress panel: the web's largest τ at the neutral axis, V·Q_NA/(I·t), Q_NA = 640 000 + 10·150²/2 = 752 500 mm³.
+  await page.getByTestId('stress-panel').locator('summary').click();
+  await page.getByTestId('stress-Vy').fill('100 kN');
+  const tau = page.getByTestId('tau-part-0');
+  await tau.waitFor();
+  near('τmax in the web = V·Q/(I·t)', Number(await tau.getAttribute('data-value')), (100_000 * 752_500) / (Ix * 10), 1e-6);
   await page.screenshot({ path: path.join(artifactsDir, 'joints-shear-flow.png') });
   const saved = await downloadText(page, artifactsDir, () => menuItem(page, 'File', 'save-as'));
   const json = JSON.parse(saved.text);

@@ -13,6 +13,7 @@ import { formatSig } from '../../../core/units/index.ts';
 import { QuantityInput } from '../shell/QuantityInput.tsx';
 import type { InputEditing } from '../shell/quantity-text.ts';
 import { LEGEND_GRADIENT, stressFields, stressUnits, toStressUnit, type StressKey, type StressOutcome } from './stress.ts';
+import { ShearStressRows } from '../joints/ShearStressRows.tsx';
 
 interface Props {
   readonly doc: SectionDocument;
@@ -55,6 +56,7 @@ export function StressPanel({ doc, editing, outcome, onOpen }: Props): ReactElem
         {field('Vx', 'stress-Vx')}
         {field('Vy', 'stress-Vy')}
       </div>
+      <ShearStressRows doc={doc} Vx={stored.Vx} Vy={stored.Vy} />
       {shownProblems.length > 0 && (
         <p className="error" data-testid="stress-error">
           {shownProblems.join(' ')} The section keeps its earlier value.
