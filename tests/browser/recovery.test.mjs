@@ -147,7 +147,7 @@ export async function aDocumentTooLargeForTheRecoveryStoreGetsABannerAndCanStill
   // An edit makes it unsaved work: its recovery copy does not fit, and the page says so (no unhandled rejection: the harness fails on one).
   await typePlate(page, { b: 50, h: 20, x: 0, y: -150 });
   const banner = page.getByTestId('error-banner');
-  await banner.waitFor({ timeout: 20_000 });
+  await banner.waitFor({ timeout: 120_000 });
   const message = await banner.textContent();
   check(/could not be kept for recovery/i.test(message) && /save/i.test(message), `the banner says recovery failed and to save: ${message}`);
   check((await copiedParts(page)).length === 0, 'no partial or stale copy is left behind');
@@ -161,7 +161,7 @@ export async function aDocumentTooLargeForTheRecoveryStoreGetsABannerAndCanStill
   // Once the document fits again (the dense part deleted), the copy is written again.
   await page.getByTestId('part-select-0').click();
   await page.getByTestId('transform-delete').click();
-  await page.waitForFunction(() => Object.keys(localStorage).some((k) => k.startsWith('sectionsmith.recovery.') && JSON.parse(localStorage.getItem(k) ?? 'null')?.sections?.[0]?.parts?.length === 1), null, { timeout: 10_000 });
+  await page.waitForFunction(() => Object.keys(localStorage).some((k) => k.startsWith('sectionsmith.recovery.') && JSON.parse(localStorage.getItem(k) ?? 'null')?.sections?.[0]?.parts?.length === 1), null, { timeout: 120_000 });
 }
 // Opening, computing and saving 300,000 vertices takes a while on a loaded 2-core machine.
 aDocumentTooLargeForTheRecoveryStoreGetsABannerAndCanStillBeSaved.timeoutMs = 300_000;
