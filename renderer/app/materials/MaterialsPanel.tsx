@@ -15,7 +15,6 @@ import {
   documentReferenceModulus,
   materialPiecesFromDocument,
   parseQuantity,
-  pascalsTo,
   plasticCapacity,
   QuantityError,
   STRESS_UNITS,
@@ -24,7 +23,7 @@ import {
   type StressUnit,
 } from '../../../core/materials/index.ts';
 import { CAUTION } from '../../../core/member/index.ts';
-import { formatSig, toDisplay, type DisplaySet } from '../../../core/units/index.ts';
+import { formatSig, fromSI, toDisplay, unitSystem, type DisplaySet } from '../../../core/units/index.ts';
 import type { Editor } from '../../editor/editor.ts';
 import { MaterialEditor } from './MaterialEditor.tsx';
 import { imperialUnit, withDefaultMaterial, withMaterialStored } from './material-form.ts';
@@ -39,9 +38,6 @@ export function materialChoices(doc: SectionDocument): { id: string; name: strin
   return [...own, ...BUILT_IN_MATERIALS.filter((b) => !inDocument(b)).map((b) => ({ id: b.id, name: b.name }))];
 }
 
-const N_PER_KIP = 4448.2216152605; // 1 kip = 1000 lbf, 1 lbf = 4.4482216152605 N (exact by definition)
-const M_PER_IN = 0.0254; // exact by definition
-const M_PER_FT = 0.3048; // exact by definition
 
 function Row({ k, symbol, value, shown, unit, label }: { k: string; symbol: string; value: number; shown: number; unit: string; label: string }): ReactElement {
   return (
@@ -204,9 +200,13 @@ export function MaterialsPanel({ editor, doc: current, valid, display }: { edito
   const composite = useMemo(() => (used && valid ? compute(doc) : null), [doc, used, valid]);
   const inch = imperialUnit(doc);
   const c = composite?.c ?? null;
-  const k = inch
-    ? { force: 'kip', EI: 'kip·in²', moment: 'kip·ft', f: (n: number) => n / N_PER_KIP, ei: (v: number) => v / M_PER_IN ** 2 / N_PER_KIP, m: (v: number) => v / M_PER_FT / N_PER_KIP, E: (pa: number) => pascalsTo(pa, 'ksi'), Eunit: 'ksi' }
-    : { force: 'kN', EI: 'kN·m²', moment: 'kN·m', f: (n: number) => n / 1000, ei: (v: number) => v / 1000, m: (v: number) => v / 1000, E: (pa: number) => pascalsTo(pa, 'MPa'), Eunit: 'MPa' };
+  // Forces, EI, moments and E in the document's unit system; every factor from core/units.
+  const sys = unitSystem(doc.unit).units;
+  const k = {
+    force: sys.force, EI: sys.flexuralStiffness, moment: sys.moment, Eunit: sys.stress,
+    f: (n: number) => fromSI(n, 'force', sys.force), ei: (v: number) => fromSI(v, 'flexuralStiffness', sys.flexuralStiffness),
+    m: (v: number) => fromSI(v, 'moment', sys.moment), E: (pa: number) => fromSI(pa, 'stress', sys.stress),
+  };
   const u = doc.unit;
   // Lengths, areas and second moments read in the display unit the results panel uses (data-value keeps the document unit).
   const inDisplay = (v: number, q: 'length' | 'area' | 'inertia'): number => (display ? toDisplay(v, u, display[q]) : v);

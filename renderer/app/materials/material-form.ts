@@ -34,6 +34,7 @@ import {
   type StrengthBasis,
   type StressUnit,
 } from '../../../core/materials/index.ts';
+import { readQuantity } from '../../../core/units/index.ts';
 import { partLabel } from '../../../core/section/index.ts';
 
 /** The numeric fields, in form order. */
@@ -127,11 +128,16 @@ function readStress(text: string, unit: StressUnit, what: string): number | stri
   }
 }
 
+/** ν as a plain ratio, through core/units' one reader. */
 function readPlain(text: string, what: string): number | string {
-  const t = text.trim();
-  const x = Number(t);
-  if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t) || !Number.isFinite(x)) return `${what}: "${text}" is not a number`;
-  return x;
+  const r = readQuantity(text, { label: what, kind: 'ratio', unit: '–' });
+  return r.ok ? r.si : r.message;
+}
+
+/** A density typed in the draft's unit or with its own ("490 lb/ft3", "7850 kg/m3"), in `unit`. */
+function readDensity(text: string, unit: DensityUnit, what: string): number | string {
+  const r = readQuantity(text, { label: what, kind: 'density', unit });
+  return r.ok ? kgPerM3To(r.si, unit) : `${r.message} (type a number in ${unit}, e.g. ${unit === 'kg/m3' ? '7850' : '490'})`;
 }
 
 /** Each field's number (or its message), blank optional fields left out. */
@@ -149,7 +155,7 @@ function readNumbers(d: MaterialDraft, origin: DraftOrigin | null, errors: Field
       out[f] = stored;
       continue;
     }
-    const r = STRESS_FIELDS.includes(f) ? readStress(text, d.stressUnit, FIELD_LABELS[f]) : readPlain(text, FIELD_LABELS[f]);
+    const r = STRESS_FIELDS.includes(f) ? readStress(text, d.stressUnit, FIELD_LABELS[f]) : f === 'density' ? readDensity(text, d.densityUnit, FIELD_LABELS[f]) : readPlain(text, FIELD_LABELS[f]);
     if (typeof r === 'string') errors[f] = r;
     else out[f] = f === 'density' ? densityToKgPerM3(r, d.densityUnit) : r;
   }
@@ -346,7 +352,7 @@ export function draftInStressUnit(d: MaterialDraft, unit: StressUnit): MaterialD
 /** The draft with its density re-expressed in another density unit (exact factor). */
 export function draftInDensityUnit(d: MaterialDraft, unit: DensityUnit): MaterialDraft {
   if (unit === d.densityUnit) return d;
-  const r = d.text.density.trim() === '' ? '' : readPlain(d.text.density, FIELD_LABELS.density);
+  const r = d.text.density.trim() === '' ? '' : readDensity(d.text.density, d.densityUnit, FIELD_LABELS.density);
   const density = typeof r === 'number' ? converted(kgPerM3To(densityToKgPerM3(r, d.densityUnit), unit)) : d.text.density;
   return { ...d, densityUnit: unit, text: { ...d.text, density } };
 }
