@@ -12,6 +12,7 @@ import { toWorld } from '../../editor/geometry.ts';
 import type { Diagnostic } from '../../../core/geometry/types.ts';
 import type { SectionProperties } from '../../../core/properties/types.ts';
 import { COLOURS } from './palette.ts';
+import { materialStyles, type Hatch, type MaterialStyle } from './material-style.ts';
 import type { Overlays } from '../../controller/controller.ts';
 import { placeLabels, scaleBar, type LabelBox, type LabelRequest } from './labels.ts';
 import { gridIndices, gridStep, toScreen, toSection, zoomAt, type View } from '../../controller/view.ts';
@@ -115,8 +116,9 @@ function GridAndRulers({ view, width, height, unit }: { view: View; width: numbe
   );
 }
 
-function PartShape({ o, view, subtract, selected }: { o: PartOutline; view: View; subtract: boolean; selected: boolean }): ReactElement {
-  const fill = subtract ? COLOURS.holeFill : selected ? COLOURS.partFillSelected : COLOURS.partFill;
+function PartShape({ o, view, subtract, selected, style }: { o: PartOutline; view: View; subtract: boolean; selected: boolean; style?: MaterialStyle | undefined }): ReactElement {
+  const fill = subtract ? COLOURS.holeFill : style ? style.fill : selected ? COLOURS.partFillSelected : COLOURS.partFill;
+  const hatch = subtract ? 'none' : (style?.hatch ?? 'none');
   const stroke = selected ? COLOURS.selection : subtract ? COLOURS.holeStroke : COLOURS.partStroke;
   const dash = subtract ? [6, 4] : undefined;
   const width = selected ? 2 : 1.2;
@@ -143,8 +145,68 @@ function PartShape({ o, view, subtract, selected }: { o: PartOutline; view: View
           ctx.closePath();
         }
         ctx.fillStrokeShape(shape);
+        if (hatch !== 'none') drawHatch(ctx._context, o, view, hatch);
       }}
     />
+  );
+}
+
+/** Hatch lines every 8 px inside the part's outline (even–odd), for a material whose fill repeats another's. */
+function drawHatch(c: CanvasRenderingContext2D, o: PartOutline, view: View, hatch: Hatch): void {
+  c.save();
+  c.beginPath();
+  for (const r of o.rings) {
+    r.points.forEach((p, i) => {
+      const s = toScreen(view, p);
+      if (i === 0) c.moveTo(s[0], s[1]);
+      else c.lineTo(s[0], s[1]);
+    });
+    c.closePath();
+  }
+  c.clip('evenodd');
+  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+  for (const r of o.rings) for (const p of r.points) {
+    const s = toScreen(view, p);
+    x0 = Math.min(x0, s[0]); y0 = Math.min(y0, s[1]); x1 = Math.max(x1, s[0]); y1 = Math.max(y1, s[1]);
+  }
+  c.strokeStyle = COLOURS.partStroke;
+  c.globalAlpha = 0.55;
+  c.lineWidth = 0.8;
+  c.beginPath();
+  const span = x1 - x0 + y1 - y0;
+  if (hatch === 'horizontal') for (let y = y0; y <= y1; y += 8) { c.moveTo(x0, y); c.lineTo(x1, y); }
+  else for (let k = 0; k <= span; k += 8) {
+    c.moveTo(x0 + k, y0); c.lineTo(x0 + k - (y1 - y0), y1);
+    if (hatch === 'cross') { c.moveTo(x0 + k - (y1 - y0), y0); c.lineTo(x0 + k, y1); }
+  }
+  c.stroke();
+  c.restore();
+}
+
+/** The legend of materials on the drawing: a swatch (fill and hatch) and the name of each material in use. */
+function MaterialLegend({ entries, width }: { entries: readonly { id: string; name: string; style: MaterialStyle }[]; width: number }): ReactElement | null {
+  if (entries.length < 2) return null;
+  const w = 170, x = width - w - 10, y = RULER + 8;
+  return (
+    <Group x={x} y={y} listening={false}>
+      <Rect width={w} height={entries.length * 16 + 8} fill={COLOURS.paper} opacity={0.9} cornerRadius={3} stroke={COLOURS.gridMajor} />
+      {entries.map((e, i) => (
+        <Group key={e.id} y={4 + i * 16}>
+          <Shape
+            sceneFunc={(ctx, shape) => {
+              ctx.beginPath();
+              ctx.rect(6, 1, 18, 11);
+              ctx.fillStrokeShape(shape);
+            }}
+            fill={e.style.fill}
+            stroke={COLOURS.partStroke}
+            strokeWidth={0.8}
+          />
+          {e.style.hatch !== 'none' && <Line points={[8, 11, 15, 2, 14, 11, 21, 2]} stroke={COLOURS.partStroke} strokeWidth={0.8} opacity={0.7} />}
+          <Text x={30} y={1} width={w - 34} text={`${e.name}${e.style.hatch !== 'none' ? ` (${e.style.hatch} hatch)` : ''}`} fontSize={11} fill={COLOURS.dimension} ellipsis wrap="none" />
+        </Group>
+      ))}
+    </Group>
   );
 }
 
@@ -469,6 +531,11 @@ export function Canvas(props: Props): ReactElement {
   const order = state.doc.parts.map((part, i) => ({ part, o: outlines[i] })).filter((x) => x.part.visible && x.o);
   const adds = order.filter((x) => x.part.operation === 'add');
   const subs = order.filter((x) => x.part.operation === 'subtract');
+  // Fills by material (each its own; a hatch where a fill repeats), and the legend of those in use.
+  const materialOf = (m: string | null): string => m ?? state.doc.defaultMaterial ?? '';
+  const styles = materialStyles([...new Set(['', ...state.doc.materials.map((m) => m.id)])]);
+  const inUse = [...new Set(adds.map((x) => materialOf(x.part.material)))];
+  const legend = inUse.map((id) => ({ id: id || 'none', name: state.doc.materials.find((m) => m.id === id)?.name ?? 'no material', style: styles.get(id) ?? { fill: COLOURS.partFill, hatch: 'none' as const } }));
 
   // Overlays, then their labels placed together so none covers another or the stress legend.
   const stressParts = props.stress && (overlays.stress || overlays.kern) ? stressOverlay({ sv: props.stress, view, overlays, width: size.width, height: size.height }) : null;
@@ -476,7 +543,7 @@ export function Canvas(props: Props): ReactElement {
   const dimParts = overlays.dimensions ? selectionDimensionOverlay(state.doc.parts, outlines, state.selection, state.doc.unit, view) : { items: [], labels: [] };
   const requests = [...(resultParts?.labels ?? []), ...dimParts.labels, ...(stressParts?.labels ?? [])];
   const bar = scaleBar(view.scale, size.width, size.height);
-  const { placed } = placeLabels(requests, [...(resultParts?.reserved ?? []), ...(stressParts?.reserved ?? []), bar.box], size.width, size.height);
+  const { placed } = placeLabels(requests, [...(resultParts?.reserved ?? []), ...(stressParts?.reserved ?? []), bar.box, ...(legend.length > 1 ? [{ x: size.width - 180, y: RULER + 8, width: 170, height: legend.length * 16 + 8 }] : [])], size.width, size.height);
   const labelStyle = new Map(requests.map((r) => [r.id, r as LabelRequest & { fontSize?: number; colour?: string; style?: string }]));
 
   return (
@@ -551,7 +618,7 @@ export function Canvas(props: Props): ReactElement {
         </Layer>
         <Layer listening={false}>
           {adds.map((x) => (
-            <PartShape key={x.part.id} o={x.o as PartOutline} view={view} subtract={false} selected={selected.has(x.part.id)} />
+            <PartShape key={x.part.id} o={x.o as PartOutline} view={view} subtract={false} selected={selected.has(x.part.id)} style={inUse.length > 1 ? styles.get(materialOf(x.part.material)) : undefined} />
           ))}
           {subs.map((x) => (
             <PartShape key={x.part.id} o={x.o as PartOutline} view={view} subtract selected={selected.has(x.part.id)} />
@@ -575,6 +642,7 @@ export function Canvas(props: Props): ReactElement {
             <Line points={[6 + bar.pixels, 13, 6 + bar.pixels, 22]} stroke={COLOURS.dimension} strokeWidth={1} />
             <Text x={6} y={2} text={`${bar.text} ${state.doc.unit}`} fontSize={11} fill={COLOURS.dimension} />
           </Group>
+          <MaterialLegend entries={legend} width={size.width} />
           {placed.map((l) => {
             const style = labelStyle.get(l.id);
             return (
