@@ -100,12 +100,24 @@ function connectedSets(count: number, links: readonly (readonly [number, number]
   return [...sets.values()];
 }
 
+/**
+ * The material of one group: the union of its parts, less what the gross section cuts from them.
+ * When no cut-out comes near the group, the gross section adds nothing to cut, so the union is the
+ * answer and the intersection with the gross section is skipped: on a dense outline (300,000
+ * vertices) that intersection of two nearly identical rings made the clipping library give up.
+ */
 function groupRegion(gross: Region, parts: readonly ComposedPart[], members: readonly number[]): Region {
   const labels = members.map((k) => partLabel((parts[k] as ComposedPart).part, (parts[k] as ComposedPart).index));
   const names = { context: 'splitting the section into the parts that act together', parts: [labels.join(', '), 'the gross section'] };
   let union: Region = [];
   for (const k of members) union = union.length === 0 ? (parts[k] as ComposedPart).region : unionRegions(union, (parts[k] as ComposedPart).region, names);
-  return intersectRegions(gross, union, names);
+  const box = regionBounds(union);
+  const cutNear = parts.some((p) => {
+    if (p.part.operation === 'add') return false;
+    const q = regionBounds(p.region);
+    return box !== null && q !== null && q.minX <= box.maxX && box.minX <= q.maxX && q.minY <= box.maxY && box.minY <= q.maxY;
+  });
+  return cutNear ? intersectRegions(gross, union, names) : union;
 }
 
 const area = (x: number): string => (Math.abs(x) >= 100 ? x.toFixed(0) : x.toPrecision(4));

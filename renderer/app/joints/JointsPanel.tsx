@@ -222,7 +222,7 @@ export function JointsPanel({ editor, doc, store }: { readonly editor: Editor; r
   return (
     <details className="joints-panel" data-testid="joints-panel">
       <summary>Joints, cut-outs and shear flow ({overview.joints.length} joint{overview.joints.length === 1 ? '' : 's'})</summary>
-      {!overview.ready && <p className="muted">The geometry needs attention before joints can be found.</p>}
+      {!overview.ready && <p className="muted">{overview.problem === null ? 'The geometry needs attention before joints can be found.' : `Joints could not be found: ${overview.problem}`}</p>}
       {cutouts.length > 0 && (
         <section aria-label="Cut-outs">
           <h3>Cut-outs</h3>

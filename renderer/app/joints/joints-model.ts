@@ -19,7 +19,8 @@ import {
 } from '../../../core/joints/index.ts';
 import { builtInMaterial, documentMaterials } from '../../../core/materials/index.ts';
 import { regionIntegrals } from '../../../core/properties/index.ts';
-import { partLabel, type Composition } from '../../../core/section/index.ts';
+import { BooleanError } from '../../../core/geometry/index.ts';
+import { partLabel, regionFromDocument, type Composition } from '../../../core/section/index.ts';
 import { convertLength } from '../../../core/units/index.ts';
 import { fromSI, readQuantity } from '../../../core/units/quantity.ts';
 import { isImperial } from '../../../core/units/systems.ts';
@@ -66,6 +67,8 @@ export interface JointsOverview {
   readonly composition: Composition;
   /** False when the geometry has problems (nothing else is then given). */
   readonly ready: boolean;
+  /** Why joints could not be found on a valid geometry (the clipping library gave up), else null. */
+  readonly problem: string | null;
   readonly joints: readonly Joint[];
   readonly overlaps: readonly PartOverlap[];
   readonly groups: readonly ActingGroup[];
@@ -83,13 +86,26 @@ const overviews = new WeakMap<SectionDocument, JointsOverview>();
 export function jointsOverview(doc: SectionDocument): JointsOverview {
   const hit = overviews.get(doc);
   if (hit) return hit;
-  const a = partsActingTogether(doc);
+  let a: ReturnType<typeof partsActingTogether>;
+  try {
+    a = partsActingTogether(doc);
+  } catch (err) {
+    // A geometry the clipping library cannot split must not take the editor down: say why instead.
+    if (!(err instanceof BooleanError)) throw err;
+    const out: JointsOverview = {
+      composition: regionFromDocument(doc), ready: false, problem: err.message, joints: [], overlaps: [], groups: [],
+      piecesNote: null, defaultNotes: [], overlapNotes: [],
+    };
+    overviews.set(doc, out);
+    return out;
+  }
   // core/joints/groups.ts lists its warnings in this order: pieces (at most one), default joints, overlaps.
   const defaults = a.joints.filter((j) => j.isDefault).length;
   const piecesCount = a.warnings.length - defaults - a.overlaps.length;
   const out: JointsOverview = {
     composition: a.composition,
     ready: a.composition.diagnostics.length === 0,
+    problem: null,
     joints: a.joints,
     overlaps: a.overlaps,
     groups: a.groups,

@@ -267,8 +267,10 @@ export function App({ controller: given }: { readonly controller?: AppController
           <ErrorBoundary view="results">
             <ResultsPanel results={results} unit={state.doc.unit} display={display} sig={app.sig} torsion={torsion} current={state.doc} onTorsion={(id) => void controller.run(id)} />
           </ErrorBoundary>
-          <JointsNotes doc={state.doc} />
-          <JointsPanel editor={editor} doc={state.doc} store={joints} />
+          <ErrorBoundary view="joints">
+            <JointsNotes doc={state.doc} />
+            <JointsPanel editor={editor} doc={state.doc} store={joints} />
+          </ErrorBoundary>
           <MaterialsPanel editor={editor} doc={state.doc} valid={!!results.properties} display={display} />
           <StressPanel
             doc={state.doc}
