@@ -434,10 +434,21 @@ function InteractionOverlay({ state, outlines, view }: { state: EditorState; out
       if (!state.selection.includes(o.partId) || o.circle) continue;
       // Standard parts: their outline points are chords of arcs, not corners worth marking.
       if (state.doc.parts.find((p) => p.id === o.partId)?.type === 'shape') continue;
-      o.vertices.forEach((v, vi) => {
-        const s = toScreen(view, v);
-        items.push(<Rect key={`s${o.partId}-${vi}`} x={s[0] - 2.5} y={s[1] - 2.5} width={5} height={5} fill={COLOURS.selection} listening={false} />);
-      });
+      // One shape draws every marker: a node per vertex made selecting a 300,000-vertex outline
+      // take minutes (React places each new node among its siblings, which grows with their count).
+      const corners = o.vertices.map((v) => toScreen(view, v));
+      items.push(
+        <Shape
+          key={`s${o.partId}`}
+          listening={false}
+          fill={COLOURS.selection}
+          sceneFunc={(ctx, shape) => {
+            ctx.beginPath();
+            for (const s of corners) ctx.rect(s[0] - 2.5, s[1] - 2.5, 5, 5);
+            ctx.fillShape(shape);
+          }}
+        />,
+      );
     }
   }
   const d = tool.draft;
