@@ -7,7 +7,7 @@ import type { NetSectionProperties } from '../../../core/properties/index.ts';
 import type { Results } from '../../controller/results.ts';
 import type { TorsionState } from '../../controller/torsion-client.ts';
 import type { SectionDocument } from '../../../core/document/types.ts';
-import { netRows, propertyGroups, torsionRows } from './result-rows.ts';
+import { netRows, propertyGroups, torsionRows, type ShownRow } from './result-rows.ts';
 import { CAUTION } from '../../../core/member/check.ts';
 
 interface Props {
@@ -20,6 +20,20 @@ interface Props {
   readonly current: SectionDocument;
   /** Cancel and Solve now of the torsion solve (controller commands). */
   readonly onTorsion?: (id: 'torsion-cancel' | 'torsion-solve') => void;
+}
+
+/** One result: symbol, value (full precision in data-value), unit and meaning. */
+function ResultRow({ row, stale = false }: { row: ShownRow; stale?: boolean }): ReactElement {
+  return (
+    <tr title={row.meaning} className={stale ? 'stale' : ''}>
+      <th scope="row">{row.symbol}</th>
+      <td className="value" data-testid={`result-${row.key}`} data-value={String(row.raw)}>
+        {row.text}
+      </td>
+      <td className="unit">{row.unit}</td>
+      <td className="label">{row.meaning}</td>
+    </tr>
+  );
 }
 
 function TorsionRows({ t, current, p, unit, display, sig, onTorsion }: { t: TorsionState; current: SectionDocument; p: SectionProperties; unit: LengthUnit; display: DisplaySet; sig: number; onTorsion?: ((id: 'torsion-cancel' | 'torsion-solve') => void) | undefined }): ReactElement {
@@ -58,14 +72,7 @@ function TorsionRows({ t, current, p, unit, display, sig, onTorsion }: { t: Tors
           </tr>
         )}
         {rows.map((row) => (
-          <tr key={row.key} title={row.meaning} className={stale ? 'stale' : ''}>
-            <th scope="row">{row.symbol}</th>
-            <td className="value" data-testid={`result-${row.key}`} data-value={String(row.raw)}>
-              {row.text}
-            </td>
-            <td className="unit">{row.unit}</td>
-            <td className="label">{row.meaning}</td>
-          </tr>
+          <ResultRow key={row.key} row={row} stale={stale} />
         ))}
         {separate && t.kind === 'done' && (
           <tr>
@@ -154,14 +161,7 @@ export function ResultsPanel({ results, unit, display, sig, torsion, current, on
               <caption>{g.title}</caption>
               <tbody>
                 {g.rows.map((row) => (
-                  <tr key={row.key} title={row.meaning}>
-                    <th scope="row">{row.symbol}</th>
-                    <td className="value" data-testid={`result-${row.key}`} data-value={String(row.raw)}>
-                      {row.text}
-                    </td>
-                    <td className="unit">{row.unit}</td>
-                    <td className="label">{row.meaning}</td>
-                  </tr>
+                  <ResultRow key={row.key} row={row} />
                 ))}
               </tbody>
             </table>
