@@ -7,24 +7,10 @@
 // Supplement Table 4A, from memory); exact unit definitions (25.4 mm per inch, 1 lbf = 4.4482216152605 N).
 import path from 'node:path';
 import { check, openApp, partCount } from './harness.mjs';
-import { newSection, rel, resultValue } from './editor-support.mjs';
+import { fillAssembly, newSection, openAssemblies, rel, resultValue } from './editor-support.mjs';
 
 const near = (what, got, want, tol) => check(rel(got, want) <= tol, `${what}: expected ${want} (±${tol} relative), got ${got}`);
 const PA_PER_PSI = 4.4482216152605 / 0.0254 ** 2;
-
-async function openAssemblies(page, kind) {
-  const box = page.getByTestId('assemblies');
-  if ((await box.getAttribute('open')) === null) await box.locator('summary').click();
-  await page.getByTestId('assembly-kind').selectOption(kind);
-}
-
-async function fill(page, values) {
-  for (const [key, value] of Object.entries(values)) {
-    const field = page.getByTestId(`assembly-field-${key}`);
-    if ((await field.evaluate((e) => e.tagName)) === 'SELECT') await field.selectOption(String(value));
-    else await field.fill(String(value));
-  }
-}
 
 async function waitForArea(page, area) {
   await page.waitForFunction((a) => Math.abs(Number(document.querySelector('[data-testid="result-area"]')?.getAttribute('data-value')) - a) <= 1e-9 * a, area, { timeout: 10_000 });
@@ -35,7 +21,7 @@ export async function aPlacedPlateGirderGivesAreaAndIxOfTheClosedFormInOneUndoSt
   await newSection(page);
   await openAssemblies(page, 'plate-girder');
   // Footbridge girder, mm: web 1200 × 12, flanges 400 × 25.
-  await fill(page, { webH: 1200, webT: 12, topB: 400, topT: 25, bottomB: 400, bottomT: 25 });
+  await fillAssembly(page, { webH: 1200, webT: 12, topB: 400, topT: 25, bottomB: 400, bottomT: 25 });
   const A = 1200 * 12 + 2 * 400 * 25;
   const preview = await page.getByTestId('assembly-preview').innerText();
   check(preview.includes('3 parts') && preview.includes('34400'), `preview: expected 3 parts and A 34400, got "${preview}"`);
@@ -59,7 +45,7 @@ export async function badInputIsNamedNextToItsFieldAndLeavesTheDocumentUnchanged
   await openApp(page, baseUrl);
   await newSection(page);
   await openAssemblies(page, 'plate-girder');
-  await fill(page, { webT: '-12' });
+  await fillAssembly(page, { webT: '-12' });
   const message = await page.getByTestId('assembly-error-webT').innerText();
   check(message.includes('thickness tw') && message.includes('greater than 0'), `web thickness message: got "${message}"`);
   await page.getByTestId('assembly-place').click();
@@ -68,7 +54,7 @@ export async function badInputIsNamedNextToItsFieldAndLeavesTheDocumentUnchanged
   check((await partCount(page)) === 0, `bad input placed ${await partCount(page)} parts`);
   check(!(await page.getByTestId('undo').isEnabled()), 'bad input made an undo step');
   await openAssemblies(page, 'cover-plated-i');
-  await fill(page, { shape: 'W14X9' });
+  await fillAssembly(page, { shape: 'W14X9' });
   await page.getByTestId('assembly-catalogue-results').waitFor();
   const shapeMessage = await page.getByTestId('assembly-error-shape').innerText();
   check(shapeMessage.includes('"W14X9" is not in the catalogue'), `designation message: got "${shapeMessage}"`);
@@ -82,7 +68,7 @@ export async function aFlitchBeamInADocumentWithMaterialsGetsLumberAndSteelAndSh
   await newSection(page);
   await page.getByTestId('default-material').selectOption('df-l-no2');
   await openAssemblies(page, 'flitch-beam');
-  await fill(page, { lumber: '2x12', plies: 2, plateT: 12, plateDepth: '' });
+  await fillAssembly(page, { lumber: '2x12', plies: 2, plateT: 12, plateDepth: '' });
   const timber = await page.getByTestId('assembly-material-timber').inputValue();
   const steel = await page.getByTestId('assembly-material-steel').inputValue();
   check(timber === 'df-l-no2' && steel === 'astm-a36', `role materials: expected df-l-no2 and astm-a36, got ${timber} and ${steel}`);
@@ -106,7 +92,7 @@ export async function aCoverPlatedW14X90WithFlangeHolesChangesTheAreaByThePlateL
   await page.getByTestId('document-unit').selectOption('in');
   await openAssemblies(page, 'cover-plated-i');
   // The W14X90 on its own first (plates and holes cleared).
-  await fill(page, { shape: 'W14X90', topB: '', topT: '', bottomB: '', bottomT: '', holeD: '' });
+  await fillAssembly(page, { shape: 'W14X90', topB: '', topT: '', bottomB: '', bottomT: '', holeD: '' });
   await page.getByTestId('assembly-place').click();
   await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length === 1);
   const alone = await resultValue(page, 'area');
@@ -114,7 +100,7 @@ export async function aCoverPlatedW14X90WithFlangeHolesChangesTheAreaByThePlateL
   await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length === 0);
   // A 16 × 3/4 in top plate; two 15/16 in holes per flange at the published W14X90 gauge WGi = 5 1/2 in
   // (AISC v15.0), through the flange (tf = 0.71 in) and, on top, the plate as well.
-  await fill(page, { topB: 16, topT: '3/4', holeD: '15/16', holeColumns: 2, holeGauge: '' });
+  await fillAssembly(page, { topB: 16, topT: '3/4', holeD: '15/16', holeColumns: 2, holeGauge: '' });
   await page.getByTestId('assembly-place').click();
   await page.waitForFunction(() => document.querySelectorAll('[data-testid^="part-row-"]').length === 6);
   const dh = 15 / 16;

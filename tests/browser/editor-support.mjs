@@ -49,3 +49,19 @@ export async function typeRound(page, { d, x = 0, y = 0, cut = false }) {
 /** Relative difference, for comparing against closed forms. */
 export const rel = (got, want) => Math.abs(got - want) / Math.max(Math.abs(want), 1e-300);
 
+
+/** Opens the assemblies section and picks an assembly kind. */
+export async function openAssemblies(page, kind) {
+  const box = page.getByTestId('assemblies');
+  if ((await box.getAttribute('open')) === null) await box.locator('summary').click();
+  await page.getByTestId('assembly-kind').selectOption(kind);
+}
+
+/** Fills the assembly form: text boxes typed, drop-downs chosen, by field key. */
+export async function fillAssembly(page, values) {
+  for (const [key, value] of Object.entries(values)) {
+    const field = page.getByTestId(`assembly-field-${key}`);
+    if ((await field.evaluate((e) => e.tagName)) === 'SELECT') await field.selectOption(String(value));
+    else await field.fill(String(value));
+  }
+}

@@ -7,23 +7,9 @@
 // unit length, φ = 0.75); fastener pitch s = n·R/q (common practice); exact arithmetic.
 import path from 'node:path';
 import { check, downloadText, menuItem, openApp, partCount, withoutFilePickers } from './harness.mjs';
-import { newSection, rel, resultValue, typePlate } from './editor-support.mjs';
+import { fillAssembly, newSection, openAssemblies, rel, resultValue, typePlate } from './editor-support.mjs';
 
 const near = (what, got, want, tol) => check(rel(got, want) <= tol, `${what}: expected ${want} (±${tol} relative), got ${got}`);
-
-async function openAssemblies(page, kind) {
-  const box = page.getByTestId('assemblies');
-  if ((await box.getAttribute('open')) === null) await box.locator('summary').click();
-  await page.getByTestId('assembly-kind').selectOption(kind);
-}
-
-async function fill(page, values) {
-  for (const [key, value] of Object.entries(values)) {
-    const field = page.getByTestId(`assembly-field-${key}`);
-    if ((await field.evaluate((e) => e.tagName)) === 'SELECT') await field.selectOption(String(value));
-    else await field.fill(String(value));
-  }
-}
 
 async function openJoints(page) {
   const box = page.getByTestId('joints-panel');
@@ -45,7 +31,7 @@ export async function boltHolesThroughTheBottomFlangeAreFastenerHolesSoTheShearC
   await openApp(page, baseUrl);
   await newSection(page);
   await openAssemblies(page, 'plate-girder');
-  await fill(page, { webH: 1200, webT: 12, topB: 400, topT: 25, bottomB: 500, bottomT: 30 });
+  await fillAssembly(page, { webH: 1200, webT: 12, topB: 400, topT: 25, bottomB: 500, bottomT: 30 });
   await page.getByTestId('assembly-place').click();
   const before = await torsionDone(page);
   const h = 1227.5, It = (25 * 400 ** 3) / 12, Ib = (30 * 500 ** 3) / 12;
@@ -56,7 +42,7 @@ export async function boltHolesThroughTheBottomFlangeAreFastenerHolesSoTheShearC
   const area = await resultValue(page, 'area');
 
   await openAssemblies(page, 'bolt-holes');
-  await fill(page, { holeD: 22, axis: 'y', depth: 30, rows: 1, columns: 2, gauge: 140, x: 0, y: -615 });
+  await fillAssembly(page, { holeD: 22, axis: 'y', depth: 30, rows: 1, columns: 2, gauge: 140, x: 0, y: -615 });
   await page.getByTestId('assembly-place').click();
   await page.getByTestId('net-section').waitFor();
   // An = 14 400 + 10 000 + 15 000 − 2 × 22 × 30 = 38 080 mm² (exact arithmetic); the gross area stays.
@@ -99,7 +85,7 @@ export async function aDuplicateOnTopIsNamedWithItsAreaAndChannelsToeToToeShowTh
 
   await newSection(page);
   await openAssemblies(page, 'box-from-channels');
-  await fill(page, { shape: 'C15X50', arrangement: 'toe-to-toe', gap: 0 });
+  await fillAssembly(page, { shape: 'C15X50', arrangement: 'toe-to-toe', gap: 0 });
   await page.getByTestId('assembly-place').click();
   await openJoints(page);
   await page.getByTestId('joint-row-0').waitFor();
